@@ -1,0 +1,17 @@
+import type { Combination } from "../schema/result.js";
+import { loadCategories, type JobDocument } from "../schema/job.js";
+
+/** The load combinations of the job's set. "unfactored": every load as entered, factor 1. */
+export function combinationsOf(job: JobDocument): Combination[] {
+  switch (job.combinations.set) {
+    case "unfactored":
+      return [
+        {
+          id: "U",
+          name: "Loads as entered",
+          factors: Object.fromEntries(loadCategories.map((c) => [c, 1])),
+          duration: "unspecified",
+        },
+      ];
+  }
+}

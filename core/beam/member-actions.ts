@@ -1,0 +1,275 @@
+/**
+ * Shear, moment and deflection along a straight member as exact piecewise polynomials.
+ *
+ * Units: x in mm, forces in N, line loads in N/mm, moments in N·mm. Loads act downward when
+ * positive; reactions act upward when positive. V is the sum of upward forces left of x; M is
+ * sagging-positive. Between breakpoints the line load is linear, so V is quadratic and M cubic.
+ */
+
+export interface PointForce {
+  x: number;
+  /** Downward force, N. */
+  P: number;
+}
+
+export interface LineLoad {
+  x0: number;
+  x1: number;
+  /** Downward intensity at x0 and x1, N/mm. */
+  w0: number;
+  w1: number;
+}
+
+export interface PointMoment {
+  x: number;
+  /** Clockwise moment, N·mm: raises the sagging moment to its right. */
+  M: number;
+}
+
+export interface LoadSet {
+  points: PointForce[];
+  lines: LineLoad[];
+  moments: PointMoment[];
+}
+
+export interface Reaction {
+  x: number;
+  /** Upward force, N. */
+  R: number;
+  /** Clockwise moment from a fixed support, N·mm. */
+  M: number;
+}
+
+/** One piece between breakpoints; coefficients in powers of u = x − x0. */
+export interface Piece {
+  x0: number;
+  x1: number;
+  v: [number, number, number];
+  m: [number, number, number, number];
+}
+
+export interface MemberActions {
+  length: number;
+  pieces: Piece[];
+  /** Every x where V or M may jump or change law, including 0 and the length. */
+  breaks: number[];
+}
+
+export type Side = "left" | "right";
+
+export const emptyLoads = (): LoadSet => ({ points: [], lines: [], moments: [] });
+
+/** Integrates the loads and reactions from the left end into exact V(x) and M(x). */
+export function memberActions(length: number, loads: LoadSet, reactions: Reaction[]): MemberActions {
+  const breaks = uniqueSorted([
+    0,
+    length,
+    ...loads.points.map((p) => p.x),
+    ...loads.moments.map((m) => m.x),
+    ...loads.lines.flatMap((l) => [l.x0, l.x1]),
+    ...reactions.map((r) => r.x),
+  ], length);
+  const pieces: Piece[] = [];
+  let v = 0;
+  let m = 0;
+  for (let k = 0; k < breaks.length - 1; k++) {
+    const x0 = breaks[k]!;
+    const x1 = breaks[k + 1]!;
+    const at = (x: number) => Math.abs(x - x0) <= 1e-9 * Math.max(length, 1);
+    for (const r of reactions) if (at(r.x)) { v += r.R; m += r.M; }
+    for (const p of loads.points) if (at(p.x)) v -= p.P;
+    for (const c of loads.moments) if (at(c.x)) m += c.M;
+    // Line load inside [x0, x1]: w(u) = p + s·u.
+    let p = 0;
+    let s = 0;
+    for (const l of loads.lines) {
+      if (l.x1 <= x0 || l.x0 >= x1 || l.x1 <= l.x0) continue;
+      const slope = (l.w1 - l.w0) / (l.x1 - l.x0);
+      p += l.w0 + slope * (x0 - l.x0);
+      s += slope;
+    }
+    const piece: Piece = { x0, x1, v: [v, -p, -s / 2], m: [m, v, -p / 2, -s / 6] };
+    pieces.push(piece);
+    const u = x1 - x0;
+    v = poly(piece.v, u);
+    m = poly(piece.m, u);
+  }
+  return { length, pieces, breaks };
+}
+
+function uniqueSorted(xs: number[], length: number): number[] {
+  const tol = 1e-9 * Math.max(length, 1);
+  const sorted = xs.filter((x) => x >= -tol && x <= length + tol).map((x) => Math.min(Math.max(x, 0), length)).sort((a, b) => a - b);
+  const out: number[] = [];
+  for (const x of sorted) if (out.length === 0 || x - out[out.length - 1]! > tol) out.push(x);
+  return out;
+}
+
+export function poly(c: readonly number[], u: number): number {
+  let r = 0;
+  for (let i = c.length - 1; i >= 0; i--) r = r * u + c[i]!;
+  return r;
+}
+
+function pieceAt(actions: MemberActions, x: number, side: Side): Piece {
+  const { pieces } = actions;
+  if (side === "left") {
+    for (const p of pieces) if (x <= p.x1) return p;
+    return pieces[pieces.length - 1]!;
+  }
+  for (let k = pieces.length - 1; k >= 0; k--) if (x >= pieces[k]!.x0) return pieces[k]!;
+  return pieces[0]!;
+}
+
+/** V at x; at a jump, the value just left or just right of x. Outside the member V is zero. */
+export function shearAt(actions: MemberActions, x: number, side: Side = "right"): number {
+  if (x < 0 || x > actions.length || (x === 0 && side === "left") || (x === actions.length && side === "right")) return 0;
+  const p = pieceAt(actions, x, side);
+  return poly(p.v, x - p.x0);
+}
+
+export function momentAt(actions: MemberActions, x: number, side: Side = "right"): number {
+  if (x < 0 || x > actions.length || (x === 0 && side === "left") || (x === actions.length && side === "right")) return 0;
+  const p = pieceAt(actions, x, side);
+  return poly(p.m, x - p.x0);
+}
+
+export interface Extreme {
+  value: number;
+  x: number;
+}
+
+/** Largest |V| over the closed interval [a, b], counting both sides of every jump inside it. */
+export function maxAbsShear(actions: MemberActions, a: number, b: number): Extreme {
+  return extremeOver(actions, a, b, (p) => p.v, (p) => [p.v[1], 2 * p.v[2]], true);
+}
+
+/** Largest sagging and hogging moments over [a, b]. */
+export function momentExtremes(actions: MemberActions, a = 0, b = actions.length): { max: Extreme; min: Extreme } {
+  return {
+    max: extremeOver(actions, a, b, (p) => p.m, (p) => [p.m[1], 2 * p.m[2], 3 * p.m[3]], false, 1),
+    min: extremeOver(actions, a, b, (p) => p.m, (p) => [p.m[1], 2 * p.m[2], 3 * p.m[3]], false, -1),
+  };
+}
+
+function extremeOver(
+  actions: MemberActions,
+  a: number,
+  b: number,
+  coefficients: (p: Piece) => readonly number[],
+  derivative: (p: Piece) => readonly number[],
+  absolute: boolean,
+  sign = 1,
+): Extreme {
+  let best: Extreme = { value: -Infinity, x: a };
+  const consider = (value: number, x: number) => {
+    const score = absolute ? Math.abs(value) : sign * value;
+    if (score > best.value) best = { value: score, x };
+  };
+  for (const p of actions.pieces) {
+    const lo = Math.max(a, p.x0);
+    const hi = Math.min(b, p.x1);
+    if (hi < lo) continue;
+    const c = coefficients(p);
+    consider(poly(c, lo - p.x0), lo);
+    consider(poly(c, hi - p.x0), hi);
+    for (const u of realRoots(derivative(p))) {
+      const x = p.x0 + u;
+      if (x > lo && x < hi) consider(poly(c, u), x);
+    }
+  }
+  if (best.value === -Infinity) return { value: 0, x: a };
+  return { value: absolute ? best.value : sign * best.value, x: best.x };
+}
+
+/** Real roots of a polynomial of degree ≤ 2 (ascending coefficients). */
+export function realRoots(c: readonly number[]): number[] {
+  const [c0 = 0, c1 = 0, c2 = 0] = c;
+  const scale = Math.max(Math.abs(c0), Math.abs(c1), Math.abs(c2), 1e-300);
+  if (Math.abs(c2) <= 1e-14 * scale) return Math.abs(c1) <= 1e-14 * scale ? [] : [-c0 / c1];
+  const disc = c1 * c1 - 4 * c2 * c0;
+  if (disc < 0) return [];
+  const q = -0.5 * (c1 + Math.sign(c1 || 1) * Math.sqrt(disc));
+  const roots = [q / c2];
+  if (q !== 0) roots.push(c0 / q);
+  return roots;
+}
+
+/** Deflected shape as pieces: rotation and upward deflection in powers of u. */
+export interface DeflectionCurve {
+  pieces: { x0: number; x1: number; theta: number[]; v: number[] }[];
+}
+
+/**
+ * Integrates EI·v'' = M twice for a prismatic member, with the constants fixed by two support
+ * conditions: a fixed support (v = 0, θ = 0) or two supports that stop vertical movement.
+ */
+export function deflectionCurve(actions: MemberActions, flexuralRigidity: number, supports: { x: number; fixed: boolean }[]): DeflectionCurve {
+  const pieces: DeflectionCurve["pieces"] = [];
+  let theta = 0;
+  let v = 0;
+  for (const p of actions.pieces) {
+    const m = p.m.map((c) => c / flexuralRigidity);
+    const t = [theta, m[0]!, m[1]! / 2, m[2]! / 3, m[3]! / 4];
+    const w = [v, theta, m[0]! / 2, m[1]! / 6, m[2]! / 12, m[3]! / 20];
+    pieces.push({ x0: p.x0, x1: p.x1, theta: t, v: w });
+    theta = poly(t, p.x1 - p.x0);
+    v = poly(w, p.x1 - p.x0);
+  }
+  const curve = { pieces };
+  const fixed = supports.find((s) => s.fixed);
+  let c0: number;
+  let c1: number;
+  if (fixed) {
+    c1 = -evaluate(curve, fixed.x, "theta");
+    c0 = -evaluate(curve, fixed.x, "v") - c1 * fixed.x;
+  } else {
+    const [s1, s2] = supports;
+    if (!s1 || !s2) throw new Error("deflection needs two supports or one fixed support");
+    const v1 = evaluate(curve, s1.x, "v");
+    const v2 = evaluate(curve, s2.x, "v");
+    c1 = -(v2 - v1) / (s2.x - s1.x);
+    c0 = -v1 - c1 * s1.x;
+  }
+  for (const p of pieces) {
+    p.theta[0]! += c1;
+    p.v[0]! += c0 + c1 * p.x0;
+    p.v[1]! += c1;
+  }
+  return curve;
+}
+
+export function evaluate(curve: DeflectionCurve, x: number, what: "v" | "theta"): number {
+  const p = curve.pieces.find((q) => x <= q.x1) ?? curve.pieces[curve.pieces.length - 1]!;
+  return poly(what === "v" ? p.v : p.theta, x - p.x0);
+}
+
+/** Largest downward deflection (as a positive number) and its position, found by sampling and refining each piece. */
+export function maxDeflection(curve: DeflectionCurve, a = -Infinity, b = Infinity): Extreme {
+  let best: Extreme = { value: -Infinity, x: 0 };
+  for (const p of curve.pieces) {
+    const lo = Math.max(a, p.x0);
+    const hi = Math.min(b, p.x1);
+    if (hi < lo) continue;
+    const down = (x: number) => -poly(p.v, x - p.x0);
+    const n = 32;
+    for (let i = 0; i <= n; i++) {
+      let x = lo + ((hi - lo) * i) / n;
+      // Golden-section refinement around an interior sample.
+      if (i > 0 && i < n) {
+        let l = lo + ((hi - lo) * (i - 1)) / n;
+        let r = lo + ((hi - lo) * (i + 1)) / n;
+        for (let k = 0; k < 40; k++) {
+          const m1 = r - (r - l) / 1.618033988749895;
+          const m2 = l + (r - l) / 1.618033988749895;
+          if (down(m1) < down(m2)) l = m1;
+          else r = m2;
+        }
+        x = (l + r) / 2;
+      }
+      const value = down(x);
+      if (value > best.value) best = { value, x };
+    }
+  }
+  return best.value === -Infinity ? { value: 0, x: 0 } : best;
+}

@@ -1,0 +1,119 @@
+import { kindOf } from "./connector/registry.js";
+import { JobDocument } from "./schema/job.js";
+import { issuesFromZod, type JobIssue } from "./schema/job-issues.js";
+import { connectedGroups, findContacts, findOverlaps } from "./section/contacts.js";
+import { buildSection } from "./section/section-model.js";
+import { allowedSpacings } from "./spacing/allowed-spacings.js";
+import { toCoreUnits } from "./units/convert.js";
+import { spacingDefaults } from "./spacing/spacing-defaults.js";
+
+export type PreparedJob = { ok: true; job: JobDocument; core: JobDocument } | { ok: false; issues: JobIssue[] };
+
+/** Parses a job document, checks what the schema cannot, and converts it to core units. */
+export function prepareJob(input: unknown): PreparedJob {
+  const parsed = JobDocument.safeParse(input);
+  if (!parsed.success) return { ok: false, issues: issuesFromZod(parsed.error) };
+  const issues = checkJob(parsed.data);
+  if (issues.length > 0) return { ok: false, issues };
+  return { ok: true, job: parsed.data, core: toCoreUnits(JobDocument, parsed.data, parsed.data.units) };
+}
+
+/** Checks of a schema-valid job that need more than one field: references, geometry, positions, limits. */
+export function checkJob(job: JobDocument): JobIssue[] {
+  const issues: JobIssue[] = [];
+  const add = (path: string, message: string) => issues.push({ path, message });
+
+  for (const list of ["materials", "parts", "connectors"] as const) {
+    const seen = new Map<string, number>();
+    job[list].forEach((item, i) => {
+      const first = seen.get(item.id);
+      if (first !== undefined) add(`${list}[${i}].id`, `"${item.id}" is already the id of ${list}[${first}]; ids must be unique`);
+      else seen.set(item.id, i);
+    });
+  }
+  const materialIds = new Set(job.materials.map((m) => m.id));
+  const connectorIds = new Set(job.connectors.map((c) => c.id));
+  const partIds = new Set(job.parts.map((p) => p.id));
+  job.parts.forEach((p, i) => {
+    if (!materialIds.has(p.material)) add(`parts[${i}].material`, `"${p.material}" is not one of the materials (${[...materialIds].join(", ")})`);
+  });
+  const checkConnector = (path: string, id: string) => {
+    if (!connectorIds.has(id)) add(path, `"${id}" is not one of the connectors (${[...connectorIds].join(", ")})`);
+  };
+  checkConnector("fastening.default.connector", job.fastening.default.connector);
+  job.connectors.forEach((c, i) => {
+    if (c.kind === "rated" && c.maxSpacing !== undefined && c.maxSpacing < c.minSpacing) {
+      add(`connectors[${i}].maxSpacing`, `${c.maxSpacing} is less than the minimum spacing ${c.minSpacing}`);
+    }
+  });
+  if (issues.length > 0) return issues;
+
+  const section = buildSection(job.parts, job.materials);
+  for (const o of findOverlaps(section)) {
+    const i = job.parts.findIndex((p) => p.id === o.b);
+    const j = job.parts.findIndex((p) => p.id === o.a);
+    add(`parts[${i}]`, `part "${o.b}" overlaps part "${o.a}" (parts[${j}]) over an area of ${round(o.area)} ${job.units === "si" ? "mm²" : "in²"}; parts may touch but not overlap`);
+  }
+  if (issues.length > 0) return issues;
+  const contacts = findContacts(section);
+  const groups = connectedGroups(section, contacts);
+  if (groups.length > 1) {
+    const main = groups.reduce((a, b) => (b.length > a.length ? b : a));
+    for (const g of groups) {
+      if (g === main) continue;
+      for (const id of g) {
+        const i = job.parts.findIndex((p) => p.id === id);
+        add(`parts[${i}]`, `part "${id}" does not touch the rest of the section (${main.join(", ")}); every part must share a face with another over some length`);
+      }
+    }
+    return issues;
+  }
+
+  const heldSeen = new Map<string, number>();
+  job.fastening.joints.forEach((j, k) => {
+    const path = `fastening.joints[${k}]`;
+    checkConnector(`${path}.connector`, j.connector);
+    const unknown = j.held.filter((id) => !partIds.has(id));
+    if (unknown.length > 0) return add(`${path}.held`, `names part(s) not in the section: ${unknown.join(", ")}`);
+    const held = new Set(j.held);
+    if (held.size === partIds.size) return add(`${path}.held`, "holds every part of the section; a joint must leave some parts on the other side of the cut");
+    if (!contacts.some((c) => held.has(c.a) !== held.has(c.b))) return add(`${path}.held`, "these parts touch no other part, so no connectors can hold them");
+    const key = [...held].sort().join("+");
+    const first = heldSeen.get(key);
+    if (first !== undefined) add(`${path}.held`, `the same held group as fastening.joints[${first}]`);
+    else heldSeen.set(key, k);
+  });
+
+  const L = job.beam.spans.reduce((s, l) => s + l, 0);
+  const spanUnit = job.units === "si" ? "m" : "ft";
+  job.beam.loads.forEach((load, i) => {
+    const path = `beam.loads[${i}]`;
+    if (load.type === "point" && load.at > L * (1 + 1e-12)) add(`${path}.at`, `${load.at} ${spanUnit} is beyond the end of the member (length ${round(L)} ${spanUnit})`);
+    if (load.type === "uniform") {
+      const from = load.from ?? 0;
+      const to = load.to ?? L;
+      if (to > L * (1 + 1e-12)) add(`${path}.to`, `${to} ${spanUnit} is beyond the end of the member (length ${round(L)} ${spanUnit})`);
+      else if (from >= to) add(`${path}.from`, `the loaded length must start before it ends (from ${from} to ${to} ${spanUnit})`);
+    }
+  });
+
+  const defaults = spacingDefaults(job.units);
+  const rules = job.spacing;
+  const usedDiscrete = new Set([job.fastening.default, ...job.fastening.joints].map((f) => f.connector));
+  job.connectors.forEach((c, i) => {
+    if (!usedDiscrete.has(c.id)) return;
+    const kind = kindOf(c);
+    if (kind.mechanism !== "discrete") return;
+    const limits = kind.detailing(c);
+    const min = Math.max(limits.minSpacing, rules.minimum ?? 0);
+    const max = Math.min(limits.maxSpacing ?? defaults.maxSpacing, rules.maximum ?? Infinity);
+    if (min > max) {
+      add(rules.maximum !== undefined ? "spacing.maximum" : `connectors[${i}].minSpacing`, `connector "${c.id}" needs a spacing of at least ${round(min)} but at most ${round(max)} is allowed`);
+    } else if (allowedSpacings({ module: rules.module ?? defaults.module, preferred: rules.preferred ?? null, min, max }).length === 0) {
+      add(rules.preferred ? "spacing.preferred" : "spacing.module", `no spacing on this module or list lies between ${round(min)} and ${round(max)} for connector "${c.id}"`);
+    }
+  });
+  return issues;
+}
+
+const round = (x: number) => Number(x.toPrecision(4));

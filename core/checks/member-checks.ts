@@ -1,0 +1,110 @@
+import type { BeamAnalysis } from "../beam/analyse-beam.js";
+import { maxAbsShear, maxDeflection, momentExtremes } from "../beam/member-actions.js";
+import type { JobDocument } from "../schema/job.js";
+import type { MemberCheck } from "../schema/result.js";
+import type { SectionModel } from "../section/section-model.js";
+import type { ProfilePoint } from "../section/stress-profile.js";
+
+export interface MemberChecks {
+  checks: MemberCheck[];
+  notChecked: string[];
+}
+
+const BENDING = "σ = n·M·y/I (elastic bending of the transformed section)";
+const SHEAR = "τ = V·Q/(I·t) (elastic shear stress, averaged over the width at each level)";
+
+/** Bending and shear stress per material and deflection, for every combination. */
+export function memberChecks(job: JobDocument, section: SectionModel, beam: BeamAnalysis, profile: ProfilePoint[]): MemberChecks {
+  const checks: MemberCheck[] = [];
+  const notChecked: string[] = [];
+  const materials = [...new Map(section.parts.map((p) => [p.material.id, p.material])).values()];
+  const I = section.secondMoment;
+
+  for (const material of materials) {
+    const parts = section.parts.filter((p) => p.material.id === material.id);
+    const names = parts.map((p) => p.name || p.id).join(", ");
+    const fb = material.strength.bending;
+    if (fb === undefined) notChecked.push(`Bending stress in ${material.name} (${names}): no bending strength given.`);
+    else {
+      let worst = { demand: 0, combination: "", at: 0 as number | null };
+      for (const r of beam.results) {
+        const { max, min } = momentExtremes(r.actions);
+        for (const p of parts) {
+          const fibre = Math.max(...p.rects.flatMap((rect) => [Math.abs(rect.y1 - section.centroidY), Math.abs(rect.y0 - section.centroidY)]));
+          for (const m of [max, min]) {
+            const sigma = (p.n * Math.abs(m.value) * fibre) / I;
+            if (sigma > worst.demand) worst = { demand: sigma, combination: r.combination.id, at: m.x };
+          }
+        }
+      }
+      checks.push(stressCheck(`bending-${material.id}`, `Bending stress, ${material.name} (${names})`, worst, fb, BENDING));
+    }
+    const fv = material.strength.shear;
+    if (fv === undefined) notChecked.push(`Shear stress in ${material.name} (${names}): no shear strength given.`);
+    else {
+      const factor = Math.max(0, ...profile.filter((pt) => parts.some((p) => p.rects.some((r) => occupies(r, pt)))).map((pt) => pt.factor));
+      let worst = { demand: 0, combination: "", at: 0 as number | null };
+      for (const r of beam.results) {
+        const v = maxAbsShear(r.actions, 0, beam.length);
+        if (v.value * factor > worst.demand) worst = { demand: v.value * factor, combination: r.combination.id, at: v.x };
+      }
+      checks.push(stressCheck(`shear-${material.id}`, `Shear stress, ${material.name} (${names})`, worst, fv, SHEAR));
+    }
+  }
+
+  const L = beam.length;
+  if (job.basis === "allowable") {
+    const limit = L / job.beam.deflectionLimits.total;
+    let worst = { value: 0, x: 0, combination: "" };
+    for (const r of beam.results) {
+      const d = maxDeflection(r.curve);
+      if (d.value > worst.value) worst = { ...d, combination: r.combination.id };
+    }
+    checks.push({
+      id: "deflection-total",
+      title: `Deflection under all loads, limit span/${job.beam.deflectionLimits.total}`,
+      quantity: "deflection",
+      demand: worst.value,
+      capacity: limit,
+      utilisation: worst.value / limit,
+      passes: worst.value <= limit * (1 + 1e-9),
+      combination: worst.combination,
+      at: worst.x,
+      reference: "limit set in the job (span/240 is a common practice default for total load)",
+    });
+    notChecked.push("Deflection under live load alone: the loads are checked only as one combination here.");
+  } else {
+    notChecked.push("Deflection: the loads are factored, so no service-load deflection is checked.");
+  }
+  notChecked.push(
+    "Lateral-torsional stability and lateral bracing of the compression edge.",
+    "Bearing at the supports and under point loads, and the supports' own connections.",
+    "Local buckling of thin plates and webs, and web crippling.",
+    "Fire resistance, vibration and dynamic response.",
+    "Long-term deflection (creep) and the extra deflection from slip of mechanical connectors.",
+    "Splices and end joints within any part, holes and notches.",
+    "Withdrawal, pull-through and head capacity of connectors, and splitting of the parts.",
+  );
+  return { checks, notChecked };
+}
+
+function occupies(r: { y0: number; y1: number }, pt: ProfilePoint): boolean {
+  if (pt.side === "below") return r.y0 < pt.y && pt.y <= r.y1;
+  if (pt.side === "above") return r.y0 <= pt.y && pt.y < r.y1;
+  return r.y0 <= pt.y && pt.y <= r.y1;
+}
+
+function stressCheck(id: string, title: string, worst: { demand: number; combination: string; at: number | null }, capacity: number, reference: string): MemberCheck {
+  return {
+    id,
+    title,
+    quantity: "stress",
+    demand: worst.demand,
+    capacity,
+    utilisation: worst.demand / capacity,
+    passes: worst.demand <= capacity * (1 + 1e-9),
+    combination: worst.combination,
+    at: worst.at,
+    reference,
+  };
+}

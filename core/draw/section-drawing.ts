@@ -1,0 +1,81 @@
+import type { DesignResult } from "../schema/result.js";
+import { formatNumber } from "../units/format.js";
+import { lineTo, moveTo, palette, rectPath, type Drawing, type DrawItem } from "./drawing.js";
+
+export interface SectionDrawingOptions {
+  width: number;
+  height: number;
+  /** Joint whose held area is shaded and whose width t is marked; the first joint when absent. */
+  joint?: string;
+}
+
+/**
+ * The cross-section to scale: parts by material, every joint line, the area held by the selected
+ * joint shaded, its contact width t marked, and the neutral axis. Input numbers are in the result's units.
+ */
+export function sectionDrawing(result: Pick<DesignResult, "section" | "joints" | "unitLabels">, options: SectionDrawingOptions): Drawing {
+  const { section, joints } = result;
+  const unit = result.unitLabels.length ?? "";
+  const { x0, x1, y0, y1 } = section.bounds;
+  const margin = { left: 16, right: 92, top: 22, bottom: 30 };
+  const scale = Math.min((options.width - margin.left - margin.right) / (x1 - x0), (options.height - margin.top - margin.bottom) / (y1 - y0));
+  const ox = margin.left + (options.width - margin.left - margin.right - (x1 - x0) * scale) / 2;
+  const oy = margin.top + (options.height - margin.top - margin.bottom + (y1 - y0) * scale) / 2;
+  const X = (x: number) => ox + (x - x0) * scale;
+  const Y = (y: number) => oy - (y - y0) * scale;
+  const items: DrawItem[] = [];
+  const materials = [...new Set(section.parts.map((p) => p.material))];
+
+  for (const part of section.parts) {
+    const colour = palette.material[materials.indexOf(part.material) % palette.material.length];
+    for (const r of part.rects) {
+      items.push({ type: "path", d: rectPath(X(r.x0), Y(r.y1), (r.x1 - r.x0) * scale, (r.y1 - r.y0) * scale), fill: colour, stroke: palette.ink, strokeWidth: 1, role: `part ${part.id}` });
+    }
+  }
+
+  const selected = joints.find((j) => j.id === options.joint) ?? joints[0];
+  if (selected) {
+    const held = new Set(selected.held);
+    for (const part of section.parts.filter((p) => held.has(p.id))) {
+      for (const r of part.rects) {
+        items.push({ type: "path", d: rectPath(X(r.x0), Y(r.y1), (r.x1 - r.x0) * scale, (r.y1 - r.y0) * scale), fill: palette.held, opacity: 0.55, role: `held-area ${selected.id}` });
+      }
+    }
+  }
+
+  for (const joint of joints) {
+    const isSelected = joint === selected;
+    for (const line of joint.lines) {
+      const d =
+        line.orientation === "horizontal"
+          ? `${moveTo(X(line.from), Y(line.level))}${lineTo(X(line.to), Y(line.level))}`
+          : `${moveTo(X(line.level), Y(line.from))}${lineTo(X(line.level), Y(line.to))}`;
+      items.push({ type: "path", d, stroke: palette.joint, strokeWidth: isSelected ? 3.5 : 2, role: `joint-line ${joint.id}${isSelected ? " selected" : ""}` });
+    }
+  }
+
+  if (selected) {
+    // Width t: a tick at each end of every contact line, and the total beside the section.
+    for (const line of selected.lines) {
+      const tick = 5;
+      const d =
+        line.orientation === "horizontal"
+          ? [line.from, line.to].map((x) => `${moveTo(X(x), Y(line.level) - tick)}${lineTo(X(x), Y(line.level) + tick)}`).join("")
+          : [line.from, line.to].map((y) => `${moveTo(X(line.level) - tick, Y(y))}${lineTo(X(line.level) + tick, Y(y))}`).join("");
+      items.push({ type: "path", d, stroke: palette.joint, strokeWidth: 1.5, role: `width-mark ${selected.id}` });
+    }
+    const level = selected.lines[0]!;
+    const labelY = level.orientation === "horizontal" ? Y(level.level) : Y((level.from + level.to) / 2);
+    items.push({ type: "text", x: X(x1) + 8, y: labelY + 4, text: `t = ${formatNumber(selected.contactWidth)} ${unit}`, size: 11, anchor: "start", fill: palette.joint, bold: true, role: `width-label ${selected.id}` });
+    items.push({ type: "text", x: X(x1) + 8, y: labelY + 18, text: `Q = ${formatNumber(selected.firstMoment)} ${result.unitLabels.firstMoment ?? ""}`, size: 10, anchor: "start", fill: palette.ink, role: `q-label ${selected.id}` });
+  }
+
+  const na = Y(section.centroidY);
+  items.push({ type: "path", d: `${moveTo(X(x0) - 8, na)}${lineTo(X(x1) + 8, na)}`, stroke: palette.neutral, strokeWidth: 1, dash: [6, 3], role: "neutral-axis" });
+  items.push({ type: "text", x: X(x1) + 8, y: na - 4, text: "N.A.", size: 10, anchor: "start", fill: palette.neutral, role: "neutral-axis-label" });
+
+  items.push({ type: "text", x: (X(x0) + X(x1)) / 2, y: Y(y0) + 18, text: `${formatNumber(x1 - x0)} ${unit}`, size: 10, anchor: "middle", fill: palette.faint });
+  items.push({ type: "text", x: X(x0) - 4, y: Y(y1) - 8, text: `depth ${formatNumber(y1 - y0)} ${unit}`, size: 10, anchor: "start", fill: palette.faint });
+  return { width: options.width, height: options.height, items, title: `Cross-section${selected ? `, joint ${selected.id} shaded` : ""}` };
+}
+

@@ -1,0 +1,14 @@
+export { prepareJob, checkJob, type PreparedJob } from "./check-job.js";
+export { designMember } from "./design-member.js";
+export { JobDocument, JOB_FORMAT, JOB_VERSION, type JobInput } from "./schema/job.js";
+export { DesignResult, RESULT_FORMAT, RESULT_VERSION } from "./schema/result.js";
+export { issuesFromZod, formatPath, type JobIssue } from "./schema/job-issues.js";
+export { toCoreUnits, toDisplayUnits } from "./units/convert.js";
+export { quantityUnits, unitLabel, unitLabels, toCore, fromCore, type Quantity, type UnitSystem } from "./units/quantity.js";
+export { formatNumber, formatRatio, withUnit } from "./units/format.js";
+export { canonicalJson } from "./canonical-json.js";
+export { renderSvg } from "./draw/render-svg.js";
+export { sectionDrawing } from "./draw/section-drawing.js";
+export { lineDiagram } from "./draw/line-diagram.js";
+export { palette, type Drawing, type DrawItem } from "./draw/drawing.js";
+export { PROGRAM } from "./version.js";

@@ -1,0 +1,154 @@
+import { z } from "zod";
+import { Connector } from "../connector/registry.js";
+import { unitSystems } from "../units/quantity.js";
+import { Id, Text, nonNegative, positive, quantity } from "./quantity.js";
+
+export const JOB_FORMAT = "stitchplan-job";
+export const JOB_VERSION = 1;
+
+export const Material = z.strictObject({
+  id: Id,
+  name: Text(80).min(1, "must not be empty"),
+  family: z.enum(["sawn-timber", "glulam", "engineered-wood", "panel", "steel", "other"]).default("other"),
+  /** Modulus of elasticity used for the transformed section and deflection. */
+  E: positive("modulus"),
+  density: nonNegative("density"),
+  /** Strengths on the job's basis (allowable or design values); a check without its strength is listed as not checked. */
+  strength: z
+    .strictObject({
+      bending: positive("stress").optional(),
+      shear: positive("stress").optional(),
+    })
+    .default({}),
+  source: Text(160).default(""),
+});
+export type Material = z.infer<typeof Material>;
+
+export const Rectangle = z.strictObject({
+  type: z.literal("rectangle"),
+  /** Width across the member. */
+  b: positive("length"),
+  /** Depth. */
+  h: positive("length"),
+});
+
+export const Shape = z.discriminatedUnion("type", [Rectangle]);
+export type Shape = z.infer<typeof Shape>;
+
+export const SectionPart = z.strictObject({
+  id: Id,
+  name: Text(80).default(""),
+  material: Id,
+  shape: Shape,
+  /** Left edge of the part's bounding box, measured from any fixed vertical line. */
+  x: quantity("length"),
+  /** Bottom edge of the part's bounding box, measured up from any fixed level. */
+  y: quantity("length"),
+});
+export type SectionPart = z.infer<typeof SectionPart>;
+
+export const loadCategories = ["dead", "live", "roof-live", "snow", "wind"] as const;
+export const LoadCategory = z.enum(loadCategories);
+export type LoadCategory = z.infer<typeof LoadCategory>;
+
+export const UniformLoad = z.strictObject({
+  type: z.literal("uniform"),
+  category: LoadCategory.default("dead"),
+  label: Text(60).default(""),
+  /** Intensity, downward positive. */
+  w: quantity("lineLoad"),
+  /** Start of the loaded length from the left end of the member; the left end if absent. */
+  from: nonNegative("span").optional(),
+  /** End of the loaded length; the right end if absent. */
+  to: nonNegative("span").optional(),
+});
+
+export const PointLoad = z.strictObject({
+  type: z.literal("point"),
+  category: LoadCategory.default("dead"),
+  label: Text(60).default(""),
+  /** Force, downward positive. */
+  P: quantity("force"),
+  /** Position from the left end of the member. */
+  at: nonNegative("span"),
+});
+
+export const Load = z.discriminatedUnion("type", [UniformLoad, PointLoad]);
+export type Load = z.infer<typeof Load>;
+
+export const Beam = z.strictObject({
+  /** Span lengths, left to right; the skeleton member is one simply supported span. */
+  spans: z.array(positive("span")).min(1, "needs at least one span").max(1, "only one simply supported span is supported"),
+  loads: z.array(Load).max(200, "at most 200 loads"),
+  /** Adds the parts' own weight as a dead load. */
+  selfWeight: z.boolean().default(true),
+  /** Deflection limits as span divided by this ratio. */
+  deflectionLimits: z
+    .strictObject({
+      total: z.number().positive().default(240),
+      live: z.number().positive().default(360),
+    })
+    .default({ total: 240, live: 360 }),
+});
+export type Beam = z.infer<typeof Beam>;
+
+export const Fastening = z.strictObject({
+  connector: Id,
+  /** Connectors per row across each contact line (side by side at one station). */
+  rows: z.number().int("must be a whole number").min(1).max(8).default(1),
+});
+
+export const JointFastening = Fastening.extend({
+  /** The parts held by this joint's connectors; names the joint. */
+  held: z.array(Id).min(1, "must name at least one part"),
+});
+
+export const SpacingRules = z.strictObject({
+  /** Spacings are whole multiples of this step. Default 5 mm or 1/4 in. */
+  module: positive("length").optional(),
+  /** Preferred spacings; when given, only these are used. */
+  preferred: z.array(positive("length")).max(30).optional(),
+  /** Overrides the connector's minimum spacing when larger. */
+  minimum: positive("length").optional(),
+  /** Overrides the connector's maximum spacing when smaller. */
+  maximum: positive("length").optional(),
+  /** Shortest zone a builder is asked to follow. Default 300 mm or 12 in. */
+  minZoneLength: nonNegative("length").optional(),
+  maxZonesPerSpan: z.number().int("must be a whole number").min(1).max(9).default(5),
+  /** Mirror the zones about midspan when the demand is symmetric. */
+  symmetric: z.boolean().default(true),
+});
+export type SpacingRules = z.infer<typeof SpacingRules>;
+
+export const JobDocument = z.strictObject({
+  format: z.literal(JOB_FORMAT),
+  version: z.literal(JOB_VERSION),
+  /** si: mm, m, kN, kN/m, N, MPa, kg/m³ · us: in, ft, lbf, lbf/ft, psi, lb/ft³ */
+  units: z.enum(unitSystems),
+  /** allowable: service loads against allowable values · factored: factored loads against design values */
+  basis: z.enum(["allowable", "factored"]),
+  project: z.strictObject({
+    name: Text(120).min(1, "must not be empty"),
+    number: Text(40).default(""),
+    engineer: Text(80).default(""),
+    client: Text(120).default(""),
+  }),
+  member: z.strictObject({
+    mark: Text(40).min(1, "must not be empty"),
+    description: Text(200).default(""),
+    revision: Text(12).default("A"),
+    date: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, "must be a date written YYYY-MM-DD").optional(),
+  }),
+  materials: z.array(Material).min(1, "needs at least one material").max(12, "at most 12 materials"),
+  parts: z.array(SectionPart).min(1, "needs at least one part").max(16, "at most 16 parts"),
+  connectors: z.array(Connector).min(1, "needs at least one connector or glue line").max(12, "at most 12 connectors"),
+  fastening: z.strictObject({
+    default: Fastening,
+    joints: z.array(JointFastening).max(32).default([]),
+  }),
+  beam: Beam,
+  combinations: z.strictObject({ set: z.enum(["unfactored"]).default("unfactored") }).default({ set: "unfactored" }),
+  spacing: SpacingRules.default({ maxZonesPerSpan: 5, symmetric: true }),
+});
+export type JobDocument = z.infer<typeof JobDocument>;
+export type JobInput = z.input<typeof JobDocument>;

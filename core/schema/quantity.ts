@@ -1,0 +1,25 @@
+import { z } from "zod";
+import type { Quantity } from "../units/quantity.js";
+
+/** Registry of the quantity kind of each number in the job and result schemas. */
+export const quantityOf = z.registry<{ quantity: Quantity }>();
+
+/** A number that carries a physical quantity; `schema` defaults to a finite number. */
+export function quantity<S extends z.ZodNumber>(kind: Quantity, schema?: S): S {
+  const s = (schema ?? z.number()) as S;
+  quantityOf.add(s, { quantity: kind });
+  return s;
+}
+
+export const positive = (kind: Quantity) => quantity(kind, z.number().positive());
+export const nonNegative = (kind: Quantity) => quantity(kind, z.number().nonnegative());
+
+/** Identifier a person types and other fields refer to. */
+export const Id = z
+  .string()
+  .min(1, "must not be empty")
+  .max(40, "must be at most 40 characters")
+  .regex(/^[A-Za-z0-9_.-]+$/, "may hold only letters, digits, '-', '_' and '.'");
+
+/** Free text shown on the page and printed on the worksheet. */
+export const Text = (max = 120) => z.string().max(max, `must be at most ${max} characters`);

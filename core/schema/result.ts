@@ -1,0 +1,253 @@
+import { z } from "zod";
+import { durationClasses } from "../connector/connector-kind.js";
+import { quantities, unitSystems, type Quantity } from "../units/quantity.js";
+import { quantity } from "./quantity.js";
+
+export const RESULT_FORMAT = "stitchplan-result";
+export const RESULT_VERSION = 1;
+
+const q = (kind: Quantity) => quantity(kind);
+
+/** A number of the given kind; null for a pure number that is never rescaled. */
+const num = (kind: Quantity | null) => (kind ? quantity(kind) : z.number());
+
+const byQuantity = <Shape extends z.ZodRawShape>(fields: (kind: Quantity | null) => Shape) =>
+  z.discriminatedUnion("quantity", [
+    z.object({ ...fields(null), quantity: z.literal("ratio") }),
+    ...quantities.map((kind) => z.object({ ...fields(kind), quantity: z.literal(kind) })),
+  ] as unknown as [z.ZodObject, ...z.ZodObject[]]);
+
+const stepFields = (kind: Quantity | null) => ({ symbol: z.string(), description: z.string(), value: num(kind), reference: z.string().optional() });
+/** One line of working; it carries its quantity kind, "ratio" for a pure number. */
+const WorkingLineShape = z.object({ ...stepFields(null), quantity: z.enum(["ratio", ...quantities]) });
+export type WorkingLine = z.infer<typeof WorkingLineShape>;
+export const WorkingLine = byQuantity(stepFields) as unknown as z.ZodType<WorkingLine>;
+
+const Extreme = (kind: Quantity) => z.object({ value: quantity(kind), x: q("span") });
+
+export const SectionResult = z.object({
+  referenceModulus: q("modulus"),
+  area: q("area"),
+  transformedArea: q("area"),
+  centroidY: q("length"),
+  secondMoment: q("secondMoment"),
+  depth: q("length"),
+  width: q("length"),
+  bounds: z.object({ x0: q("length"), x1: q("length"), y0: q("length"), y1: q("length") }),
+  firstMomentAtNeutralAxis: q("firstMoment"),
+  widthAtNeutralAxis: q("length"),
+  parts: z.array(
+    z.object({
+      id: z.string(),
+      name: z.string(),
+      material: z.string(),
+      materialName: z.string(),
+      modularRatio: z.number(),
+      area: q("area"),
+      rects: z.array(z.object({ x0: q("length"), x1: q("length"), y0: q("length"), y1: q("length") })),
+      /** Distance from the neutral axis to the part's top and bottom fibres (bottom as a positive number). */
+      topFibre: q("length"),
+      bottomFibre: q("length"),
+    }),
+  ),
+  /** τ per unit shear force over the depth: τ(y) = V·Q(y)/(I·t(y)). */
+  stressProfile: z.array(z.object({ y: q("length"), firstMoment: q("firstMoment"), width: q("length"), factor: q("perArea") })),
+});
+
+export const JointResult = z.object({
+  id: z.string(),
+  held: z.array(z.string()),
+  found: z.boolean(),
+  lines: z.array(
+    z.object({
+      between: z.tuple([z.string(), z.string()]),
+      orientation: z.enum(["horizontal", "vertical"]),
+      level: q("length"),
+      from: q("length"),
+      to: q("length"),
+      length: q("length"),
+    }),
+  ),
+  contactWidth: q("length"),
+  firstMoment: q("firstMoment"),
+  /** Q/I: shear flow per unit shear force. */
+  flowFactor: q("perLength"),
+  /** Q/(I·t): bond-line stress per unit shear force. */
+  stressFactor: q("perArea"),
+  connector: z.string(),
+  connectorLabel: z.string(),
+  mechanism: z.enum(["discrete", "bond-line"]),
+  rows: z.number().int(),
+  sharing: z.string(),
+});
+export type JointResult = z.infer<typeof JointResult>;
+
+export const Combination = z.object({
+  id: z.string(),
+  name: z.string(),
+  factors: z.record(z.string(), z.number()),
+  duration: z.enum(durationClasses),
+});
+export type Combination = z.infer<typeof Combination>;
+
+export const BeamResult = z.object({
+  length: q("span"),
+  spans: z.array(q("span")),
+  supports: z.array(z.object({ x: q("span"), type: z.enum(["pinned", "roller", "fixed"]) })),
+  selfWeight: q("lineLoad"),
+  combinations: z.array(Combination),
+  /** Stations along the member; a station repeats where V or M jumps (left value first). */
+  stations: z.array(q("span")),
+  perCombination: z.array(
+    z.object({
+      combination: z.string(),
+      shear: z.array(q("force")),
+      moment: z.array(q("moment")),
+      deflection: z.array(q("deflection")),
+      reactions: z.array(z.object({ x: q("span"), force: q("force"), moment: q("moment") })),
+      maxShear: Extreme("force"),
+      maxMoment: Extreme("moment"),
+      minMoment: Extreme("moment"),
+      maxDeflection: Extreme("deflection"),
+    }),
+  ),
+  envelope: z.object({
+    shearMax: z.array(q("force")),
+    shearMin: z.array(q("force")),
+    momentMax: z.array(q("moment")),
+    momentMin: z.array(q("moment")),
+    /** Combination whose |V| is largest at each station. */
+    governingShear: z.array(z.string()),
+  }),
+});
+export type BeamResult = z.infer<typeof BeamResult>;
+
+export const ConnectorResistanceResult = z.object({
+  combination: z.string(),
+  value: q("connectorForce"),
+  governing: z.string(),
+  reference: z.string(),
+  steps: z.array(WorkingLine),
+});
+
+export const Zone = z.object({
+  from: q("span"),
+  to: q("span"),
+  spacing: q("length"),
+  rows: z.number().int(),
+  /** Connectors in the zone, all lines of the joint. */
+  count: z.number().int(),
+  /** Smallest required spacing inside the zone. */
+  requiredSpacing: q("length").nullable(),
+  utilisation: z.number(),
+  governingCombination: z.string(),
+  passes: z.boolean(),
+});
+export type Zone = z.infer<typeof Zone>;
+
+export const Schedule = z.object({
+  joint: z.string(),
+  connector: z.string(),
+  connectorLabel: z.string(),
+  rows: z.number().int(),
+  lineCount: z.number().int(),
+  resistance: z.array(ConnectorResistanceResult),
+  limits: z.object({
+    minSpacing: q("length"),
+    maxSpacing: q("length"),
+    endDistance: q("length"),
+    module: q("length").nullable(),
+    preferred: z.array(q("length")).nullable(),
+    minZoneLength: q("length"),
+    sources: z.array(z.string()),
+  }),
+  zones: z.array(Zone),
+  /** Positions of the rows along the member, from the left end; the same on every line. */
+  positions: z.array(q("span")),
+  count: z.number().int(),
+  efficiency: z.object({
+    /** ∫ max over combinations of q/R dx, all lines: no schedule can use fewer connectors. */
+    lowerBound: z.number(),
+    uniformSpacing: q("length").nullable(),
+    uniformCount: z.number().int().nullable(),
+    countOverLowerBound: z.number().nullable(),
+    uniformOverCount: z.number().nullable(),
+  }),
+  verification: z.object({
+    maxUtilisation: z.number(),
+    at: q("span"),
+    combination: z.string(),
+    passes: z.boolean(),
+    method: z.string(),
+  }),
+  passes: z.boolean(),
+  infeasible: z
+    .object({
+      where: z.array(z.object({ from: q("span"), to: q("span") })),
+      smallestRequired: q("length"),
+      minSpacing: q("length"),
+      options: z.array(z.string()),
+    })
+    .nullable(),
+  /** Envelope of shear flow per line and required spacing at the beam stations. */
+  shearFlow: z.array(q("shearFlow")),
+  requiredSpacing: z.array(q("length").nullable()),
+});
+export type Schedule = z.infer<typeof Schedule>;
+
+export const BondLineResult = z.object({
+  joint: z.string(),
+  connector: z.string(),
+  connectorLabel: z.string(),
+  width: q("length"),
+  strength: z.array(z.object({ combination: z.string(), value: q("stress"), governing: z.string(), reference: z.string(), steps: z.array(WorkingLine) })),
+  maxStress: q("stress"),
+  at: q("span"),
+  combination: z.string(),
+  utilisation: z.number(),
+  passes: z.boolean(),
+  /** Largest bond-line stress over the combinations at each beam station. */
+  stress: z.array(q("stress")),
+});
+export type BondLineResult = z.infer<typeof BondLineResult>;
+
+const checkFields = (kind: Quantity | null) => ({
+  id: z.string(),
+  title: z.string(),
+  demand: num(kind),
+  capacity: num(kind),
+  utilisation: z.number(),
+  passes: z.boolean(),
+  combination: z.string(),
+  at: q("span").nullable(),
+  reference: z.string(),
+});
+/** A member check; demand and capacity are in the unit of its quantity. */
+const MemberCheckShape = z.object({ ...checkFields(null), quantity: z.enum(["ratio", ...quantities]) });
+export type MemberCheck = z.infer<typeof MemberCheckShape>;
+export const MemberCheck = byQuantity(checkFields) as unknown as z.ZodType<MemberCheck>;
+
+export const DesignResult = z.object({
+  format: z.literal(RESULT_FORMAT),
+  version: z.literal(RESULT_VERSION),
+  program: z.object({ name: z.string(), version: z.string() }),
+  units: z.enum(unitSystems),
+  unitLabels: z.record(z.string(), z.string()),
+  basis: z.enum(["allowable", "factored"]),
+  project: z.object({ name: z.string(), number: z.string(), engineer: z.string(), client: z.string() }),
+  member: z.object({ mark: z.string(), description: z.string(), revision: z.string(), date: z.string().optional() }),
+  status: z.object({ passes: z.boolean(), summary: z.string(), failures: z.array(z.string()) }),
+  section: SectionResult,
+  joints: z.array(JointResult),
+  beam: BeamResult,
+  schedules: z.array(Schedule),
+  bondLines: z.array(BondLineResult),
+  checks: z.array(MemberCheck),
+  notChecked: z.array(z.string()),
+  assumptions: z.array(z.string()),
+  standards: z.array(z.string()),
+  warnings: z.array(z.string()),
+  /** SHA-256 of the canonical job, the schema version and the program version; set by the service that ran the job. */
+  fingerprint: z.string().optional(),
+});
+export type DesignResult = z.infer<typeof DesignResult>;

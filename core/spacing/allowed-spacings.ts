@@ -1,0 +1,28 @@
+/** Spacings a builder may be given, ascending, mm: multiples of the module, or the preferred list, within the limits. */
+export function allowedSpacings(p: { module: number | null; preferred: number[] | null; min: number; max: number }): number[] {
+  const tol = 1e-9 * p.max;
+  if (p.preferred && p.preferred.length > 0) {
+    return [...new Set(p.preferred)].filter((s) => s >= p.min - tol && s <= p.max + tol).sort((a, b) => a - b);
+  }
+  const module = p.module!;
+  const out: number[] = [];
+  for (let k = Math.ceil(p.min / module - 1e-9); k * module <= p.max + tol; k++) if (k > 0) out.push(round(k * module));
+  return out;
+}
+
+const round = (x: number) => Math.round(x * 1e9) / 1e9;
+
+/** Largest allowed spacing not above s, or undefined when even the smallest is too large. */
+export function largestAtMost(spacings: number[], s: number): number | undefined {
+  let lo = 0;
+  let hi = spacings.length - 1;
+  let found: number | undefined;
+  while (lo <= hi) {
+    const mid = (lo + hi) >> 1;
+    if (spacings[mid]! <= s * (1 + 1e-12)) {
+      found = spacings[mid];
+      lo = mid + 1;
+    } else hi = mid - 1;
+  }
+  return found;
+}

@@ -1,0 +1,223 @@
+import { largestAtMost } from "./allowed-spacings.js";
+
+/**
+ * Zoning of a connector line as an optimisation.
+ *
+ * The member is cut into zones at candidate boundaries; each zone gets the largest allowed spacing s
+ * whose rows can carry the demand over the zone widened by s/2 at each side (so the first and last row
+ * of a zone, whose tributary reaches into the next zone, are covered too), and the end rows, set at the
+ * end distance e from the member ends, carry the demand over e + s/2. Dynamic programming over the
+ * boundaries minimises the number of rows with at most `maxZones` zones, each at least `minZoneLength` long.
+ */
+export interface ZoningProblem {
+  length: number;
+  /** Conservative maximum of the demand (rows per mm) over [a, b]; a and b may fall outside [0, L]. */
+  demand: (a: number, b: number) => number;
+  spacings: number[];
+  endDistance: number;
+  minZoneLength: number;
+  /** Zones over the whole member (a mirrored plan counts the central zone once). */
+  maxZones: number;
+  /** Plan the left half and mirror it about midspan. */
+  mirrored: boolean;
+  /** Candidate boundaries, ascending, from 0 to L (or L/2 when mirrored). */
+  grid: number[];
+}
+
+export interface PlannedZone {
+  from: number;
+  to: number;
+  spacing: number;
+  feasible: boolean;
+}
+
+export interface ZonePlan {
+  zones: PlannedZone[];
+  /** Rows the plan needs by its own count (the placed rows are counted again afterwards). */
+  rows: number;
+}
+
+const INFEASIBLE_PENALTY = 1e6; // per mm of zone that cannot meet its demand
+
+export function planZones(p: ZoningProblem): ZonePlan {
+  const g = p.grid;
+  const n = g.length - 1;
+  const half = p.mirrored ? Math.ceil((p.maxZones + 1) / 2) : p.maxZones;
+  const size = (n + 1) * (n + 1);
+  // Zone (i, j) from g[i] to g[j]: cost NaN until evaluated, Infinity when not allowed.
+  const cost = new Float64Array(size).fill(NaN);
+  const rowsOf = new Float64Array(size);
+  const spacingOf = new Float64Array(size);
+  const feasibleOf = new Uint8Array(size);
+  const zoneCost = (i: number, j: number): number => {
+    const key = i * (n + 1) + j;
+    if (Number.isNaN(cost[key]!)) {
+      const z = evaluateZone(p, g[i]!, g[j]!, i === 0, j === n);
+      cost[key] = z ? z.cost : Infinity;
+      if (z) {
+        rowsOf[key] = z.rows;
+        spacingOf[key] = z.spacing;
+        feasibleOf[key] = z.feasible ? 1 : 0;
+      }
+    }
+    return cost[key]!;
+  };
+  let previous = new Float64Array(n + 1).fill(Infinity);
+  previous[0] = 0;
+  const parent: Int32Array[] = [];
+  let bestK = -1;
+  let bestTotal = Infinity;
+  for (let k = 1; k <= half; k++) {
+    const current = new Float64Array(n + 1).fill(Infinity);
+    const from = new Int32Array(n + 1).fill(-1);
+    for (let j = 1; j <= n; j++) {
+      for (let i = 0; i < j; i++) {
+        const before = previous[i]!;
+        if (before === Infinity) continue;
+        const total = before + zoneCost(i, j);
+        if (total < current[j]! - 1e-9) {
+          current[j] = total;
+          from[j] = i;
+        }
+      }
+    }
+    parent.push(from);
+    if (current[n]! < bestTotal - 1e-9) {
+      bestTotal = current[n]!;
+      bestK = k;
+    }
+    previous = current;
+  }
+  if (bestK < 0) throw new Error("zoning found no plan: the whole length as one zone must always be possible");
+  const left: PlannedZone[] = [];
+  let rows = 0;
+  for (let k = bestK, j = n; k > 0; k--) {
+    const i = parent[k - 1]![j]!;
+    const key = i * (n + 1) + j;
+    left.unshift({ from: g[i]!, to: g[j]!, spacing: spacingOf[key]!, feasible: feasibleOf[key] === 1 });
+    rows += rowsOf[key]!;
+    j = i;
+  }
+  const merged = mergeEqual(left);
+  if (!p.mirrored) return { zones: merged, rows };
+  rows = 2 * rows;
+  const last = merged[merged.length - 1]!;
+  const full = [...merged.slice(0, -1), { ...last, to: p.length - last.from }];
+  for (let k = merged.length - 2; k >= 0; k--) {
+    const z = merged[k]!;
+    full.push({ ...z, from: p.length - z.to, to: p.length - z.from });
+  }
+  return { zones: full, rows };
+}
+
+function mergeEqual(zones: PlannedZone[]): PlannedZone[] {
+  const out: PlannedZone[] = [];
+  for (const z of zones) {
+    const prev = out[out.length - 1];
+    if (prev && prev.spacing === z.spacing && prev.feasible === z.feasible) prev.to = z.to;
+    else out.push({ ...z });
+  }
+  return out;
+}
+
+/** Spacing, feasibility and row count of one candidate zone [a, b]; null when the zone is not allowed. */
+function evaluateZone(p: ZoningProblem, a: number, b: number, first: boolean, last: boolean) {
+  const L = p.length;
+  const e = p.endDistance;
+  const fullLength = p.mirrored && last ? L - 2 * a : b - a;
+  const wholeMember = first && last;
+  if (!wholeMember && fullLength < p.minZoneLength - 1e-9) return null;
+  const start = first ? e : a;
+  if (!last && b <= start) return null;
+  const spacing = zoneSpacing(p, a, b, first, last);
+  const s = spacing ?? p.spacings[0]!;
+  let rows: number;
+  if (p.mirrored && last) rows = (Math.ceil((L - 2 * start) / s - 1e-9) + 1) / 2;
+  else if (last) rows = Math.ceil((L - e - start) / s - 1e-9) + 1;
+  else rows = Math.ceil((b - start) / s - 1e-9);
+  const cost = spacing === undefined ? rows + INFEASIBLE_PENALTY * (b - a) : rows;
+  return { cost, rows, spacing: s, feasible: spacing !== undefined };
+}
+
+function zoneSpacing(p: ZoningProblem, a: number, b: number, first: boolean, last: boolean): number | undefined {
+  const L = p.length;
+  const e = p.endDistance;
+  const peak = p.demand(a, b);
+  if (peak <= 0) return p.spacings[p.spacings.length - 1];
+  let s = largestAtMost(p.spacings, 1 / peak);
+  while (s !== undefined) {
+    const reachLeft = first ? 0 : a - s / 2;
+    const reachRight = last ? (p.mirrored ? b : L) : b + s / 2;
+    let ok = s * p.demand(reachLeft, reachRight) <= 1 + 1e-12;
+    if (ok && first && e > s / 2) ok = (e + s / 2) * p.demand(0, e + s / 2) <= 1 + 1e-12;
+    if (ok && last && !p.mirrored && e > s / 2) ok = (e + s / 2) * p.demand(L - e - s / 2, L) <= 1 + 1e-12;
+    if (ok) return s;
+    s = largestAtMost(p.spacings, s * (1 - 1e-9));
+  }
+  return undefined;
+}
+
+/** Candidate zone boundaries: multiples of a round step from the left end, and the end itself. */
+export function boundaryGrid(end: number, step: number): number[] {
+  const out: number[] = [];
+  for (let k = 0; k * step < end - 1e-9 * end; k++) out.push(k * step);
+  out.push(end);
+  return out;
+}
+
+/** A round step for zone boundaries giving at most `cells` cells over `end`, mm. */
+export function roundStep(end: number, system: "si" | "us", cells = 48): number {
+  const steps = system === "si" ? [10, 20, 25, 50, 100, 200, 250, 500, 1000, 2000] : [0.5, 1, 2, 3, 6, 12, 24, 48, 96].map((s) => s * 25.4);
+  return steps.find((s) => end / s <= cells) ?? steps[steps.length - 1]!;
+}
+
+/** Range maximum over grid cells by a sparse table; queries widen to whole cells (conservative). */
+export class CellMaxima {
+  private readonly table: number[][];
+
+  constructor(
+    private readonly grid: number[],
+    cellMax: number[],
+  ) {
+    this.table = [cellMax];
+    for (let w = 1; 2 * w <= cellMax.length; w *= 2) {
+      const prev = this.table[this.table.length - 1]!;
+      this.table.push(prev.slice(0, prev.length - w).map((v, i) => Math.max(v, prev[i + w]!)));
+    }
+  }
+
+  /** Max over the cells that meet [a, b], clipped to the grid. */
+  over(a: number, b: number): number {
+    const g = this.grid;
+    const lo = Math.max(a, g[0]!);
+    const hi = Math.min(b, g[g.length - 1]!);
+    if (hi < lo) return 0;
+    const i = Math.max(0, upperBound(g, lo) - 1);
+    const j = Math.min(g.length - 2, Math.max(i, lowerBound(g, hi) - 1));
+    const level = 31 - Math.clz32(j - i + 1);
+    const row = this.table[level]!;
+    return Math.max(row[i]!, row[j - (1 << level) + 1]!);
+  }
+}
+
+function upperBound(xs: number[], x: number): number {
+  let lo = 0;
+  let hi = xs.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (xs[mid]! <= x) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
+}
+
+function lowerBound(xs: number[], x: number): number {
+  let lo = 0;
+  let hi = xs.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (xs[mid]! < x) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
+}

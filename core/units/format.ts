@@ -1,0 +1,19 @@
+/**
+ * A number as a person reads it on a page or worksheet: `digits` significant figures (4 by default),
+ * no floating-point noise, no exponent for everyday magnitudes, a true minus sign.
+ */
+export function formatNumber(value: number, digits = 4): string {
+  if (!Number.isFinite(value)) return "—";
+  if (value === 0 || Math.abs(value) < 1e-12) return "0";
+  const abs = Math.abs(value);
+  let text: string;
+  if (abs >= 10 ** digits) text = Math.round(value).toString();
+  else if (abs < 1e-4) text = value.toExponential(digits - 1).replace("e", "×10^");
+  else text = Number(value.toPrecision(digits)).toString();
+  return text.replace(/^-/, "−");
+}
+
+export const withUnit = (value: number, unit: string, digits = 4) => `${formatNumber(value, digits)} ${unit}`;
+
+/** A utilisation as a ratio with two decimals, e.g. 0.87. */
+export const formatRatio = (value: number) => (Number.isFinite(value) ? value.toFixed(2) : "—");

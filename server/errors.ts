@@ -1,0 +1,41 @@
+import type { JobIssue } from "../core/index.js";
+
+/** Every error the HTTP API returns: a stable code, its status and a sentence. README "Errors" lists the same set. */
+export const errors = {
+  ERR_INPUT_INVALID: { statusCode: 400, message: "The job document has problems; each is listed with its field." },
+  ERR_JSON_MALFORMED: { statusCode: 400, message: "The request body is not valid JSON." },
+  ERR_BODY_EMPTY: { statusCode: 400, message: "The request body is empty; send a job document as JSON." },
+  ERR_UNSUPPORTED_MEDIA_TYPE: { statusCode: 415, message: "Send the job document with Content-Type: application/json." },
+  ERR_BODY_TOO_LARGE: { statusCode: 413, message: "The request body is larger than the limit." },
+  ERR_NOT_FOUND: { statusCode: 404, message: "There is nothing at this address." },
+  ERR_EXAMPLE_NOT_FOUND: { statusCode: 404, message: "There is no example with this id." },
+  ERR_INTERNAL: { statusCode: 500, message: "The server failed while computing; the input was not stored or changed." },
+} as const;
+
+export type ErrorCode = keyof typeof errors;
+
+const reasons: Record<number, string> = { 400: "Bad Request", 404: "Not Found", 413: "Payload Too Large", 415: "Unsupported Media Type", 500: "Internal Server Error" };
+
+export interface ErrorBody {
+  statusCode: number;
+  code: ErrorCode;
+  error: string;
+  message: string;
+  issues: JobIssue[];
+}
+
+export function errorBody(code: ErrorCode, message?: string, issues: JobIssue[] = []): ErrorBody {
+  const { statusCode } = errors[code];
+  return { statusCode, code, error: reasons[statusCode] ?? "Error", message: message ?? errors[code].message, issues };
+}
+
+/** Thrown by route code to answer with one of the codes above. */
+export class ApiError extends Error {
+  constructor(
+    readonly code: ErrorCode,
+    message?: string,
+    readonly issues: JobIssue[] = [],
+  ) {
+    super(message ?? errors[code].message);
+  }
+}

@@ -1,0 +1,35 @@
+import type { FastifyInstance } from "fastify";
+import { z } from "zod";
+import { JobDocument, PROGRAM } from "../../core/index.js";
+import { runDesign } from "../design-service.js";
+import { ApiError } from "../errors.js";
+import type { Example } from "../examples.js";
+import { renderWorksheet, worksheetFileName } from "../pdf/worksheet.js";
+
+/** The JSON API: every route parses, calls core through the design service, and returns. */
+export async function apiRoutes(app: FastifyInstance, options: { examples: Example[] }) {
+  const jobSchema = z.toJSONSchema(JobDocument, { io: "input", unrepresentable: "any" });
+
+  app.get("/api/health", async () => ({ status: "ok", program: PROGRAM.name, version: PROGRAM.version }));
+
+  app.get("/api/examples", async () => options.examples.map(({ id, title, units }) => ({ id, title, units })));
+
+  app.get<{ Params: { id: string } }>("/api/examples/:id", async (request) => {
+    const example = options.examples.find((e) => e.id === request.params.id);
+    if (!example) throw new ApiError("ERR_EXAMPLE_NOT_FOUND", `There is no example "${request.params.id}"; GET /api/examples lists them.`);
+    return example.document;
+  });
+
+  app.get("/api/schema/job", async () => jobSchema);
+
+  app.post("/api/designs", async (request) => runDesign(request.body).result);
+
+  app.post("/api/worksheets", async (request, reply) => {
+    const run = runDesign(request.body);
+    const pdf = await renderWorksheet(run.job, run.result);
+    return reply
+      .type("application/pdf")
+      .header("content-disposition", `attachment; filename="${worksheetFileName(run.job)}"`)
+      .send(pdf);
+  });
+}

@@ -1,0 +1,2 @@
+const root = document.getElementById("app");
+if (root) root.textContent = "stitchplan";
