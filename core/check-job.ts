@@ -11,7 +11,7 @@ export type PreparedJob = { ok: true; job: JobDocument; core: JobDocument } | { 
 
 /** Parses a job document, checks what the schema cannot, and converts it to core units. */
 export function prepareJob(input: unknown): PreparedJob {
-  const parsed = JobDocument.safeParse(input);
+  const parsed = JobDocument.safeParse(input, { reportInput: true });
   if (!parsed.success) return { ok: false, issues: issuesFromZod(parsed.error) };
   const issues = checkJob(parsed.data);
   if (issues.length > 0) return { ok: false, issues };

@@ -140,6 +140,7 @@ export function designMember(job: JobDocument): DesignResult {
       count: design.count,
       efficiency: {
         lowerBound: design.lowerBound,
+        demandIntegral: design.demandIntegral,
         uniformSpacing: design.uniform?.spacing ?? null,
         uniformCount: design.uniform?.count ?? null,
         countOverLowerBound: design.lowerBound > 0 ? design.count / design.lowerBound : null,

@@ -6,12 +6,15 @@ export interface Station {
 }
 
 /**
- * Stations for diagrams and tables: an even grid plus every breakpoint; an interior breakpoint
- * appears twice, the value just left of it first, so jumps are drawn as vertical steps.
+ * Stations for diagrams and tables: a grid at a round step (about `divisions` of the length) plus
+ * every breakpoint; an interior breakpoint appears twice, the value just left of it first, so jumps
+ * are drawn as vertical steps.
  */
 export function stationsFor(length: number, breaks: number[], divisions = 100): Station[] {
   const tol = 1e-9 * length;
-  const xs = [...breaks, ...Array.from({ length: divisions + 1 }, (_, i) => (length * i) / divisions)].sort((a, b) => a - b);
+  const step = roundStep(length / divisions);
+  const grid = Array.from({ length: Math.floor(length / step + 1e-9) + 1 }, (_, i) => i * step);
+  const xs = [...breaks, ...grid, length].sort((a, b) => a - b);
   const unique: number[] = [];
   for (const x of xs) if (unique.length === 0 || x - unique[unique.length - 1]! > tol) unique.push(x);
   const isBreak = (x: number) => breaks.some((b) => Math.abs(b - x) <= tol);
@@ -21,4 +24,10 @@ export function stationsFor(length: number, breaks: number[], divisions = 100): 
     else out.push({ x, side: x >= length - tol ? "left" : "right" });
   }
   return out;
+}
+
+/** The smallest of 1, 2, 2.5, 5 × 10^k not below `raw`. */
+function roundStep(raw: number): number {
+  const magnitude = 10 ** Math.floor(Math.log10(raw));
+  return [1, 2, 2.5, 5, 10].map((m) => m * magnitude).find((s) => s >= raw * (1 - 1e-12))!;
 }

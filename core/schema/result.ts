@@ -166,8 +166,10 @@ export const Schedule = z.object({
   positions: z.array(q("span")),
   count: z.number().int(),
   efficiency: z.object({
-    /** ∫ max over combinations of q/R dx, all lines: no schedule can use fewer connectors. */
+    /** Fewest connectors any schedule within the maximum spacing can have: ∫ max(max over combinations of q/R, n/s_max) dx, all lines. */
     lowerBound: z.number(),
+    /** ∫ max over combinations of q/R dx, all lines (no spacing limit). */
+    demandIntegral: z.number(),
     uniformSpacing: q("length").nullable(),
     uniformCount: z.number().int().nullable(),
     countOverLowerBound: z.number().nullable(),

@@ -48,8 +48,11 @@ export class DemandCurve {
     return best;
   }
 
-  /** ∫ d(x) dx over the member: the fewest rows any schedule can have (composite Simpson per piece). */
-  integral(): number {
+  /**
+   * ∫ max(d(x), floor) dx over the member (composite Simpson per piece): with floor = 1/s_max, the
+   * fewest rows any schedule within the maximum spacing can have; with floor 0, the bare ∫q/(n·R) dx.
+   */
+  integral(floor = 0): number {
     const breaks = [...new Set(this.terms.flatMap((t) => t.actions.breaks))].sort((a, b) => a - b);
     let sum = 0;
     for (let i = 0; i < breaks.length - 1; i++) {
@@ -59,8 +62,9 @@ export class DemandCurve {
       const n = 64;
       const h = (b - a) / n;
       // Inside a piece each term is smooth; the max of terms has kinks, so use many panels.
-      let s = this.inside(a, a, b) + this.inside(b, a, b);
-      for (let k = 1; k < n; k++) s += (k % 2 ? 4 : 2) * this.inside(a + k * h, a, b);
+      const f = (x: number) => Math.max(floor, this.inside(x, a, b));
+      let s = f(a) + f(b);
+      for (let k = 1; k < n; k++) s += (k % 2 ? 4 : 2) * f(a + k * h);
       sum += (s * h) / 3;
     }
     return sum;

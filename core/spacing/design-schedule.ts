@@ -36,7 +36,10 @@ export interface ScheduleDesign {
   rowChecks: RowUtilisation[];
   /** Connectors on all lines. */
   count: number;
+  /** Fewest connectors any schedule within the maximum spacing can have: n·lines·∫max(d, 1/s_max) dx. */
   lowerBound: number;
+  /** n·lines·∫d dx = ∫q/R dx over all lines, ignoring the maximum spacing. */
+  demandIntegral: number;
   uniform: { spacing: number; count: number } | null;
   /** Where even the minimum spacing cannot carry the demand, and what would. */
   infeasible: { where: { from: number; to: number }[]; smallestRequired: number; connectorsPerRowNeeded: number; resistanceFactorNeeded: number } | null;
@@ -114,7 +117,8 @@ export function designSchedule(p: ScheduleProblem): ScheduleDesign {
     positions,
     rowChecks,
     count: positions.length * perRow,
-    lowerBound: demand.integral() * perRow,
+    lowerBound: demand.integral(1 / spacings[spacings.length - 1]!) * perRow,
+    demandIntegral: demand.integral() * perRow,
     uniform,
     infeasible,
   };

@@ -87,7 +87,10 @@ export function toCoreUnits<T>(schema: z.ZodType, value: T, system: UnitSystem):
   return rescale(schema, value, (v, q) => toCore(v, q, system));
 }
 
-/** A document in core units → the same document in `system`. */
+/** A document in core units → the same document in `system`, rounded to 12 significant figures to drop conversion noise. */
 export function toDisplayUnits<T>(schema: z.ZodType, value: T, system: UnitSystem): T {
-  return rescale(schema, value, (v, q) => fromCore(v, q, system));
+  return rescale(schema, value, (v, q) => {
+    const out = fromCore(v, q, system);
+    return out === 0 || !Number.isFinite(out) ? out : Number(out.toPrecision(12));
+  });
 }
