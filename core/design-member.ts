@@ -4,11 +4,11 @@ import { evaluate, maxAbsShear, maxDeflection, momentAt, momentExtremes, shearAt
 import { stationsFor, type Station } from "./beam/stations.js";
 import { checkBondLine } from "./checks/bond-line.js";
 import { memberChecks } from "./checks/member-checks.js";
-import type { ConnectorContext } from "./connector/connector-kind.js";
+import type { ConnectorContext, JoinedMember } from "./connector/connector-kind.js";
 import { kindOf, type Connector } from "./connector/registry.js";
 import type { JobDocument } from "./schema/job.js";
-import { RESULT_FORMAT, RESULT_VERSION, type BondLineResult, type DesignResult, type JointResult, type Schedule } from "./schema/result.js";
-import { findContacts } from "./section/contacts.js";
+import { RESULT_FORMAT, RESULT_VERSION, type BondLineResult, type Combination, type DesignResult, type JointResult, type Schedule } from "./schema/result.js";
+import { findContacts, geometricTolerance, type ContactLine } from "./section/contacts.js";
 import { findJoints, jointForHeldGroup, type JointPlane } from "./section/joints.js";
 import { buildSection, extremeFibre, firstMomentAbove, widthAt, type SectionModel } from "./section/section-model.js";
 import { stressProfile } from "./section/stress-profile.js";
@@ -38,7 +38,7 @@ export function designMember(job: JobDocument): DesignResult {
   const standards = new Set<string>();
   const warnings: string[] = [];
 
-  for (const { joint, connector, rows } of joints) {
+  for (const { joint, connector, rows, headSide } of joints) {
     const kind = kindOf(connector);
     kind.assumptions(connector).forEach((a) => assumptions.add(a));
     kind.standards(connector).forEach((s) => standards.add(s));
@@ -63,10 +63,12 @@ export function designMember(job: JobDocument): DesignResult {
           ? `q is shared equally by the ${lineCount} contact lines (the same connector on each, so equal stiffness).`
           : "One contact line carries the whole shear flow.",
     });
-    const contexts = beam.results.map((r) => contextFor(r.combination, joint, section));
+    // One context per combination and contact line; a combination's resistance is the least over the lines.
+    const contexts = beam.results.map((r) => joint.lines.map((line) => contextFor(r.combination, job.basis, joint, line, headSide, section)));
+    const leastOf = <T extends { value: number }>(values: T[]) => values.reduce((a, b) => (b.value < a.value ? b : a));
 
     if (kind.mechanism === "bond-line") {
-      const strengths = contexts.map((c) => kind.shearStrength(connector, c));
+      const strengths = contexts.map((lines) => leastOf(lines.map((c) => kind.shearStrength(connector, c))));
       const check = checkBondLine(beam, stressFactor, strengths, stations);
       bondLines.push({
         joint: joint.id,
@@ -84,7 +86,7 @@ export function designMember(job: JobDocument): DesignResult {
       continue;
     }
 
-    const resistances = contexts.map((c) => kind.resistance(connector, c));
+    const resistances = contexts.map((lines) => leastOf(lines.map((c) => kind.resistance(connector, c))));
     const limits = kind.detailing(connector);
     const defaults = spacingDefaults(job.units);
     const coreDefault = (v: number) => toCore(v, "length", job.units);
@@ -207,23 +209,42 @@ export function designMember(job: JobDocument): DesignResult {
 
 function jointsOf(job: JobDocument, section: SectionModel, contacts: ReturnType<typeof findContacts>) {
   const connectors = new Map(job.connectors.map((c) => [c.id, c]));
-  const custom = job.fastening.joints.map((j) => ({ joint: jointForHeldGroup(section, contacts, j.held), connector: connectors.get(j.connector)!, rows: j.rows }));
+  const custom = job.fastening.joints.map((j) => ({ joint: jointForHeldGroup(section, contacts, j.held), connector: connectors.get(j.connector)!, rows: j.rows, headSide: j.headSide }));
   const claimed = new Set(custom.flatMap((c) => c.joint.lines.map(lineKey)));
   const found = findJoints(section, contacts)
     .filter((j) => !j.lines.some((l) => claimed.has(lineKey(l))))
-    .map((joint) => ({ joint, connector: connectors.get(job.fastening.default.connector)! as Connector, rows: job.fastening.default.rows }));
+    .map((joint) => ({ joint, connector: connectors.get(job.fastening.default.connector)! as Connector, rows: job.fastening.default.rows, headSide: job.fastening.default.headSide }));
   return [...custom, ...found];
 }
 
 const lineKey = (l: { a: string; b: string; level: number }) => `${l.a}|${l.b}|${l.level}`;
 
-function contextFor(combination: { id: string; name: string; duration: ConnectorContext["duration"] }, joint: JointPlane, section: SectionModel): ConnectorContext {
+/** Context of a connector at one contact line of a joint, for one combination. */
+function contextFor(combination: Combination, basis: JobDocument["basis"], joint: JointPlane, line: ContactLine, headSide: "auto" | "held" | "other", section: SectionModel): ConnectorContext {
+  const parts = new Map(section.parts.map((p) => [p.id, p]));
+  const member = (id: string): JoinedMember => {
+    const part = parts.get(id)!;
+    const tol = geometricTolerance(section);
+    const at = (v: number) => Math.abs(v - line.level) <= tol;
+    const touching = part.rects.filter((r) => (line.orientation === "horizontal" ? at(r.y0) || at(r.y1) : at(r.x0) || at(r.x1)));
+    const rects = touching.length > 0 ? touching : part.rects;
+    const thickness = Math.max(...rects.map((r) => (line.orientation === "horizontal" ? r.y1 - r.y0 : r.x1 - r.x0)));
+    const width = Math.max(...rects.map((r) => (line.orientation === "horizontal" ? r.x1 - r.x0 : r.y1 - r.y0)));
+    return { part: id, material: part.material, thickness, width };
+  };
+  const held = new Set(joint.held);
+  const inside = member(held.has(line.a) ? line.a : line.b);
+  const outside = member(held.has(line.a) ? line.b : line.a);
+  const headIsHeld = headSide === "held" || (headSide === "auto" && inside.thickness <= outside.thickness);
   const ids = new Set(joint.lines.flatMap((l) => [l.a, l.b]));
   const materials = new Map(section.parts.filter((p) => ids.has(p.id)).map((p) => [p.material.id, p.material]));
   return {
     duration: combination.duration,
+    categories: combination.categories,
     combinationName: combination.name,
-    adherends: [...materials.values()].map((m) => ({ material: m.name, shearStrength: m.strength.shear })),
+    basis,
+    members: headIsHeld ? [inside, outside] : [outside, inside],
+    adherends: [...materials.values()].map((m) => ({ material: m.name, shearStrength: m.strength.shear, rollingShear: m.strength.rollingShear })),
   };
 }
 

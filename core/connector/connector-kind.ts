@@ -1,4 +1,5 @@
 import type { z } from "zod";
+import type { Material } from "../schema/job.js";
 import type { Quantity } from "../units/quantity.js";
 
 /** One line of the working behind a resistance, printed on the worksheet. */
@@ -11,13 +12,28 @@ export interface WorkingStep {
   reference?: string;
 }
 
+/** A part a connector passes through, in the order it is driven: side (head) member first. */
+export interface JoinedMember {
+  part: string;
+  material: Material;
+  /** Thickness of the part in the driving direction (perpendicular to the contact line), mm. */
+  thickness: number;
+  /** Extent of the part along the contact line's cross direction (for edge distances), mm. */
+  width: number;
+}
+
 /** What a connector kind is told about the place it is used. */
 export interface ConnectorContext {
-  /** Duration class of the load combination (for timber duration factors). */
+  /** Duration class of the load combination: that of its shortest-duration load (EN 1995-1-1 §3.1.3(2)). */
   duration: DurationClass;
+  /** Load categories present in the combination with a non-zero factor. */
+  categories: string[];
   combinationName: string;
+  basis: "allowable" | "factored";
+  /** The two parts at the contact line: head (side) member first, then the main member. */
+  members: [JoinedMember, JoinedMember];
   /** Shear strengths of the materials the joint connects, where the job gives them, MPa. */
-  adherends: { material: string; shearStrength: number | undefined }[];
+  adherends: { material: string; shearStrength: number | undefined; rollingShear: number | undefined }[];
 }
 
 export const durationClasses = ["permanent", "long", "medium", "short", "instantaneous", "unspecified"] as const;

@@ -18,8 +18,20 @@ export const Material = z.strictObject({
     .strictObject({
       bending: positive("stress").optional(),
       shear: positive("stress").optional(),
+      /** Rolling shear, where cross-layers of a panel meet a bond line. */
+      rollingShear: positive("stress").optional(),
     })
     .default({}),
+  /** Timber: specific gravity G (oven-dry), for dowel bearing strength under the NDS. */
+  specificGravity: z.number().positive().max(1.2).optional(),
+  /** Timber: characteristic density ρ_k, for embedment strength under EN 1995-1-1. */
+  characteristicDensity: positive("density").optional(),
+  /** Timber: mean density ρ_mean, for slip moduli under EN 1995-1-1. */
+  meanDensity: positive("density").optional(),
+  /** Steel: yield strength F_y. */
+  yieldStrength: positive("stress").optional(),
+  /** Steel: tensile strength F_u. */
+  tensileStrength: positive("stress").optional(),
   source: Text(160).default(""),
 });
 export type Material = z.infer<typeof Material>;
@@ -96,6 +108,11 @@ export const Fastening = z.strictObject({
   connector: Id,
   /** Connectors per row across each contact line (side by side at one station). */
   rows: z.number().int("must be a whole number").min(1).max(8).default(1),
+  /**
+   * Which part the connector is driven from (its head or side member): the held group, the other
+   * side, or "auto" — the part that is thinner in the driving direction.
+   */
+  headSide: z.enum(["auto", "held", "other"]).default("auto"),
 });
 
 export const JointFastening = Fastening.extend({

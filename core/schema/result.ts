@@ -86,7 +86,10 @@ export const Combination = z.object({
   id: z.string(),
   name: z.string(),
   factors: z.record(z.string(), z.number()),
+  /** Duration class of the shortest-duration load present (timber factors). */
   duration: z.enum(durationClasses),
+  /** Load categories present in the job with a non-zero factor in this combination. */
+  categories: z.array(z.string()),
 });
 export type Combination = z.infer<typeof Combination>;
 
