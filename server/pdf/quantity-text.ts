@@ -1,0 +1,44 @@
+import { formatNumber } from "../../core/index.js";
+
+const SUPERSCRIPT: Record<string, string> = { "-": "⁻", "0": "⁰", "1": "¹", "2": "²", "3": "³", "4": "⁴", "5": "⁵", "6": "⁶", "7": "⁷", "8": "⁸", "9": "⁹" };
+
+/**
+ * A number as printed on the worksheet: `formatNumber` for everyday magnitudes; very large or
+ * very small values (I, Q, Q/(I·t)) as a four-figure mantissa × a power of ten, so no column
+ * shows nine digits where four are meaningful.
+ */
+export function numberText(value: number, digits = 4): string {
+  if (!Number.isFinite(value)) return "—";
+  const abs = Math.abs(value);
+  if (abs === 0 || abs < 1e-12 || (abs >= 1e-3 && abs < 1e5)) return formatNumber(value, digits);
+  let exponent = Math.floor(Math.log10(abs));
+  let mantissa = Number((value / 10 ** exponent).toPrecision(digits));
+  if (Math.abs(mantissa) >= 10) {
+    mantissa /= 10;
+    exponent += 1;
+  }
+  const power = String(exponent).replace(/./g, (c) => SUPERSCRIPT[c] ?? c);
+  return `${formatNumber(mantissa, digits)}×10${power}`;
+}
+
+/** Unit labels of the result, keyed by quantity kind ("length" → "mm"). */
+export type UnitLabels = Record<string, string>;
+
+/** Formats numbers of a given quantity kind with the unit attached. */
+export function quantityText(labels: UnitLabels) {
+  const unit = (kind: string) => labels[kind] ?? "";
+  return {
+    unit,
+    /** `value` of quantity `kind`, unit attached; "ratio" prints a bare number. */
+    of(value: number, kind: string, digits = 4): string {
+      if (kind === "ratio") return numberText(value, digits);
+      return `${numberText(value, digits)} ${unit(kind)}`.trim();
+    },
+    /** A range along the member, e.g. "0 – 0.7 m". */
+    range(from: number, to: number, kind = "span"): string {
+      return `${numberText(from)} – ${numberText(to)} ${unit(kind)}`;
+    },
+  };
+}
+export type QuantityText = ReturnType<typeof quantityText>;
+

@@ -1,0 +1,166 @@
+import { createRequire } from "node:module";
+
+const require = createRequire(import.meta.url);
+const fontFile = (name: string) => require.resolve(`dejavu-fonts-ttf/ttf/${name}.ttf`);
+
+/** The worksheet's own look: graphite ink, teal rules, red only for what fails. */
+export const ink = {
+  text: "#22303c",
+  faint: "#66727e",
+  rule: "#167a7a",
+  light: "#d9dee4",
+  band: "#eef2f4",
+  fail: "#b3261e",
+  pass: "#2e7d4f",
+} as const;
+
+export const type = {
+  body: 9,
+  small: 7.5,
+  table: 8.5,
+  heading: 12,
+  subheading: 10,
+} as const;
+
+export type FontName = "body" | "bold" | "cond" | "cond-bold" | "mono";
+
+export function registerFonts(doc: PDFKit.PDFDocument): void {
+  doc.registerFont("body", fontFile("DejaVuSans"));
+  doc.registerFont("bold", fontFile("DejaVuSans-Bold"));
+  doc.registerFont("cond", fontFile("DejaVuSansCondensed"));
+  doc.registerFont("cond-bold", fontFile("DejaVuSansCondensed-Bold"));
+  doc.registerFont("mono", fontFile("DejaVuSansMono"));
+}
+
+/** Page size in points and the box the body flows in; the title block and footer sit outside it. */
+export interface PageFrame {
+  width: number;
+  height: number;
+  left: number;
+  right: number;
+  top: number;
+  bottom: number;
+}
+
+export const PAGE_SIZES = { si: { name: "A4", width: 595.28, height: 841.89 }, us: { name: "LETTER", width: 612, height: 792 } } as const;
+
+const SIDE = 40;
+const HEADER = 104;
+const FOOTER = 74;
+
+export function pageFrame(size: { width: number; height: number }): PageFrame {
+  return { width: size.width, height: size.height, left: SIDE, right: size.width - SIDE, top: HEADER, bottom: size.height - FOOTER };
+}
+
+export interface TextStyle {
+  font?: FontName;
+  size?: number;
+  colour?: string;
+  /** Indent from the left edge of the body. */
+  indent?: number;
+  width?: number;
+  align?: "left" | "right" | "center";
+  lineGap?: number;
+}
+
+/**
+ * A cursor down the body of the current page. Every block asks for its height first and moves to a
+ * fresh page when it would not fit, so nothing is split and pdfkit never adds a page by itself.
+ */
+export class Sheet {
+  y: number;
+
+  constructor(
+    readonly doc: PDFKit.PDFDocument,
+    readonly frame: PageFrame,
+  ) {
+    this.y = frame.top;
+  }
+
+  get width(): number {
+    return this.frame.right - this.frame.left;
+  }
+
+  get left(): number {
+    return this.frame.left;
+  }
+
+  /** Height left on this page. */
+  get room(): number {
+    return this.frame.bottom - this.y;
+  }
+
+  get atTop(): boolean {
+    return this.y <= this.frame.top + 0.5;
+  }
+
+  newPage(): void {
+    this.doc.addPage();
+    this.y = this.frame.top;
+  }
+
+  /** Moves to a new page unless `height` fits on this one. */
+  ensure(height: number): void {
+    if (height > this.room && !this.atTop) this.newPage();
+  }
+
+  gap(height: number): void {
+    this.y = Math.min(this.y + height, this.frame.bottom);
+  }
+
+  use(style: TextStyle): this {
+    this.doc.font(style.font ?? "body").fontSize(style.size ?? type.body).fillColor(style.colour ?? ink.text);
+    return this;
+  }
+
+  textHeight(text: string, style: TextStyle = {}): number {
+    this.use(style);
+    return this.doc.heightOfString(text, { width: style.width ?? this.width - (style.indent ?? 0), lineGap: style.lineGap ?? 1 });
+  }
+
+  /** Writes text at (x, y) inside a box of the given width; never flows onto another page. */
+  textAt(text: string, x: number, y: number, style: TextStyle & { width: number; height?: number }): void {
+    this.use(style);
+    const height = style.height ?? this.doc.heightOfString(text, { width: style.width, lineGap: style.lineGap ?? 1 }) + 2;
+    this.doc.text(text, x, y, { width: style.width, height, lineGap: style.lineGap ?? 1, align: style.align ?? "left", ellipsis: true });
+  }
+
+  /** A paragraph in the body; moves to a new page first if it would not fit. */
+  paragraph(text: string, style: TextStyle = {}, after = 4): void {
+    const width = style.width ?? this.width - (style.indent ?? 0);
+    const height = this.textHeight(text, { ...style, width });
+    this.ensure(height);
+    this.textAt(text, this.left + (style.indent ?? 0), this.y, { ...style, width });
+    this.y += height + after;
+  }
+
+  /** A heading kept with at least `keep` points of what follows it. */
+  heading(text: string, level: 1 | 2 = 1, keep = 90): void {
+    const size = level === 1 ? type.heading : type.subheading;
+    const before = level === 1 ? 10 : 6;
+    const height = this.textHeight(text, { font: "bold", size });
+    if (!this.atTop) this.ensure(before + height + 4 + keep);
+    if (!this.atTop) this.y += before;
+    this.textAt(text, this.left, this.y, { font: "bold", size, width: this.width, colour: level === 1 ? ink.rule : ink.text });
+    this.y += height + 1;
+    if (level === 1) {
+      this.doc.save().moveTo(this.left, this.y).lineTo(this.frame.right, this.y).lineWidth(0.8).strokeColor(ink.rule).stroke().restore();
+      this.y += 4;
+    } else {
+      this.y += 2;
+    }
+  }
+
+  /** A bulleted list, each item kept whole on a page. */
+  list(items: string[], style: TextStyle = {}): void {
+    const indent = (style.indent ?? 0) + 10;
+    for (const item of items) {
+      const height = this.textHeight(item, { ...style, indent });
+      this.ensure(height);
+      this.textAt("•", this.left + indent - 9, this.y, { ...style, width: 8 });
+      this.textAt(item, this.left + indent, this.y, { ...style, width: this.width - indent });
+      this.y += height + 2;
+    }
+    this.y += 2;
+  }
+}

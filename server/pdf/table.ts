@@ -1,0 +1,104 @@
+import { ink, type FontName, type Sheet } from "./sheet.js";
+
+export interface Column {
+  header: string;
+  /** Share of the table width. */
+  weight: number;
+  align?: "left" | "right" | "center";
+}
+
+export interface Cell {
+  text: string;
+  /** A second, smaller line under the text (a reference, a note). */
+  note?: string;
+  colour?: string;
+  bold?: boolean;
+}
+
+export type Row = (string | Cell)[];
+
+export interface TableOptions {
+  size?: number;
+  /** Width of the table; the body width when absent. */
+  width?: number;
+  indent?: number;
+  /** Colour for a whole row, e.g. red for a failing zone. */
+  rowColour?: (index: number) => string | undefined;
+}
+
+const PAD_X = 3;
+const PAD_Y = 2.5;
+
+/**
+ * A table that never splits a row across pages and repeats its header on each page it runs onto.
+ * Numeric columns are right-aligned so their digits line up.
+ */
+export function table(sheet: Sheet, columns: Column[], rows: Row[], options: TableOptions = {}): void {
+  const size = options.size ?? 8.5;
+  const noteSize = size - 1.5;
+  const width = options.width ?? sheet.width - (options.indent ?? 0);
+  const x0 = sheet.left + (options.indent ?? 0);
+  const total = columns.reduce((s, c) => s + c.weight, 0);
+  const widths = columns.map((c) => (c.weight / total) * width);
+  const lefts = widths.map((_, i) => x0 + widths.slice(0, i).reduce((s, w) => s + w, 0));
+  const doc = sheet.doc;
+
+  const measure = (cell: Cell, font: FontName, col: number) => {
+    const w = widths[col]! - 2 * PAD_X;
+    doc.font(font).fontSize(size);
+    let h = doc.heightOfString(cell.text || " ", { width: w, lineGap: 0.5 });
+    if (cell.note) h += doc.font("cond").fontSize(noteSize).heightOfString(cell.note, { width: w, lineGap: 0.5 });
+    return h + 2 * PAD_Y;
+  };
+  const asCell = (c: string | Cell): Cell => (typeof c === "string" ? { text: c } : c);
+  const header: Cell[] = columns.map((c) => ({ text: c.header, bold: true }));
+  const headerHeight = Math.max(...header.map((c, i) => measure(c, "cond-bold", i)));
+
+  const drawRow = (cells: Cell[], height: number, style: { band?: string; colour?: string; isHeader?: boolean }) => {
+    if (style.band) doc.save().rect(x0, sheet.y, width, height).fill(style.band).restore();
+    cells.forEach((cell, i) => {
+      const font: FontName = cell.bold || style.isHeader ? "cond-bold" : "cond";
+      const align = columns[i]!.align ?? "left";
+      const w = widths[i]! - 2 * PAD_X;
+      const colour = cell.colour ?? style.colour ?? ink.text;
+      sheet.textAt(cell.text, lefts[i]! + PAD_X, sheet.y + PAD_Y, { font, size, width: w, align, colour, lineGap: 0.5 });
+      if (cell.note) {
+        doc.font(font).fontSize(size);
+        const main = doc.heightOfString(cell.text || " ", { width: w, lineGap: 0.5 });
+        sheet.textAt(cell.note, lefts[i]! + PAD_X, sheet.y + PAD_Y + main, { font: "cond", size: noteSize, width: w, align, colour: cell.colour ?? ink.faint, lineGap: 0.5 });
+      }
+    });
+    const rule = style.isHeader ? ink.text : ink.light;
+    doc.save().moveTo(x0, sheet.y + height).lineTo(x0 + width, sheet.y + height).lineWidth(style.isHeader ? 0.8 : 0.5).strokeColor(rule).stroke().restore();
+    sheet.y += height;
+  };
+
+  const drawHeader = () => drawRow(header, headerHeight, { band: ink.band, isHeader: true });
+  const first = rows[0] ? rows[0].map(asCell) : [];
+  const firstHeight = first.length ? Math.max(...first.map((c, i) => measure(c, c.bold ? "cond-bold" : "cond", i))) : 0;
+  sheet.ensure(headerHeight + firstHeight);
+  drawHeader();
+  rows.forEach((row, index) => {
+    const cells = row.map(asCell);
+    const height = Math.max(...cells.map((c, i) => measure(c, c.bold ? "cond-bold" : "cond", i)));
+    if (height > sheet.room) {
+      sheet.newPage();
+      drawHeader();
+    }
+    drawRow(cells, height, { colour: options.rowColour?.(index), band: index % 2 === 1 ? "#f7f9fa" : undefined });
+  });
+  sheet.y += 6;
+}
+
+/** A two-column list of labelled values, e.g. section properties. */
+export function keyValueTable(sheet: Sheet, rows: [string, string | Cell][], options: TableOptions & { keyWeight?: number } = {}): void {
+  table(
+    sheet,
+    [
+      { header: "Item", weight: options.keyWeight ?? 1.4 },
+      { header: "Value", weight: 1 },
+    ],
+    rows.map(([k, v]) => [k, v]),
+    options,
+  );
+}
