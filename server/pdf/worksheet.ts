@@ -1,10 +1,23 @@
-import { createRequire } from "node:module";
 import PDFDocument from "pdfkit";
 import type { DesignResult, JobDocument } from "../../core/index.js";
+import { actionsSection } from "./actions-section.js";
+import { bondLineSection } from "./bond-line-section.js";
+import { closingSection } from "./closing-section.js";
+import { inputsSection } from "./inputs-section.js";
+import { memberChecksSection } from "./member-checks-section.js";
+import { quantityText } from "./quantity-text.js";
+import { reviewBox } from "./review-box.js";
+import { scheduleSection } from "./schedule-section.js";
+import { sectionPropertiesSection } from "./section-properties-section.js";
+import { PAGE_SIZES, Sheet, pageFrame, registerFonts } from "./sheet.js";
+import { glanceSection, statusSection } from "./status-section.js";
+import { stampPages } from "./title-block.js";
+import type { WorksheetContext } from "./worksheet-context.js";
 
-const require = createRequire(import.meta.url);
-const FONT = require.resolve("dejavu-fonts-ttf/ttf/DejaVuSans.ttf");
-const FONT_BOLD = require.resolve("dejavu-fonts-ttf/ttf/DejaVuSans-Bold.ttf");
+export interface WorksheetOptions {
+  /** Print date, YYYY-MM-DD; today when absent. Fixing it (with the job) fixes the PDF's bytes. */
+  printDate?: string;
+}
 
 /** File name for the worksheet of a job: project number, member mark and revision. */
 export function worksheetFileName(job: JobDocument): string {
@@ -12,17 +25,57 @@ export function worksheetFileName(job: JobDocument): string {
   return `${[safe(job.project.number), safe(job.member.mark), `rev-${safe(job.member.revision)}`].filter(Boolean).join("_")}.pdf`;
 }
 
-/** The worksheet as a PDF. */
-export function renderWorksheet(job: JobDocument, result: DesignResult): Promise<Buffer> {
-  const doc = new PDFDocument({ size: job.units === "us" ? "LETTER" : "A4", margin: 40, bufferPages: true, info: { Title: `${job.member.mark} — ${job.project.name}`, CreationDate: new Date(0) } });
-  doc.registerFont("body", FONT);
-  doc.registerFont("bold", FONT_BOLD);
+/** Today as YYYY-MM-DD (UTC). */
+export const today = () => new Date().toISOString().slice(0, 10);
+
+/** The worksheet as a PDF: A4 for SI jobs, Letter for US jobs. */
+export function renderWorksheet(job: JobDocument, result: DesignResult, options: WorksheetOptions = {}): Promise<Buffer> {
+  const printed = options.printDate ?? today();
+  const size = PAGE_SIZES[job.units];
+  const frame = pageFrame(size);
+  const doc = new PDFDocument({
+    size: size.name,
+    margins: { top: frame.top, bottom: frame.height - frame.bottom, left: frame.left, right: frame.width - frame.right },
+    bufferPages: true,
+    info: {
+      Title: `${job.member.mark} — ${job.project.name}: connector spacing worksheet`,
+      Subject: `Input fingerprint ${result.fingerprint ?? ""}`,
+      Creator: `${result.program.name} ${result.program.version}`,
+      CreationDate: new Date(`${printed}T00:00:00Z`),
+    },
+  });
+  registerFonts(doc);
   const chunks: Buffer[] = [];
   doc.on("data", (c: Buffer) => chunks.push(c));
-  const done = new Promise<Buffer>((resolve) => doc.on("end", () => resolve(Buffer.concat(chunks))));
-  doc.font("bold").fontSize(14).text(`${job.member.mark} — ${job.project.name}`);
-  doc.font("body").fontSize(9).text("For review by a licensed engineer. Not for construction until reviewed and sealed by the engineer of record; local codes govern.");
-  doc.text(`Input fingerprint (SHA-256): ${result.fingerprint ?? ""}`);
+  const done = new Promise<Buffer>((resolve, reject) => {
+    doc.on("end", () => resolve(Buffer.concat(chunks)));
+    doc.on("error", reject);
+  });
+
+  const context: WorksheetContext = { sheet: new Sheet(doc, frame), job, result, text: quantityText(result.unitLabels) };
+  reviewBox(context.sheet);
+  statusSection(context);
+  glanceSection(context);
+  inputsSection(context);
+  sectionPropertiesSection(context);
+  actionsSection(context);
+  for (const schedule of result.schedules) scheduleSection(context, schedule);
+  for (const bondLine of result.bondLines) bondLineSection(context, bondLine);
+  memberChecksSection(context);
+  closingSection(context);
+
+  stampPages(doc, frame, {
+    projectName: job.project.name,
+    projectNumber: job.project.number,
+    engineer: job.project.engineer,
+    mark: job.member.mark,
+    description: job.member.description,
+    revision: job.member.revision,
+    date: job.member.date ?? printed,
+    printed,
+    program: `${result.program.name} ${result.program.version}`,
+    fingerprint: result.fingerprint ?? "",
+  });
   doc.end();
   return done;
 }

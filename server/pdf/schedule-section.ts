@@ -1,0 +1,139 @@
+import { formatRatio } from "../../core/index.js";
+import { figure, figureHeight } from "./figure.js";
+import { numberText } from "./quantity-text.js";
+import { shearFlowDiagram, spacingDiagram } from "./schedule-diagrams.js";
+import { ink } from "./sheet.js";
+import { infeasibleStatement } from "./status-section.js";
+import { keyValueTable, table } from "./table.js";
+import { combinationName, partNames, type Schedule, type WorksheetContext } from "./worksheet-context.js";
+
+/** One joint's connector schedule: demand, the zones to build, and everything the zones rest on. */
+export function scheduleSection(c: WorksheetContext, s: Schedule): void {
+  const { sheet, result, text } = c;
+  const joint = result.joints.find((j) => j.id === s.joint);
+  const intro = `${s.connectorLabel}: ${s.rows} connector${s.rows === 1 ? "" : "s"} per row on each of ${s.lineCount} joint line${s.lineCount === 1 ? "" : "s"}${joint ? `, holding ${partNames(result, joint.held)}` : ""}. ${joint?.sharing ?? ""}`;
+  const flowCaption = `Shear flow q per joint line, joint ${s.joint} (envelope of the combinations)`;
+  const spacingCaption = `Spacing along joint ${s.joint}: required by q, and the zones provided`;
+  // The heading, the verdict and both diagrams read as one block: start a page rather than split them.
+  sheet.heading(`Connector schedule — joint ${s.joint}`, 1, sheet.textHeight(intro) + 40 + figureHeight(sheet, flowCaption) + figureHeight(sheet, spacingCaption));
+  sheet.paragraph(intro, { size: 9 });
+  scheduleVerdict(c, s);
+
+  figure(sheet, flowCaption, shearFlowDiagram(s, result.beam.stations, text, sheet.width));
+  figure(sheet, spacingCaption, spacingDiagram(s, result.beam.stations, text, sheet.width));
+
+  sheet.heading("Zones", 2, 50);
+  if (!s.passes) sheet.paragraph("Red rows do not carry the shear flow at the spacing shown.", { font: "bold", size: 8.5, colour: ink.fail }, 2);
+  table(
+    sheet,
+    [
+      { header: "Zone", weight: 0.5, align: "right" },
+      { header: "From – to", weight: 1.35 },
+      { header: "Spacing", weight: 1, align: "right" },
+      { header: "Per row", weight: 0.7, align: "right" },
+      { header: "Count", weight: 0.7, align: "right" },
+      { header: "Smallest required", weight: 1.2, align: "right" },
+      { header: "Utilisation", weight: 0.9, align: "right" },
+      { header: "Combination", weight: 1.05 },
+      { header: "Result", weight: 0.8 },
+    ],
+    [
+      ...s.zones.map((z, i) => [
+        String(i + 1),
+        text.range(z.from, z.to),
+        { text: text.of(z.spacing, "length"), bold: true },
+        String(z.rows),
+        String(z.count),
+        z.requiredSpacing === null ? "—" : text.of(z.requiredSpacing, "length"),
+        formatRatio(z.utilisation),
+        z.governingCombination,
+        z.passes ? { text: "passes", colour: ink.pass } : { text: "FAILS", bold: true, colour: ink.fail },
+      ]),
+      ["", { text: "Total, all lines", bold: true }, "", "", { text: String(s.count), bold: true }, "", "", "", ""],
+    ],
+    { rowColour: (i) => (s.zones[i] && !s.zones[i]!.passes ? ink.fail : undefined) },
+  );
+
+  sheet.heading("Resistance per connector", 2, 50);
+  table(
+    sheet,
+    [
+      { header: "Combination", weight: 1.3 },
+      { header: "R", weight: 0.8, align: "right" },
+      { header: "Governing mode", weight: 1.3 },
+      { header: "Working", weight: 2.4 },
+      { header: "Reference", weight: 1.6 },
+    ],
+    s.resistance.map((r) => [
+      { text: r.combination, note: result.beam.combinations.find((k) => k.id === r.combination)?.name },
+      { text: text.of(r.value, "connectorForce"), bold: true },
+      r.governing,
+      r.steps.map((step) => `${step.symbol} = ${text.of(step.value, step.quantity)} (${step.description}${step.reference ? `; ${step.reference}` : ""})`).join("\n") || "—",
+      r.reference,
+    ]),
+  );
+
+  sheet.heading("Limits used", 2, 50);
+  const l = s.limits;
+  keyValueTable(
+    sheet,
+    [
+      ["Minimum spacing", text.of(l.minSpacing, "length")],
+      ["Maximum spacing", text.of(l.maxSpacing, "length")],
+      ["End distance (first and last row from the member ends)", text.of(l.endDistance, "length")],
+      ["Spacing module", l.module === null ? "none" : text.of(l.module, "length")],
+      ["Preferred spacings", l.preferred ? l.preferred.map((v) => text.of(v, "length")).join(", ") : "none"],
+      ["Shortest zone", text.of(l.minZoneLength, "length")],
+      ["Sources", l.sources.join("; ")],
+    ],
+    { keyWeight: 1.2 },
+  );
+
+  sheet.heading("Efficiency and row verification", 2, 50);
+  const e = s.efficiency;
+  const v = s.verification;
+  keyValueTable(
+    sheet,
+    [
+      ["Connectors in this schedule, all lines", String(s.count)],
+      ["Fewest connectors any schedule within the maximum spacing can have", numberText(e.lowerBound)],
+      ["Demand integral ∫ max(q/R) dx, all lines (no spacing limit)", numberText(e.demandIntegral)],
+      ["Count ÷ lower bound", e.countOverLowerBound === null ? "—" : numberText(e.countOverLowerBound, 3)],
+      ["One uniform spacing over the whole member", e.uniformSpacing === null ? "none within the limits" : `${text.of(e.uniformSpacing, "length")}, ${e.uniformCount ?? "—"} connectors`],
+      ["Uniform count ÷ this count", e.uniformOverCount === null ? "—" : numberText(e.uniformOverCount, 3)],
+      [
+        "Row verification: largest utilisation",
+        {
+          text: `${formatRatio(v.maxUtilisation)} ${v.passes ? "≤" : ">"} 1.00 at x = ${text.of(v.at, "span")}, ${combinationName(result, v.combination)} — ${v.passes ? "passes" : "FAILS"}`,
+          colour: v.passes ? ink.pass : ink.fail,
+          bold: !v.passes,
+          note: `Method: ${v.method}`,
+        },
+      ],
+    ],
+    { keyWeight: 1.3 },
+  );
+}
+
+function scheduleVerdict(c: WorksheetContext, s: Schedule): void {
+  const { sheet } = c;
+  if (s.passes) {
+    sheet.paragraph(`Schedule passes: largest row utilisation ${formatRatio(s.verification.maxUtilisation)} ≤ 1.00.`, { font: "bold", colour: ink.pass });
+    return;
+  }
+  const lines = [
+    `THIS SCHEDULE DOES NOT CARRY THE SHEAR FLOW. Do not build from it as printed: the zones below are the closest the limits allow, shown for review only.`,
+    ...infeasibleStatement(c, s),
+  ];
+  if (!s.infeasible) lines.push(`A row is over-utilised: ${formatRatio(s.verification.maxUtilisation)} > 1.00 at x = ${c.text.of(s.verification.at, "span")}.`);
+  const height = lines.reduce((h, t, i) => h + sheet.textHeight(t, { font: i === 0 ? "bold" : "body", size: 8.5, width: sheet.width - 16 }) + 3, 8);
+  sheet.ensure(height);
+  sheet.doc.save().rect(sheet.left, sheet.y, sheet.width, height).lineWidth(1.2).strokeColor(ink.fail).stroke().restore();
+  sheet.doc.save().rect(sheet.left, sheet.y, 4, height).fill(ink.fail).restore();
+  let y = sheet.y + 4;
+  lines.forEach((t, i) => {
+    sheet.textAt(t, sheet.left + 10, y, { font: i === 0 ? "bold" : "body", size: 8.5, width: sheet.width - 16, colour: ink.fail });
+    y += sheet.textHeight(t, { font: i === 0 ? "bold" : "body", size: 8.5, width: sheet.width - 16 }) + 3;
+  });
+  sheet.y += height + 6;
+}

@@ -1,0 +1,101 @@
+import { sectionDrawing } from "../../core/index.js";
+import { spreadSectionLabels } from "../../core/draw/section-labels.js";
+import { paintDrawing } from "./paint-drawing.js";
+import { ink } from "./sheet.js";
+import { keyValueTable, table } from "./table.js";
+import { partNames, type WorksheetContext } from "./worksheet-context.js";
+
+const CELL_HEIGHT = 190;
+
+/** The section to scale, once per joint with its held area shaded and t marked; then properties and the joints table. */
+export function sectionPropertiesSection(c: WorksheetContext): void {
+  const { sheet, result, text } = c;
+  const s = result.section;
+  sheet.heading("Cross-section and joint planes", 1, CELL_HEIGHT + 30);
+  sheet.paragraph(
+    "Each drawing shades the area held by one joint (the parts whose shear flow its connectors pass on) and marks the contact width t of its joint lines. The dashed line is the neutral axis.",
+    { size: 8, colour: ink.faint },
+    4,
+  );
+
+  const properties: [string, string][] = [
+    ["Reference modulus E_ref (parts transformed to it)", text.of(s.referenceModulus, "modulus")],
+    ["Gross area A", text.of(s.area, "area")],
+    ["Transformed area", text.of(s.transformedArea, "area")],
+    ["Depth × width", `${text.of(s.depth, "length")} × ${text.of(s.width, "length")}`],
+    ["Centroid ȳ, above the lowest fibre", text.of(s.centroidY - s.bounds.y0, "length")],
+    ["Second moment of area I (transformed)", text.of(s.secondMoment, "secondMoment")],
+    ["First moment Q at the neutral axis", text.of(s.firstMomentAtNeutralAxis, "firstMoment")],
+    ["Width cut at the neutral axis", text.of(s.widthAtNeutralAxis, "length")],
+  ];
+  const targets = result.joints.length > 0 ? result.joints.map((j) => j.id) : [undefined];
+  const perRow = targets.length <= 2 ? 2 : 3;
+  const cellWidth = sheet.width / perRow;
+
+  if (targets.length === 1) {
+    // One drawing leaves half the row free: the properties sit beside it.
+    const height = drawingRow(c, targets, cellWidth);
+    const bottom = sheet.y + height;
+    sheet.textAt("Section properties", sheet.left + cellWidth + 8, sheet.y, { font: "bold", size: 10, width: sheet.width - cellWidth - 8 });
+    sheet.y += 16;
+    keyValueTable(sheet, properties, { keyWeight: 1.5, indent: cellWidth + 8 });
+    sheet.y = Math.max(sheet.y, bottom + 6);
+  } else {
+    for (let i = 0; i < targets.length; i += perRow) sheet.y += drawingRow(c, targets.slice(i, i + perRow), cellWidth) + 6;
+    sheet.heading("Section properties", 2, 60);
+    keyValueTable(sheet, properties, { keyWeight: 1.3 });
+  }
+
+  sheet.heading("Joints", 2, 60);
+  if (result.joints.length === 0) {
+    sheet.paragraph("No joint plane: the section has a single part or its parts do not touch.", { colour: ink.faint });
+    return;
+  }
+  table(
+    sheet,
+    [
+      { header: "Joint", weight: 1 },
+      { header: "Held parts", weight: 1.2 },
+      { header: "Joint lines (between parts)", weight: 2.1 },
+      { header: "t", weight: 0.8, align: "right" },
+      { header: "Q", weight: 1.2, align: "right" },
+      { header: "Q/I", weight: 1.25, align: "right" },
+      { header: "Q/(I·t)", weight: 1.35, align: "right" },
+      { header: "Connector", weight: 1.6 },
+    ],
+    result.joints.map((j) => [
+      j.found ? { text: j.id, bold: true } : { text: j.id, bold: true, note: "not found in the section", colour: ink.fail },
+      partNames(result, j.held),
+      j.lines.map((l) => `${l.between.join(" / ")}: ${l.orientation}, ${text.of(l.length, "length")}`).join("\n"),
+      text.of(j.contactWidth, "length"),
+      text.of(j.firstMoment, "firstMoment"),
+      text.of(j.flowFactor, "perLength"),
+      text.of(j.stressFactor, "perArea"),
+      { text: j.connectorLabel, note: j.mechanism === "bond-line" ? "bond line" : `${j.rows} per row` },
+    ]),
+  );
+}
+
+/** Draws one row of section drawings at the cursor, whole on one page; returns its height. */
+function drawingRow(c: WorksheetContext, ids: (string | undefined)[], cellWidth: number): number {
+  const { sheet, result } = c;
+  const captions = ids.map((id) => caption(c, id));
+  const captionHeight = Math.max(...captions.map((t) => sheet.textHeight(t, { size: 7.5, width: cellWidth - 12 })));
+  const height = CELL_HEIGHT + captionHeight + 6;
+  sheet.ensure(height + 2);
+  ids.forEach((id, k) => {
+    const x = sheet.left + k * cellWidth;
+    const drawing = spreadSectionLabels(sectionDrawing(result, { width: cellWidth - 6, height: CELL_HEIGHT, ...(id ? { joint: id } : {}) }));
+    sheet.doc.save().rect(x + 2, sheet.y, cellWidth - 4, height).lineWidth(0.5).strokeColor(ink.light).stroke().restore();
+    paintDrawing(sheet.doc, drawing, x + 3, sheet.y);
+    sheet.textAt(captions[k]!, x + 6, sheet.y + CELL_HEIGHT, { size: 7.5, width: cellWidth - 12 });
+  });
+  return height;
+}
+
+function caption(c: WorksheetContext, id: string | undefined): string {
+  const j = c.result.joints.find((k) => k.id === id);
+  if (!j) return "Section (no joint)";
+  return `Joint ${j.id}: holds ${partNames(c.result, j.held)}; t = ${c.text.of(j.contactWidth, "length")}; Q = ${c.text.of(j.firstMoment, "firstMoment")}; ${j.lines.length} line${j.lines.length === 1 ? "" : "s"}`;
+}
+
