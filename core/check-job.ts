@@ -2,7 +2,8 @@ import { kindOf } from "./connector/registry.js";
 import { JobDocument } from "./schema/job.js";
 import { issuesFromZod, type JobIssue } from "./schema/job-issues.js";
 import { connectedGroups, findContacts, findOverlaps } from "./section/contacts.js";
-import { buildSection } from "./section/section-model.js";
+import { resolvePlacement } from "./section/place-parts.js";
+import { buildSection, positioned } from "./section/section-model.js";
 import { allowedSpacings } from "./spacing/allowed-spacings.js";
 import { toCoreUnits } from "./units/convert.js";
 import { spacingDefaults } from "./spacing/spacing-defaults.js";
@@ -13,12 +14,15 @@ export type PreparedJob = { ok: true; job: JobDocument; core: JobDocument } | { 
 export function prepareJob(input: unknown): PreparedJob {
   const parsed = JobDocument.safeParse(input, { reportInput: true });
   if (!parsed.success) return { ok: false, issues: issuesFromZod(parsed.error) };
-  const issues = checkJob(parsed.data);
+  const placement = resolvePlacement(parsed.data.parts);
+  if (placement.issues.length > 0) return { ok: false, issues: placement.issues };
+  const job = { ...parsed.data, parts: placement.parts };
+  const issues = checkJob(job);
   if (issues.length > 0) return { ok: false, issues };
-  return { ok: true, job: parsed.data, core: toCoreUnits(JobDocument, parsed.data, parsed.data.units) };
+  return { ok: true, job: parsed.data, core: toCoreUnits(JobDocument, job, job.units) };
 }
 
-/** Checks of a schema-valid job that need more than one field: references, geometry, positions, limits. */
+/** Checks of a schema-valid job (placements resolved) that need more than one field: references, geometry, positions, limits. */
 export function checkJob(job: JobDocument): JobIssue[] {
   const issues: JobIssue[] = [];
   const add = (path: string, message: string) => issues.push({ path, message });
@@ -48,7 +52,7 @@ export function checkJob(job: JobDocument): JobIssue[] {
   });
   if (issues.length > 0) return issues;
 
-  const section = buildSection(job.parts, job.materials);
+  const section = buildSection(positioned(job.parts), job.materials);
   for (const o of findOverlaps(section)) {
     const i = job.parts.findIndex((p) => p.id === o.b);
     const j = job.parts.findIndex((p) => p.id === o.a);

@@ -10,7 +10,7 @@ import type { JobDocument } from "./schema/job.js";
 import { RESULT_FORMAT, RESULT_VERSION, type BondLineResult, type Combination, type DesignResult, type JointResult, type Schedule } from "./schema/result.js";
 import { findContacts, geometricTolerance, type ContactLine } from "./section/contacts.js";
 import { findJoints, jointForHeldGroup, type JointPlane } from "./section/joints.js";
-import { buildSection, extremeFibre, firstMomentAbove, widthAt, type SectionModel } from "./section/section-model.js";
+import { buildSection, extremeFibre, firstMomentAbove, positioned, widthAt, type SectionModel } from "./section/section-model.js";
 import { stressProfile } from "./section/stress-profile.js";
 import { designSchedule } from "./spacing/design-schedule.js";
 import { spacingDefaults } from "./spacing/spacing-defaults.js";
@@ -22,7 +22,7 @@ import { PROGRAM } from "./version.js";
  * Pure: no I/O, no clock.
  */
 export function designMember(job: JobDocument): DesignResult {
-  const section = buildSection(job.parts, job.materials);
+  const section = buildSection(positioned(job.parts), job.materials);
   const contacts = findContacts(section);
   const joints = jointsOf(job, section, contacts);
   const combinations = combinationsOf(job);
@@ -272,7 +272,39 @@ function sectionResult(section: SectionModel, profile: ReturnType<typeof stressP
       return { id: p.id, name: p.name, material: p.material.id, materialName: p.material.name, modularRatio: p.n, area: p.area, rects: p.rects, topFibre: f.top, bottomFibre: f.bottom };
     }),
     stressProfile: profile.map(({ y, firstMoment, width, factor }) => ({ y, firstMoment, width, factor })),
+    materialModuli: materialModuli(section),
+    shearStress: shearStressSummary(section, profile),
   };
+}
+
+function materialModuli(section: SectionModel): DesignResult["section"]["materialModuli"] {
+  const byMaterial = new Map<string, SectionModel["parts"]>();
+  for (const p of section.parts) byMaterial.set(p.material.id, [...(byMaterial.get(p.material.id) ?? []), p]);
+  return [...byMaterial.values()].map((parts) => {
+    const first = parts[0]!;
+    const top = Math.max(...parts.flatMap((p) => p.rects.map((r) => r.y1))) - section.centroidY;
+    const bottom = section.centroidY - Math.min(...parts.flatMap((p) => p.rects.map((r) => r.y0)));
+    const modulus = (c: number) => (c > 0 ? section.secondMoment / (first.n * c) : null);
+    return { material: first.material.id, name: first.material.name, modularRatio: first.n, topFibre: top, bottomFibre: bottom, topModulus: modulus(top), bottomModulus: modulus(bottom) };
+  });
+}
+
+function shearStressSummary(section: SectionModel, profile: ReturnType<typeof stressProfile>): DesignResult["section"]["shearStress"] {
+  const peak = profile.reduce((a, b) => (b.factor > a.factor ? b : a));
+  const single = section.parts.length === 1 && section.parts[0]!.rects.length === 1;
+  const webApproximations = section.parts.flatMap((p) => {
+    const rects = [...p.rects].sort((a, b) => a.y0 - b.y0);
+    const web = rects[1];
+    if (rects.length !== 3 || !web) return [];
+    const d = rects[2]!.y1 - rects[0]!.y0;
+    const tw = web.x1 - web.x0;
+    const hw = web.y1 - web.y0;
+    return [
+      { part: p.id, label: "V/(d·t_w), AISC 360 §G2.1 shear area", factor: 1 / (d * tw) },
+      { part: p.id, label: "V/(h_w·t_w), web between flanges", factor: 1 / (hw * tw) },
+    ];
+  });
+  return { maxFactor: peak.factor, atY: peak.y, rectangleClosedForm: single ? 1.5 / section.area : null, webApproximations };
 }
 
 function beamResult(beam: BeamAnalysis, stations: Station[]): DesignResult["beam"] {

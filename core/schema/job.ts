@@ -2,6 +2,9 @@ import { z } from "zod";
 import { Connector } from "../connector/registry.js";
 import { unitSystems } from "../units/quantity.js";
 import { Id, Text, nonNegative, positive, quantity } from "./quantity.js";
+import { Shape } from "./shapes.js";
+
+export { Shape };
 
 export const JOB_FORMAT = "stitchplan-job";
 export const JOB_VERSION = 1;
@@ -32,31 +35,36 @@ export const Material = z.strictObject({
   yieldStrength: positive("stress").optional(),
   /** Steel: tensile strength F_u. */
   tensileStrength: positive("stress").optional(),
-  source: Text(160).default(""),
+  source: Text(400).default(""),
 });
 export type Material = z.infer<typeof Material>;
 
-export const Rectangle = z.strictObject({
-  type: z.literal("rectangle"),
-  /** Width across the member. */
-  b: positive("length"),
-  /** Depth. */
-  h: positive("length"),
+export const Placement = z.strictObject({
+  /** The part this one is placed against. */
+  on: Id,
+  side: z.enum(["top", "bottom", "left", "right"]),
+  /** Centred on that part, or flush with its left/bottom ("start") or right/top ("end") edge. */
+  align: z.enum(["centre", "start", "end"]).default("centre"),
 });
 
-export const Shape = z.discriminatedUnion("type", [Rectangle]);
-export type Shape = z.infer<typeof Shape>;
-
-export const SectionPart = z.strictObject({
-  id: Id,
-  name: Text(80).default(""),
-  material: Id,
-  shape: Shape,
-  /** Left edge of the part's bounding box, measured from any fixed vertical line. */
-  x: quantity("length"),
-  /** Bottom edge of the part's bounding box, measured up from any fixed level. */
-  y: quantity("length"),
-});
+export const SectionPart = z
+  .strictObject({
+    id: Id,
+    name: Text(80).default(""),
+    material: Id,
+    shape: Shape,
+    /** Left edge of the part's bounding box, measured from any fixed vertical line. */
+    x: quantity("length").optional(),
+    /** Bottom edge of the part's bounding box, measured up from any fixed level. */
+    y: quantity("length").optional(),
+    /** Instead of x and y: stack this part against another one. */
+    place: Placement.optional(),
+  })
+  .superRefine((p, ctx) => {
+    const hasXY = p.x !== undefined && p.y !== undefined;
+    if (p.place && (p.x !== undefined || p.y !== undefined)) ctx.addIssue({ code: "custom", path: ["place"], message: "give either x and y, or place, not both" });
+    else if (!p.place && !hasXY) ctx.addIssue({ code: "custom", path: [p.x === undefined ? "x" : "y"], message: "is required (or place the part against another with place)" });
+  });
 export type SectionPart = z.infer<typeof SectionPart>;
 
 export const loadCategories = ["dead", "live", "roof-live", "snow", "wind"] as const;

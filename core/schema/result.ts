@@ -52,6 +52,28 @@ export const SectionResult = z.object({
   ),
   /** τ per unit shear force over the depth: τ(y) = V·Q(y)/(I·t(y)). */
   stressProfile: z.array(z.object({ y: q("length"), firstMoment: q("firstMoment"), width: q("length"), factor: q("perArea") })),
+  /** Elastic section modulus at the extreme fibres of each material, in that material: σ = M/S. */
+  materialModuli: z.array(
+    z.object({
+      material: z.string(),
+      name: z.string(),
+      modularRatio: z.number(),
+      /** Distance from the neutral axis to the material's top fibre (negative when below it) and bottom fibre (negative when above it). */
+      topFibre: q("length"),
+      bottomFibre: q("length"),
+      topModulus: q("firstMoment").nullable(),
+      bottomModulus: q("firstMoment").nullable(),
+    }),
+  ),
+  /** The largest Q/(I·t) over the depth beside the simple forms a person checks it against. */
+  shearStress: z.object({
+    maxFactor: q("perArea"),
+    atY: q("length"),
+    /** 1.5/A for a section of one rectangle. */
+    rectangleClosedForm: q("perArea").nullable(),
+    /** 1/(d·t_w) (AISC 360 §G2.1 shear area) and 1/(h_w·t_w) for each I-shaped part. */
+    webApproximations: z.array(z.object({ part: z.string(), label: z.string(), factor: q("perArea") })),
+  }),
 });
 
 export const JointResult = z.object({

@@ -1,5 +1,5 @@
 import type { Material, SectionPart } from "../schema/job.js";
-import { boundingBox, partRectangles, rectArea, type Rect } from "./rectangles.js";
+import { boundingBox, partRectangles, rectArea, type PositionedPart, type Rect } from "./rectangles.js";
 
 export interface PlacedPart {
   id: string;
@@ -26,8 +26,16 @@ export interface SectionModel {
   bounds: Rect;
 }
 
+/** The parts with their positions; prepareJob resolves every placement, so a missing one is a broken invariant. */
+export function positioned(parts: SectionPart[]): PositionedPart[] {
+  return parts.map((p) => {
+    if (p.x === undefined || p.y === undefined) throw new Error(`part "${p.id}" has no resolved position`);
+    return p as PositionedPart;
+  });
+}
+
 /** Builds the transformed section. The reference modulus defaults to the first part's material. */
-export function buildSection(parts: SectionPart[], materials: Material[], referenceModulus?: number): SectionModel {
+export function buildSection(parts: PositionedPart[], materials: Material[], referenceModulus?: number): SectionModel {
   const byId = new Map(materials.map((m) => [m.id, m]));
   const eRef = referenceModulus ?? byId.get(parts[0]!.material)!.E;
   const placed: PlacedPart[] = parts.map((p) => {

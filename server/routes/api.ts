@@ -1,6 +1,6 @@
 import type { FastifyInstance } from "fastify";
 import { z } from "zod";
-import { JobDocument, PROGRAM } from "../../core/index.js";
+import { grades, JobDocument, Material, materialFromGrade, PROGRAM, toDisplayUnits } from "../../core/index.js";
 import { runDesign } from "../design-service.js";
 import { ApiError } from "../errors.js";
 import type { Example } from "../examples.js";
@@ -21,6 +21,14 @@ export async function apiRoutes(app: FastifyInstance, options: { examples: Examp
   });
 
   app.get("/api/schema/job", async () => jobSchema);
+
+  app.get<{ Querystring: { units?: string; basis?: string } }>("/api/materials", async (request) => {
+    const units = request.query.units ?? "si";
+    const basis = request.query.basis ?? "allowable";
+    if (units !== "si" && units !== "us") throw new ApiError("ERR_INPUT_INVALID", undefined, [{ path: "units", message: `must be "si" or "us", not ${JSON.stringify(units)}` }]);
+    if (basis !== "allowable" && basis !== "factored") throw new ApiError("ERR_INPUT_INVALID", undefined, [{ path: "basis", message: `must be "allowable" or "factored", not ${JSON.stringify(basis)}` }]);
+    return grades.map((g) => ({ grade: g.id, name: g.name, family: g.family, material: toDisplayUnits(Material, materialFromGrade(g, basis), units) }));
+  });
 
   app.post("/api/designs", async (request) => runDesign(request.body).result);
 

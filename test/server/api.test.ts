@@ -45,6 +45,17 @@ describe("GET routes", () => {
     expect(res.body).toMatchObject({ statusCode: 404, code: "ERR_NOT_FOUND" });
   });
 
+  test("GET /api/materials gives the grade library in the asked units and basis; a bad unit is a 400", async () => {
+    const us = await request(app.server).get("/api/materials?units=us&basis=allowable");
+    expect(us.status).toBe(200);
+    const dfl = us.body.find((g: { grade: string }) => g.grade === "DFL-2");
+    expect(dfl.material.E).toBeCloseTo(1_600_000, 3);
+    expect(dfl.material.strength.bending).toBeCloseTo(900, 6);
+    const bad = await request(app.server).get("/api/materials?units=cubits");
+    expect(bad.status).toBe(400);
+    expect(bad.body.issues[0].path).toBe("units");
+  });
+
   test("the page and its script are served", async () => {
     const page = await request(app.server).get("/");
     expect(page.status).toBe(200);
@@ -79,7 +90,7 @@ describe("POST /api/designs", () => {
 
   const cases: [string, (job: ReturnType<typeof plankIJob>) => unknown, string, RegExp][] = [
     ["a missing field", (job) => ({ ...job, beam: undefined }), "beam", /required/],
-    ["a negative length", (job) => { job.parts[1]!.shape.h = -100; return job; }, "parts[1].shape.h", /greater than 0/],
+    ["a negative length", (job) => { job.parts[1]!.shape = { type: "rectangle", b: 20, h: -100 }; return job; }, "parts[1].shape.h", /greater than 0/],
     ["a number sent as text", (job) => { job.beam.spans[0] = "4" as unknown as number; return job; }, "beam.spans[0]", /must be a number, not the text "4"/],
     ["overlapping parts", (job) => { job.parts[2]!.y = 110; return job; }, "parts[2]", /overlaps part "web" \(parts\[1\]\) over an area of 200 mm²/],
     ["zero connector capacity", (job) => { (job.connectors[0] as { resistance: number }).resistance = 0; return job; }, "connectors[0].resistance", /greater than 0/],

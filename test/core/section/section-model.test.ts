@@ -195,3 +195,16 @@ describe("buildSection with mixed materials", () => {
     expectClose(asSteel.joints[0]!.firstMoment / asSteel.section.secondMoment, joints[0]!.firstMoment / section.secondMoment, { rel: 1e-12 }, "Q/I");
   });
 });
+
+describe("stressProfile", () => {
+  test("τ jumps at a width change by the ratio of the widths: T of REFERENCES §1.6 at the flange underside", () => {
+    const { section } = sectionOf([rect("web", 50, 200, 75, 0), rect("flange", 200, 50, 0, 200)]);
+    const atJunction = stressProfile(section).filter((p) => Math.abs(p.y - 200) < 1e-9);
+    expect(atJunction.map((p) => p.side)).toEqual(["below", "above"]);
+    expectClose(atJunction[0]!.width, 50, { rel: 0 });
+    expectClose(atJunction[1]!.width, 200, { rel: 0 });
+    expectClose(atJunction[0]!.factor / atJunction[1]!.factor, 4, { rel: 1e-12 }, "τ below / τ above = 200/50");
+    // τ in the web just below the flange: V·Q/(I·t) with Q = 625 000 mm³ (REFERENCES §1.6 [D]).
+    expectClose(atJunction[0]!.factor * 10_000, (10_000 * 625_000) / (113.542e6 * 50), { rel: 1e-5 });
+  });
+});

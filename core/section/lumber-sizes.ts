@@ -1,0 +1,16 @@
+const INCH = 25.4;
+
+/**
+ * Dressed (dry) size of US sawn lumber from its nominal size, in inches: 1 → 3/4; 2 to 6 → less 1/2;
+ * 8 and over → less 3/4 (American Softwood Lumber Standard PS 20, dry dressed sizes).
+ */
+export function dressedInches(nominal: number): number {
+  if (nominal <= 1) return 0.75;
+  return nominal <= 6 ? nominal - 0.5 : nominal - 0.75;
+}
+
+/** Thickness and width of a nominal size such as "2x10", mm. */
+export function lumberSize(nominal: string): { thickness: number; width: number } {
+  const [t, w] = nominal.split("x").map(Number) as [number, number];
+  return { thickness: dressedInches(t) * INCH, width: dressedInches(w) * INCH };
+}
