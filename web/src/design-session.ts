@@ -1,0 +1,76 @@
+import type { JobIssue } from "../../core/schema/job-issues.js";
+import { requestDesign } from "./api.js";
+import { DebouncedDesign } from "./debounced-design.js";
+import { FieldRegistry } from "./form/field-registry.js";
+import { JobForm } from "./form/job-form.js";
+import { storeJob } from "./job-storage.js";
+import { JobState, type JobDraft } from "./job-state.js";
+import { ResultsView } from "./results/results-view.js";
+
+const REFERENCED_TEXT = /^(materials|connectors)\[\d+\]\.(id|name|label)$/;
+
+/** Ties the job, its form and its results together: every edit is kept, stored, and designed again. */
+export class DesignSession {
+  readonly state: JobState;
+  readonly registry = new FieldRegistry();
+  readonly #form: JobForm;
+  readonly #results: ResultsView;
+  readonly #design: DebouncedDesign;
+  #issues: JobIssue[] = [];
+
+  constructor(formRoot: HTMLElement, resultsRoot: HTMLElement, job: JobDraft) {
+    this.state = new JobState(job);
+    this.#results = new ResultsView(resultsRoot, (path) => this.registry.focus(path));
+    this.#form = new JobForm(formRoot, this.state, this.registry, () => this.registry.show(this.#issues));
+    this.#design = new DebouncedDesign((signal) => this.#compute(signal));
+    this.state.onChange((change, path) => {
+      storeJob(this.state.job);
+      if (change !== "field") this.#issues = [];
+      if (change === "replace") this.#form.render();
+      if (change === "field" && REFERENCED_TEXT.test(path)) this.#form.refreshReferences();
+      this.#results.markUpdating();
+      this.#design.schedule();
+    });
+    this.#form.render();
+    storeJob(this.state.job);
+  }
+
+  /** Designs now, without waiting for the pause after typing. */
+  designNow(): Promise<void> {
+    return this.#design.now();
+  }
+
+  replaceJob(job: JobDraft): void {
+    this.state.replaceAll(job);
+    void this.designNow();
+  }
+
+  /** Shows issues from elsewhere (the worksheet request) at their fields. */
+  showIssues(issues: JobIssue[]): void {
+    this.#issues = issues;
+    const placed = this.registry.show(issues);
+    this.#results.showNotice({ freshness: "invalid", issues: placed });
+  }
+
+  async #compute(signal: AbortSignal): Promise<void> {
+    const local = this.registry.localIssues((path) => this.state.read(path));
+    const answer = await requestDesign(this.state.job, signal);
+    if (signal.aborted) return;
+    if (answer.kind === "designed") {
+      this.#issues = [];
+      this.registry.show([]);
+      this.#results.showResult(answer.result);
+      this.#results.showNotice({ freshness: "current", issues: [] });
+      return;
+    }
+    if (answer.kind === "invalid") {
+      // Text that is not a number is explained here; the service would only say a number is required.
+      const localPaths = new Set(local.map((i) => i.path));
+      this.#issues = [...local, ...answer.issues.filter((i) => !localPaths.has(i.path))];
+      this.#results.showNotice({ freshness: "invalid", issues: this.registry.show(this.#issues), message: answer.message });
+      return;
+    }
+    this.#issues = local;
+    this.#results.showNotice({ freshness: "unreachable", issues: this.registry.show(local), message: answer.message });
+  }
+}

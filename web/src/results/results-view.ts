@@ -1,0 +1,147 @@
+import type { DesignResult } from "../../../core/schema/result.js";
+import { el } from "../dom.js";
+import type { PlacedIssue } from "../form/field-registry.js";
+import { bondLines, memberChecks } from "./checks-view.js";
+import { shearAndMoment, shearFlow } from "./diagrams.js";
+import { drawingWidth } from "./figure.js";
+import { notes } from "./notes-view.js";
+import { scheduleBlock } from "./schedule-view.js";
+import { SectionView } from "./section-view.js";
+import { statusBanner } from "./status-banner.js";
+
+/** How the results shown relate to the input in the form. */
+export type Freshness = "current" | "updating" | "invalid" | "unreachable";
+
+export interface ResultsNotice {
+  freshness: Freshness;
+  issues: PlacedIssue[];
+  /** Why the service gave no result (unreachable, or its message for bad input). */
+  message?: string;
+}
+
+/** The results column: a notice about the input on top, the last valid result below it. */
+export class ResultsView {
+  readonly #notice = el("div", { className: "results-notice", attrs: { "aria-live": "polite" } });
+  readonly #state = el("p", { className: "results-state", attrs: { role: "status" } });
+  readonly #body = el("div", { className: "results-body" });
+  readonly #section = new SectionView();
+  #result: DesignResult | null = null;
+  #freshness: Freshness = "updating";
+  #drawnWidth = 0;
+
+  constructor(
+    root: HTMLElement,
+    private readonly onIssue: (path: string) => void,
+  ) {
+    root.append(
+      el("div", { className: "results-head" }, [
+        el("h2", { text: "Results" }),
+        this.#state,
+        el("nav", { className: "results-nav", attrs: { "aria-label": "Results sections" } }, [
+          ...[
+            ["#status", "Status"],
+            ["#section", "Section"],
+            ["#diagrams", "Diagrams"],
+            ["#schedules", "Schedule"],
+            ["#checks", "Checks"],
+            ["#basis", "Basis"],
+          ].map(([href, text]) => el("a", { text, attrs: { href } })),
+        ]),
+      ]),
+      this.#notice,
+      this.#body,
+    );
+    this.#body.append(el("p", { className: "hint", text: "Computing the example…" }));
+    let timer: number | undefined;
+    window.addEventListener("resize", () => {
+      clearTimeout(timer);
+      timer = window.setTimeout(() => {
+        if (drawingWidth(this.#body) !== this.#drawnWidth) this.#renderBody();
+      }, 200);
+    });
+  }
+
+  get result(): DesignResult | null {
+    return this.#result;
+  }
+
+  /** An edit is waiting to be designed: says so, and keeps any red notice until the answer comes. */
+  markUpdating(): void {
+    this.#state.textContent = "Updating…";
+    this.#state.className = "results-state updating";
+  }
+
+  showResult(result: DesignResult): void {
+    this.#result = result;
+    this.#renderBody();
+  }
+
+  showNotice(notice: ResultsNotice): void {
+    this.#freshness = notice.freshness;
+    const stale = notice.freshness === "invalid" || notice.freshness === "unreachable";
+    this.#body.classList.toggle("stale", stale && this.#result !== null);
+    this.#state.textContent = { current: "Up to date with the input", updating: "Updating…", invalid: "Input has problems", unreachable: "Service not answering" }[notice.freshness];
+    this.#state.className = `results-state ${notice.freshness}`;
+    if (!stale) {
+      this.#notice.replaceChildren();
+      return;
+    }
+    const count = notice.issues.length;
+    const headline =
+      notice.freshness === "unreachable"
+        ? notice.message ?? "The service did not answer."
+        : `The input has ${count === 1 ? "a problem" : `${count} problems`}; each is marked at its field.`;
+    this.#notice.replaceChildren(
+      el("div", { className: "stale-banner", attrs: { role: "alert" } }, [
+        el("p", { className: "stale-headline", text: headline }),
+        el("p", {
+          text: this.#result
+            ? "The results below are from the last valid input, not from what is entered now. Your entries are kept."
+            : "No results yet. Your entries are kept; fix the fields marked in red.",
+        }),
+        count
+          ? el(
+              "ul",
+              { className: "issue-list" },
+              notice.issues.map((issue) =>
+                el("li", {}, [
+                  el("button", {
+                    className: "issue-link",
+                    attrs: { type: "button" },
+                    on: { click: () => this.onIssue(issue.path) },
+                    text: `${issue.fieldLabel ?? issue.path}: ${issue.message}`,
+                  }),
+                ]),
+              ),
+            )
+          : null,
+      ]),
+    );
+  }
+
+  #renderBody(): void {
+    const result = this.#result;
+    if (!result) return;
+    const width = drawingWidth(this.#body);
+    this.#drawnWidth = width;
+    const schedules = el("section", { className: "panel", attrs: { id: "schedules", "aria-labelledby": "schedules-title" } }, [
+      el("h2", { text: "Connector schedule", attrs: { id: "schedules-title" } }),
+      ...(result.schedules.length ? result.schedules.map((s) => scheduleBlock(result, s, width)) : [el("p", { className: "hint", text: "No joint is fastened with discrete connectors." })]),
+    ]);
+    const bond = bondLines(result, width);
+    this.#body.replaceChildren(
+      statusBanner(result),
+      this.#section.render(result, this.#body),
+      el("section", { className: "panel", attrs: { id: "diagrams", "aria-labelledby": "diagrams-title" } }, [
+        el("h2", { text: "Shear, moment and shear flow", attrs: { id: "diagrams-title" } }),
+        ...shearAndMoment(result, width),
+        shearFlow(result, width),
+      ]),
+      schedules,
+      bond.length ? el("section", { className: "panel", attrs: { "aria-labelledby": "bond-title" } }, [el("h2", { text: "Bond lines", attrs: { id: "bond-title" } }), ...bond]) : "",
+      el("section", { className: "panel", attrs: { id: "checks", "aria-labelledby": "checks-title" } }, [el("h2", { text: "Member checks", attrs: { id: "checks-title" } }), memberChecks(result)]),
+      ...notes(result),
+    );
+    this.#body.classList.toggle("stale", this.#freshness === "invalid" || this.#freshness === "unreachable");
+  }
+}

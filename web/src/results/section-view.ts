@@ -1,0 +1,93 @@
+import { sectionDrawing } from "../../../core/draw/section-drawing.js";
+import type { DesignResult, JointResult } from "../../../core/schema/result.js";
+import { formatNumber } from "../../../core/units/format.js";
+import { el } from "../dom.js";
+import { drawingWidth, figure } from "./figure.js";
+import { header, shown, table } from "./quantities.js";
+
+/** The section to scale with a joint chooser: the chosen joint's held area is shaded and its width t marked. */
+export class SectionView {
+  #joint: string | undefined;
+
+  get selectedJoint(): string | undefined {
+    return this.#joint;
+  }
+
+  render(result: DesignResult, container: HTMLElement): HTMLElement {
+    if (!result.joints.some((j) => j.id === this.#joint)) this.#joint = result.joints[0]?.id;
+    const box = el("section", { className: "panel", attrs: { id: "section", "aria-labelledby": "section-title" } });
+    const draw = () => {
+      const width = Math.min(420, drawingWidth(container));
+      const drawing = sectionDrawing(result, { width, height: Math.round(width * 0.78), ...(this.#joint ? { joint: this.#joint } : {}) });
+      return figure(drawing, "section-figure");
+    };
+    const picture = el("div", { className: "section-picture" }, [draw()]);
+    const chooser = el("div", { className: "joint-chooser", attrs: { role: "group", "aria-label": "Joint shown on the section" } });
+    const jointTable = el("div");
+    const refresh = () => {
+      picture.replaceChildren(draw());
+      chooser.replaceChildren(
+        ...result.joints.map((j) =>
+          el("button", {
+            className: "joint-button",
+            text: `Joint ${j.id}`,
+            attrs: { type: "button", "aria-pressed": j.id === this.#joint ? "true" : "false" },
+            on: {
+              click: () => {
+                this.#joint = j.id;
+                refresh();
+              },
+            },
+          }),
+        ),
+      );
+      jointTable.replaceChildren(jointsTable(result, this.#joint));
+    };
+    refresh();
+    const s = result.section;
+    box.append(
+      el("h2", { text: "Section and joint planes", attrs: { id: "section-title" } }),
+      el("div", { className: "section-layout" }, [
+        picture,
+        el("div", { className: "section-side" }, [
+          chooser,
+          el("p", { className: "hint", text: "The shaded area is the part held by the chosen joint's connectors; Q is its first moment about the neutral axis, t the width of the joint plane." }),
+          el("dl", { className: "properties" }, [
+            ...property("Depth", shown(result, s.depth, "length")),
+            ...property("Neutral axis above the base", shown(result, s.centroidY, "length")),
+            ...property("I (transformed)", shown(result, s.secondMoment, "secondMoment")),
+            ...property("Reference E", shown(result, s.referenceModulus, "modulus")),
+            ...property("Area / transformed", `${shown(result, s.area, "area")} / ${shown(result, s.transformedArea, "area")}`),
+          ]),
+        ]),
+      ]),
+      jointTable,
+    );
+    return box;
+  }
+}
+
+const property = (term: string, value: string) => [el("dt", { text: term }), el("dd", { text: value })];
+
+function jointsTable(result: DesignResult, selected: string | undefined): HTMLElement {
+  const u = result.unitLabels;
+  const lines = (j: JointResult) => j.lines.map((l) => `${l.between.join(" | ")} (${l.orientation}, ${formatNumber(l.length)} ${u.length ?? ""})`).join("; ");
+  return table(
+    "Joint planes",
+    ["Joint", "Holds", "Contact lines", header("t", u.length), header("Q", u.firstMoment), header("Q/I", u.perLength), header("Q/(I·t)", u.perArea), "Connector"],
+    result.joints.map((j) => ({
+      className: j.id === selected ? "selected" : "",
+      cells: [
+        j.id,
+        j.held.join(", "),
+        j.found ? lines(j) : "no contact found",
+        formatNumber(j.contactWidth),
+        formatNumber(j.firstMoment),
+        formatNumber(j.flowFactor),
+        formatNumber(j.stressFactor),
+        `${j.connectorLabel}${j.mechanism === "discrete" ? `, ${j.rows} per row` : " (bond line)"}`,
+      ],
+    })),
+    { className: "joints", numeric: [3, 4, 5, 6] },
+  );
+}
