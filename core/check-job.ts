@@ -2,6 +2,7 @@ import { kindOf } from "./connector/registry.js";
 import { JobDocument } from "./schema/job.js";
 import { issuesFromZod, type JobIssue } from "./schema/job-issues.js";
 import { connectedGroups, findContacts, findOverlaps } from "./section/contacts.js";
+import { fastenedJoints, type FastenedJoint } from "./section/fastened-joints.js";
 import { resolvePlacement } from "./section/place-parts.js";
 import { buildSection, positioned } from "./section/section-model.js";
 import { allowedSpacings } from "./spacing/allowed-spacings.js";
@@ -90,6 +91,7 @@ export function checkJob(job: JobDocument): JobIssue[] {
 
   const L = job.beam.spans.reduce((s, l) => s + l, 0);
   const spanUnit = job.units === "si" ? "m" : "ft";
+  if (job.mode === "check") issues.push(...checkProvidedSchedules(job, fastenedJoints(job, section, contacts), L, spanUnit));
   job.beam.loads.forEach((load, i) => {
     const path = `beam.loads[${i}]`;
     if (load.type === "point" && load.at > L * (1 + 1e-12)) add(`${path}.at`, `${load.at} ${spanUnit} is beyond the end of the member (length ${round(L)} ${spanUnit})`);
@@ -121,3 +123,35 @@ export function checkJob(job: JobDocument): JobIssue[] {
 }
 
 const round = (x: number) => Number(x.toPrecision(4));
+
+/** Check mode: every connector joint needs the schedule to check, with zones from end to end and rows on the member. */
+function checkProvidedSchedules(job: JobDocument, joints: FastenedJoint[], L: number, spanUnit: string): JobIssue[] {
+  const issues: JobIssue[] = [];
+  const seen = new Set<string>();
+  for (const { connector, fastening, path } of joints) {
+    if (seen.has(path) || kindOf(connector).mechanism === "bond-line") continue;
+    seen.add(path);
+    const provided = fastening.provided;
+    if (!provided) {
+      issues.push({ path: `${path}.provided`, message: "check mode needs the schedule to check here: zones (from, to, spacing) or the positions of the rows" });
+      continue;
+    }
+    const tol = 1e-9 * Math.max(L, 1);
+    if (provided.type === "zones") {
+      provided.zones.forEach((z, i) => {
+        const at = `${path}.provided.zones[${i}]`;
+        const expectedFrom = i === 0 ? 0 : provided.zones[i - 1]!.to;
+        if (Math.abs(z.from - expectedFrom) > tol) issues.push({ path: `${at}.from`, message: `must be ${round(expectedFrom)} ${spanUnit}: zones run from the left end to the right end without gaps or overlaps` });
+        if (z.to <= z.from) issues.push({ path: `${at}.to`, message: `must be beyond its start (${round(z.from)} ${spanUnit})` });
+      });
+      const last = provided.zones[provided.zones.length - 1]!;
+      if (Math.abs(last.to - L) > tol) issues.push({ path: `${path}.provided.zones[${provided.zones.length - 1}].to`, message: `must be the member's length, ${round(L)} ${spanUnit}` });
+    } else {
+      provided.positions.forEach((x, i) => {
+        if (x > L + tol) issues.push({ path: `${path}.provided.positions[${i}]`, message: `${x} ${spanUnit} is beyond the end of the member (length ${round(L)} ${spanUnit})` });
+        else if (i > 0 && x <= provided.positions[i - 1]!) issues.push({ path: `${path}.provided.positions[${i}]`, message: "positions must increase from the left end" });
+      });
+    }
+  }
+  return issues;
+}

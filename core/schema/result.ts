@@ -167,6 +167,8 @@ export const Zone = z.object({
   utilisation: z.number(),
   governingCombination: z.string(),
   passes: z.boolean(),
+  /** Combinations under which a row of this zone is over-utilised. */
+  failingCombinations: z.array(z.string()),
 });
 export type Zone = z.infer<typeof Zone>;
 

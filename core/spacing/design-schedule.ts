@@ -1,9 +1,9 @@
 import type { MemberActions } from "../beam/member-actions.js";
-import type { Zone } from "../schema/result.js";
 import { allowedSpacings } from "./allowed-spacings.js";
+import { checkSchedule, type ScheduleCheck } from "./check-schedule.js";
 import { DemandCurve } from "./demand.js";
 import { placeRows } from "./place-rows.js";
-import { verifyRows, type RowUtilisation } from "./verify-rows.js";
+import type { RowUtilisation } from "./verify-rows.js";
 import { boundaryGrid, CellMaxima, planZones, roundStep } from "./zoning.js";
 
 export interface ScheduleProblem {
@@ -31,9 +31,10 @@ export interface ScheduleDesign {
   demand: DemandCurve;
   spacings: number[];
   mirrored: boolean;
-  zones: Zone[];
+  zones: ScheduleCheck["zones"];
   positions: number[];
   rowChecks: RowUtilisation[];
+  perCombination: ScheduleCheck["perCombination"];
   /** Connectors on all lines. */
   count: number;
   /** Fewest connectors any schedule within the maximum spacing can have: n·lines·∫max(d, 1/s_max) dx. */
@@ -67,27 +68,10 @@ export function designSchedule(p: ScheduleProblem): ScheduleDesign {
     : (a: number, b: number) => cells.over(a, b);
   const base = { length: L, demand: query, spacings, endDistance: p.endDistance, minZoneLength: p.minZoneLength, mirrored, grid };
   const plan = planZones({ ...base, maxZones: p.maxZones });
-  const positions = placeRows(plan.zones, L, p.endDistance, mirrored);
-  const rowChecks = verifyRows(positions, demand);
   const perRow = p.rows * p.lines;
-
-  const zones: Zone[] = plan.zones.map((z, i) => {
-    const last = i === plan.zones.length - 1;
-    const inZone = rowChecks.filter((r) => r.x >= z.from - 1e-9 && (last ? r.x <= z.to + 1e-9 : r.x < z.to - 1e-9));
-    const worst = inZone.reduce<RowUtilisation | undefined>((w, r) => (!w || r.utilisation > w.utilisation ? r : w), undefined);
-    const peak = demand.maxOver(z.from, z.to);
-    return {
-      from: z.from,
-      to: z.to,
-      spacing: z.spacing,
-      rows: p.rows,
-      count: inZone.length * perRow,
-      requiredSpacing: peak.value > 0 ? 1 / peak.value : null,
-      utilisation: worst?.utilisation ?? 0,
-      governingCombination: worst?.combination ?? peak.combination,
-      passes: (worst?.utilisation ?? 0) <= 1 + 1e-9,
-    };
-  });
+  // The placed rows are checked independently of how they were chosen.
+  const check = checkSchedule({ demand, rows: p.rows, lines: p.lines, endDistance: p.endDistance, provided: { zones: plan.zones, positions: placeRows(plan.zones, L, p.endDistance, mirrored) } });
+  const { positions, rowChecks, zones, perCombination } = check;
 
   const peak = demand.maxOver(0, L);
   const uniformPlan = planZones({ ...base, maxZones: 1 });
@@ -116,6 +100,7 @@ export function designSchedule(p: ScheduleProblem): ScheduleDesign {
     zones,
     positions,
     rowChecks,
+    perCombination,
     count: positions.length * perRow,
     lowerBound: demand.integral(1 / spacings[spacings.length - 1]!) * perRow,
     demandIntegral: demand.integral() * perRow,

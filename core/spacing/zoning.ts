@@ -120,8 +120,8 @@ function mergeEqual(zones: PlannedZone[]): PlannedZone[] {
   return out;
 }
 
-/** Spacing, feasibility and row count of one candidate zone [a, b]; null when the zone is not allowed. */
-function evaluateZone(p: ZoningProblem, a: number, b: number, first: boolean, last: boolean) {
+/** Spacing, feasibility and row count of one candidate zone [a, b]; null when the zone is not allowed. Exported for the optimality test. */
+export function evaluateZone(p: ZoningProblem, a: number, b: number, first: boolean, last: boolean) {
   const L = p.length;
   const e = p.endDistance;
   const fullLength = p.mirrored && last ? L - 2 * a : b - a;

@@ -1,0 +1,83 @@
+import type { Zone } from "../schema/result.js";
+import { DemandCurve } from "./demand.js";
+import { placeRows } from "./place-rows.js";
+import { verifyRows, type RowUtilisation } from "./verify-rows.js";
+
+export interface ProvidedZone {
+  from: number;
+  to: number;
+  spacing: number;
+}
+
+export interface ScheduleCheck {
+  zones: (Zone & { failingCombinations: string[] })[];
+  positions: number[];
+  rowChecks: RowUtilisation[];
+  /** The worst row for each combination on its own. */
+  perCombination: { combination: string; maxUtilisation: number; at: number }[];
+}
+
+/**
+ * Check of an existing schedule: every row's utilisation, its tributary length times the largest
+ * shear flow over that length divided by (connectors per row × R), for each combination; the worst
+ * row per zone; the zones that fail and under which combinations. Rows come from the zones (placed
+ * as a design would place them) or are given one by one.
+ */
+export function checkSchedule(p: {
+  demand: DemandCurve;
+  rows: number;
+  lines: number;
+  endDistance: number;
+  /** Zones (rows placed from them unless positions are also given), or rows one by one. */
+  provided: { zones: ProvidedZone[]; positions?: number[] } | { positions: number[] };
+}): ScheduleCheck {
+  const L = p.demand.length;
+  const given = p.provided.positions ? [...p.provided.positions].sort((a, b) => a - b) : undefined;
+  const zones: ProvidedZone[] = "zones" in p.provided ? p.provided.zones : zonesOfPositions(given!, L);
+  const positions = given ?? placeRows(zones.map((z) => ({ ...z, feasible: true })), L, p.endDistance, false);
+  const rowChecks = verifyRows(positions, p.demand);
+  const single = p.demand.terms.map((t) => ({ id: t.combination, rows: verifyRows(positions, new DemandCurve(L, [t])) }));
+  const perCombination = single.map(({ id, rows }) => {
+    const worst = rows.reduce((a, b) => (b.utilisation > a.utilisation ? b : a));
+    return { combination: id, maxUtilisation: worst.utilisation, at: worst.x };
+  });
+  const inZone = (z: ProvidedZone, i: number) => (r: RowUtilisation) => r.x >= z.from - 1e-9 && (i === zones.length - 1 ? r.x <= z.to + 1e-9 : r.x < z.to - 1e-9);
+  return {
+    positions,
+    rowChecks,
+    perCombination,
+    zones: zones.map((z, i) => {
+      const rows = rowChecks.filter(inZone(z, i));
+      const worst = rows.reduce<RowUtilisation | undefined>((a, b) => (!a || b.utilisation > a.utilisation ? b : a), undefined);
+      const peak = p.demand.maxOver(z.from, z.to);
+      const failing = single.filter(({ rows: r }) => r.filter(inZone(z, i)).some((row) => row.utilisation > 1 + 1e-9)).map((s) => s.id);
+      return {
+        from: z.from,
+        to: z.to,
+        spacing: z.spacing,
+        rows: p.rows,
+        count: rows.length * p.rows * p.lines,
+        requiredSpacing: peak.value > 0 ? 1 / peak.value : null,
+        utilisation: worst?.utilisation ?? 0,
+        governingCombination: worst?.combination ?? peak.combination,
+        passes: (worst?.utilisation ?? 0) <= 1 + 1e-9,
+        failingCombinations: failing,
+      };
+    }),
+  };
+}
+
+/** Explicit positions shown as one zone per run of equal gaps (to a tenth of a millimetre). */
+function zonesOfPositions(positions: number[], length: number): ProvidedZone[] {
+  if (positions.length < 2) return [{ from: 0, to: length, spacing: length }];
+  const zones: ProvidedZone[] = [];
+  for (let k = 1; k < positions.length; k++) {
+    const gap = positions[k]! - positions[k - 1]!;
+    const last = zones[zones.length - 1];
+    if (last && Math.abs(last.spacing - gap) < 0.1) last.to = positions[k]!;
+    else zones.push({ from: positions[k - 1]!, to: positions[k]!, spacing: gap });
+  }
+  zones[0]!.from = 0;
+  zones[zones.length - 1]!.to = length;
+  return zones;
+}
