@@ -13,7 +13,7 @@ interface Case {
 
 /** Invented members (demo data) covering the usual demand shapes. */
 const cases: Case[] = [
-  { name: "uniform load, 6 m", length: 6000, loads: { points: [], moments: [], lines: [{ x0: 0, x1: 6000, w0: 8, w1: 8 }] }, resistance: 900, flowFactor: 1.2e-3 },
+  { name: "uniform load, 6 m", length: 6000, loads: { points: [], moments: [], lines: [{ x0: 0, x1: 6000, w0: 6, w1: 6 }] }, resistance: 900, flowFactor: 1.2e-3 },
   { name: "uniform load, 4 m, light", length: 4000, loads: { points: [], moments: [], lines: [{ x0: 0, x1: 4000, w0: 3, w1: 3 }] }, resistance: 600, flowFactor: 1.2e-3 },
   { name: "two point loads at thirds, 5.4 m", length: 5400, loads: { points: [{ x: 1800, P: 12_000 }, { x: 3600, P: 12_000 }], moments: [], lines: [{ x0: 0, x1: 5400, w0: 1, w1: 1 }] }, resistance: 900, flowFactor: 1.2e-3 },
   { name: "off-centre point load, 4.8 m", length: 4800, loads: { points: [{ x: 1200, P: 15_000 }], moments: [], lines: [{ x0: 0, x1: 4800, w0: 2, w1: 2 }] }, resistance: 900, flowFactor: 1.2e-3 },
