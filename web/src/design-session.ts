@@ -16,7 +16,9 @@ export class DesignSession {
   readonly #form: JobForm;
   readonly #results: ResultsView;
   readonly #design: DebouncedDesign;
+  /** Issues shown at the fields now, and the part of them the service reported. */
   #issues: JobIssue[] = [];
+  #serviceIssues: JobIssue[] = [];
 
   constructor(formRoot: HTMLElement, resultsRoot: HTMLElement, job: JobDraft) {
     this.state = new JobState(job);
@@ -25,8 +27,11 @@ export class DesignSession {
     this.#design = new DebouncedDesign((signal) => this.#compute(signal));
     this.state.onChange((change, path) => {
       storeJob(this.state.job);
-      if (change !== "field") this.#issues = [];
-      if (change === "replace") this.#form.render();
+      if (change !== "field") this.#issues = this.#serviceIssues = [];
+      if (change === "replace") {
+        this.#results.clear();
+        this.#form.render();
+      }
       if (change === "field" && REFERENCED_TEXT.test(path)) this.#form.refreshReferences();
       this.#results.markUpdating();
       this.#design.schedule();
@@ -47,30 +52,29 @@ export class DesignSession {
 
   /** Shows issues from elsewhere (the worksheet request) at their fields. */
   showIssues(issues: JobIssue[]): void {
-    this.#issues = issues;
+    this.#issues = this.#serviceIssues = issues;
     const placed = this.registry.show(issues);
     this.#results.showNotice({ freshness: "invalid", issues: placed });
   }
 
   async #compute(signal: AbortSignal): Promise<void> {
-    const local = this.registry.localIssues((path) => this.state.read(path));
     const answer = await requestDesign(this.state.job, signal);
     if (signal.aborted) return;
     if (answer.kind === "designed") {
+      this.#serviceIssues = [];
       this.#issues = [];
       this.registry.show([]);
       this.#results.showResult(answer.result);
       this.#results.showNotice({ freshness: "current", issues: [] });
       return;
     }
-    if (answer.kind === "invalid") {
-      // Text that is not a number is explained here; the service would only say a number is required.
-      const localPaths = new Set(local.map((i) => i.path));
-      this.#issues = [...local, ...answer.issues.filter((i) => !localPaths.has(i.path))];
-      this.#results.showNotice({ freshness: "invalid", issues: this.registry.show(this.#issues), message: answer.message });
-      return;
-    }
-    this.#issues = local;
-    this.#results.showNotice({ freshness: "unreachable", issues: this.registry.show(local), message: answer.message });
+    // When the service cannot answer, its last word on the other fields still stands.
+    if (answer.kind === "invalid") this.#serviceIssues = answer.issues;
+    // Text that is not a number is explained here; the service would only say a number is required.
+    const local = this.registry.localIssues((path) => this.state.read(path));
+    const localPaths = new Set(local.map((i) => i.path));
+    this.#issues = [...local, ...this.#serviceIssues.filter((i) => !localPaths.has(i.path))];
+    const placed = this.registry.show(this.#issues);
+    this.#results.showNotice({ freshness: answer.kind === "invalid" ? "invalid" : "unreachable", issues: placed, message: answer.message });
   }
 }

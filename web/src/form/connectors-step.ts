@@ -53,14 +53,18 @@ function connectorCard(ctx: FormContext, connector: Item, i: number, count: numb
       if ((joint as Item).connector === oldId) state.set(`fastening.joints[${k}].connector`, newId);
     });
   });
-  const kindSelect = selectControl(ctx, at("kind"), "kind", kindChoices, {
+  const kind = String(connector.kind ?? "");
+  const isKnown = kindChoices.some((c) => c.value === kind);
+  const choices = isKnown ? kindChoices : [{ value: kind, label: `${kind || "no kind"} (values kept as in the job file)` }, ...kindChoices];
+  const kindSelect = selectControl(ctx, at("kind"), "kind", choices, {
     onChosen: (kind) => {
       state.replaceItem(`connectors[${i}]`, asKind(connector, kind));
       ctx.rerender(at("kind"));
     },
   });
-  const kindFields =
-    connector.kind === "glue"
+  const kindFields = !isKnown
+    ? [otherKindValues(connector)]
+    : kind === "glue"
       ? [number("shearStrength", "Bond-line shear strength", unitLabel("stress", u))]
       : [
           number("resistance", "Resistance per connector", unitLabel("connectorForce", u)),
@@ -89,4 +93,13 @@ function connectorCard(ctx: FormContext, connector: Item, i: number, count: numb
   ]);
   ctx.registry.register({ path: `connectors[${i}]`, label: name, marker: card, host: issues, prefix: name });
   return card;
+}
+
+/** A kind this page has no fields for yet: its values shown as they stand, untouched, so nothing is lost. */
+function otherKindValues(connector: Item): HTMLElement {
+  const shown = Object.entries(connector).filter(([key]) => !["id", "kind", "label", "source"].includes(key));
+  return el("div", { className: "field wide other-kind" }, [
+    el("span", { className: "label", text: "Values (edit these in the job file for now)" }),
+    el("ul", {}, shown.map(([key, value]) => el("li", { text: `${key}: ${typeof value === "object" ? JSON.stringify(value) : String(value)}` }))),
+  ]);
 }

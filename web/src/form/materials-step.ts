@@ -40,7 +40,7 @@ export function materialsStep(ctx: FormContext, number: number): HTMLElement {
           return { path: at(i, "name"), name: "name", control: nameInput, content: stack };
         },
       },
-      { header: "E", unit: unitLabel("modulus", u), className: "col-num", cell: (i) => ({ path: at(i, "E"), name: "E", control: numberControl(ctx, at(i, "E"), "E") }) },
+      { header: "E", unit: unitLabel("modulus", u), className: "col-num col-modulus", cell: (i) => ({ path: at(i, "E"), name: "E", control: numberControl(ctx, at(i, "E"), "E") }) },
       { header: "Density", unit: unitLabel("density", u), className: "col-num", cell: (i) => ({ path: at(i, "density"), name: "density", control: numberControl(ctx, at(i, "density"), "density") }) },
       {
         header: "Bending",

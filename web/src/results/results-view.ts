@@ -71,6 +71,13 @@ export class ResultsView {
     this.#state.className = "results-state updating";
   }
 
+  /** A different job was opened: results of the one before must not be shown as if they were its own. */
+  clear(): void {
+    this.#result = null;
+    this.#body.classList.remove("stale");
+    this.#body.replaceChildren(el("p", { className: "hint", text: "Computing the job just opened…" }));
+  }
+
   showResult(result: DesignResult): void {
     this.#result = result;
     this.#renderBody();

@@ -71,7 +71,14 @@ const property = (term: string, value: string) => [el("dt", { text: term }), el(
 
 function jointsTable(result: DesignResult, selected: string | undefined): HTMLElement {
   const u = result.unitLabels;
-  const lines = (j: JointResult) => j.lines.map((l) => `${l.between.join(" | ")} (${l.orientation}, ${formatNumber(l.length)} ${u.length ?? ""})`).join("; ");
+  const lines = (j: JointResult) => {
+    const first = j.lines[0];
+    if (!first) return "none";
+    const pairs = j.lines.map((l) => l.between.join(" / "));
+    const alike = j.lines.every((l) => l.orientation === first.orientation && Math.abs(l.length - first.length) <= 1e-9 * first.length);
+    if (alike) return `${j.lines.length} ${first.orientation}, ${formatNumber(first.length)} ${u.length ?? ""}${j.lines.length > 1 ? " each" : ""}: ${pairs.join(", ")}`;
+    return j.lines.map((l, k) => `${pairs[k]} (${l.orientation}, ${formatNumber(l.length)} ${u.length ?? ""})`).join(", ");
+  };
   return table(
     "Joint planes",
     ["Joint", "Holds", "Contact lines", header("t", u.length), header("Q", u.firstMoment), header("Q/I", u.perLength), header("Q/(I·t)", u.perArea), "Connector"],

@@ -23,7 +23,12 @@ export function statusBanner(result: DesignResult): HTMLElement {
     }),
     el("p", {
       className: "status-meta",
-      text: `${result.member.mark} rev ${result.member.revision} · ${result.basis} basis · ${result.units === "us" ? "US customary" : "SI"} units · ${result.program.name} ${result.program.version} · ${formatNumber(result.schedules.reduce((n, s) => n + s.count, 0))} connectors in all`,
+      text: `${result.member.mark} rev ${result.member.revision} · ${result.basis} basis · ${result.units === "us" ? "US customary" : "SI"} units · ${result.program.name} ${result.program.version} · ${connectorTotal(result)}`,
     }),
   ]);
+}
+
+function connectorTotal(result: DesignResult): string {
+  const count = result.schedules.reduce((n, s) => n + s.count, 0);
+  return result.schedules.length ? `${formatNumber(count)} connectors in all` : "glued throughout, no discrete connectors";
 }
