@@ -20,8 +20,8 @@ export function spreadSectionLabels(drawing: Drawing): Drawing {
   if (block.bottom < a.top - 1 || block.top > a.bottom + 1) return drawing;
 
   const gap = q ? q.y - width.y : 0;
-  let widthY = a.bottom + 2 + width.size * 0.8;
-  if (widthY + gap + (q ? q.size * 0.25 : 0) > drawing.height - 2) widthY = a.top - 2 - gap - (q ? q.size * 0.25 : width.size * 0.25);
+  let widthY = a.bottom + 4 + width.size * 0.8;
+  if (widthY + gap + (q ? q.size * 0.25 : 0) > drawing.height - 2) widthY = a.top - 4 - gap - (q ? q.size * 0.25 : width.size * 0.25);
   const moved = new Map<DrawItem, DrawItem>([[width, { ...width, y: widthY }]]);
   if (q) moved.set(q, { ...q, y: widthY + gap });
   return { ...drawing, items: drawing.items.map((i) => moved.get(i) ?? i) };

@@ -3,31 +3,45 @@ import { DIAGRAM_HEIGHT, figure, figureHeight } from "./figure.js";
 import { table } from "./table.js";
 import type { WorksheetContext } from "./worksheet-context.js";
 
+const MAX_CURVES = 6;
+
 /** Shear and bending moment along the member for each load combination, with reactions and extremes. */
 export function actionsSection(c: WorksheetContext): void {
   const { sheet, result, text } = c;
   const beam = result.beam;
   sheet.heading("Shear and bending moment", 1, figureHeight(sheet, "V"));
-  const common = { xUnit: text.unit("span"), x: beam.stations, width: sheet.width, height: DIAGRAM_HEIGHT };
+  const common = { xUnit: text.unit("span"), x: beam.stations, width: sheet.width, height: DIAGRAM_HEIGHT, title: "" };
+  const count = beam.perCombination.length;
+  // Past a handful of curves (patterned live load gives many) the legend cannot name them: draw the envelope.
+  const asEnvelope = count > MAX_CURVES;
+  const scope = asEnvelope ? `envelope of the ${count} combinations` : count === 1 ? `combination ${beam.perCombination[0]!.combination}` : "per combination";
   figure(
     sheet,
-    "Shear force V per combination",
+    `Shear force V, ${scope}`,
     lineDiagram({
       ...common,
-      title: "",
       yUnit: text.unit("force"),
-      series: beam.perCombination.map((p) => ({ label: p.combination, values: p.shear, fill: beam.perCombination.length === 1 })),
+      series: asEnvelope
+        ? [
+            { label: "max", values: beam.envelope.shearMax, fill: true },
+            { label: "min", values: beam.envelope.shearMin, fill: true },
+          ]
+        : beam.perCombination.map((p) => ({ label: p.combination, values: p.shear, fill: count === 1 })),
       role: "shear",
     }),
   );
   figure(
     sheet,
-    "Bending moment M per combination (sagging plotted down)",
+    `Bending moment M, ${scope} (sagging plotted down)`,
     lineDiagram({
       ...common,
-      title: "",
       yUnit: text.unit("moment"),
-      series: beam.perCombination.map((p) => ({ label: p.combination, values: p.moment, fill: beam.perCombination.length === 1 })),
+      series: asEnvelope
+        ? [
+            { label: "max", values: beam.envelope.momentMax, fill: true },
+            { label: "min", values: beam.envelope.momentMin, fill: true },
+          ]
+        : beam.perCombination.map((p) => ({ label: p.combination, values: p.moment, fill: count === 1 })),
       invert: true,
       role: "moment",
     }),

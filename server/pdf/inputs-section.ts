@@ -1,5 +1,5 @@
-import { connectorFields, shapeFields } from "./schema-fields.js";
-import { numberText } from "./quantity-text.js";
+import { connectorFields, fasteningFields, loadFields, shapeFields } from "./schema-fields.js";
+import { numberText, type QuantityText } from "./quantity-text.js";
 import { ink } from "./sheet.js";
 import { keyValueTable, table } from "./table.js";
 import type { WorksheetContext } from "./worksheet-context.js";
@@ -90,18 +90,26 @@ export function inputsSection(c: WorksheetContext): void {
 
   sheet.heading("Span and supports", 2, 40);
   const beam = result.beam;
-  keyValueTable(
-    sheet,
+  // Read loosely: these settings arrive with continuous spans and the job's own load categories.
+  const regions = (beam as { regions?: { x0: number; x1: number; label: string }[] }).regions;
+  const extra = job.beam as { categories?: { id: string; name?: string; actsAs: string; duration?: string }[]; patternedCategories?: string[]; deflectionLimits: { liveCategories?: string[] } };
+  const beamRows: [string, string][] = [
+    ["Spans", `${beam.spans.map((s) => text.of(s, "span")).join(", ")} (member length ${text.of(beam.length, "span")})`],
+    ["Supports", beam.supports.map((s) => `${s.type} at x = ${text.of(s.x, "span")}`).join("; ")],
+    ...(regions && regions.length > 0 ? [["Spans and overhangs", regions.map((r) => `${r.label}: ${text.range(r.x0, r.x1)}`).join("; ")] as [string, string]] : []),
+    ["Self-weight", job.beam.selfWeight ? `${text.of(beam.selfWeight, "lineLoad")} over the whole member (dead)` : "not included"],
     [
-      ["Spans", beam.spans.map((s) => text.of(s, "span")).join(", ")],
-      ["Supports", beam.supports.map((s) => `${s.type} at x = ${text.of(s.x, "span")}`).join("; ")],
-      ["Self-weight", job.beam.selfWeight ? `${text.of(beam.selfWeight, "lineLoad")} over the whole member (dead)` : "not included"],
-      ["Deflection limits", `total load span/${numberText(job.beam.deflectionLimits.total)}; live load span/${numberText(job.beam.deflectionLimits.live)}`],
+      "Deflection limits",
+      `total load span/${numberText(job.beam.deflectionLimits.total)}; live load span/${numberText(job.beam.deflectionLimits.live)}${extra.deflectionLimits.liveCategories ? ` (live: ${extra.deflectionLimits.liveCategories.join(", ")})` : ""}`,
     ],
-    { keyWeight: 0.6 },
-  );
+  ];
+  if (extra.categories && extra.categories.length > 0)
+    beamRows.push(["Load categories of this job", extra.categories.map((k) => `${k.id}${k.name ? ` (${k.name})` : ""} acts as ${k.actsAs}${k.duration ? `, ${k.duration}` : ""}`).join("; ")]);
+  if (beam.spans.length > 1 && extra.patternedCategories) beamRows.push(["Placed span by span (patterns)", extra.patternedCategories.join(", ") || "none"]);
+  keyValueTable(sheet, beamRows, { keyWeight: 0.6 });
 
   sheet.heading("Loads", 2, 40);
+  sheet.paragraph("Downward positive; positions from the left end of the member. A line load without from and to covers the whole member.", { size: 8, colour: ink.faint }, 3);
   if (job.beam.loads.length === 0) sheet.paragraph("No applied loads.", { colour: ink.faint });
   else
     table(
@@ -111,17 +119,13 @@ export function inputsSection(c: WorksheetContext): void {
         { header: "Label", weight: 2 },
         { header: "Category", weight: 0.9 },
         { header: "Type", weight: 0.8 },
-        { header: "Intensity / force", weight: 1.2, align: "right" },
-        { header: "Where", weight: 1.6 },
+        { header: "As entered", weight: 2.8 },
       ],
-      job.beam.loads.map((l, i) =>
-        l.type === "uniform"
-          ? [String(i + 1), l.label || "—", l.category, "uniform", text.of(l.w, "lineLoad"), l.from === undefined && l.to === undefined ? "whole member" : text.range(l.from ?? 0, l.to ?? beam.length)]
-          : [String(i + 1), l.label || "—", l.category, "point", text.of(l.P, "force"), `x = ${text.of(l.at, "span")}`],
-      ),
+      job.beam.loads.map((l, i) => [String(i + 1), l.label || "—", l.category, l.type, loadFields(l, text) || "—"]),
     );
 
   sheet.heading("Load combinations", 2, 40);
+  sheet.paragraph(`Combination set: ${job.combinations.set}. Each combination's factors multiply the loads of each category.`, { size: 8, colour: ink.faint }, 3);
   table(
     sheet,
     [
@@ -132,7 +136,7 @@ export function inputsSection(c: WorksheetContext): void {
     ],
     beam.combinations.map((k) => [
       { text: k.id, bold: true },
-      k.name,
+      { text: k.name, note: patternNote(k) },
       Object.entries(k.factors)
         .map(([cat, f]) => `${numberText(f, 3)} × ${cat}`)
         .join(" + "),
@@ -140,7 +144,33 @@ export function inputsSection(c: WorksheetContext): void {
     ]),
   );
 
+  const service = (beam as { service?: { combination: { id: string; name: string; factors: Record<string, number> } }[] }).service ?? [];
+  if (service.length > 0) {
+    sheet.heading("Service cases for deflection", 2, 40);
+    table(
+      sheet,
+      [
+        { header: "Id", weight: 0.7 },
+        { header: "Name", weight: 1.7 },
+        { header: "Factors by load category", weight: 2.6 },
+      ],
+      service.map(({ combination: k }) => [
+        { text: k.id, bold: true },
+        { text: k.name, note: patternNote(k) },
+        Object.entries(k.factors)
+          .filter(([, f]) => f !== 0)
+          .map(([cat, f]) => `${numberText(f, 3)} × ${cat}`)
+          .join(" + ") || "—",
+      ]),
+    );
+  }
+
   sheet.heading("Connectors", 2, 40);
+  // Some kinds are described by the program from their fields rather than by a label of the user's.
+  const connectorDescription = (id: string) => {
+    const k = job.connectors.find((c) => c.id === id);
+    return (k as { label?: string } | undefined)?.label || result.joints.find((j) => j.connector === id)?.connectorLabel || k?.kind || id;
+  };
   table(
     sheet,
     [
@@ -150,22 +180,25 @@ export function inputsSection(c: WorksheetContext): void {
       { header: "Properties as entered", weight: 2.6 },
       { header: "Source", weight: 1.4 },
     ],
-    job.connectors.map((k) => [{ text: k.id, bold: true }, k.kind, k.label, connectorFields(k, text) || "—", k.source || "—"]),
+    job.connectors.map((k) => [{ text: k.id, bold: true }, k.kind, connectorDescription(k.id), connectorFields(k, text) || "—", (k as { source?: string }).source || "—"]),
   );
 
   sheet.heading("Fastening", 2, 40);
-  const connectorLabel = (id: string) => job.connectors.find((k) => k.id === id)?.label ?? id;
+  const fasteningRow = (appliesTo: string, f: (typeof job.fastening.joints)[number] | typeof job.fastening.default) => [
+    appliesTo,
+    { text: `${f.connector}: ${connectorDescription(f.connector)}`, note: fasteningFields(f, text) || undefined },
+    String(f.rows),
+    providedText(f, text) ?? { text: "designed here", colour: ink.faint },
+  ];
   table(
     sheet,
     [
-      { header: "Applies to", weight: 2 },
+      { header: "Applies to", weight: 1.6 },
       { header: "Connector", weight: 2.2 },
-      { header: "Connectors per row", weight: 1, align: "right" },
+      { header: "Per row", weight: 0.6, align: "right" },
+      { header: "Schedule", weight: 2 },
     ],
-    [
-      ["Every joint not listed below (default)", `${job.fastening.default.connector}: ${connectorLabel(job.fastening.default.connector)}`, String(job.fastening.default.rows)],
-      ...job.fastening.joints.map((j) => [`Joint holding ${j.held.join(", ")}`, `${j.connector}: ${connectorLabel(j.connector)}`, String(j.rows)]),
-    ],
+    [fasteningRow("Every joint not listed below (default)", job.fastening.default), ...job.fastening.joints.map((j) => fasteningRow(`Joint holding ${j.held.join(", ")}`, j))],
   );
 
   sheet.heading("Spacing rules", 2, 40);
@@ -193,4 +226,20 @@ function boundsOf(rects: { x0: number; x1: number; y0: number; y1: number }[]) {
     y0: Math.min(...rects.map((r) => r.y0)),
     y1: Math.max(...rects.map((r) => r.y1)),
   };
+}
+
+/** A schedule given in the job to be checked (check mode), in words; undefined when the program designs it. */
+function providedText(fastening: object, text: QuantityText): string | undefined {
+  const provided = (fastening as { provided?: { type: string; zones?: { from: number; to: number; spacing: number }[]; positions?: number[] } }).provided;
+  if (!provided) return undefined;
+  if (provided.zones) return `given, to be checked: ${provided.zones.map((z) => `${text.range(z.from, z.to)} @ ${text.of(z.spacing, "length")}`).join("; ")}`;
+  if (provided.positions) return `given, to be checked: ${provided.positions.length} rows at listed positions`;
+  return `given, to be checked (${provided.type})`;
+}
+
+/** For one live-load pattern of a combination: which spans carry the patterned loads. */
+function patternNote(combination: object): string | undefined {
+  const k = combination as { base?: string; pattern?: number[] };
+  if (!k.pattern) return undefined;
+  return `pattern of ${k.base ?? "a combination"}: patterned loads on span${k.pattern.length === 1 ? "" : "s"} ${k.pattern.join(", ")}`;
 }

@@ -3,14 +3,16 @@ import { formatNumber } from "../../core/index.js";
 const SUPERSCRIPT: Record<string, string> = { "-": "⁻", "0": "⁰", "1": "¹", "2": "²", "3": "³", "4": "⁴", "5": "⁵", "6": "⁶", "7": "⁷", "8": "⁸", "9": "⁹" };
 
 /**
- * A number as printed on the worksheet: `formatNumber` for everyday magnitudes; very large or
- * very small values (I, Q, Q/(I·t)) as a four-figure mantissa × a power of ten, so no column
- * shows nine digits where four are meaningful.
+ * A number as printed on the worksheet, to `digits` significant figures: `formatNumber` for everyday
+ * magnitudes (large ones rounded, 993519 → 993500); very large or very small values (I, Q/(I·t))
+ * as a mantissa × a power of ten, so no column shows nine digits where four are meaningful.
  */
 export function numberText(value: number, digits = 4): string {
   if (!Number.isFinite(value)) return "—";
-  const abs = Math.abs(value);
-  if (abs === 0 || abs < 1e-12 || (abs >= 1e-3 && abs < 1e5)) return formatNumber(value, digits);
+  if (Math.abs(value) < 1e-12) return "0";
+  const rounded = Number(value.toPrecision(digits));
+  const abs = Math.abs(rounded);
+  if (abs >= 1e-3 && abs < 1e7) return formatNumber(rounded, digits);
   let exponent = Math.floor(Math.log10(abs));
   let mantissa = Number((value / 10 ** exponent).toPrecision(digits));
   if (Math.abs(mantissa) >= 10) {

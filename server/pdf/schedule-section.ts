@@ -7,17 +7,44 @@ import { infeasibleStatement } from "./status-section.js";
 import { keyValueTable, table } from "./table.js";
 import { combinationName, partNames, type Schedule, type WorksheetContext } from "./worksheet-context.js";
 
-/** One joint's connector schedule: demand, the zones to build, and everything the zones rest on. */
-export function scheduleSection(c: WorksheetContext, s: Schedule): void {
+/**
+ * Schedules that are the same in every number apart from the joint's name (the top and bottom joints
+ * of a symmetric box beam), grouped so each is printed once for all the joints it applies to.
+ */
+export function identicalSchedules(schedules: Schedule[]): Schedule[][] {
+  const groups = new Map<string, Schedule[]>();
+  for (const s of schedules) {
+    // Nine figures: the same schedule computed along two cuts can differ in the last bits.
+    const key = JSON.stringify({ ...s, joint: "" }, (_k, v: unknown) => (typeof v === "number" ? Number(v.toPrecision(9)) : v));
+    groups.set(key, [...(groups.get(key) ?? []), s]);
+  }
+  return [...groups.values()];
+}
+
+/** A joint's connector schedule (or several joints' identical one): demand, the zones to build, and what the zones rest on. */
+export function scheduleSection(c: WorksheetContext, group: Schedule[]): void {
   const { sheet, result, text } = c;
-  const joint = result.joints.find((j) => j.id === s.joint);
-  const intro = `${s.connectorLabel}: ${s.rows} connector${s.rows === 1 ? "" : "s"} per row on each of ${s.lineCount} joint line${s.lineCount === 1 ? "" : "s"}${joint ? `, holding ${partNames(result, joint.held)}` : ""}. ${joint?.sharing ?? ""}`;
-  const flowCaption = `Shear flow q per joint line, joint ${s.joint} (envelope of the combinations)`;
-  const spacingCaption = `Spacing along joint ${s.joint}: required by q, and the zones provided`;
+  const s = group[0]!;
+  const ids = group.map((k) => k.joint);
+  const name = ids.length === 1 ? `joint ${s.joint}` : `joints ${ids.slice(0, -1).join(", ")} and ${ids[ids.length - 1]}`;
+  const holding = group
+    .map((k) => result.joints.find((j) => j.id === k.joint))
+    .map((j) => (j ? `${ids.length > 1 ? `${j.id}: ` : ""}holding ${partNames(result, j.held)}` : ""))
+    .filter(Boolean)
+    .join("; ");
+  const sharing = result.joints.find((j) => j.id === s.joint)?.sharing ?? "";
+  const intro = [
+    `${s.connectorLabel}: ${s.rows} connector${s.rows === 1 ? "" : "s"} per row on each of ${s.lineCount} joint line${s.lineCount === 1 ? "" : "s"}${holding ? `, ${holding}` : ""}. ${sharing}`,
+    ids.length > 1 ? `These joints have the same shear flow, connector, limits and zones, so their schedule is printed once: build it on each of them (${ids.join(", ")}). Counts are per joint.` : "",
+  ]
+    .filter(Boolean)
+    .join(" ");
+  const flowCaption = `Shear flow q per joint line, ${name} (envelope of the combinations)`;
+  const spacingCaption = `Spacing along ${name}: required by q, and the zones provided`;
   // The heading, the verdict and both diagrams read as one block: start a page rather than split them.
-  sheet.heading(`Connector schedule — joint ${s.joint}`, 1, sheet.textHeight(intro) + 40 + figureHeight(sheet, flowCaption) + figureHeight(sheet, spacingCaption));
+  sheet.heading(`Connector schedule — ${name}`, 1, sheet.textHeight(intro) + 40 + figureHeight(sheet, flowCaption) + figureHeight(sheet, spacingCaption));
   sheet.paragraph(intro, { size: 9 });
-  scheduleVerdict(c, s);
+  scheduleVerdict(c, s, ids.length === 1 ? `Joint ${s.joint}` : `Joints ${ids.join(", ")}`);
 
   figure(sheet, flowCaption, shearFlowDiagram(s, result.beam.stations, text, sheet.width));
   figure(sheet, spacingCaption, spacingDiagram(s, result.beam.stations, text, sheet.width));
@@ -47,9 +74,9 @@ export function scheduleSection(c: WorksheetContext, s: Schedule): void {
         z.requiredSpacing === null ? "—" : text.of(z.requiredSpacing, "length"),
         formatRatio(z.utilisation),
         z.governingCombination,
-        z.passes ? { text: "passes", colour: ink.pass } : { text: "FAILS", bold: true, colour: ink.fail },
+        z.passes ? { text: "passes", colour: ink.pass } : { text: "FAILS", bold: true, colour: ink.fail, note: failingUnder(z) },
       ]),
-      ["", { text: "Total, all lines", bold: true }, "", "", { text: String(s.count), bold: true }, "", "", "", ""],
+      ["", { text: ids.length > 1 ? "Total, all lines, per joint" : "Total, all lines", bold: true }, "", "", { text: String(s.count), bold: true }, "", "", "", ""],
     ],
     { rowColour: (i) => (s.zones[i] && !s.zones[i]!.passes ? ink.fail : undefined) },
   );
@@ -115,7 +142,7 @@ export function scheduleSection(c: WorksheetContext, s: Schedule): void {
   );
 }
 
-function scheduleVerdict(c: WorksheetContext, s: Schedule): void {
+function scheduleVerdict(c: WorksheetContext, s: Schedule, name: string): void {
   const { sheet } = c;
   if (s.passes) {
     sheet.paragraph(`Schedule passes: largest row utilisation ${formatRatio(s.verification.maxUtilisation)} ≤ 1.00.`, { font: "bold", colour: ink.pass });
@@ -123,7 +150,7 @@ function scheduleVerdict(c: WorksheetContext, s: Schedule): void {
   }
   const lines = [
     `THIS SCHEDULE DOES NOT CARRY THE SHEAR FLOW. Do not build from it as printed: the zones below are the closest the limits allow, shown for review only.`,
-    ...infeasibleStatement(c, s),
+    ...infeasibleStatement(c, s, name),
   ];
   if (!s.infeasible) lines.push(`A row is over-utilised: ${formatRatio(s.verification.maxUtilisation)} > 1.00 at x = ${c.text.of(s.verification.at, "span")}.`);
   const height = lines.reduce((h, t, i) => h + sheet.textHeight(t, { font: i === 0 ? "bold" : "body", size: 8.5, width: sheet.width - 16 }) + 3, 8);
@@ -136,4 +163,10 @@ function scheduleVerdict(c: WorksheetContext, s: Schedule): void {
     y += sheet.textHeight(t, { font: i === 0 ? "bold" : "body", size: 8.5, width: sheet.width - 16 }) + 3;
   });
   sheet.y += height + 6;
+}
+
+/** The combinations a failing zone fails under, when the result names them. */
+function failingUnder(zone: Schedule["zones"][number]): string | undefined {
+  const ids = (zone as { failingCombinations?: string[] }).failingCombinations;
+  return ids && ids.length > 0 ? `under ${ids.join(", ")}` : undefined;
 }

@@ -1,6 +1,6 @@
 import type { z } from "zod";
 import { Connector } from "../../core/connector/registry.js";
-import { Shape } from "../../core/schema/job.js";
+import { Fastening, Load, Shape } from "../../core/schema/job.js";
 import { quantityOf } from "../../core/schema/quantity.js";
 import { numberText, type QuantityText } from "./quantity-text.js";
 
@@ -36,7 +36,8 @@ function quantityKindOf(schema: z.ZodType): string | undefined {
   return undefined;
 }
 
-const words = (key: string) => key.replace(/([a-z0-9])([A-Z])/g, "$1 $2").toLowerCase();
+// A one-letter key is a symbol (P, M, w) and keeps its case.
+const words = (key: string) => (key.length === 1 ? key : key.replace(/([a-z0-9])([A-Z])/g, "$1 $2").toLowerCase());
 
 /**
  * The fields of a value as entered, each number with its unit, read from its schema: every connector
@@ -68,4 +69,14 @@ export function connectorFields(connector: ConnectorValue, text: QuantityText): 
 export function shapeFields(shape: ShapeValue, text: QuantityText): string {
   const fields = describeFields(Shape, shape as unknown as Record<string, unknown>, text, new Set(["type"]));
   return `${shape.type}${fields.length ? `: ${fields.join("; ")}` : ""}`;
+}
+
+/** A load as entered without its type, category and label, e.g. "w 1.6 kN/m; from 0 m; to 2 m". */
+export function loadFields(load: z.infer<typeof Load>, text: QuantityText): string {
+  return describeFields(Load, load as unknown as Record<string, unknown>, text, new Set(["type", "category", "label"])).join("; ");
+}
+
+/** Fastening settings beyond connector and rows (driving side and any later ones), as entered. */
+export function fasteningFields(fastening: z.infer<typeof Fastening>, text: QuantityText): string {
+  return describeFields(Fastening, fastening as unknown as Record<string, unknown>, text, new Set(["connector", "rows", "held", "provided"])).join("; ");
 }

@@ -1,6 +1,7 @@
 import { sectionDrawing } from "../../core/index.js";
 import { spreadSectionLabels } from "../../core/draw/section-labels.js";
 import { paintDrawing } from "./paint-drawing.js";
+import { numberText } from "./quantity-text.js";
 import { ink } from "./sheet.js";
 import { keyValueTable, table } from "./table.js";
 import { partNames, type WorksheetContext } from "./worksheet-context.js";
@@ -46,6 +47,9 @@ export function sectionPropertiesSection(c: WorksheetContext): void {
     keyValueTable(sheet, properties, { keyWeight: 1.3 });
   }
 
+  materialModuliTable(c);
+  shearStressSummary(c);
+
   sheet.heading("Joints", 2, 60);
   if (result.joints.length === 0) {
     sheet.paragraph("No joint plane: the section has a single part or its parts do not touch.", { colour: ink.faint });
@@ -54,14 +58,14 @@ export function sectionPropertiesSection(c: WorksheetContext): void {
   table(
     sheet,
     [
-      { header: "Joint", weight: 1 },
-      { header: "Held parts", weight: 1.2 },
-      { header: "Joint lines (between parts)", weight: 2.1 },
+      { header: "Joint", weight: 0.9 },
+      { header: "Held parts", weight: 1.1 },
+      { header: "Joint lines (between parts)", weight: 1.7 },
       { header: "t", weight: 0.8, align: "right" },
-      { header: "Q", weight: 1.2, align: "right" },
-      { header: "Q/I", weight: 1.25, align: "right" },
-      { header: "Q/(I·t)", weight: 1.35, align: "right" },
-      { header: "Connector", weight: 1.6 },
+      { header: "Q", weight: 1.35, align: "right" },
+      { header: "Q/I", weight: 1.4, align: "right" },
+      { header: "Q/(I·t)", weight: 1.75, align: "right" },
+      { header: "Connector", weight: 1.4 },
     ],
     result.joints.map((j) => [
       j.found ? { text: j.id, bold: true } : { text: j.id, bold: true, note: "not found in the section", colour: ink.fail },
@@ -99,3 +103,36 @@ function caption(c: WorksheetContext, id: string | undefined): string {
   return `Joint ${j.id}: holds ${partNames(c.result, j.held)}; t = ${c.text.of(j.contactWidth, "length")}; Q = ${c.text.of(j.firstMoment, "firstMoment")}; ${j.lines.length} line${j.lines.length === 1 ? "" : "s"}`;
 }
 
+
+/** σ = M/S per material: the fibre distances and elastic moduli the bending check uses. */
+function materialModuliTable(c: WorksheetContext): void {
+  const { sheet, result, text } = c;
+  const moduli = result.section.materialModuli;
+  if (!moduli || moduli.length === 0) return;
+  sheet.heading("Bending moduli per material", 2, 50);
+  const modulus = (v: number | null) => (v === null ? { text: "—", colour: ink.faint } : text.of(v, "firstMoment"));
+  table(
+    sheet,
+    [
+      { header: "Material", weight: 2 },
+      { header: "n", weight: 0.5, align: "right" },
+      { header: "Top fibre from N.A.", weight: 1.1, align: "right" },
+      { header: "Bottom fibre from N.A.", weight: 1.1, align: "right" },
+      { header: "S top", weight: 1.1, align: "right" },
+      { header: "S bottom", weight: 1.1, align: "right" },
+    ],
+    moduli.map((m) => [m.name || m.material, numberText(m.modularRatio, 3), text.of(m.topFibre, "length"), text.of(m.bottomFibre, "length"), modulus(m.topModulus), modulus(m.bottomModulus)]),
+  );
+}
+
+/** The largest shear-stress factor over the depth beside the simple forms a reviewer checks it against. */
+function shearStressSummary(c: WorksheetContext): void {
+  const { sheet, result, text } = c;
+  const s = result.section.shearStress;
+  if (!s) return;
+  const rows: [string, string][] = [[`Largest Q/(I·t) over the depth, at y = ${text.of(s.atY, "length")}`, text.of(s.maxFactor, "perArea")]];
+  if (s.rectangleClosedForm !== null) rows.push(["1.5/A for a single rectangle", text.of(s.rectangleClosedForm, "perArea")]);
+  for (const w of s.webApproximations) rows.push([`${w.label} (${w.part})`, text.of(w.factor, "perArea")]);
+  sheet.heading("Shear stress per unit shear force", 2, 50);
+  keyValueTable(sheet, rows, { keyWeight: 1.6 });
+}

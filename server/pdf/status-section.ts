@@ -4,12 +4,12 @@ import { table } from "./table.js";
 import { combinationName, type Schedule, type WorksheetContext } from "./worksheet-context.js";
 
 /** What an infeasible schedule lacks, where, and the ways out the result lists. */
-export function infeasibleStatement(c: WorksheetContext, s: Schedule): string[] {
+export function infeasibleStatement(c: WorksheetContext, s: Schedule, name = `Joint ${s.joint}`): string[] {
   const inf = s.infeasible;
   if (!inf) return [];
   const where = inf.where.map((w) => c.text.range(w.from, w.to)).join(" and ");
   return [
-    `Joint ${s.joint}: no spacing within the limits carries the shear flow over ${where}. The smallest required spacing is ${c.text.of(inf.smallestRequired, "length")}, below the minimum spacing of ${c.text.of(inf.minSpacing, "length")}.`,
+    `${name}: no spacing within the limits carries the shear flow over ${where}. The smallest required spacing is ${c.text.of(inf.smallestRequired, "length")}, below the minimum spacing of ${c.text.of(inf.minSpacing, "length")}.`,
     ...inf.options.map((o) => `Option: ${o}`),
   ];
 }
@@ -72,10 +72,17 @@ export function glanceSection(c: WorksheetContext): void {
     [
       { header: "Joint", weight: 0.9 },
       { header: "Connector", weight: 2.8 },
-      { header: "Zones from the left end (from – to @ spacing)", weight: 2.9 },
+      { header: "Zones from the left end", weight: 2.9 },
       { header: "Count", weight: 0.6, align: "right" },
       { header: "Result", weight: 1.3 },
     ],
     rows,
+    {
+      rowColour: (i) => {
+        const id = result.joints[i]?.id;
+        const failing = result.schedules.some((k) => k.joint === id && !k.passes) || result.bondLines.some((k) => k.joint === id && !k.passes);
+        return failing ? ink.fail : undefined;
+      },
+    },
   );
 }

@@ -7,7 +7,7 @@ import { inputsSection } from "./inputs-section.js";
 import { memberChecksSection } from "./member-checks-section.js";
 import { quantityText } from "./quantity-text.js";
 import { reviewBox } from "./review-box.js";
-import { scheduleSection } from "./schedule-section.js";
+import { identicalSchedules, scheduleSection } from "./schedule-section.js";
 import { sectionPropertiesSection } from "./section-properties-section.js";
 import { PAGE_SIZES, Sheet, pageFrame, registerFonts } from "./sheet.js";
 import { glanceSection, statusSection } from "./status-section.js";
@@ -59,7 +59,7 @@ export function renderWorksheet(job: JobDocument, result: DesignResult, options:
   inputsSection(context);
   sectionPropertiesSection(context);
   actionsSection(context);
-  for (const schedule of result.schedules) scheduleSection(context, schedule);
+  for (const group of identicalSchedules(result.schedules)) scheduleSection(context, group);
   for (const bondLine of result.bondLines) bondLineSection(context, bondLine);
   memberChecksSection(context);
   closingSection(context);
