@@ -4,25 +4,24 @@ import type { DesignResult } from "../../../core/schema/result.js";
 import { formatNumber } from "../../../core/units/format.js";
 import { el } from "../dom.js";
 import { figure } from "./figure.js";
-import { combinationName, header, shown, table, utilisation } from "./quantities.js";
+import { header, shown, table, utilisation } from "./quantities.js";
 
 /** Member checks: demand against capacity, each with its utilisation. */
 export function memberChecks(result: DesignResult): HTMLElement {
   return table(
     "Member checks",
-    ["Check", "Demand", "Capacity", "Utilisation", "Where", "Basis"],
+    ["Check", "Demand", "Capacity", "Utilisation", "Where"],
     result.checks.map((c) => ({
       className: c.passes ? "" : "fails",
       cells: [
-        c.title,
+        el("span", {}, [c.title, el("span", { className: "sub", text: c.reference })]),
         c.quantity === "ratio" ? formatNumber(c.demand) : shown(result, c.demand, c.quantity),
         c.quantity === "ratio" ? formatNumber(c.capacity) : shown(result, c.capacity, c.quantity),
         utilisation(c.utilisation, c.passes),
-        `${c.at === null ? "" : `x = ${shown(result, c.at, "span")}, `}${combinationName(result, c.combination)}`,
-        c.reference,
+        el("span", {}, [c.at === null ? "" : `x = ${shown(result, c.at, "span")}`, el("span", { className: "sub", text: c.combination })]),
       ],
     })),
-    { className: "checks", numeric: [1, 2] },
+    { className: "checks", numeric: [1, 2], captionHidden: true },
   );
 }
 
@@ -45,11 +44,11 @@ export function bondLines(result: DesignResult, width: number): HTMLElement[] {
           formatNumber(b.maxStress),
           `${formatNumber(strength)}${governing ? ` (${governing.governing})` : ""}`,
           utilisation(b.utilisation, b.passes),
-          `x = ${shown(result, b.at, "span")}, ${combinationName(result, b.combination)}`,
+          el("span", {}, [`x = ${shown(result, b.at, "span")}`, el("span", { className: "sub", text: b.combination })]),
         ],
       };
     }),
-    { className: "bond-lines", numeric: [2, 3] },
+    { className: "bond-lines", numeric: [2, 3], captionHidden: true },
   );
   const plots = result.bondLines.map((b) =>
     figure(

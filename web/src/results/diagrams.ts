@@ -2,6 +2,7 @@ import { palette } from "../../../core/draw/drawing.js";
 import { lineDiagram } from "../../../core/draw/line-diagram.js";
 import type { DesignResult, Schedule } from "../../../core/schema/result.js";
 import { formatNumber } from "../../../core/units/format.js";
+import { el } from "../dom.js";
 import { figure } from "./figure.js";
 import { spacingPlot } from "./spacing-plot.js";
 
@@ -60,4 +61,17 @@ export function spacingDiagram(result: DesignResult, schedule: Schedule, width: 
     "diagram",
     `Required spacing n·R/q (drawn no higher than the largest allowed spacing, ${formatNumber(plot.cap)} ${u.length ?? ""}) against the zone spacing provided. Where the required line dips below the minimum, no spacing within the limits works.`,
   );
+}
+
+/** The load combinations the results refer to by id, with their factors. */
+export function combinations(result: DesignResult): HTMLElement {
+  return el("dl", { className: "figures combinations" }, [
+    ...result.beam.combinations.flatMap((c) => {
+      const factors = Object.entries(c.factors)
+        .filter(([, f]) => f !== 0)
+        .map(([category, f]) => `${formatNumber(f, 3)} × ${category}`)
+        .join(" + ");
+      return [el("dt", { text: c.id }), el("dd", { text: `${c.name}: ${factors || "no loads"} (load duration: ${c.duration})` })];
+    }),
+  ]);
 }

@@ -28,11 +28,11 @@ export const combinationName = (result: DesignResult, id: string) => {
 };
 
 /** A simple table from header cells and rows of cells. */
-export function table(caption: string, headers: (string | Node)[], rows: { cells: (string | Node)[]; className?: string }[], options: { numeric?: number[]; className?: string } = {}): HTMLElement {
+export function table(caption: string, headers: (string | Node)[], rows: { cells: (string | Node)[]; className?: string }[], options: { numeric?: number[]; className?: string; captionHidden?: boolean } = {}): HTMLElement {
   const numeric = new Set(options.numeric ?? []);
   return el("div", { className: "table-scroll" }, [
     el("table", { className: `results-table ${options.className ?? ""}`.trim() }, [
-      el("caption", { text: caption }),
+      el("caption", { text: caption, className: options.captionHidden ? "visually-hidden" : "" }),
       el("thead", {}, [el("tr", {}, headers.map((h, i) => el("th", { className: numeric.has(i) ? "num" : "", attrs: { scope: "col" } }, [h])))]),
       el(
         "tbody",

@@ -2,7 +2,7 @@ import type { DesignResult } from "../../../core/schema/result.js";
 import { el } from "../dom.js";
 import type { PlacedIssue } from "../form/field-registry.js";
 import { bondLines, memberChecks } from "./checks-view.js";
-import { shearAndMoment, shearFlow } from "./diagrams.js";
+import { combinations, shearAndMoment, shearFlow } from "./diagrams.js";
 import { drawingWidth } from "./figure.js";
 import { notes } from "./notes-view.js";
 import { scheduleBlock } from "./schedule-view.js";
@@ -141,6 +141,8 @@ export class ResultsView {
       this.#section.render(result, this.#body),
       el("section", { className: "panel", attrs: { id: "diagrams", "aria-labelledby": "diagrams-title" } }, [
         el("h2", { text: "Shear, moment and shear flow", attrs: { id: "diagrams-title" } }),
+        el("h3", { className: "minor", text: "Load combinations" }),
+        combinations(result),
         ...shearAndMoment(result, width),
         shearFlow(result, width),
       ]),

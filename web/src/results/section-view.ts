@@ -17,9 +17,8 @@ export class SectionView {
     if (!result.joints.some((j) => j.id === this.#joint)) this.#joint = result.joints[0]?.id;
     const box = el("section", { className: "panel", attrs: { id: "section", "aria-labelledby": "section-title" } });
     const draw = () => {
-      const width = Math.min(420, drawingWidth(container));
-      const drawing = sectionDrawing(result, { width, height: Math.round(width * 0.78), ...(this.#joint ? { joint: this.#joint } : {}) });
-      return figure(drawing, "section-figure");
+      const size = drawingSize(result, Math.min(420, drawingWidth(container)));
+      return figure(sectionDrawing(result, { ...size, ...(this.#joint ? { joint: this.#joint } : {}) }), "section-figure");
     };
     const picture = el("div", { className: "section-picture" }, [draw()]);
     const chooser = el("div", { className: "joint-chooser", attrs: { role: "group", "aria-label": "Joint shown on the section" } });
@@ -67,6 +66,17 @@ export class SectionView {
   }
 }
 
+/** A drawing no wider than the section needs at a readable height, so a deep narrow member leaves no empty band. */
+function drawingSize(result: DesignResult, maxWidth: number): { width: number; height: number } {
+  const { x0, x1, y0, y1 } = result.section.bounds;
+  const aspect = (x1 - x0) / (y1 - y0 || 1);
+  const labels = 150; // the drawing's own margins and the t, Q and N.A. labels beside the section
+  const fullHeight = 300;
+  const width = aspect * (fullHeight - 52) + labels;
+  if (width <= maxWidth) return { width: Math.round(Math.max(260, width)), height: fullHeight };
+  return { width: maxWidth, height: Math.round(Math.max(170, (maxWidth - labels) / aspect + 52)) };
+}
+
 const property = (term: string, value: string) => [el("dt", { text: term }), el("dd", { text: value })];
 
 function jointsTable(result: DesignResult, selected: string | undefined): HTMLElement {
@@ -81,20 +91,21 @@ function jointsTable(result: DesignResult, selected: string | undefined): HTMLEl
   };
   return table(
     "Joint planes",
-    ["Joint", "Holds", "Contact lines", header("t", u.length), header("Q", u.firstMoment), header("Q/I", u.perLength), header("Q/(I·t)", u.perArea), "Connector"],
+    ["Joint", "Contact lines and connector", header("t", u.length), header("Q", u.firstMoment), header("Q/I", u.perLength), header("Q/(I·t)", u.perArea)],
     result.joints.map((j) => ({
       className: j.id === selected ? "selected" : "",
       cells: [
-        j.id,
-        j.held.join(", "),
-        j.found ? lines(j) : "no contact found",
+        el("span", {}, [el("strong", { text: j.id }), el("span", { className: "sub", text: `holds ${j.held.join(", ")}` })]),
+        el("span", {}, [
+          j.found ? lines(j) : "no contact found",
+          el("span", { className: "sub", text: `${j.connectorLabel}${j.mechanism === "discrete" ? `, ${j.rows} per row` : " (bond line)"}` }),
+        ]),
         formatNumber(j.contactWidth),
         formatNumber(j.firstMoment),
         formatNumber(j.flowFactor),
         formatNumber(j.stressFactor),
-        `${j.connectorLabel}${j.mechanism === "discrete" ? `, ${j.rows} per row` : " (bond line)"}`,
       ],
     })),
-    { className: "joints", numeric: [3, 4, 5, 6] },
+    { className: "joints", numeric: [2, 3, 4, 5] },
   );
 }
