@@ -50,11 +50,15 @@ export function writeAt(document: Record<string, unknown>, path: string, value: 
   let node: Record<PathKey, unknown> = document;
   keys.forEach((key, i) => {
     const next = node[key];
-    if (!isContainer(next)) node[key] = typeof keys[i + 1] === "number" ? [] : {};
+    if (!isContainer(next)) node[key] = typeof (keys[i + 1] ?? last) === "number" ? [] : {};
     node = node[key] as Record<PathKey, unknown>;
   });
   if (value === undefined) {
-    if (Array.isArray(node) && typeof last === "number") node[last] = undefined;
-    else delete node[last];
+    // An emptied last item leaves the list shorter (so "needs at least one span" is reported, not "null");
+    // an emptied item inside a list keeps its place.
+    if (Array.isArray(node) && typeof last === "number") {
+      if (last === node.length - 1) node.pop();
+      else node[last] = undefined;
+    } else delete node[last];
   } else node[last] = value;
 }

@@ -95,6 +95,7 @@ export function toolbar(session: DesignSession, examples: ExampleEntry[], shownE
       el("button", { text: "Save job file", attrs: { type: "button" }, on: { click: saveJob } }),
       worksheetButton,
     ]),
+    el("a", { className: "to-results", text: "Results ↓", attrs: { href: "#results" } }),
     message,
   ]);
 }

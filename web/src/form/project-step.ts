@@ -8,7 +8,7 @@ export function projectStep(ctx: FormContext, number: number): HTMLElement {
     fieldGrid([
       text("project.name", "Project name", 120, true),
       text("project.number", "Project number", 40),
-      text("project.client", "Client", 120),
+      text("project.client", "Client", 120, true),
       text("project.engineer", "Engineer", 80),
     ]),
     fieldGrid([
