@@ -95,7 +95,6 @@ export function toolbar(session: DesignSession, examples: ExampleEntry[], shownE
       el("button", { text: "Save job file", attrs: { type: "button" }, on: { click: saveJob } }),
       worksheetButton,
     ]),
-    el("a", { className: "to-results", text: "Results ↓", attrs: { href: "#results" } }),
     message,
   ]);
 }

@@ -15,7 +15,6 @@ export function uniqueId(list: unknown[], wanted: string): string {
 export function renameReferences(ctx: FormContext, input: HTMLInputElement, listPath: string, rename: (oldId: string, newId: string) => void): void {
   let before = input.value;
   input.addEventListener("focus", () => (before = input.value));
-  input.addEventListener("input", () => refresh(ctx));
   input.addEventListener("change", () => {
     const after = input.value;
     const owners = ctx.state.list(listPath).filter((item) => (item as Record<string, unknown>)?.id === after).length;

@@ -24,6 +24,8 @@ export class ResultsView {
   readonly #notice = el("div", { className: "results-notice", attrs: { "aria-live": "polite" } });
   readonly #state = el("p", { className: "results-state", attrs: { role: "status" } });
   readonly #body = el("div", { className: "results-body" });
+  /** On narrow screens, where the results sit far below the form: the verdict kept in view while editing. */
+  readonly #summary = el("div", { className: "results-summary", attrs: { "aria-hidden": "true" } });
   readonly #section = new SectionView();
   #result: DesignResult | null = null;
   #freshness: Freshness = "updating";
@@ -52,6 +54,7 @@ export class ResultsView {
       this.#body,
     );
     this.#body.append(el("p", { className: "hint", text: "Computing the example…" }));
+    document.body.append(this.#summary);
     let timer: number | undefined;
     window.addEventListener("resize", () => {
       clearTimeout(timer);
@@ -69,6 +72,19 @@ export class ResultsView {
   markUpdating(): void {
     this.#state.textContent = "Updating…";
     this.#state.className = "results-state updating";
+    this.#renderSummary();
+  }
+
+  #renderSummary(): void {
+    const result = this.#result;
+    const verdict = !result ? "No results yet" : result.status.passes ? "Passes" : "Does not pass";
+    const count = result ? result.schedules.reduce((n, s) => n + s.count, 0) : 0;
+    this.#summary.className = `results-summary ${this.#state.className.replace("results-state", "").trim()} ${result && !result.status.passes ? "fails" : ""}`.trim();
+    this.#summary.replaceChildren(
+      el("span", { className: "summary-state", text: this.#state.textContent ?? "" }),
+      el("span", { className: "summary-verdict", text: result && count ? `${verdict} · ${count} connectors` : verdict }),
+      el("a", { text: "Results ↓", attrs: { href: "#results", tabindex: -1 } }),
+    );
   }
 
   /** A different job was opened: results of the one before must not be shown as if they were its own. */
@@ -89,6 +105,7 @@ export class ResultsView {
     this.#body.classList.toggle("stale", stale && this.#result !== null);
     this.#state.textContent = { current: "Up to date with the input", updating: "Updating…", invalid: "Input has problems", unreachable: "Service not answering" }[notice.freshness];
     this.#state.className = `results-state ${notice.freshness}`;
+    this.#renderSummary();
     if (!stale) {
       this.#notice.replaceChildren();
       return;
