@@ -2,6 +2,7 @@ import { formatRatio, lineDiagram } from "../../core/index.js";
 import { DIAGRAM_HEIGHT, figure, figureHeight } from "./figure.js";
 import { ink } from "./sheet.js";
 import { table } from "./table.js";
+import { workingTables } from "./working-table.js";
 import { combinationName, type BondLine, type WorksheetContext } from "./worksheet-context.js";
 
 /** A glued joint: bond-line shear stress τ = q/t along the member against the bond-line strength. */
@@ -42,16 +43,15 @@ export function bondLineSection(c: WorksheetContext, b: BondLine): void {
     [
       { header: "Combination", weight: 1.3 },
       { header: "Strength f", weight: 0.9, align: "right" },
-      { header: "Governing", weight: 1.3 },
-      { header: "Working", weight: 2.4 },
-      { header: "Reference", weight: 1.5 },
+      { header: "Governing", weight: 2 },
+      { header: "Reference", weight: 2.2 },
     ],
     b.strength.map((s) => [
       { text: s.combination, note: result.beam.combinations.find((k) => k.id === s.combination)?.name },
       { text: text.of(s.value, "stress"), bold: true },
       s.governing,
-      s.steps.map((step) => `${step.symbol} = ${text.of(step.value, step.quantity)} (${step.description})`).join("\n"),
       s.reference,
     ]),
   );
+  workingTables(c, "f", b.strength);
 }

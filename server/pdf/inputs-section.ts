@@ -1,4 +1,4 @@
-import { connectorFields, fasteningFields, loadFields, shapeFields } from "./schema-fields.js";
+import { connectorFields, fasteningFields, loadFields, materialFields, shapeFields } from "./schema-fields.js";
 import { numberText, type QuantityText } from "./quantity-text.js";
 import { ink } from "./sheet.js";
 import { keyValueTable, table } from "./table.js";
@@ -40,7 +40,7 @@ export function inputsSection(c: WorksheetContext): void {
     ],
     job.materials.map((m) => [
       { text: m.id, bold: true },
-      m.name,
+      { text: m.name, note: materialFields(m, text) || undefined },
       m.family,
       text.of(m.E, "modulus"),
       text.of(m.density, "density"),

@@ -4,7 +4,8 @@ import { numberText } from "./quantity-text.js";
 import { shearFlowDiagram, spacingDiagram } from "./schedule-diagrams.js";
 import { ink } from "./sheet.js";
 import { infeasibleStatement } from "./status-section.js";
-import { keyValueTable, table } from "./table.js";
+import { keyValueTable, table, type Cell } from "./table.js";
+import { workingTables } from "./working-table.js";
 import { combinationName, partNames, type Schedule, type WorksheetContext } from "./worksheet-context.js";
 
 /**
@@ -87,24 +88,41 @@ export function scheduleSection(c: WorksheetContext, group: Schedule[]): void {
     [
       { header: "Combination", weight: 1.3 },
       { header: "R", weight: 0.8, align: "right" },
-      { header: "Governing mode", weight: 1.3 },
-      { header: "Working", weight: 2.4 },
-      { header: "Reference", weight: 1.6 },
+      { header: "Governing mode", weight: 2.6 },
+      { header: "Reference", weight: 2.2 },
     ],
-    s.resistance.map((r) => [
-      { text: r.combination, note: result.beam.combinations.find((k) => k.id === r.combination)?.name },
-      { text: text.of(r.value, "connectorForce"), bold: true },
-      r.governing,
-      r.steps.map((step) => `${step.symbol} = ${text.of(step.value, step.quantity)} (${step.description}${step.reference ? `; ${step.reference}` : ""})`).join("\n") || "—",
-      r.reference,
-    ]),
+    s.resistance.map((resistance) => {
+      const r = resistance as typeof resistance & ResistanceDetail;
+      const slip = r.slip ? `slip modulus K_ser ${text.of(r.slip.serviceability, "slipModulus")}, K_u ${text.of(r.slip.ultimate, "slipModulus")} (${r.slip.reference})` : "";
+      return [
+        { text: r.combination, note: result.beam.combinations.find((k) => k.id === r.combination)?.name },
+        { text: text.of(r.value, "connectorForce"), bold: true },
+        { text: r.governing, note: r.modes && r.modes.length > 1 ? `modes: ${r.modes.map((m) => `${m.mode} ${text.of(m.value, "connectorForce")}`).join("; ")}` : undefined },
+        { text: r.reference, note: slip || undefined },
+      ];
+    }),
   );
+  workingTables(c, "R", s.resistance);
+  const confirm = [...new Set(s.resistance.flatMap((r) => (r as ResistanceDetail).warnings ?? []))];
+  if (confirm.length > 0) {
+    sheet.paragraph("For the reviewer to confirm:", { font: "bold", size: 8.5 }, 2);
+    sheet.list(confirm, { size: 8.5 });
+  }
 
   sheet.heading("Limits used", 2, 50);
-  const l = s.limits;
+  const l = s.limits as typeof s.limits & AcrossLimits;
+  const across: [string, string | Cell][] = [];
+  if (l.edgeDistance != null) across.push(["Least edge distance across the line", text.of(l.edgeDistance, "length")]);
+  if (l.rowSpacing != null) across.push(["Least spacing within a row, across the line", text.of(l.rowSpacing, "length")]);
+  if (l.penetration != null)
+    across.push([
+      "Penetration into the point-side part: provided / least",
+      { text: `${text.of(l.penetration.provided, "length")} / ${text.of(l.penetration.required, "length")}`, colour: l.penetration.provided < l.penetration.required ? ink.fail : undefined },
+    ]);
   keyValueTable(
     sheet,
     [
+      ...across,
       ["Minimum spacing", text.of(l.minSpacing, "length")],
       ["Maximum spacing", text.of(l.maxSpacing, "length")],
       ["End distance (first and last row from the member ends)", text.of(l.endDistance, "length")],
@@ -169,4 +187,18 @@ function scheduleVerdict(c: WorksheetContext, s: Schedule, name: string): void {
 function failingUnder(zone: Schedule["zones"][number]): string | undefined {
   const ids = (zone as { failingCombinations?: string[] }).failingCombinations;
   return ids && ids.length > 0 ? `under ${ids.join(", ")}` : undefined;
+}
+
+/** Detail some connector kinds add to a resistance (all modes evaluated, slip moduli, conditions to confirm). */
+interface ResistanceDetail {
+  modes?: { mode: string; value: number }[];
+  slip?: { serviceability: number; ultimate: number; reference: string } | null;
+  warnings?: string[];
+}
+
+/** Limits across the line that dowel-type connectors add. */
+interface AcrossLimits {
+  edgeDistance?: number | null;
+  rowSpacing?: number | null;
+  penetration?: { required: number; provided: number } | null;
 }

@@ -1,6 +1,6 @@
 import type { z } from "zod";
 import { Connector } from "../../core/connector/registry.js";
-import { Fastening, Load, Shape } from "../../core/schema/job.js";
+import { Fastening, Load, Material, Shape } from "../../core/schema/job.js";
 import { quantityOf } from "../../core/schema/quantity.js";
 import { numberText, type QuantityText } from "./quantity-text.js";
 
@@ -79,4 +79,15 @@ export function loadFields(load: z.infer<typeof Load>, text: QuantityText): stri
 /** Fastening settings beyond connector and rows (driving side and any later ones), as entered. */
 export function fasteningFields(fastening: z.infer<typeof Fastening>, text: QuantityText): string {
   return describeFields(Fastening, fastening as unknown as Record<string, unknown>, text, new Set(["connector", "rows", "held", "provided"])).join("; ");
+}
+
+/** A material's properties beyond E, density and the bending and shear strengths, as entered. */
+export function materialFields(material: z.infer<typeof Material>, text: QuantityText): string {
+  const value = material as unknown as Record<string, unknown>;
+  const strength = (value.strength ?? {}) as Record<string, unknown>;
+  const strengthSchema = objectSchemaFor(Material, value)?.strength;
+  return [
+    ...describeFields(Material, value, text, new Set(["id", "name", "family", "E", "density", "strength", "source"])),
+    ...(strengthSchema ? describeFields(strengthSchema, strength, text, new Set(["bending", "shear"])).map((f) => `${f} strength`) : []),
+  ].join("; ");
 }

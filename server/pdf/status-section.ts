@@ -1,6 +1,7 @@
 import { formatRatio } from "../../core/index.js";
 import { ink } from "./sheet.js";
 import { table } from "./table.js";
+import { weldsOf } from "./weld-section.js";
 import { combinationName, type Schedule, type WorksheetContext } from "./worksheet-context.js";
 
 /** What an infeasible schedule lacks, where, and the ways out the result lists. */
@@ -65,6 +66,17 @@ export function glanceSection(c: WorksheetContext): void {
         b.passes ? { text: `passes (${formatRatio(b.utilisation)})`, colour: ink.pass } : { text: `FAILS (${formatRatio(b.utilisation)})`, colour: ink.fail, bold: true },
       ];
     }
+    const w = weldsOf(c).find((k) => k.joint === j.id);
+    if (w) {
+      const layout = w.pattern === "intermittent" && w.segmentLength !== null && w.pitch !== null ? `intermittent ${text.of(w.segmentLength, "length")} @ ${text.of(w.pitch, "length")}` : "continuous";
+      return [
+        { text: j.id, bold: true },
+        `${w.connectorLabel}, ${w.fillets} fillet${w.fillets === 1 ? "" : "s"} per line on ${w.lineCount} line${w.lineCount === 1 ? "" : "s"}`,
+        `${layout} over the whole member`,
+        "—",
+        w.passes ? { text: `passes (${formatRatio(w.utilisation)})`, colour: ink.pass } : { text: `FAILS (${formatRatio(w.utilisation)})`, colour: ink.fail, bold: true },
+      ];
+    }
     return [{ text: j.id, bold: true }, j.connectorLabel, "no schedule in the result", "—", { text: "NOT DESIGNED", colour: ink.fail, bold: true }];
   });
   table(
@@ -80,7 +92,7 @@ export function glanceSection(c: WorksheetContext): void {
     {
       rowColour: (i) => {
         const id = result.joints[i]?.id;
-        const failing = result.schedules.some((k) => k.joint === id && !k.passes) || result.bondLines.some((k) => k.joint === id && !k.passes);
+        const failing = [...result.schedules, ...result.bondLines, ...weldsOf(c)].some((k) => k.joint === id && !k.passes);
         return failing ? ink.fail : undefined;
       },
     },

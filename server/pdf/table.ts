@@ -78,14 +78,52 @@ export function table(sheet: Sheet, columns: Column[], rows: Row[], options: Tab
   const firstHeight = first.length ? Math.max(...first.map((c, i) => measure(c, c.bold ? "cond-bold" : "cond", i))) : 0;
   sheet.ensure(headerHeight + firstHeight);
   drawHeader();
+  const rowHeight = (cells: Cell[]) => Math.max(...cells.map((c, i) => measure(c, c.bold ? "cond-bold" : "cond", i)));
+  const fullPage = sheet.frame.bottom - sheet.frame.top - headerHeight;
+
+  /** The part of a cell that fits in `room`, and the rest for the next page. */
+  const splitCell = (cell: Cell, col: number, room: number): [Cell, Cell] => {
+    const font: FontName = cell.bold ? "cond-bold" : "cond";
+    if (measure(cell, font, col) <= room) return [cell, { ...cell, text: "", note: undefined }];
+    const bare = { ...cell, note: undefined };
+    if (cell.note && measure(bare, font, col) <= room) return [bare, { ...cell, text: "" }];
+    const tokens = cell.text.split(/(\s+)/);
+    let lo = 1;
+    let hi = tokens.length;
+    while (lo < hi) {
+      const mid = Math.ceil((lo + hi) / 2);
+      if (measure({ ...bare, text: tokens.slice(0, mid).join("") }, font, col) <= room) lo = mid;
+      else hi = mid - 1;
+    }
+    return [{ ...bare, text: tokens.slice(0, lo).join("").trimEnd() }, { ...cell, text: tokens.slice(lo).join("").trimStart() }];
+  };
+
   rows.forEach((row, index) => {
-    const cells = row.map(asCell);
-    const height = Math.max(...cells.map((c, i) => measure(c, c.bold ? "cond-bold" : "cond", i)));
-    if (height > sheet.room) {
+    const style = { colour: options.rowColour?.(index), band: index % 2 === 1 ? "#f7f9fa" : undefined };
+    let cells = row.map(asCell);
+    // A row taller than a whole page is the only thing ever split: it runs on, cell by cell, under a repeated header.
+    for (;;) {
+      const height = rowHeight(cells);
+      if (height <= sheet.room) {
+        drawRow(cells, height, style);
+        return;
+      }
+      if (height <= fullPage || sheet.room < 60) {
+        sheet.newPage();
+        drawHeader();
+        if (height <= fullPage) {
+          drawRow(cells, height, style);
+          return;
+        }
+      }
+      const parts = cells.map((c, i) => splitCell(c, i, sheet.room));
+      const heads = parts.map(([head]) => head);
+      drawRow(heads, rowHeight(heads), style);
+      cells = parts.map(([, rest]) => rest);
+      if (cells.every((c) => !c.text && !c.note)) return;
       sheet.newPage();
       drawHeader();
     }
-    drawRow(cells, height, { colour: options.rowColour?.(index), band: index % 2 === 1 ? "#f7f9fa" : undefined });
   });
   sheet.y += 6;
 }

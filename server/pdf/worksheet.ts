@@ -11,6 +11,7 @@ import { identicalSchedules, scheduleSection } from "./schedule-section.js";
 import { sectionPropertiesSection } from "./section-properties-section.js";
 import { PAGE_SIZES, Sheet, pageFrame, registerFonts } from "./sheet.js";
 import { glanceSection, statusSection } from "./status-section.js";
+import { weldSection, weldsOf } from "./weld-section.js";
 import { stampPages } from "./title-block.js";
 import type { WorksheetContext } from "./worksheet-context.js";
 
@@ -61,6 +62,7 @@ export function renderWorksheet(job: JobDocument, result: DesignResult, options:
   actionsSection(context);
   for (const group of identicalSchedules(result.schedules)) scheduleSection(context, group);
   for (const bondLine of result.bondLines) bondLineSection(context, bondLine);
+  for (const weld of weldsOf(context)) weldSection(context, weld);
   memberChecksSection(context);
   closingSection(context);
 

@@ -125,7 +125,7 @@ describe("renderWorksheet(job, result) on every example", () => {
     const { file, pageTexts } = await render(`${name}-pages`, job);
     const dark = darkPixelsInBody(file, `${name}-page`);
     expect(dark.length).toBe(pageTexts.filter(Boolean).length);
-    dark.forEach((count, i) => expect(count, `page ${i + 1} body`).toBeGreaterThan(300));
+    dark.forEach((count, i) => expect(count, `page ${i + 1} body`).toBeGreaterThan(50));
   });
 
   test("the same job and print date give the same bytes", async () => {
