@@ -87,6 +87,9 @@ describe("the job page", () => {
     await expect(page.locator(".results-body.stale").count()).resolves.toBe(1);
     await page.screenshot({ path: join(shots, "page-1280-bad-input.png") });
 
+    await page.getByRole("button", { name: /Part 2 · h: must be greater than 0/ }).click();
+    await expect(depth.evaluate((input) => input === document.activeElement)).resolves.toBe(true);
+
     await depth.fill("70");
     await upToDate();
     await expect(depth.getAttribute("aria-invalid")).resolves.toBeNull();

@@ -7,7 +7,7 @@ import { storeJob } from "./job-storage.js";
 import { JobState, type JobDraft } from "./job-state.js";
 import { ResultsView } from "./results/results-view.js";
 
-const REFERENCED_TEXT = /^(materials|connectors)\[\d+\]\.(id|name|label)$/;
+const REFERENCED_TEXT = /^(materials|connectors|parts)\[\d+\]\.(id|name|label)$/;
 
 /** Ties the job, its form and its results together: every edit is kept, stored, and designed again. */
 export class DesignSession {

@@ -53,9 +53,9 @@ export function selectControl(
     const value = ctx.state.read(path);
     const current = value === undefined && whenAbsent !== undefined ? whenAbsent : display(value);
     const list = typeof choices === "function" ? choices() : choices;
-    const options = list.map((c) => el("option", { text: c.label, attrs: { value: c.value } }));
-    if (!list.some((c) => c.value === current)) options.unshift(el("option", { text: current ? `${current} (not defined)` : "— choose —", attrs: { value: current } }));
-    select.replaceChildren(...options);
+    const items = list.map((c) => el("option", { text: c.label, attrs: { value: c.value } }));
+    if (!list.some((c) => c.value === current)) items.unshift(el("option", { text: current ? `${current} (not defined)` : "— choose —", attrs: { value: current } }));
+    select.replaceChildren(...items);
     select.value = current;
   };
   fill();
