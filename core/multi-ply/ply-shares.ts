@@ -1,0 +1,93 @@
+/**
+ * Side-by-side plies (lumber, LVL, a steel flitch plate) bending together about the same axis:
+ * with equal deflection every ply carries a share of the load in proportion to its bending stiffness
+ * E_j·I_j [D]. A load that arrives on one face has to be passed through the connectors, across each
+ * interface, into the plies beyond it. Plies are numbered from the left face; interface k lies
+ * between ply k and ply k + 1. Units: MPa, mm, mm⁴; loads in N/mm (uniform) or N (concentrated):
+ * the interface forces come out in the unit of the loads.
+ */
+
+export interface Ply {
+  name?: string;
+  /** E, MPa (a steel flitch by its own modulus). */
+  modulus: number;
+  /** Thickness across the member, mm. */
+  thickness: number;
+  /** Depth, mm. */
+  depth: number;
+  /** I about the bending axis, mm⁴; thickness·depth³/12 when not given. */
+  secondMoment?: number;
+}
+
+/** Where a load arrives: hung on the left face (ply 1), on the right face (ply n), or bearing on top of every ply. */
+export type LoadFace = "left" | "right" | "top";
+
+export interface SideLoad {
+  face: LoadFace;
+  /** N/mm for a uniform load, N for a concentrated one. Downward positive. */
+  magnitude: number;
+}
+
+/** Bending stiffness E·I of a ply, N·mm². */
+export function plyStiffness(ply: Ply): number {
+  return ply.modulus * (ply.secondMoment ?? (ply.thickness * ply.depth ** 3) / 12);
+}
+
+/** Each ply's share of a load carried by the member, E_j I_j / Σ E I. */
+export function plyShares(plies: Ply[]): number[] {
+  if (plies.length < 2) throw new RangeError(`a multi-ply member needs two plies or more, got ${plies.length}`);
+  const ei = plies.map(plyStiffness);
+  if (ei.some((x) => !(x > 0))) throw new RangeError("every ply needs a positive bending stiffness");
+  const total = ei.reduce((a, b) => a + b, 0);
+  return ei.map((x) => x / total);
+}
+
+/**
+ * How a load arrives across the plies, as fractions per ply: all on ply 1 (left face), all on ply n
+ * (right face), or bearing on top in proportion to each ply's thickness [CP].
+ */
+export function arrivalFractions(plies: Ply[], face: LoadFace): number[] {
+  const n = plies.length;
+  if (face === "left") return plies.map((_, j) => (j === 0 ? 1 : 0));
+  if (face === "right") return plies.map((_, j) => (j === n - 1 ? 1 : 0));
+  const width = plies.reduce((s, p) => s + p.thickness, 0);
+  return plies.map((p) => p.thickness / width);
+}
+
+export interface InterfaceTransfer {
+  /** Interface k (1-based) lies between ply k and ply k + 1. */
+  interface: number;
+  /** Load passed from the left plies to the right plies across this interface; negative passes leftward. */
+  force: number;
+}
+
+export interface PlyLoading {
+  shares: number[];
+  /** Load each ply carries in the end (share × total), in the unit of the loads. */
+  plyLoads: number[];
+  /** Load arriving on each ply before any transfer. */
+  arriving: number[];
+  interfaces: InterfaceTransfer[];
+}
+
+/**
+ * The force each interface must pass for loads acting together: T_k = Σ_{j ≤ k} (arriving_j − share_j·ΣP).
+ * For one load on the left face, T_k is the sum of the shares beyond interface k times the load.
+ * Loads that do not act together (live load on one side only) belong in separate calls.
+ */
+export function interfaceTransfer(plies: Ply[], loads: SideLoad[]): PlyLoading {
+  const shares = plyShares(plies);
+  const arriving = plies.map(() => 0);
+  for (const load of loads) {
+    arrivalFractions(plies, load.face).forEach((f, j) => (arriving[j]! += f * load.magnitude));
+  }
+  const total = arriving.reduce((a, b) => a + b, 0);
+  const plyLoads = shares.map((s) => s * total);
+  const interfaces: InterfaceTransfer[] = [];
+  let passed = 0;
+  for (let k = 0; k < plies.length - 1; k++) {
+    passed += arriving[k]! - plyLoads[k]!;
+    interfaces.push({ interface: k + 1, force: passed });
+  }
+  return { shares, plyLoads, arriving, interfaces };
+}
