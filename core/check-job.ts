@@ -1,3 +1,4 @@
+import { checkConnectorPlacement } from "./connector/check-placement.js";
 import { kindOf } from "./connector/registry.js";
 import { JobDocument } from "./schema/job.js";
 import { issuesFromZod, type JobIssue } from "./schema/job-issues.js";
@@ -20,7 +21,10 @@ export function prepareJob(input: unknown): PreparedJob {
   const job = { ...parsed.data, parts: placement.parts };
   const issues = checkJob(job);
   if (issues.length > 0) return { ok: false, issues };
-  return { ok: true, job: parsed.data, core: toCoreUnits(JobDocument, job, job.units) };
+  const core = toCoreUnits(JobDocument, job, job.units);
+  const placed = checkConnectorPlacement(core);
+  if (placed.length > 0) return { ok: false, issues: placed };
+  return { ok: true, job: parsed.data, core };
 }
 
 /** Checks of a schema-valid job (placements resolved) that need more than one field: references, geometry, positions, limits. */

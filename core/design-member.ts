@@ -4,10 +4,10 @@ import { evaluate, maxAbsShear, maxDeflection, momentAt, momentExtremes, shearAt
 import { stationsFor, type Station } from "./beam/stations.js";
 import { checkBondLine } from "./checks/bond-line.js";
 import { memberChecks } from "./checks/member-checks.js";
-import type { ConnectorContext, JoinedMember } from "./connector/connector-kind.js";
+import { governingLimits, type ConnectorContext, type JoinedMember } from "./connector/connector-kind.js";
 import { kindOf, type Connector } from "./connector/registry.js";
 import type { JobDocument } from "./schema/job.js";
-import { RESULT_FORMAT, RESULT_VERSION, type BondLineResult, type Combination, type DesignResult, type JointResult, type Schedule } from "./schema/result.js";
+import { RESULT_FORMAT, RESULT_VERSION, type BondLineResult, type Combination, type DesignResult, type JointResult, type Schedule, type WeldResult } from "./schema/result.js";
 import { findContacts, geometricTolerance, type ContactLine } from "./section/contacts.js";
 import { findJoints, jointForHeldGroup, type JointPlane } from "./section/joints.js";
 import { buildSection, extremeFibre, firstMomentAbove, positioned, widthAt, type SectionModel } from "./section/section-model.js";
@@ -33,6 +33,7 @@ export function designMember(job: JobDocument): DesignResult {
 
   const schedules: Schedule[] = [];
   const bondLines: BondLineResult[] = [];
+  const welds: WeldResult[] = [];
   const jointResults: JointResult[] = [];
   const assumptions = new Set<string>();
   const standards = new Set<string>();
@@ -64,7 +65,7 @@ export function designMember(job: JobDocument): DesignResult {
           : "One contact line carries the whole shear flow.",
     });
     // One context per combination and contact line; a combination's resistance is the least over the lines.
-    const contexts = beam.results.map((r) => joint.lines.map((line) => contextFor(r.combination, job.basis, joint, line, headSide, section)));
+    const contexts = beam.results.map((r) => joint.lines.map((line) => contextFor(r.combination, job, joint, line, headSide, rows, section)));
     const leastOf = <T extends { value: number }>(values: T[]) => values.reduce((a, b) => (b.value < a.value ? b : a));
 
     if (kind.mechanism === "bond-line") {
@@ -86,8 +87,44 @@ export function designMember(job: JobDocument): DesignResult {
       continue;
     }
 
+    if (kind.mechanism === "weld") {
+      // A continuous (or given intermittent) weld checked against the shear flow per line; the zoned intermittent schedule comes later.
+      const strengths = contexts.map((lines) => leastOf(lines.map((c) => kind.resistancePerLength(connector, c))));
+      const layout = kind.layout(connector);
+      const fraction = layout.pattern === "intermittent" && layout.segmentLength !== null && layout.pitch !== null ? layout.segmentLength / layout.pitch : 1;
+      const weldLimits = kind.detailing(connector, contexts[0]!.reduce((a, b) => (Math.min(b.members[0].thickness, b.members[1].thickness) < Math.min(a.members[0].thickness, a.members[1].thickness) ? b : a)));
+      let worst = { utilisation: 0, flow: 0, at: 0, combination: beam.results[0]?.combination.id ?? "" };
+      beam.results.forEach((r, i) => {
+        const v = maxAbsShear(r.actions, 0, beam.length);
+        const flow = (v.value * flowFactor) / lineCount;
+        const u = flow / (rows * strengths[i]!.value * fraction);
+        if (u > worst.utilisation) worst = { utilisation: u, flow, at: v.x, combination: r.combination.id };
+      });
+      strengths.forEach((s) => s.warnings?.forEach((w) => warnings.includes(w) || warnings.push(w)));
+      welds.push({
+        joint: joint.id,
+        connector: connector.id,
+        connectorLabel: kind.describe(connector),
+        fillets: rows,
+        lineCount,
+        pattern: layout.pattern,
+        segmentLength: layout.segmentLength,
+        pitch: layout.pitch,
+        resistance: strengths.map((s, i) => ({ combination: beam.results[i]!.combination.id, value: s.value, governing: s.governing, reference: s.reference, steps: s.steps, modes: s.modes ?? [], warnings: s.warnings ?? [] })),
+        limits: weldLimits,
+        maxShearFlow: worst.flow,
+        at: worst.at,
+        combination: worst.combination,
+        utilisation: worst.utilisation,
+        passes: worst.utilisation <= 1 + 1e-9,
+        shearFlow: stations.map((s) => (Math.max(...beam.results.map((r) => Math.abs(shearAt(r.actions, s.x, s.side)))) * flowFactor) / lineCount),
+      });
+      continue;
+    }
+
     const resistances = contexts.map((lines) => leastOf(lines.map((c) => kind.resistance(connector, c))));
-    const limits = kind.detailing(connector);
+    resistances.forEach((r) => r.warnings?.forEach((w) => warnings.includes(w) || warnings.push(w)));
+    const limits = governingLimits(contexts[0]!.map((c) => kind.detailing(connector, c)));
     const defaults = spacingDefaults(job.units);
     const coreDefault = (v: number) => toCore(v, "length", job.units);
     const minSpacing = Math.max(limits.minSpacing, job.spacing.minimum ?? 0);
@@ -127,7 +164,7 @@ export function designMember(job: JobDocument): DesignResult {
       connectorLabel: label,
       rows,
       lineCount,
-      resistance: resistances.map((r, i) => ({ combination: beam.results[i]!.combination.id, value: r.value, governing: r.governing, reference: r.reference, steps: r.steps })),
+      resistance: resistances.map((r, i) => ({ combination: beam.results[i]!.combination.id, value: r.value, governing: r.governing, reference: r.reference, steps: r.steps, modes: r.modes ?? [], slip: r.slip ?? null, warnings: r.warnings ?? [] })),
       limits: {
         minSpacing,
         maxSpacing,
@@ -135,6 +172,9 @@ export function designMember(job: JobDocument): DesignResult {
         module,
         preferred: job.spacing.preferred ?? null,
         minZoneLength,
+        edgeDistance: limits.edgeDistance ?? null,
+        rowSpacing: limits.rowSpacing ?? null,
+        penetration: limits.penetration ?? null,
         sources,
       },
       zones: design.zones,
@@ -173,6 +213,7 @@ export function designMember(job: JobDocument): DesignResult {
   const failures = [
     ...schedules.filter((s) => !s.passes).map((s) => `Joint ${s.joint}: ${s.infeasible ? "no spacing within the limits carries the shear flow" : "a row is over-utilised"} (utilisation ${s.verification.maxUtilisation.toFixed(2)}).`),
     ...bondLines.filter((b) => !b.passes).map((b) => `Bond line ${b.joint}: stress exceeds the strength (utilisation ${b.utilisation.toFixed(2)}).`),
+    ...welds.filter((w) => !w.passes).map((w) => `Weld ${w.joint}: shear flow exceeds the weld's resistance (utilisation ${w.utilisation.toFixed(2)}).`),
     ...checks.filter((c) => !c.passes).map((c) => `${c.title}: utilisation ${c.utilisation.toFixed(2)}.`),
   ];
 
@@ -195,11 +236,12 @@ export function designMember(job: JobDocument): DesignResult {
     beam: beamResult(beam, stations),
     schedules,
     bondLines,
+    welds,
     checks,
     notChecked,
     assumptions: [...baseAssumptions(job), ...assumptions],
     standards: [
-      "No design standard's resistance model is applied in this version: connector resistances and material strengths are the values given in the job, on its stated basis.",
+      "Connector resistances are the values given in the job or computed by the standards listed below; material strengths are the values given in the job, on its stated basis.",
       "Shear flow q = V·Q/I and stresses by elastic beam theory (mechanics of materials, e.g. Gere & Goodno, Mechanics of Materials, ch. 5).",
       ...standards,
     ],
@@ -207,7 +249,7 @@ export function designMember(job: JobDocument): DesignResult {
   };
 }
 
-function jointsOf(job: JobDocument, section: SectionModel, contacts: ReturnType<typeof findContacts>) {
+export function jointsOf(job: JobDocument, section: SectionModel, contacts: ReturnType<typeof findContacts>) {
   const connectors = new Map(job.connectors.map((c) => [c.id, c]));
   const custom = job.fastening.joints.map((j) => ({ joint: jointForHeldGroup(section, contacts, j.held), connector: connectors.get(j.connector)!, rows: j.rows, headSide: j.headSide }));
   const claimed = new Set(custom.flatMap((c) => c.joint.lines.map(lineKey)));
@@ -220,7 +262,7 @@ function jointsOf(job: JobDocument, section: SectionModel, contacts: ReturnType<
 const lineKey = (l: { a: string; b: string; level: number }) => `${l.a}|${l.b}|${l.level}`;
 
 /** Context of a connector at one contact line of a joint, for one combination. */
-function contextFor(combination: Combination, basis: JobDocument["basis"], joint: JointPlane, line: ContactLine, headSide: "auto" | "held" | "other", section: SectionModel): ConnectorContext {
+export function contextFor(combination: Combination, job: Pick<JobDocument, "basis" | "units">, joint: JointPlane, line: ContactLine, headSide: "auto" | "held" | "other", rows: number, section: SectionModel): ConnectorContext {
   const parts = new Map(section.parts.map((p) => [p.id, p]));
   const member = (id: string): JoinedMember => {
     const part = parts.get(id)!;
@@ -242,7 +284,9 @@ function contextFor(combination: Combination, basis: JobDocument["basis"], joint
     duration: combination.duration,
     categories: combination.categories,
     combinationName: combination.name,
-    basis,
+    basis: job.basis,
+    rows,
+    units: job.units,
     members: headIsHeld ? [inside, outside] : [outside, inside],
     adherends: [...materials.values()].map((m) => ({ material: m.name, shearStrength: m.strength.shear, rollingShear: m.strength.rollingShear })),
   };

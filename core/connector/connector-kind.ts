@@ -1,6 +1,6 @@
 import type { z } from "zod";
 import type { Material } from "../schema/job.js";
-import type { Quantity } from "../units/quantity.js";
+import type { Quantity, UnitSystem } from "../units/quantity.js";
 
 /** One line of the working behind a resistance, printed on the worksheet. */
 export interface WorkingStep {
@@ -34,10 +34,28 @@ export interface ConnectorContext {
   members: [JoinedMember, JoinedMember];
   /** Shear strengths of the materials the joint connects, where the job gives them, MPa. */
   adherends: { material: string; shearStrength: number | undefined; rollingShear: number | undefined }[];
+  /** Connectors per row across the contact line (fillets per line for a weld). */
+  rows: number;
+  /** The job's unit system, for messages a person reads (numbers in the context are in core units). */
+  units: UnitSystem;
 }
 
 export const durationClasses = ["permanent", "long", "medium", "short", "instantaneous", "unspecified"] as const;
 export type DurationClass = (typeof durationClasses)[number];
+
+/** Value of one failure mode or limit state, N per connector (N/mm for a weld). */
+export interface ModeValue {
+  mode: string;
+  value: number;
+  reference?: string;
+}
+
+/** Slip moduli of one connector per shear plane, N/mm: K_ser for serviceability, K_u for the ultimate limit state. */
+export interface SlipModuli {
+  serviceability: number;
+  ultimate: number;
+  reference: string;
+}
 
 /** Design resistance of one connector for one load combination, N. */
 export interface ConnectorResistance {
@@ -45,13 +63,26 @@ export interface ConnectorResistance {
   governing: string;
   reference: string;
   steps: WorkingStep[];
+  /** Every mode or limit state evaluated, on the same basis as `value`; the least is `value`. */
+  modes?: ModeValue[];
+  slip?: SlipModuli | null;
+  /** Conditions the value depends on that a reviewer must confirm. */
+  warnings?: string[];
 }
 
 /** Detailing limits along a connector line, mm. */
 export interface DetailingLimits {
+  /** Least spacing of rows along the line. */
   minSpacing: number;
   maxSpacing: number | null;
+  /** Least distance from a member end to the first row. */
   endDistance: number;
+  /** Least distance from a connector to the edge of a joined part across the line. */
+  edgeDistance?: number | null;
+  /** Least spacing between connectors of one row, across the line. */
+  rowSpacing?: number | null;
+  /** Penetration into the point-side member: least allowed and provided. */
+  penetration?: { required: number; provided: number } | null;
   sources: string[];
 }
 
@@ -63,6 +94,48 @@ export interface BondStrength {
   steps: WorkingStep[];
 }
 
+/** Design resistance of one weld line per unit length for one load combination, N/mm. */
+export interface WeldResistance {
+  value: number;
+  governing: string;
+  reference: string;
+  steps: WorkingStep[];
+  modes?: ModeValue[];
+  warnings?: string[];
+}
+
+/** Weld detailing limits, mm. */
+export interface WeldDetailing {
+  /** Leg size of the weld as specified. */
+  size: number;
+  minSize: number;
+  maxSize: number;
+  /** Shortest segment of an intermittent weld. */
+  minSegmentLength: number;
+  /** Largest centre-to-centre pitch of intermittent segments, where a standard sets one. */
+  maxPitch: number | null;
+  /** Largest clear gap between intermittent segments, where a standard sets one. */
+  maxGap: number | null;
+  sources: string[];
+}
+
+/** How a weld runs along its line: continuous, or segments of a length at a pitch. */
+export interface WeldLayout {
+  pattern: "continuous" | "intermittent";
+  segmentLength: number | null;
+  pitch: number | null;
+}
+
+/**
+ * Something wrong with a connector where it is used, found before designing. `on` says which field
+ * the message belongs to: the connector's own field, the fastening's (rows), or a field of one of the
+ * joined members' materials (index into `context.members`).
+ */
+export type PlacementProblem =
+  | { on: "connector"; field: string; message: string }
+  | { on: "fastening"; field: string; message: string }
+  | { on: "material"; member: 0 | 1; field: string; message: string };
+
 interface KindBase<C extends { kind: string }> {
   kind: C["kind"];
   /** Zod schema of the connector as it stands in the job document. */
@@ -71,13 +144,24 @@ interface KindBase<C extends { kind: string }> {
   describe(connector: C): string;
   standards(connector: C): string[];
   assumptions(connector: C): string[];
+  /**
+   * Problems of the connector at one contact line that make any result meaningless (penetration
+   * below the minimum, a bolt larger than the part, an unknown grade for the standard, a material
+   * property the method needs): the job is refused with these at their field paths.
+   */
+  problems?(connector: C, context: ConnectorContext): PlacementProblem[];
 }
 
 /** Connectors placed one by one along a line: nails, screws, bolts, rated fasteners. */
 export interface DiscreteConnectorKind<C extends { kind: string }> extends KindBase<C> {
   mechanism: "discrete";
   resistance(connector: C, context: ConnectorContext): ConnectorResistance;
-  detailing(connector: C): DetailingLimits;
+  /**
+   * Spacing limits at one contact line. Without a context (checks made before the section is built)
+   * a kind returns only limits that need no joined parts; a kind computed from the parts returns
+   * zero minima and no maximum then.
+   */
+  detailing(connector: C, context?: ConnectorContext): DetailingLimits;
 }
 
 /** A continuous bond line checked by its shear stress. */
@@ -86,4 +170,32 @@ export interface BondLineKind<C extends { kind: string }> extends KindBase<C> {
   shearStrength(connector: C, context: ConnectorContext): BondStrength;
 }
 
-export type ConnectorKind<C extends { kind: string }> = DiscreteConnectorKind<C> | BondLineKind<C>;
+/** A weld along the contact line, checked by its resistance per unit length against the shear flow. */
+export interface WeldKind<C extends { kind: string }> extends KindBase<C> {
+  mechanism: "weld";
+  /** Resistance of one weld line (one fillet) per unit of weld length, N/mm. */
+  resistancePerLength(connector: C, context: ConnectorContext): WeldResistance;
+  detailing(connector: C, context: ConnectorContext): WeldDetailing;
+  layout(connector: C): WeldLayout;
+}
+
+export type ConnectorKind<C extends { kind: string }> = DiscreteConnectorKind<C> | BondLineKind<C> | WeldKind<C>;
+
+/** The most restrictive of several lines' limits: largest minima, smallest maxima, every source once. */
+export function governingLimits(limits: DetailingLimits[]): DetailingLimits {
+  const largest = (pick: (l: DetailingLimits) => number | null | undefined) => {
+    const values = limits.map(pick).filter((v): v is number => typeof v === "number");
+    return values.length > 0 ? Math.max(...values) : null;
+  };
+  const maxima = limits.map((l) => l.maxSpacing).filter((v): v is number => v !== null);
+  const penetrations = limits.map((l) => l.penetration).filter((p): p is { required: number; provided: number } => !!p);
+  return {
+    minSpacing: largest((l) => l.minSpacing) ?? 0,
+    maxSpacing: maxima.length > 0 ? Math.min(...maxima) : null,
+    endDistance: largest((l) => l.endDistance) ?? 0,
+    edgeDistance: largest((l) => l.edgeDistance),
+    rowSpacing: largest((l) => l.rowSpacing),
+    penetration: penetrations.length > 0 ? penetrations.reduce((a, b) => (b.provided - b.required < a.provided - a.required ? b : a)) : null,
+    sources: [...new Set(limits.flatMap((l) => l.sources))],
+  };
+}

@@ -98,7 +98,7 @@ export const JointResult = z.object({
   stressFactor: q("perArea"),
   connector: z.string(),
   connectorLabel: z.string(),
-  mechanism: z.enum(["discrete", "bond-line"]),
+  mechanism: z.enum(["discrete", "bond-line", "weld"]),
   rows: z.number().int(),
   sharing: z.string(),
 });
@@ -153,6 +153,12 @@ export const ConnectorResistanceResult = z.object({
   governing: z.string(),
   reference: z.string(),
   steps: z.array(WorkingLine),
+  /** Every failure mode or limit state evaluated, on the same basis as `value`. */
+  modes: z.array(z.object({ mode: z.string(), value: q("connectorForce"), reference: z.string().optional() })).optional(),
+  /** Slip moduli per connector and shear plane, where the method gives them (EN 1995-1-1 Table 7.1, or the user's rating). */
+  slip: z.object({ serviceability: q("slipModulus"), ultimate: q("slipModulus"), reference: z.string() }).nullable().optional(),
+  /** Conditions the value depends on that a reviewer must confirm. */
+  warnings: z.array(z.string()).optional(),
 });
 
 export const Zone = z.object({
@@ -186,6 +192,12 @@ export const Schedule = z.object({
     module: q("length").nullable(),
     preferred: z.array(q("length")).nullable(),
     minZoneLength: q("length"),
+    /** Least distance from a connector to an edge of a joined part, across the line. */
+    edgeDistance: q("length").nullable().optional(),
+    /** Least spacing of the connectors of one row, across the line. */
+    rowSpacing: q("length").nullable().optional(),
+    /** Penetration into the point-side member: least allowed and provided. */
+    penetration: z.object({ required: q("length"), provided: q("length") }).nullable().optional(),
     sources: z.array(z.string()),
   }),
   zones: z.array(Zone),
@@ -223,6 +235,49 @@ export const Schedule = z.object({
   requiredSpacing: z.array(q("length").nullable()),
 });
 export type Schedule = z.infer<typeof Schedule>;
+
+/** A weld joint: the continuous (or given intermittent) weld checked against the shear flow per line. */
+export const WeldResult = z.object({
+  joint: z.string(),
+  connector: z.string(),
+  connectorLabel: z.string(),
+  /** Fillets per contact line (both sides of a web: 2). */
+  fillets: z.number().int(),
+  lineCount: z.number().int(),
+  pattern: z.enum(["continuous", "intermittent"]),
+  segmentLength: q("length").nullable(),
+  pitch: q("length").nullable(),
+  /** Resistance of one fillet per unit length of weld, per combination. */
+  resistance: z.array(
+    z.object({
+      combination: z.string(),
+      value: q("shearFlow"),
+      governing: z.string(),
+      reference: z.string(),
+      steps: z.array(WorkingLine),
+      modes: z.array(z.object({ mode: z.string(), value: q("shearFlow"), reference: z.string().optional() })).optional(),
+      warnings: z.array(z.string()).optional(),
+    }),
+  ),
+  limits: z.object({
+    size: q("length"),
+    minSize: q("length"),
+    maxSize: q("length"),
+    minSegmentLength: q("length"),
+    maxPitch: q("length").nullable(),
+    maxGap: q("length").nullable(),
+    sources: z.array(z.string()),
+  }),
+  /** Largest shear flow per line over the member and where, and the utilisation q/(fillets × R × segment/pitch). */
+  maxShearFlow: q("shearFlow"),
+  at: q("span"),
+  combination: z.string(),
+  utilisation: z.number(),
+  passes: z.boolean(),
+  /** Envelope of shear flow per line at the beam stations. */
+  shearFlow: z.array(q("shearFlow")),
+});
+export type WeldResult = z.infer<typeof WeldResult>;
 
 export const BondLineResult = z.object({
   joint: z.string(),
@@ -271,6 +326,7 @@ export const DesignResult = z.object({
   beam: BeamResult,
   schedules: z.array(Schedule),
   bondLines: z.array(BondLineResult),
+  welds: z.array(WeldResult).default([]),
   checks: z.array(MemberCheck),
   notChecked: z.array(z.string()),
   assumptions: z.array(z.string()),

@@ -1,0 +1,70 @@
+import { contextFor, jointsOf } from "../design-member.js";
+import type { JobDocument } from "../schema/job.js";
+import type { JobIssue } from "../schema/job-issues.js";
+import type { Combination } from "../schema/result.js";
+import { findContacts } from "../section/contacts.js";
+import { buildSection, positioned } from "../section/section-model.js";
+import { allowedSpacings } from "../spacing/allowed-spacings.js";
+import { spacingDefaults } from "../spacing/spacing-defaults.js";
+import { toCore } from "../units/quantity.js";
+import { governingLimits, type ConnectorContext } from "./connector-kind.js";
+import { inJobUnits } from "./quantity-text.js";
+import { kindOf } from "./registry.js";
+
+/** Placement does not depend on the load combination; kinds are given a neutral one. */
+const PLACEMENT: Combination = { id: "placement", name: "placement check", factors: {}, duration: "unspecified", categories: [] };
+
+/**
+ * Problems of the connectors where the job places them, found from the section in core units: a
+ * penetration below the minimum, a bolt larger than the part, a weld larger than the thinner part
+ * allows, a grade or size the standard does not know, a material property the method needs, and
+ * spacing limits that leave no spacing to choose. Each issue names the field it belongs to; numbers
+ * are written in the job's units.
+ */
+export function checkConnectorPlacement(job: JobDocument): JobIssue[] {
+  const section = buildSection(positioned(job.parts), job.materials);
+  const contacts = findContacts(section);
+  const joints = jointsOf(job, section, contacts);
+  const issues: JobIssue[] = [];
+  const seen = new Set<string>();
+  const add = (path: string, message: string) => {
+    const key = `${path}\u0000${message}`;
+    if (!seen.has(key)) {
+      seen.add(key);
+      issues.push({ path, message });
+    }
+  };
+  const connectorIndex = new Map(job.connectors.map((c, i) => [c.id, i]));
+  const materialIndex = new Map(job.materials.map((m, i) => [m.id, i]));
+
+  joints.forEach(({ joint, connector, rows, headSide }, k) => {
+    const kind = kindOf(connector);
+    const i = connectorIndex.get(connector.id)!;
+    // jointsOf lists the joints named in fastening.joints first, in order, then those found for the default.
+    const fastening = k < job.fastening.joints.length ? `fastening.joints[${k}]` : "fastening.default";
+    const contexts: ConnectorContext[] = joint.lines.map((line) => contextFor(PLACEMENT, job, joint, line, headSide, rows, section));
+    for (const context of contexts) {
+      for (const p of kind.problems?.(connector, context) ?? []) {
+        const where = `(joint ${joint.id}, between "${context.members[0].part}" and "${context.members[1].part}")`;
+        if (p.on === "connector") add(`connectors[${i}].${p.field}`, `${p.message} ${where}`);
+        else if (p.on === "fastening") add(`${fastening}.${p.field}`, `${p.message} ${where}`);
+        else add(`materials[${materialIndex.get(context.members[p.member].material.id)!}].${p.field}`, `${p.message}, for connector "${connector.id}"`);
+      }
+    }
+    if (issues.length > 0 || kind.mechanism !== "discrete") return;
+    const limits = governingLimits(contexts.map((c) => kind.detailing(connector, c)));
+    const defaults = spacingDefaults(job.units);
+    const rules = job.spacing;
+    const min = Math.max(limits.minSpacing, rules.minimum ?? 0);
+    const max = Math.min(limits.maxSpacing ?? toCore(defaults.maxSpacing, "length", job.units), rules.maximum ?? Infinity);
+    const len = (mm: number) => inJobUnits(mm, "length", job.units);
+    if (min > max * (1 + 1e-9)) {
+      add(rules.maximum !== undefined ? "spacing.maximum" : `connectors[${i}]`, `connector "${connector.id}" needs a spacing of at least ${len(min)} (${limits.sources[0] ?? "its minimum"}) but at most ${len(max)} is allowed at joint ${joint.id}`);
+    } else if (
+      allowedSpacings({ module: rules.preferred ? null : rules.module ?? toCore(defaults.module, "length", job.units), preferred: rules.preferred ?? null, min, max }).length === 0
+    ) {
+      add(rules.preferred ? "spacing.preferred" : "spacing.module", `no spacing on this module or list lies between ${len(min)} and ${len(max)} for connector "${connector.id}" at joint ${joint.id}`);
+    }
+  });
+  return issues;
+}

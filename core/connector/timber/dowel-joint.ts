@@ -1,0 +1,422 @@
+import type { Material } from "../../schema/job.js";
+import type { ConnectorContext, ConnectorResistance, DetailingLimits, JoinedMember, ModeValue, PlacementProblem, SlipModuli, WorkingStep } from "../connector-kind.js";
+import { inJobUnits, MM_PER_IN, MPA_PER_PSI, N_PER_LBF } from "../quantity-text.js";
+import { ec5DurationOf, ec5Kmod, ec5SlipModulus, EC5_GAMMA_M_CONNECTIONS, jointMeanDensity, type Ec5Product, type ServiceClass } from "./ec5-factors.js";
+import { ec5BoltEmbedment, ec5NailEmbedment, type Ec5Wood, type Embedment } from "./ec5-embedment.js";
+import { johansenSteelCentral, johansenSteelSides, johansenSteelSingle, johansenTimberDouble, johansenTimberSingle, type JohansenResult, type RopeEffect } from "./ec5-johansen.js";
+import {
+  NDS_END_GRAIN_FACTOR,
+  NDS_KF_CONNECTIONS,
+  NDS_PHI_CONNECTIONS,
+  NDS_TOE_NAIL_FACTOR,
+  ndsGroupActionFactor,
+  ndsLoadDurationFactor,
+  ndsTemperatureFactor,
+  ndsTimeEffectFactor,
+  ndsWetServiceFactor,
+  type NdsMoisture,
+  type NdsTemperature,
+} from "./nds-adjustment.js";
+import { ndsSteelBearing, ndsWoodBearing, type NdsBearing } from "./nds-dowel-bearing.js";
+import { foldAngle, ndsYieldLimit } from "./nds-yield-limit.js";
+import { ec5Spacing, ndsSpacing, type DowelFamily, type MemberSpacing } from "./timber-spacing.js";
+
+export const timberStandards = ["NDS-2018", "EN1995-1-1"] as const;
+export type TimberStandard = (typeof timberStandards)[number];
+
+/** Everything the yield models need about one dowel-type fastener, in core units (mm, MPa, N). */
+export interface DowelSpec {
+  family: DowelFamily;
+  /** "nail", "wood screw", "lag screw", "bolt", "dowel": for messages. */
+  noun: string;
+  standard: TimberStandard;
+  /** Nominal (shank or outer thread) diameter: spacings, holes, fit. */
+  diameter: number;
+  /** Diameter in the yield model: the root diameter where threads lie in the shear plane (NDS), d_ef = 1.1 × inner diameter for screws (EC5). */
+  yieldDiameter: number;
+  yieldDiameterNote: string | null;
+  /** Overall length of a fastener driven from one side; null for through-fasteners (bolts, dowels). */
+  length: number | null;
+  /** Part of the length not counted in the penetration (tapered tip). */
+  tipLength: number;
+  shear: "single" | "double";
+  predrilled: boolean;
+  /** Least penetration into the point-side member, as a multiple of the diameter, and its source. */
+  minPenetration: { multiple: number; source: string } | null;
+  /** Angle between load (along the member) and grain in the head-side and point-side members, degrees. */
+  angles: { side: number; main: number };
+  /** Fastener bending yield strength F_yb (NDS), MPa. */
+  bendingYield: { value: number; source: string };
+  nds: { moisture: NdsMoisture; temperature: NdsTemperature; endGrain: boolean; toeNailed: boolean };
+  ec5: {
+    serviceClass: ServiceClass;
+    panel: "plywood" | "osb2" | "osb3";
+    /** M_y,Rk, N·mm. */
+    yieldMoment: { value: number; source: string };
+    rope: RopeEffect;
+    ropeNote: string;
+    /** Nail embedment rules (eq. 8.15–8.22) rather than the bolt rules (eq. 8.31–8.37). */
+    nailEmbedment: boolean;
+  };
+  groupAction: { fasteners: number; spacing: number } | null;
+}
+
+const isSteel = (m: Material) => m.family === "steel";
+const isPanel = (m: Material) => m.family === "panel";
+
+/** Bearing lengths of the fastener in the two members at the contact line, mm. */
+export function dowelGeometry(spec: DowelSpec, context: ConnectorContext) {
+  const [head, point] = context.members;
+  const ts = head.thickness;
+  const tm = point.thickness;
+  if (spec.length === null) {
+    return { sideLength: ts, mainLength: tm, penetration: null as number | null, through: false, penetratedMember: point };
+  }
+  if (spec.shear === "single") {
+    const penetration = spec.length - ts - spec.tipLength;
+    return { sideLength: ts, mainLength: Math.min(Math.max(penetration, 0), tm), penetration, through: penetration > tm, penetratedMember: point };
+  }
+  // Double shear with a driven fastener: through the head member and the main member into a far side member of the head member's thickness.
+  const penetration = spec.length - ts - tm - spec.tipLength;
+  return { sideLength: Math.min(ts, Math.max(penetration, 0)), mainLength: tm, penetration, through: penetration > ts, penetratedMember: head };
+}
+
+export function dowelProblems(spec: DowelSpec, context: ConnectorContext): PlacementProblem[] {
+  const out: PlacementProblem[] = [];
+  const u = context.units;
+  const len = (mm: number) => inJobUnits(mm, "length", u);
+  const members = context.members;
+  if (spec.standard === "EN1995-1-1" && context.basis === "allowable") {
+    out.push({ on: "connector", field: "standard", message: `EN 1995-1-1 gives design values for factored loads, but the job's basis is "allowable": set basis to "factored" or use the NDS-2018` });
+  }
+  if (members.every((m) => isSteel(m.material))) {
+    out.push({ on: "connector", field: "kind", message: `both parts at this joint (${members.map((m) => `"${m.part}"`).join(", ")}) are steel: use a steel-bolt (AISC 360 or EN 1993-1-8) or a fillet-weld` });
+    return out;
+  }
+  members.forEach((m, i) => {
+    const member = i as 0 | 1;
+    if (isSteel(m.material)) {
+      if (spec.standard === "NDS-2018" && m.material.tensileStrength === undefined) out.push({ on: "material", member, field: "tensileStrength", message: `is needed for the dowel bearing strength of steel part "${m.part}" (NDS-2018 §12.3.3: F_e = 1.5 F_u or 1.375 F_u)` });
+      return;
+    }
+    if (spec.standard === "NDS-2018" && m.material.specificGravity === undefined) out.push({ on: "material", member, field: "specificGravity", message: `is needed for the dowel bearing strength of part "${m.part}" under the NDS-2018 (§12.3.3, from the specific gravity G)` });
+    if (spec.standard === "EN1995-1-1" && m.material.characteristicDensity === undefined && !(isPanel(m.material) && spec.ec5.panel !== "plywood")) {
+      out.push({ on: "material", member, field: "characteristicDensity", message: `is needed for the embedment strength of part "${m.part}" under EN 1995-1-1 (§8.3.1, §8.5.1: from ρ_k)` });
+    }
+  });
+  if (spec.standard === "NDS-2018" && spec.yieldDiameter > MM_PER_IN + 1e-9) {
+    out.push({ on: "connector", field: "diameter", message: `${len(spec.diameter)} is beyond the NDS-2018 yield limit equations, which cover diameters up to 1 in (§12.3.3)` });
+  }
+  const geometry = dowelGeometry(spec, context);
+  if (geometry.penetration !== null) {
+    const where = spec.shear === "single" ? `part "${members[1].part}"` : `the far side member (taken as thick as "${members[0].part}")`;
+    if (geometry.penetration <= 0) {
+      out.push({ on: "connector", field: "length", message: `a ${len(spec.length!)} ${spec.noun} does not reach ${where}: it must be longer than ${len(spec.length! - geometry.penetration)}` });
+    } else if (spec.minPenetration && geometry.penetration < spec.minPenetration.multiple * spec.diameter - 1e-9) {
+      out.push({
+        on: "connector",
+        field: "length",
+        message: `penetration ${len(geometry.penetration)} into ${where} is below the minimum ${spec.minPenetration.multiple}d = ${len(spec.minPenetration.multiple * spec.diameter)} (${spec.minPenetration.source}); use a ${spec.noun} at least ${len(spec.length! - geometry.penetration + spec.minPenetration.multiple * spec.diameter)} long`,
+      });
+    }
+  }
+  for (const m of members) {
+    if (spec.diameter >= m.width - 1e-9) out.push({ on: "connector", field: "diameter", message: `a ${len(spec.diameter)} ${spec.noun} is as large as part "${m.part}" is wide (${len(m.width)}) across the contact line` });
+  }
+  if (spec.standard === "EN1995-1-1" && spec.family === "nail" && !spec.predrilled) {
+    if (spec.diameter > 6 + 1e-9) out.push({ on: "connector", field: "predrilled", message: `nails over 6 mm in diameter must be predrilled (EN 1995-1-1 §8.3.1.2(2), as amended by A1)` });
+    for (const m of members) {
+      if (isSteel(m.material) || isPanel(m.material)) continue;
+      const rho = m.material.characteristicDensity;
+      if (rho !== undefined && rho > 500) out.push({ on: "connector", field: "predrilled", message: `part "${m.part}" has ρ_k = ${rho} kg/m³ > 500: nails must be predrilled (EN 1995-1-1 §8.3.1.2(2))` });
+      if (rho !== undefined) {
+        const d = spec.diameter;
+        const tMin = Math.max(7 * d, ((13 * d - 30) * rho) / 400);
+        const thickness = m === members[0] ? geometry.sideLength : m.thickness;
+        if (thickness < tMin - 1e-9) out.push({ on: "connector", field: "predrilled", message: `part "${m.part}" is ${len(thickness)} thick; without predrilling EN 1995-1-1 eq. (8.18) needs at least ${len(tMin)}: predrill or use a thicker part` });
+      }
+    }
+  }
+  if (spec.standard === "EN1995-1-1") {
+    for (const m of members) {
+      if (isPanel(m.material) && ec5Kmod(spec.ec5.panel, spec.ec5.serviceClass, "permanent") === null) {
+        out.push({ on: "connector", field: "serviceClass", message: `${spec.ec5.panel === "osb2" ? "OSB/2" : "OSB/3"} (part "${m.part}") may not be used in service class ${spec.ec5.serviceClass} (EN 1995-1-1 Table 3.1)` });
+      }
+    }
+  }
+  return out;
+}
+
+export function dowelResistance(spec: DowelSpec, context: ConnectorContext): ConnectorResistance {
+  return spec.standard === "NDS-2018" ? ndsResistance(spec, context) : ec5Resistance(spec, context);
+}
+
+function ndsResistance(spec: DowelSpec, context: ConnectorContext): ConnectorResistance {
+  const [head, point] = context.members;
+  const g = dowelGeometry(spec, context);
+  const D = spec.yieldDiameter / MM_PER_IN;
+  const bearing = (m: JoinedMember, angle: number): NdsBearing =>
+    isSteel(m.material) ? ndsSteelBearing(m.material.tensileStrength! / MPA_PER_PSI, m.thickness / MM_PER_IN) : ndsWoodBearing(m.material.specificGravity!, D, angle);
+  const Fes = bearing(head, spec.angles.side);
+  const Fem = bearing(point, spec.angles.main);
+  const maxAngle = Math.max(isSteel(head.material) ? 0 : foldAngle(spec.angles.side), isSteel(point.material) ? 0 : foldAngle(spec.angles.main));
+  const yieldLimit = ndsYieldLimit({
+    diameterIn: D,
+    bendingYieldPsi: spec.bendingYield.value / MPA_PER_PSI,
+    sideLengthIn: g.sideLength / MM_PER_IN,
+    mainLengthIn: g.mainLength / MM_PER_IN,
+    sideBearingPsi: Fes.value,
+    mainBearingPsi: Fem.value,
+    shear: spec.shear,
+    maxAngleDeg: maxAngle,
+  });
+  const lb = (x: number) => x * N_PER_LBF;
+  const psi = (x: number) => x * MPA_PER_PSI;
+  const table = spec.shear === "single" ? "NDS-2018 Table 12.3.1A (single shear)" : "NDS-2018 Table 12.3.1A (double shear)";
+  const steps: WorkingStep[] = [
+    { symbol: "D", description: `diameter in the yield model${spec.yieldDiameterNote ? ` (${spec.yieldDiameterNote})` : ""}`, value: spec.yieldDiameter, quantity: "length" },
+    { symbol: "ℓ_s", description: `dowel bearing length in the side member "${head.part}"`, value: g.sideLength, quantity: "length" },
+    { symbol: "ℓ_m", description: `dowel bearing length in the main member "${point.part}"${g.penetration !== null && spec.shear === "single" ? " (penetration, at most the member's thickness)" : ""}`, value: g.mainLength, quantity: "length" },
+    { symbol: "F_es", description: `dowel bearing strength, side member: ${Fes.formula}`, value: psi(Fes.value), quantity: "stress", reference: "NDS-2018 §12.3.3" },
+    { symbol: "F_em", description: `dowel bearing strength, main member: ${Fem.formula}`, value: psi(Fem.value), quantity: "stress", reference: "NDS-2018 §12.3.3" },
+    { symbol: "F_yb", description: `dowel bending yield strength (${spec.bendingYield.source})`, value: spec.bendingYield.value, quantity: "stress" },
+    { symbol: "R_e", description: "F_em/F_es", value: yieldLimit.Re, quantity: "ratio" },
+    { symbol: "R_t", description: "ℓ_m/ℓ_s", value: yieldLimit.Rt, quantity: "ratio" },
+  ];
+  if (yieldLimit.k1 !== null) steps.push({ symbol: "k₁", description: "mode II coefficient", value: yieldLimit.k1, quantity: "ratio", reference: table });
+  if (yieldLimit.k2 !== null) steps.push({ symbol: "k₂", description: "mode IIIm coefficient", value: yieldLimit.k2, quantity: "ratio", reference: table });
+  steps.push({ symbol: "k₃", description: "mode IIIs coefficient", value: yieldLimit.k3, quantity: "ratio", reference: table });
+  for (const m of yieldLimit.modes) steps.push({ symbol: `Z_${m.mode}`, description: `mode ${m.mode}, R_d = ${round(m.rd)}`, value: lb(m.zLb), quantity: "connectorForce", reference: `${table}; R_d Table 12.3.1B` });
+  const Z = lb(yieldLimit.governing.zLb);
+  steps.push({ symbol: "Z", description: `reference lateral design value (mode ${yieldLimit.governing.mode} governs)`, value: Z, quantity: "connectorForce", reference: table });
+
+  const factors: { symbol: string; value: number; description: string; reference: string }[] = [];
+  const allowable = context.basis === "allowable";
+  if (allowable) {
+    const CD = ndsLoadDurationFactor(context.categories, context.duration);
+    factors.push({ symbol: "C_D", value: CD.value, description: `load duration factor (${CD.load}; at most 1.6 for connections)`, reference: "NDS-2018 §2.3.2, §11.3.2" });
+  }
+  factors.push({ symbol: "C_M", value: ndsWetServiceFactor(spec.nds.moisture, D), description: `wet service factor (${spec.nds.moisture})`, reference: "NDS-2018 Table 11.3.3" });
+  factors.push({ symbol: "C_t", value: ndsTemperatureFactor(spec.nds.temperature, spec.nds.moisture), description: `temperature factor (${spec.nds.temperature})`, reference: "NDS-2018 Table 11.3.4" });
+  if (spec.groupAction && D >= 0.25) {
+    const area = (m: JoinedMember) => (m.thickness * m.width) / MM_PER_IN ** 2;
+    const E = (m: JoinedMember) => m.material.E / MPA_PER_PSI;
+    const cg = ndsGroupActionFactor({
+      fasteners: spec.groupAction.fasteners,
+      spacingIn: spec.groupAction.spacing / MM_PER_IN,
+      diameterIn: D,
+      mainStiffnessLb: E(point) * area(point),
+      sideStiffnessLb: E(head) * area(head),
+      woodToMetal: isSteel(head.material) || isSteel(point.material),
+    });
+    factors.push({ symbol: "C_g", value: cg.value, description: `group action factor, ${spec.groupAction.fasteners} in a row (γ = ${round(cg.gamma)} lb/in, u = ${round(cg.u)}, m = ${round(cg.m)}, R_EA = ${round(cg.REA)})`, reference: "NDS-2018 §11.3.6 eq. (11.3-1)" });
+  } else {
+    factors.push({ symbol: "C_g", value: 1, description: spec.groupAction ? "group action factor: 1.0 for D < 1/4 in" : "group action factor: 1.0 (each row carries its own tributary shear flow)", reference: "NDS-2018 §11.3.6" });
+  }
+  if (spec.nds.endGrain) factors.push({ symbol: "C_eg", value: NDS_END_GRAIN_FACTOR, description: "end grain factor", reference: "NDS-2018 §12.5.2" });
+  if (spec.nds.toeNailed) factors.push({ symbol: "C_tn", value: NDS_TOE_NAIL_FACTOR, description: "toe-nail factor", reference: "NDS-2018 §12.5.4" });
+  if (!allowable) {
+    const lambda = ndsTimeEffectFactor(context.categories);
+    factors.push({ symbol: "K_F", value: NDS_KF_CONNECTIONS, description: "LRFD format conversion factor", reference: "NDS-2018 Table 11.3.1" });
+    factors.push({ symbol: "φ_z", value: NDS_PHI_CONNECTIONS, description: "LRFD resistance factor, connections", reference: "NDS-2018 Table 11.3.1" });
+    factors.push({ symbol: "λ", value: lambda.value, description: `time effect factor (${lambda.load})`, reference: "NDS-2018 Table N3" });
+  }
+  for (const f of factors) steps.push({ symbol: f.symbol, description: f.description, value: f.value, quantity: "ratio", reference: f.reference });
+  const product = factors.reduce((p, f) => p * f.value, 1);
+  const perLine = spec.shear === "double" ? 0.5 : 1;
+  const value = Z * product * perLine;
+  const name = allowable ? "Z′ (ASD)" : "Z′ (LRFD)";
+  steps.push({ symbol: "Z′", description: `adjusted lateral design value, ${allowable ? "allowable (ASD)" : "factored (LRFD)"}: Z × ${factors.map((f) => f.symbol).join(" × ")}`, value: Z * product, quantity: "connectorForce", reference: "NDS-2018 Table 11.3.1" });
+  if (perLine !== 1) steps.push({ symbol: "Z′/2", description: "per contact line: the fastener in double shear serves the two contact lines of the joint", value, quantity: "connectorForce" });
+  const modes: ModeValue[] = yieldLimit.modes.map((m) => ({ mode: `mode ${m.mode}`, value: lb(m.zLb) * product * perLine, reference: table }));
+  return {
+    value,
+    governing: `mode ${yieldLimit.governing.mode}`,
+    reference: `${table}, ${name}`,
+    steps,
+    modes,
+    slip: null,
+    warnings: dowelWarnings(spec, context),
+  };
+}
+
+function woodOf(m: Material, spec: DowelSpec): Ec5Wood {
+  if (isPanel(m)) return spec.ec5.panel === "plywood" ? "plywood" : "osb";
+  if (m.family === "engineered-wood") return "lvl";
+  return (m.characteristicDensity ?? 0) > 500 ? "hardwood" : "softwood";
+}
+
+function productOf(m: Material, spec: DowelSpec): Ec5Product {
+  return isPanel(m) ? spec.ec5.panel : "solid";
+}
+
+function ec5Embedment(spec: DowelSpec, m: JoinedMember, angle: number): Embedment {
+  const wood = woodOf(m.material, spec);
+  const rho = m.material.characteristicDensity ?? 0;
+  const d = spec.yieldDiameter;
+  const nailRules = spec.ec5.nailEmbedment && d <= 8;
+  return nailRules
+    ? ec5NailEmbedment({ wood, characteristicDensity: rho, diameter: d, predrilled: spec.predrilled, thickness: m.thickness })
+    : ec5BoltEmbedment({ wood, characteristicDensity: rho, diameter: d, angleDeg: foldAngle(angle), thickness: m.thickness });
+}
+
+function ec5Resistance(spec: DowelSpec, context: ConnectorContext): ConnectorResistance {
+  const [head, point] = context.members;
+  const g = dowelGeometry(spec, context);
+  const d = spec.yieldDiameter;
+  const My = spec.ec5.yieldMoment.value;
+  const steps: WorkingStep[] = [
+    { symbol: "d", description: `diameter in the yield model${spec.yieldDiameterNote ? ` (${spec.yieldDiameterNote})` : ""}`, value: d, quantity: "length" },
+    { symbol: "t₁", description: `head-side thickness, "${head.part}"${spec.shear === "double" && g.penetration !== null ? " (or the point-side penetration if less)" : ""}`, value: g.sideLength, quantity: "length" },
+    { symbol: "t₂", description: `${spec.shear === "single" ? "point-side penetration or thickness" : "central member thickness"}, "${point.part}"`, value: g.mainLength, quantity: "length" },
+    { symbol: "M_y,Rk", description: `yield moment, N·mm (${spec.ec5.yieldMoment.source})`, value: My, quantity: "ratio", reference: "EN 1995-1-1 eq. (8.14), (8.30)" },
+  ];
+  let johansen: JohansenResult;
+  let reference: string;
+  const steelHead = isSteel(head.material);
+  const steelPoint = isSteel(point.material);
+  if (steelHead || steelPoint) {
+    const timber = steelHead ? point : head;
+    const plate = steelHead ? head : point;
+    const fh = ec5Embedment(spec, timber, steelHead ? spec.angles.main : spec.angles.side);
+    steps.push({ symbol: "f_h,k", description: `embedment strength of "${timber.part}": ${fh.formula}`, value: fh.value, quantity: "stress", reference: fh.reference });
+    steps.push({ symbol: "t_plate", description: `steel plate "${plate.part}" (thin ≤ 0.5d, thick ≥ d)`, value: plate.thickness, quantity: "length" });
+    const t = steelHead ? g.mainLength : g.sideLength;
+    const input = { fh: fh.value, t, d, My, rope: spec.ec5.rope, plateThickness: plate.thickness };
+    if (spec.shear === "single") {
+      johansen = johansenSteelSingle(input);
+      reference = "EN 1995-1-1 eq. (8.9), (8.10)";
+    } else if (steelPoint) {
+      johansen = johansenSteelCentral(input);
+      reference = "EN 1995-1-1 eq. (8.11)";
+    } else {
+      johansen = johansenSteelSides(input);
+      reference = "EN 1995-1-1 eq. (8.12), (8.13)";
+    }
+  } else {
+    const fh1 = ec5Embedment(spec, head, spec.angles.side);
+    const fh2 = ec5Embedment(spec, point, spec.angles.main);
+    steps.push({ symbol: "f_h,1,k", description: `embedment strength of "${head.part}": ${fh1.formula}`, value: fh1.value, quantity: "stress", reference: fh1.reference });
+    steps.push({ symbol: "f_h,2,k", description: `embedment strength of "${point.part}": ${fh2.formula}`, value: fh2.value, quantity: "stress", reference: fh2.reference });
+    steps.push({ symbol: "β", description: "f_h,2,k/f_h,1,k", value: fh2.value / fh1.value, quantity: "ratio" });
+    const input = { fh1: fh1.value, fh2: fh2.value, t1: g.sideLength, t2: g.mainLength, d, My, rope: spec.ec5.rope };
+    if (spec.shear === "single") {
+      johansen = johansenTimberSingle(input);
+      reference = "EN 1995-1-1 eq. (8.6)";
+    } else {
+      johansen = johansenTimberDouble(input);
+      reference = "EN 1995-1-1 eq. (8.7)";
+    }
+  }
+  steps.push({ symbol: "F_ax,Rk", description: `withdrawal capacity for the rope effect (${spec.ec5.ropeNote}); its share is capped at ${Math.round(spec.ec5.rope.cap * 100)} % of the Johansen part`, value: spec.ec5.rope.axialCapacity, quantity: "connectorForce", reference: "EN 1995-1-1 §8.2.2(2)" });
+  for (const m of johansen.modes) {
+    steps.push({ symbol: `F_v,Rk (${m.mode})`, description: `mode ${m.mode}: ${m.equation}${m.rope > 0 ? ` (rope effect ${round(m.rope)} N included)` : ""}`, value: m.value, quantity: "connectorForce", reference });
+  }
+  if (johansen.interpolation) steps.push({ symbol: "F_v,Rk", description: "plate between thin and thick: linear interpolation", value: johansen.value, quantity: "connectorForce", reference: "EN 1995-1-1 §8.2.3(1)" });
+  steps.push({ symbol: "F_v,Rk", description: `characteristic resistance per shear plane (mode ${johansen.governing.mode} governs)`, value: johansen.value, quantity: "connectorForce", reference });
+
+  const duration = ec5DurationOf(context.duration, context.categories);
+  const woodMembers = context.members.filter((m) => !isSteel(m.material));
+  const kmods = woodMembers.map((m) => ec5Kmod(productOf(m.material, spec), spec.ec5.serviceClass, duration.duration) ?? NaN);
+  const kmod = kmods.length === 2 ? Math.sqrt(kmods[0]! * kmods[1]!) : kmods[0]!;
+  steps.push({ symbol: "k_mod", description: `service class ${spec.ec5.serviceClass}, ${duration.why}${kmods.length === 2 && kmods[0] !== kmods[1] ? "; √(k_mod,1 k_mod,2) for members of different products" : ""}`, value: kmod, quantity: "ratio", reference: kmods.length === 2 && kmods[0] !== kmods[1] ? "EN 1995-1-1 Table 3.1, eq. (2.6)" : "EN 1995-1-1 Table 3.1" });
+  steps.push({ symbol: "γ_M", description: "partial factor for connections (recommended value)", value: EC5_GAMMA_M_CONNECTIONS, quantity: "ratio", reference: "EN 1995-1-1 Table 2.3" });
+  let factor = kmod / EC5_GAMMA_M_CONNECTIONS;
+  if (spec.groupAction) {
+    const nef = ec5EffectiveNumber(spec, spec.groupAction.fasteners, spec.groupAction.spacing);
+    steps.push({ symbol: "n_ef/n", description: `effective number in a row of ${spec.groupAction.fasteners} (${nef.formula})`, value: nef.ratio, quantity: "ratio", reference: nef.reference });
+    factor *= nef.ratio;
+  }
+  const value = johansen.value * factor;
+  steps.push({ symbol: "F_v,Rd", description: `design resistance per shear plane: k_mod F_v,Rk/γ_M${spec.groupAction ? " × n_ef/n" : ""}${spec.shear === "double" ? " (the fastener in double shear serves the two contact lines of the joint, one plane each)" : ""}`, value, quantity: "connectorForce", reference: "EN 1995-1-1 §2.4.3, eq. (2.17)" });
+  const slip = ec5Slip(spec, context);
+  if (slip) {
+    steps.push({ symbol: "K_ser", description: `slip modulus per shear plane: ${slip.formula}`, value: slip.serviceability, quantity: "slipModulus", reference: "EN 1995-1-1 Table 7.1" });
+    steps.push({ symbol: "K_u", description: "ultimate slip modulus, 2/3 K_ser", value: slip.ultimate, quantity: "slipModulus", reference: "EN 1995-1-1 eq. (2.1)" });
+  }
+  const modes: ModeValue[] = johansen.modes.map((m) => ({ mode: `mode ${m.mode}`, value: m.value * factor, reference }));
+  const warnings = dowelWarnings(spec, context);
+  return {
+    value,
+    governing: `mode ${johansen.governing.mode}`,
+    reference: `${reference}; F_v,Rd = k_mod F_v,Rk/γ_M`,
+    steps,
+    modes,
+    slip: slip ? { serviceability: slip.serviceability, ultimate: slip.ultimate, reference: "EN 1995-1-1 Table 7.1, eq. (2.1)" } : null,
+    warnings,
+  };
+}
+
+function ec5Slip(spec: DowelSpec, context: ConnectorContext): (SlipModuli & { formula: string }) | null {
+  const wood = context.members.filter((m) => !isSteel(m.material));
+  const densities = wood.map((m) => m.material.meanDensity);
+  if (densities.some((r) => r === undefined)) return null;
+  const rho = densities.length === 2 ? jointMeanDensity(densities[0]!, densities[1]!) : densities[0]!;
+  const k = ec5SlipModulus({ meanDensity: rho, diameter: spec.diameter, nailNotPredrilled: spec.family === "nail" && !spec.predrilled, steelToTimber: wood.length === 1 });
+  return { serviceability: k.serviceability, ultimate: k.ultimate, reference: "EN 1995-1-1 Table 7.1", formula: `${k.formula}, ρ_m = ${round(rho)} kg/m³` };
+}
+
+/** n_ef/n for a row along the grain: bolts and dowels eq. (8.34); nails eq. (8.17) with k_ef of Table 8.1. */
+function ec5EffectiveNumber(spec: DowelSpec, n: number, a1: number): { ratio: number; formula: string; reference: string } {
+  const d = spec.diameter;
+  if (spec.family === "bolt" || spec.family === "dowel" || spec.family === "lag-screw" || (spec.family === "screw" && d > 6)) {
+    const nef = Math.min(n, n ** 0.9 * (a1 / (13 * d)) ** 0.25);
+    return { ratio: nef / n, formula: "n_ef = min(n, n^0.9 (a₁/13d)^0.25)", reference: "EN 1995-1-1 eq. (8.34)" };
+  }
+  const points: [number, number][] = spec.predrilled ? [[4, 0.5], [7, 0.7], [10, 0.85], [14, 1]] : [[7, 0.7], [10, 0.85], [14, 1]];
+  const r = a1 / d;
+  let kef = points[0]![1];
+  if (r >= 14) kef = 1;
+  else for (let i = 0; i + 1 < points.length; i++) {
+    const [x0, y0] = points[i]!;
+    const [x1, y1] = points[i + 1]!;
+    if (r >= x0 && r <= x1) kef = y0 + ((y1 - y0) * (r - x0)) / (x1 - x0);
+  }
+  return { ratio: n ** kef / n, formula: `n_ef = n^k_ef, k_ef = ${round(kef)} at a₁ = ${round(r)}d`, reference: "EN 1995-1-1 eq. (8.17), Table 8.1" };
+}
+
+function dowelWarnings(spec: DowelSpec, context: ConnectorContext): string[] {
+  const out: string[] = [];
+  const g = dowelGeometry(spec, context);
+  const u = context.units;
+  if (g.through) {
+    out.push(`The ${spec.noun} point passes through part "${g.penetratedMember.part}" (penetration ${inJobUnits(g.penetration!, "length", u)}); only the part's thickness is counted and the protruding point is not credited.`);
+  }
+  const limits = dowelDetailing(spec, context);
+  for (const m of context.members) {
+    const need = 2 * (limits.edgeDistance ?? 0) + (context.rows - 1) * (limits.rowSpacing ?? 0);
+    if (!isSteel(m.material) && need > m.width + 1e-9) {
+      out.push(`${context.rows} ${spec.noun}${context.rows > 1 ? "s" : ""} per row need ${inJobUnits(need, "length", u)} across part "${m.part}" (edge distances${context.rows > 1 ? " and row spacing" : ""}), which is only ${inJobUnits(m.width, "length", u)} wide: stagger or reduce the rows, or check splitting.`);
+    }
+  }
+  return out;
+}
+
+export function dowelDetailing(spec: DowelSpec, context?: ConnectorContext): DetailingLimits {
+  if (!context) return { minSpacing: 0, maxSpacing: null, endDistance: 0, sources: [] };
+  const g = dowelGeometry(spec, context);
+  const per: MemberSpacing[] = [];
+  context.members.forEach((m, i) => {
+    if (isSteel(m.material)) return;
+    const angle = i === 0 ? spec.angles.side : spec.angles.main;
+    if (spec.standard === "NDS-2018") {
+      const bearing = Math.min(g.sideLength, g.mainLength);
+      per.push(ndsSpacing({ family: spec.family, diameterIn: spec.diameter / MM_PER_IN, angleDeg: angle, prebored: spec.predrilled || spec.family === "screw", slenderness: bearing / spec.diameter }));
+    } else {
+      const placement = isPanel(m.material) ? (spec.ec5.panel === "plywood" ? "plywood" : "osb") : "timber";
+      per.push(ec5Spacing({ family: spec.family, d: spec.diameter, angleDeg: angle, characteristicDensity: m.material.characteristicDensity ?? 0, predrilled: spec.predrilled, placement, steelToTimber: context.members.some((x) => isSteel(x.material)) }));
+    }
+  });
+  const max = (pick: (s: MemberSpacing) => number) => Math.max(0, ...per.map(pick));
+  return {
+    minSpacing: max((s) => s.along),
+    maxSpacing: null,
+    endDistance: max((s) => s.end),
+    edgeDistance: max((s) => s.edge),
+    rowSpacing: max((s) => s.across),
+    penetration: g.penetration !== null && spec.minPenetration ? { required: spec.minPenetration.multiple * spec.diameter, provided: g.penetration } : null,
+    sources: [...new Set(per.map((s) => s.source)), ...(spec.minPenetration && g.penetration !== null ? [`minimum penetration ${spec.minPenetration.multiple}d (${spec.minPenetration.source})`] : [])],
+  };
+}
+
+const round = (x: number) => Number(x.toPrecision(4));

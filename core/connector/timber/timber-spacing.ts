@@ -1,0 +1,131 @@
+import { foldAngle } from "./nds-yield-limit.js";
+
+/**
+ * Spacings and distances of dowel-type fasteners in one wood member, mm, expressed along the
+ * connector line (the member axis, the direction of the shear flow) and across it.
+ */
+export interface MemberSpacing {
+  /** Least spacing of rows along the line. */
+  along: number;
+  /** Least spacing of connectors of one row across the line. */
+  across: number;
+  /** Least distance from the member end. */
+  end: number;
+  /** Least distance from an edge parallel to the line. */
+  edge: number;
+  source: string;
+}
+
+export type DowelFamily = "nail" | "screw" | "lag-screw" | "bolt" | "dowel";
+
+/**
+ * NDS-2018. Bolts and lag screws (D = shank diameter): Tables 12.5.1A–D for full design value
+ * (C_Δ = 1.0). Nails and wood screws: the NDS asks only for spacing that prevents splitting (§12.1.6),
+ * so common-practice values after the NDS Commentary's recommended nail spacings are used.
+ */
+export function ndsSpacing(p: { family: DowelFamily; diameterIn: number; angleDeg: number; prebored: boolean; slenderness: number }): MemberSpacing {
+  const D = p.diameterIn * 25.4;
+  const perpendicular = foldAngle(p.angleDeg) > 45;
+  if (p.family === "nail" || p.family === "screw") {
+    const k = p.prebored ? 10 : 15;
+    const rows = p.prebored ? 3 : 5;
+    const s = { along: k * D, across: rows * D, end: k * D, edge: 2.5 * D };
+    return {
+      ...(perpendicular ? { along: s.across, across: s.along, end: 4 * D, edge: s.end } : s),
+      source: `NDS-2018 §12.1.6: spacing to prevent splitting; common practice [CP]: ${k}D along the grain, ${rows}D between rows, end ${perpendicular ? "4D (loaded edge)" : `${k}D`}, edge 2.5D`,
+    };
+  }
+  const ratio = p.slenderness;
+  if (!perpendicular) {
+    const across = Math.min(1.5 * D, 5 * 25.4);
+    return {
+      along: 4 * D,
+      across,
+      end: 7 * D,
+      edge: ratio <= 6 ? 1.5 * D : Math.max(1.5 * D, across / 2),
+      source: "NDS-2018 Tables 12.5.1A–D (load parallel to grain, full design value, C_Δ = 1.0): spacing 4D, end 7D (tension member, softwood), edge 1.5D, rows 1.5D ≤ 5 in [M]",
+    };
+  }
+  const rows = ratio <= 2 ? 2.5 * D : ratio >= 6 ? 5 * D : (2.5 + (2.5 * (ratio - 2)) / 4) * D;
+  return {
+    along: rows,
+    across: 4 * D,
+    end: 4 * D,
+    edge: 4 * D,
+    source: "NDS-2018 Tables 12.5.1A–D (load perpendicular to grain, full design value): loaded edge 4D, end 4D, spacing 4D, rows 2.5D–5D by ℓ/D [M]",
+  };
+}
+
+export type Ec5Placement = "timber" | "plywood" | "osb";
+
+/**
+ * EN 1995-1-1 Tables 8.2 (nails; screws up to 6 mm), 8.4 (bolts; screws and lag screws over 6 mm)
+ * and 8.5 (dowels). α is the angle between the force (along the member) and the grain.
+ */
+export function ec5Spacing(p: { family: DowelFamily; d: number; angleDeg: number; characteristicDensity: number; predrilled: boolean; placement: Ec5Placement; steelToTimber: boolean }): MemberSpacing & { table: Ec5Distances } {
+  const { d } = p;
+  const a = (foldAngle(p.angleDeg) * Math.PI) / 180;
+  const cos = Math.abs(Math.cos(a));
+  const sin = Math.abs(Math.sin(a));
+  const nailRules = p.family === "nail" || (p.family === "screw" && d <= 6) || (p.family === "lag-screw" && d <= 6);
+  let a1: number, a2: number, a3t: number, a3c: number, a4t: number, a4c: number;
+  let source: string;
+  if (nailRules) {
+    if (p.predrilled) {
+      [a1, a2, a3t, a3c] = [(4 + cos) * d, (3 + sin) * d, (7 + 5 * cos) * d, 7 * d];
+      a4t = (d < 5 ? 3 + 2 * sin : 3 + 4 * sin) * d;
+      a4c = 3 * d;
+      source = "EN 1995-1-1 Table 8.2 (predrilled)";
+    } else if (p.characteristicDensity <= 420) {
+      [a1, a2, a3t, a3c] = [(d < 5 ? 5 + 5 * cos : 5 + 7 * cos) * d, 5 * d, (10 + 5 * cos) * d, 10 * d];
+      a4t = (d < 5 ? 5 + 2 * sin : 5 + 5 * sin) * d;
+      a4c = 5 * d;
+      source = "EN 1995-1-1 Table 8.2 (not predrilled, ρ_k ≤ 420 kg/m³)";
+    } else {
+      [a1, a2, a3t, a3c] = [(7 + 8 * cos) * d, 7 * d, (15 + 5 * cos) * d, 15 * d];
+      a4t = (d < 5 ? 7 + 2 * sin : 7 + 5 * sin) * d;
+      a4c = 7 * d;
+      source = "EN 1995-1-1 Table 8.2 (not predrilled, 420 < ρ_k ≤ 500 kg/m³)";
+    }
+    if (p.placement !== "timber") {
+      a1 *= 0.85;
+      a2 *= 0.85;
+      source += "; spacings × 0.85 in a panel (§8.3.1.3)";
+      if (p.placement === "plywood") {
+        [a3t, a4t] = [(3 + 4 * sin) * d, (3 + 4 * sin) * d];
+        [a3c, a4c] = [3 * d, 3 * d];
+        source += ", plywood edges and ends 3d unloaded, (3 + 4 sin α)d loaded";
+      }
+    }
+    if (p.steelToTimber) {
+      a1 *= 0.7;
+      a2 *= 0.7;
+      source += "; spacings × 0.7 for steel-to-timber (§8.3.1.4)";
+    }
+  } else if (p.family === "dowel") {
+    [a1, a2, a3t] = [(3 + 2 * cos) * d, 3 * d, Math.max(7 * d, 80)];
+    a3c = Math.max(a3t * sin, 3 * d);
+    [a4t, a4c] = [Math.max((2 + 2 * sin) * d, 3 * d), 3 * d];
+    source = "EN 1995-1-1 Table 8.5 (dowels)";
+  } else {
+    [a1, a2, a3t] = [(4 + cos) * d, 4 * d, Math.max(7 * d, 80)];
+    a3c = Math.max((1 + 6 * sin) * d, 4 * d);
+    [a4t, a4c] = [Math.max((2 + 2 * sin) * d, 3 * d), 3 * d];
+    source = "EN 1995-1-1 Table 8.4 (bolts)";
+  }
+  const table = { a1, a2, a3t, a3c, a4t, a4c };
+  const alongGrain = foldAngle(p.angleDeg) <= 45;
+  return alongGrain
+    ? { along: a1, across: a2, end: Math.max(a3t, a3c), edge: Math.max(a4t, a4c), table, source: `${source}: a₁ along the line, a₂ between rows, a₃,t at the ends, a₄ at the edges` }
+    : { along: a2, across: a1, end: Math.max(a4t, a4c), edge: Math.max(a3t, a3c), table, source: `${source}: grain across the member, so a₂ along the line, a₁ between rows, a₄ at the member ends, a₃ at the edges` };
+}
+
+/** The distances of the EN 1995-1-1 tables, mm: a₁ ∥ grain, a₂ ⊥ grain, a₃ to the loaded (t) and unloaded (c) end, a₄ to the loaded and unloaded edge. */
+export interface Ec5Distances {
+  a1: number;
+  a2: number;
+  a3t: number;
+  a3c: number;
+  a4t: number;
+  a4c: number;
+}

@@ -1,0 +1,114 @@
+import { z } from "zod";
+import { Id, positive, Text } from "../schema/quantity.js";
+import { formatNumber } from "../units/format.js";
+import type { ConnectorContext, DiscreteConnectorKind } from "./connector-kind.js";
+import { MM_PER_IN, MPA_PER_PSI } from "./quantity-text.js";
+import { dowelDetailing, dowelProblems, dowelResistance, type DowelSpec } from "./timber/dowel-joint.js";
+import { dowelConditions, ec5StandardText, ndsStandardText, onSizeField, refineTimberStandard, timberAssumptions, timberDowelFields } from "./timber/dowel-schema.js";
+import { ec5YieldMoment } from "./timber/ec5-embedment.js";
+import { knownScrewGauges, screwGauge } from "./timber/fastener-sizes.js";
+import { ndsNailBendingYield } from "./timber/nds-dowel-bearing.js";
+
+export const WoodScrew = z
+  .strictObject({
+    id: Id,
+    kind: z.literal("wood-screw"),
+    ...timberDowelFields,
+    /** Gauge ("#10"), giving the shank and root diameters; or give diameter and rootDiameter. */
+    gauge: Text(12).optional(),
+    /** Shank (outer thread) diameter. */
+    diameter: positive("length").optional(),
+    /** Root (inner thread) diameter. */
+    rootDiameter: positive("length").optional(),
+    length: positive("length"),
+    /** Threaded length from the tip; when absent the threads are taken to cross the shear plane. */
+    threadLength: positive("length").optional(),
+    predrilled: z.boolean().default(true),
+    bendingYieldStrength: positive("stress").optional(),
+    /** EN 1995-1-1: tensile strength f_u of the screw steel, from its product declaration. */
+    tensileStrength: positive("stress").optional(),
+  })
+  .superRefine((c, ctx) => {
+    refineTimberStandard(c, ctx, ["bendingYieldStrength"], ["tensileStrength"]);
+    if (c.gauge !== undefined) {
+      if (c.diameter !== undefined) ctx.addIssue({ code: "custom", path: ["gauge"], message: "give either a gauge or a diameter, not both" });
+      else if (!screwGauge(c.gauge)) ctx.addIssue({ code: "custom", path: ["gauge"], message: `"${c.gauge}" is not a wood screw gauge this program knows; known: ${knownScrewGauges().join(", ")}` });
+    } else {
+      if (c.diameter === undefined) ctx.addIssue({ code: "custom", path: ["diameter"], message: "is required when no gauge is given" });
+      if (c.rootDiameter === undefined) ctx.addIssue({ code: "custom", path: ["rootDiameter"], message: "is required when no gauge is given" });
+    }
+    if (c.diameter !== undefined && c.rootDiameter !== undefined && c.rootDiameter >= c.diameter) ctx.addIssue({ code: "custom", path: ["rootDiameter"], message: "must be less than the shank diameter" });
+    if (c.threadLength !== undefined && c.threadLength > c.length) ctx.addIssue({ code: "custom", path: ["threadLength"], message: "must not exceed the length" });
+    if (c.standard === "EN1995-1-1" && c.tensileStrength === undefined) ctx.addIssue({ code: "custom", path: ["tensileStrength"], message: "EN 1995-1-1 needs the screw's tensile strength f_u (from its product declaration) for M_y,Rk" });
+  });
+export type WoodScrew = z.infer<typeof WoodScrew>;
+
+function diameters(c: WoodScrew): { d: number; root: number; gauge: string | null } {
+  const g = c.gauge !== undefined ? screwGauge(c.gauge) : null;
+  if (g) return { d: g.diameterIn * MM_PER_IN, root: c.rootDiameter ?? g.rootDiameterIn * MM_PER_IN, gauge: g.name };
+  return { d: c.diameter!, root: c.rootDiameter!, gauge: null };
+}
+
+function specOf(c: WoodScrew, context: ConnectorContext | undefined): DowelSpec {
+  const { d, root } = diameters(c);
+  const sideThickness = context?.members[0].thickness ?? 0;
+  const penetration = c.length - sideThickness;
+  // Threads cross the shear plane unless the threaded length from the tip stays inside the point-side member.
+  const threadsInPlane = c.threadLength === undefined || c.threadLength > penetration;
+  const shankPenetration = penetration - (c.threadLength ?? penetration);
+  const isNds = c.standard === "NDS-2018";
+  let yieldDiameter: number;
+  let note: string;
+  if (isNds) {
+    yieldDiameter = threadsInPlane ? root : d;
+    note = threadsInPlane ? "root diameter D_r: threads in the shear plane" : "shank diameter: the shank crosses the shear plane";
+  } else {
+    const shankOk = !threadsInPlane && shankPenetration >= 4 * d;
+    yieldDiameter = shankOk ? d : 1.1 * root;
+    note = shankOk ? "d_ef = smooth shank diameter (§8.7.1(2))" : "d_ef = 1.1 × root diameter (§8.7.1(3))";
+  }
+  const conditions = dowelConditions(c, 1.0, "screws, at most 100 %");
+  const fu = c.tensileStrength ?? 0;
+  const My = ec5YieldMoment("round", fu, yieldDiameter);
+  return {
+    family: "screw",
+    noun: "wood screw",
+    standard: c.standard,
+    diameter: d,
+    yieldDiameter,
+    yieldDiameterNote: note,
+    length: c.length,
+    tipLength: 0,
+    shear: conditions.shear,
+    predrilled: c.predrilled,
+    minPenetration: isNds ? { multiple: 6, source: "NDS-2018 §12.1.5, least penetration 6D" } : { multiple: 6, source: "common practice after EN 1995-1-1 §8.3.1.2 [CP]" },
+    angles: conditions.angles,
+    bendingYield: c.bendingYieldStrength !== undefined
+      ? { value: c.bendingYieldStrength, source: "given" }
+      : { value: ndsNailBendingYield(yieldDiameter / MM_PER_IN) * MPA_PER_PSI, source: "diameter bands of the NDS nail and screw tables, at the diameter in the yield model [M]" },
+    nds: conditions.nds,
+    ec5: { ...conditions.ec5Conditions, yieldMoment: { value: My.value, source: `${My.formula} at d_ef, f_u = ${formatNumber(fu)} MPa` }, nailEmbedment: d <= 6 },
+    groupAction: conditions.groupAction,
+  };
+}
+
+function describeScrew(c: WoodScrew): string {
+  if (c.label) return c.label;
+  const { d, gauge } = diameters(c);
+  const inches = c.standard === "NDS-2018";
+  const fmt = (mm: number) => formatNumber(inches ? mm / MM_PER_IN : mm);
+  return `${gauge ?? fmt(d)} × ${fmt(c.length)} ${inches ? "in" : "mm"} wood screw, ${c.standard}${c.shear === "double" ? ", double shear" : ""}`;
+}
+
+/** Wood screws by the NDS-2018 yield limit equations or EN 1995-1-1 §8.7.1 (nail rules up to 6 mm, bolt rules above). */
+export const woodScrewKind: DiscreteConnectorKind<WoodScrew> = {
+  kind: "wood-screw",
+  mechanism: "discrete",
+  schema: WoodScrew,
+  describe: describeScrew,
+  standards: (c) => [c.standard === "NDS-2018" ? ndsStandardText : ec5StandardText],
+  assumptions: (c) => [...timberAssumptions(describeScrew(c), c), `${describeScrew(c)}: installed in lead holes; ${c.threadLength === undefined ? "threads taken to cross the shear plane (no thread length given)" : "threads placed by the thread length given"}.`],
+  problems: (c, context) => onSizeField(dowelProblems(specOf(c, context), context), c.gauge !== undefined ? "gauge" : null, ["diameter"]),
+  resistance: (c, context) => dowelResistance(specOf(c, context), context),
+  detailing: (c, context) => dowelDetailing(specOf(c, context), context),
+};
