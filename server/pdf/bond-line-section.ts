@@ -3,7 +3,7 @@ import { DIAGRAM_HEIGHT, figure, figureHeight } from "./figure.js";
 import { ink } from "./sheet.js";
 import { table } from "./table.js";
 import { workingTables } from "./working-table.js";
-import { combinationName, type BondLine, type WorksheetContext } from "./worksheet-context.js";
+import { byOutcome, combinationName, combinationsCell, type BondLine, type WorksheetContext } from "./worksheet-context.js";
 
 /** A glued joint: bond-line shear stress τ = q/t along the member against the bond-line strength. */
 export function bondLineSection(c: WorksheetContext, b: BondLine): void {
@@ -41,13 +41,13 @@ export function bondLineSection(c: WorksheetContext, b: BondLine): void {
   table(
     sheet,
     [
-      { header: "Combination", weight: 1.3 },
+      { header: "Combinations", weight: 1.5 },
       { header: "Strength f", weight: 0.9, align: "right" },
       { header: "Governing", weight: 2 },
       { header: "Reference", weight: 2.2 },
     ],
-    b.strength.map((s) => [
-      { text: s.combination, note: result.beam.combinations.find((k) => k.id === s.combination)?.name },
+    byOutcome(b.strength, (s) => [s.value, s.governing, s.reference]).map(({ combinations, entry: s }) => [
+      combinationsCell(result, combinations),
       { text: text.of(s.value, "stress"), bold: true },
       s.governing,
       s.reference,

@@ -6,7 +6,7 @@ import { ink } from "./sheet.js";
 import { infeasibleStatement } from "./status-section.js";
 import { keyValueTable, table, type Cell } from "./table.js";
 import { workingTables } from "./working-table.js";
-import { combinationName, partNames, type Schedule, type WorksheetContext } from "./worksheet-context.js";
+import { byOutcome, combinationName, combinationsCell, partNames, type Schedule, type WorksheetContext } from "./worksheet-context.js";
 
 /**
  * Schedules that are the same in every number apart from the joint's name (the top and bottom joints
@@ -86,16 +86,16 @@ export function scheduleSection(c: WorksheetContext, group: Schedule[]): void {
   table(
     sheet,
     [
-      { header: "Combination", weight: 1.3 },
+      { header: "Combinations", weight: 1.6 },
       { header: "R", weight: 0.8, align: "right" },
       { header: "Governing mode", weight: 2.6 },
       { header: "Reference", weight: 2.2 },
     ],
-    s.resistance.map((resistance) => {
-      const r = resistance as typeof resistance & ResistanceDetail;
+    byOutcome(s.resistance, (r) => [r.value, r.governing, r.reference, (r as ResistanceDetail).modes, (r as ResistanceDetail).slip]).map(({ combinations, entry }) => {
+      const r = entry as typeof entry & ResistanceDetail;
       const slip = r.slip ? `slip modulus K_ser ${text.of(r.slip.serviceability, "slipModulus")}, K_u ${text.of(r.slip.ultimate, "slipModulus")} (${r.slip.reference})` : "";
       return [
-        { text: r.combination, note: result.beam.combinations.find((k) => k.id === r.combination)?.name },
+        combinationsCell(result, combinations),
         { text: text.of(r.value, "connectorForce"), bold: true },
         { text: r.governing, note: r.modes && r.modes.length > 1 ? `modes: ${r.modes.map((m) => `${m.mode} ${text.of(m.value, "connectorForce")}`).join("; ")}` : undefined },
         { text: r.reference, note: slip || undefined },

@@ -12,12 +12,10 @@ const CELL_HEIGHT = 190;
 export function sectionPropertiesSection(c: WorksheetContext): void {
   const { sheet, result, text } = c;
   const s = result.section;
-  sheet.heading("Cross-section and joint planes", 1, CELL_HEIGHT + 30);
-  sheet.paragraph(
-    "Each drawing shades the area held by one joint (the parts whose shear flow its connectors pass on) and marks the contact width t of its joint lines. The dashed line is the neutral axis.",
-    { size: 8, colour: ink.faint },
-    4,
-  );
+  const intro =
+    "Each drawing shades the area held by one joint (the parts whose shear flow its connectors pass on) and marks the contact width t of its joint lines. The dashed line is the neutral axis.";
+  sheet.heading("Cross-section and joint planes", 1, sheet.textHeight(intro, { size: 8 }) + CELL_HEIGHT + 40);
+  sheet.paragraph(intro, { size: 8, colour: ink.faint }, 4);
 
   const properties: [string, string][] = [
     ["Reference modulus E_ref (parts transformed to it)", text.of(s.referenceModulus, "modulus")],
@@ -42,7 +40,11 @@ export function sectionPropertiesSection(c: WorksheetContext): void {
     keyValueTable(sheet, properties, { keyWeight: 1.5, indent: cellWidth + 8 });
     sheet.y = Math.max(sheet.y, bottom + 6);
   } else {
-    for (let i = 0; i < targets.length; i += perRow) sheet.y += drawingRow(c, targets.slice(i, i + perRow), cellWidth) + 6;
+    for (let i = 0; i < targets.length; i += perRow) {
+      // drawingRow may start a page, so the cursor is read after it.
+      const height = drawingRow(c, targets.slice(i, i + perRow), cellWidth);
+      sheet.y += height + 6;
+    }
     sheet.heading("Section properties", 2, 60);
     keyValueTable(sheet, properties, { keyWeight: 1.3 });
   }

@@ -3,7 +3,7 @@ import { DIAGRAM_HEIGHT, figure, figureHeight } from "./figure.js";
 import { ink } from "./sheet.js";
 import { keyValueTable, table } from "./table.js";
 import { workingTables } from "./working-table.js";
-import { combinationName, type WorksheetContext } from "./worksheet-context.js";
+import { byOutcome, combinationName, combinationsCell, type WorksheetContext } from "./worksheet-context.js";
 
 /** A welded joint as the result reports it (fields read here only). */
 export interface WeldJoint {
@@ -74,13 +74,13 @@ export function weldSection(c: WorksheetContext, w: WeldJoint): void {
   table(
     sheet,
     [
-      { header: "Combination", weight: 1.1 },
+      { header: "Combinations", weight: 1.4 },
       { header: "R per length", weight: 1, align: "right" },
       { header: "Governing", weight: 2.6 },
       { header: "Reference", weight: 2 },
     ],
-    w.resistance.map((r) => [
-      { text: r.combination, note: result.beam.combinations.find((k) => k.id === r.combination)?.name },
+    byOutcome(w.resistance, (r) => [r.value, r.governing, r.reference, r.modes]).map(({ combinations, entry: r }) => [
+      combinationsCell(result, combinations),
       { text: text.of(r.value, "shearFlow"), bold: true },
       { text: r.governing, note: r.modes && r.modes.length > 1 ? `modes: ${r.modes.map((m) => `${m.mode} ${text.of(m.value, "shearFlow")}`).join("; ")}` : undefined },
       r.reference,

@@ -13,8 +13,8 @@ export interface WorkingStepLike {
 const MAX_NAMED = 6;
 
 /**
- * The working behind a resistance or strength, one line per step. Combinations whose working is
- * the same step for step share one table, so fifteen combinations do not print fifteen copies.
+ * The working behind a resistance or strength, one line per step. Combinations often differ in a
+ * step or two (a load-duration factor): those steps are printed per combination, the rest once.
  */
 export function workingTables(c: WorksheetContext, what: string, entries: { combination: string; steps: WorkingStepLike[] }[]): void {
   const { sheet, text } = c;
@@ -26,20 +26,35 @@ export function workingTables(c: WorksheetContext, what: string, entries: { comb
     group.combinations.push(e.combination);
     groups.set(key, group);
   }
-  for (const { combinations, steps } of groups.values()) {
-    const named = combinations.length > MAX_NAMED ? `${combinations.slice(0, MAX_NAMED).join(", ")} and ${combinations.length - MAX_NAMED} more` : combinations.join(", ");
-    sheet.heading(`Working for ${what}: combination${combinations.length === 1 ? "" : "s"} ${named}`, 2, 40);
-    table(
-      sheet,
-      [
-        { header: "Symbol", weight: 0.8 },
-        { header: "Value", weight: 1, align: "right" },
-        { header: "What it is", weight: 3.2 },
-        { header: "Reference", weight: 1.8 },
-      ],
-      steps.map((step) => [{ text: step.symbol, bold: true }, stepValue(step, text), step.description, step.reference ?? ""]),
-    );
+  const all = [...groups.values()];
+  if (all.length === 0) return;
+  const columns = [
+    { header: "Symbol", weight: 0.8 },
+    { header: "Value", weight: 1, align: "right" as const },
+    { header: "What it is", weight: 3.2 },
+    { header: "Reference", weight: 1.8 },
+  ];
+  const row = (step: WorkingStepLike) => [{ text: step.symbol, bold: true }, text.of(step.value, step.quantity), step.description, step.reference ?? ""];
+
+  if (all.length === 1) {
+    sheet.heading(`Working for ${what}: ${named(all[0]!.combinations)}`, 2, 40);
+    table(sheet, columns, all[0]!.steps.map(row));
+    return;
   }
+  const keyOf = (step: WorkingStepLike) => JSON.stringify(step);
+  const common = all[0]!.steps.filter((step) => all.every((g) => g.steps.some((t) => keyOf(t) === keyOf(step))));
+  const commonKeys = new Set(common.map(keyOf));
+  if (common.length > 0) {
+    sheet.heading(`Working for ${what}, the same under every combination`, 2, 40);
+    table(sheet, columns, common.map(row));
+  }
+  sheet.heading(`Working for ${what} that differs between combinations`, 2, 40);
+  table(
+    sheet,
+    [{ header: "Combinations", weight: 1.4 }, ...columns],
+    all.flatMap((g) => g.steps.filter((step) => !commonKeys.has(keyOf(step))).map((step, i) => [i === 0 ? { text: g.combinations.join(", "), bold: true } : "", ...row(step)])),
+  );
 }
 
-const stepValue = (step: WorkingStepLike, text: QuantityText) => text.of(step.value, step.quantity);
+const named = (combinations: string[]) =>
+  `combination${combinations.length === 1 ? "" : "s"} ${combinations.length > MAX_NAMED ? `${combinations.slice(0, MAX_NAMED).join(", ")} and ${combinations.length - MAX_NAMED} more` : combinations.join(", ")}`;
