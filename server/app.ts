@@ -6,6 +6,8 @@ import Fastify, { type FastifyError, type FastifyInstance } from "fastify";
 import { ApiError, errorBody, type ErrorCode } from "./errors.js";
 import { loadExamples } from "./examples.js";
 import { apiRoutes } from "./routes/api.js";
+import { storeRoutes } from "./routes/store.js";
+import type { StoreOptions } from "./store/job-store.js";
 
 export const projectRoot = join(dirname(fileURLToPath(import.meta.url)), "..");
 
@@ -14,6 +16,10 @@ export interface AppOptions {
   examplesDir?: string;
   /** Largest accepted request body, bytes. */
   bodyLimit?: number;
+  /** Folder of the job store's database; without it the store's routes are not served. */
+  dataDir?: string;
+  /** The store's clock and test hooks. */
+  store?: StoreOptions;
 }
 
 /** The page's script, bundled once from web/src when the app is built. */
@@ -46,6 +52,7 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
   app.setNotFoundHandler((_request, reply) => reply.status(404).send(errorBody("ERR_NOT_FOUND")));
 
   await app.register(apiRoutes, { examples });
+  if (options.dataDir) await app.register(storeRoutes, { dataDir: options.dataDir, store: options.store });
   app.get("/app.js", (_request, reply) => reply.type("text/javascript; charset=utf-8").header("cache-control", "no-cache").send(pageScript));
   await app.register(fastifyStatic, { root: join(projectRoot, "web"), index: ["index.html"], allowedPath: (path) => !path.startsWith("/src/") });
   return app;

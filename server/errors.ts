@@ -9,12 +9,27 @@ export const errors = {
   ERR_BODY_TOO_LARGE: { statusCode: 413, message: "The request body is larger than the limit." },
   ERR_NOT_FOUND: { statusCode: 404, message: "There is nothing at this address." },
   ERR_EXAMPLE_NOT_FOUND: { statusCode: 404, message: "There is no example with this id." },
+  ERR_PROJECT_NOT_FOUND: { statusCode: 404, message: "There is no project with this id in the job store." },
+  ERR_MEMBER_NOT_FOUND: { statusCode: 404, message: "There is no member with this id in this project." },
+  ERR_REVISION_NOT_FOUND: { statusCode: 404, message: "This member has no revision with this number." },
+  ERR_WORKSHEET_NOT_FOUND: { statusCode: 404, message: "No issued worksheet or saved revision has this fingerprint." },
+  ERR_MEMBER_EXISTS: { statusCode: 409, message: "Another member of this project already has this mark; nothing was stored." },
+  ERR_PROJECT_FILE_INVALID: { statusCode: 400, message: "The project file has problems, each listed with its path; nothing was stored." },
+  ERR_STORE_UNAVAILABLE: { statusCode: 503, message: "The job store could not complete the request; nothing was stored or changed." },
   ERR_INTERNAL: { statusCode: 500, message: "The server failed while computing; the input was not stored or changed." },
 } as const;
 
 export type ErrorCode = keyof typeof errors;
 
-const reasons: Record<number, string> = { 400: "Bad Request", 404: "Not Found", 413: "Payload Too Large", 415: "Unsupported Media Type", 500: "Internal Server Error" };
+const reasons: Record<number, string> = {
+  400: "Bad Request",
+  404: "Not Found",
+  409: "Conflict",
+  413: "Payload Too Large",
+  415: "Unsupported Media Type",
+  500: "Internal Server Error",
+  503: "Service Unavailable",
+};
 
 export interface ErrorBody {
   statusCode: number;

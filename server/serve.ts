@@ -1,0 +1,47 @@
+import { join, resolve } from "node:path";
+import { buildApp, projectRoot } from "./app.js";
+import { StoreOpenError } from "./store/open-database.js";
+
+export interface ServeOptions {
+  port: string;
+  host: string;
+  /** Data folder of the job store; STITCHPLAN_DATA or data/ beside the project when absent. */
+  data?: string | undefined;
+}
+
+/** The job store's folder: `--data`, else STITCHPLAN_DATA, else `data/` beside the project. */
+export function dataFolder(option?: string): string {
+  return resolve(option || process.env.STITCHPLAN_DATA || join(projectRoot, "data"));
+}
+
+/** Checks the options, builds the app and listens; prints the address and the data folder. Returns an exit code on failure. */
+export async function serve(options: ServeOptions): Promise<number | undefined> {
+  const port = Number(options.port);
+  if (!/^\d+$/.test(options.port) || !Number.isInteger(port) || port < 0 || port > 65535) {
+    console.error(`--port must be a whole number from 0 to 65535, not "${options.port}"`);
+    return 2;
+  }
+  if (options.host !== "127.0.0.1" && options.host !== "localhost" && options.host !== "::1") {
+    console.warn(`Warning: listening on ${options.host} makes the service reachable from other machines. It has no login; use only on a trusted network.`);
+  }
+  const dataDir = dataFolder(options.data);
+  let app;
+  try {
+    app = await buildApp({ dataDir });
+  } catch (error) {
+    if (error instanceof StoreOpenError) {
+      console.error(error.message);
+      return 1;
+    }
+    throw error;
+  }
+  await app.listen({ port, host: options.host });
+  const address = app.server.address();
+  const shown = typeof address === "object" && address ? address.port : port;
+  const store = (await app.inject("/api/store")).json() as { file: string; upgrade: { from: number; to: number; backup: string | null } };
+  console.log(`Job store: ${store.file}  (--data or STITCHPLAN_DATA picks another folder)`);
+  if (store.upgrade.backup) console.log(`  upgraded from schema version ${store.upgrade.from} to ${store.upgrade.to}; the file as it was is kept at ${store.upgrade.backup}`);
+  console.log(`stitchplan is running at http://${options.host === "::1" ? "[::1]" : options.host}:${shown}/  (Ctrl+C stops it)`);
+  for (const signal of ["SIGINT", "SIGTERM"] as const) process.on(signal, () => void app.close().then(() => process.exit(0)));
+  return undefined;
+}
