@@ -92,7 +92,9 @@ function describeNail(c: Nail): string {
   const { diameter, length, sizeName } = dimensions(c);
   const inches = c.standard === "NDS-2018";
   const fmt = (mm: number) => formatNumber(inches ? mm / MM_PER_IN : mm);
-  const body = sizeName ? `${sizeName} nail (${fmt(diameter)} × ${fmt(length)} in)` : `${fmt(diameter)} × ${fmt(length)} ${inches ? "in" : "mm"} ${c.shank === "smooth" ? "" : `${c.shank} `}nail`;
+  const body = sizeName
+    ? `${sizeName} nail (${formatNumber(diameter / MM_PER_IN)} × ${formatNumber(length / MM_PER_IN)} in)`
+    : `${fmt(diameter)} × ${fmt(length)} ${inches ? "in" : "mm"} ${c.shank === "smooth" ? "" : `${c.shank} `}nail`;
   return `${body}, ${c.standard}${c.shear === "double" ? ", double shear" : ""}`;
 }
 

@@ -305,7 +305,8 @@ function describe(c: SteelBolt): string {
   if (!r) return `${c.size ?? formatNumber(c.diameter!)} bolt ${c.grade}, ${c.standard}`;
   if (r.aisc) {
     const g = aiscBoltGroup(c.grade);
-    return `${r.bolt.name} in ${g === "A307" ? "A307" : `Group ${g}`} bolt (${c.grade.trim()}), threads ${c.threads === "included" ? "included" : "excluded"}${c.slipCritical !== "no" ? `, slip-critical ${c.slipCritical}` : ""}, ${aisc ? "AISC 360-16" : c.standard}${c.shear === "double" ? ", double shear" : ""}`;
+    const named = g === "A307" ? "A307" : `Group ${g}${/^(group[- ]?)?[ab]$/i.test(c.grade.trim()) ? "" : ` (${c.grade.trim()})`}`;
+    return `${r.bolt.name} in ${named} bolt, threads ${c.threads === "included" ? "included" : "excluded"}${c.slipCritical !== "no" ? `, slip-critical ${c.slipCritical}` : ""}, ${aisc ? "AISC 360-16" : c.standard}${c.shear === "double" ? ", double shear" : ""}`;
   }
   return `${r.bolt.name} ${c.grade.trim()} bolt, shear plane through the ${c.threads === "included" ? "thread" : "shank"}, EN 1993-1-8${c.shear === "double" ? ", double shear" : ""}`;
 }
