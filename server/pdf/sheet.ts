@@ -99,9 +99,15 @@ export class Sheet {
     this.y = this.frame.top;
   }
 
-  /** Moves to a new page unless `height` fits on this one. */
+  /**
+   * Moves to a new page unless `height` fits on this one, together with a heading still waiting to
+   * be set; then sets that heading. Every block calls this before it draws, so a heading always
+   * lands on the page of the block that follows it.
+   */
   ensure(height: number): void {
-    if (height > this.room && !this.atTop) this.newPage();
+    const waiting = this.pending ? this.headingHeight(this.pending, false) : 0;
+    if (height + waiting > this.room && !this.atTop) this.newPage();
+    this.setPendingHeading();
   }
 
   gap(height: number): void {
@@ -134,16 +140,38 @@ export class Sheet {
     this.y += height + after;
   }
 
-  /** A heading kept with at least `keep` points of what follows it. */
-  heading(text: string, level: 1 | 2 = 1, keep = 90): void {
-    const size = level === 1 ? type.heading : type.subheading;
-    const before = level === 1 ? 10 : 6;
-    const height = this.textHeight(text, { font: "bold", size });
-    if (!this.atTop) this.ensure(before + height + 4 + keep);
-    if (!this.atTop) this.y += before;
-    this.textAt(text, this.left, this.y, { font: "bold", size, width: this.width, colour: level === 1 ? ink.rule : ink.text });
+  /**
+   * A heading, set when the next block is placed so that it stays with that block; `keep` asks for
+   * that much room below it as well (for a heading over several blocks that read as one).
+   */
+  heading(text: string, level: 1 | 2 = 1, keep = 0): void {
+    this.setPendingHeading();
+    const heading = { text, level };
+    if (keep > 0 && !this.atTop && this.headingHeight(heading, false) + keep > this.room) this.newPage();
+    this.pending = heading;
+  }
+
+  private pending: { text: string; level: 1 | 2 } | null = null;
+
+  private headingStyle(level: 1 | 2) {
+    return { font: "bold" as const, size: level === 1 ? type.heading : type.subheading, width: this.width, colour: level === 1 ? ink.rule : ink.text };
+  }
+
+  private headingHeight(heading: { text: string; level: 1 | 2 }, atTop: boolean): number {
+    const before = atTop ? 0 : heading.level === 1 ? 10 : 6;
+    return before + this.textHeight(heading.text, this.headingStyle(heading.level)) + 1 + (heading.level === 1 ? 4 : 2);
+  }
+
+  private setPendingHeading(): void {
+    const heading = this.pending;
+    if (!heading) return;
+    this.pending = null;
+    const style = this.headingStyle(heading.level);
+    if (!this.atTop) this.y += heading.level === 1 ? 10 : 6;
+    const height = this.textHeight(heading.text, style);
+    this.textAt(heading.text, this.left, this.y, style);
     this.y += height + 1;
-    if (level === 1) {
+    if (heading.level === 1) {
       this.doc.save().moveTo(this.left, this.y).lineTo(this.frame.right, this.y).lineWidth(0.8).strokeColor(ink.rule).stroke().restore();
       this.y += 4;
     } else {
