@@ -34,6 +34,7 @@ async function getJson<T>(url: string): Promise<T> {
 
 export const fetchExamples = () => getJson<ExampleEntry[]>("/api/examples");
 export const fetchExample = (id: string) => getJson<unknown>(`/api/examples/${encodeURIComponent(id)}`);
+export const fetchJobSchema = () => getJson<unknown>("/api/schema/job");
 
 const postJob = (url: string, job: JobDraft, signal?: AbortSignal) =>
   fetch(url, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(job), ...(signal ? { signal } : {}) });

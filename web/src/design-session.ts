@@ -3,6 +3,7 @@ import { requestDesign } from "./api.js";
 import { DebouncedDesign } from "./debounced-design.js";
 import { FieldRegistry } from "./form/field-registry.js";
 import { JobForm } from "./form/job-form.js";
+import type { JobSchema } from "./job-schema.js";
 import { storeJob } from "./job-storage.js";
 import { JobState, type JobDraft } from "./job-state.js";
 import { ResultsView } from "./results/results-view.js";
@@ -20,10 +21,10 @@ export class DesignSession {
   #issues: JobIssue[] = [];
   #serviceIssues: JobIssue[] = [];
 
-  constructor(formRoot: HTMLElement, resultsRoot: HTMLElement, job: JobDraft) {
+  constructor(formRoot: HTMLElement, resultsRoot: HTMLElement, job: JobDraft, schema: JobSchema) {
     this.state = new JobState(job);
     this.#results = new ResultsView(resultsRoot, (path) => this.registry.focus(path));
-    this.#form = new JobForm(formRoot, this.state, this.registry, () => this.registry.show(this.#issues));
+    this.#form = new JobForm(formRoot, this.state, this.registry, schema, () => this.registry.show(this.#issues));
     this.#design = new DebouncedDesign((signal) => this.#compute(signal));
     this.state.onChange((change, path) => {
       storeJob(this.state.job);

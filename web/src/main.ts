@@ -1,6 +1,7 @@
-import { fetchExample, fetchExamples, type ExampleEntry } from "./api.js";
+import { fetchExample, fetchExamples, fetchJobSchema, type ExampleEntry } from "./api.js";
 import { DesignSession } from "./design-session.js";
 import { el } from "./dom.js";
+import { JobSchema } from "./job-schema.js";
 import { storedJob } from "./job-storage.js";
 import { openableJob, type JobDraft } from "./job-state.js";
 import { toolbar } from "./toolbar.js";
@@ -44,11 +45,13 @@ async function boot(): Promise<void> {
   const identity = document.getElementById("job-identity")!;
   let examples: ExampleEntry[] = [];
   let problem: string | undefined;
+  const schemaAnswer = fetchJobSchema().catch(() => null);
   try {
     examples = await fetchExamples();
   } catch (error) {
     problem = `The example list could not be loaded (${(error as Error).message}).`;
   }
+  const schema = new JobSchema(await schemaAnswer);
   let start: Start;
   try {
     start = await startingJob(examples);
@@ -56,7 +59,7 @@ async function boot(): Promise<void> {
     start = { job: storedJob() ?? emptyJob(), note: `The example could not be loaded (${(error as Error).message}).` };
   }
 
-  const session = new DesignSession(formRoot, resultsRoot, start.job);
+  const session = new DesignSession(formRoot, resultsRoot, start.job, schema);
   // The job now lives in this browser; without this a reload would load the example over the user's edits.
   if (location.search) history.replaceState(null, "", location.pathname);
   const bar = toolbar(session, examples, start.example);

@@ -1,4 +1,5 @@
 import { el, nextId } from "../dom.js";
+import type { JobSchema } from "../job-schema.js";
 import type { JobState } from "../job-state.js";
 import { numberFromText, type FieldRegistry } from "./field-registry.js";
 
@@ -6,6 +7,8 @@ import { numberFromText, type FieldRegistry } from "./field-registry.js";
 export interface FormContext {
   state: JobState;
   registry: FieldRegistry;
+  /** What the service accepts: which load kinds, supports, shapes and settings to offer. */
+  schema: JobSchema;
   /** Re-reads the lists that selects refer to (material and connector ids). */
   references: (() => void)[];
   /** Re-renders the form after a change of structure, then focuses `focusPath` if given. */
@@ -106,8 +109,8 @@ export interface Column {
   header: string;
   unit?: string;
   className?: string;
-  /** The cell's control for row i, with its path; null leaves the cell empty. */
-  cell: (i: number) => { path: string; control: HTMLElement; name: string; content?: HTMLElement } | { spanning: HTMLElement; columns: number } | null;
+  /** The cell's control for row i, with its path; null leaves the cell empty. `notes` is the row's message line, for extra fields in the cell. */
+  cell: (i: number, notes: HTMLElement) => { path: string; control: HTMLElement; name: string; content?: HTMLElement } | { spanning: HTMLElement; columns: number } | null;
 }
 
 /** A table of records (materials, parts, loads): one row per item, units in the headers, messages under the table. */
@@ -132,7 +135,7 @@ export function recordTable(
         covered--;
         continue;
       }
-      const spec = column.cell(i);
+      const spec = column.cell(i, notes);
       const td = el("td", { className: column.className });
       if (spec && "spanning" in spec) {
         td.colSpan = spec.columns;

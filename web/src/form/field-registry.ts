@@ -61,7 +61,9 @@ export class FieldRegistry {
     const issues: JobIssue[] = [];
     for (const entry of this.#entries.values()) {
       const value = read(entry.path);
-      if (entry.numeric && typeof value === "string") issues.push({ path: entry.path, message: `"${value}" is not a number; write it like 4.8 or 1200` });
+      if (!entry.numeric) continue;
+      if (typeof value === "string") issues.push({ path: entry.path, message: `"${value}" is not a number; write it like 4.8 or 1200` });
+      if (value === null) issues.push({ path: entry.path, message: "is required" });
     }
     return issues;
   }

@@ -1,3 +1,4 @@
+import type { JobSchema } from "../job-schema.js";
 import type { JobState } from "../job-state.js";
 import { basisStep } from "./basis-step.js";
 import { connectorsStep } from "./connectors-step.js";
@@ -18,10 +19,10 @@ export class JobForm {
   readonly #root: HTMLElement;
   readonly #afterRender: () => void;
 
-  constructor(root: HTMLElement, state: JobState, registry: FieldRegistry, afterRender: () => void) {
+  constructor(root: HTMLElement, state: JobState, registry: FieldRegistry, schema: JobSchema, afterRender: () => void) {
     this.#root = root;
     this.#afterRender = afterRender;
-    this.#ctx = { state, registry, references: [], rerender: (focusPath) => this.render(focusPath) };
+    this.#ctx = { state, registry, schema, references: [], rerender: (focusPath) => this.render(focusPath) };
   }
 
   render(focusPath?: string): void {

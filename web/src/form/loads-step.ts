@@ -1,5 +1,5 @@
 import type { LoadCategory } from "../../../core/schema/job.js";
-import { unitLabel } from "../../../core/units/quantity.js";
+import { unitLabel, type Quantity } from "../../../core/units/quantity.js";
 import { el } from "../dom.js";
 import { addButton, checkboxControl, field, numberControl, recordTable, rowButton, selectControl, textControl, type FormContext } from "./controls.js";
 import { fieldGrid, step } from "./step.js";
@@ -7,36 +7,55 @@ import { fieldGrid, step } from "./step.js";
 type Item = Record<string, unknown>;
 
 // Listed here rather than imported so the page bundle does not carry zod; the check below keeps the lists equal.
-const loadCategories = ["dead", "live", "roof-live", "snow", "wind"] as const satisfies readonly LoadCategory[];
-const everyCategoryListed: [Exclude<LoadCategory, (typeof loadCategories)[number]>] extends [never] ? true : never = true;
+const builtInCategories = ["dead", "live", "roof-live", "snow", "wind"] as const satisfies readonly LoadCategory[];
+const everyCategoryListed: [Exclude<LoadCategory, (typeof builtInCategories)[number]>] extends [never] ? true : never = true;
 void everyCategoryListed;
-const categoryChoices = loadCategories.map((c) => ({ value: c, label: c.replace("-", " ") }));
-const kindChoices = [
-  { value: "uniform", label: "uniform" },
-  { value: "point", label: "point" },
-];
 
-/** The same load as the other kind: category and label kept; the magnitude is a different quantity, so it is asked for again. */
+/** The load kinds this form can edit: their magnitudes with the quantity of each, and whether they act at a point. */
+const loadKinds: Record<string, { label: string; magnitudes: [key: string, label: string, quantity: Quantity][]; atPoint: boolean }> = {
+  uniform: { label: "uniform", magnitudes: [["w", "w", "lineLoad"]], atPoint: false },
+  linear: { label: "linear", magnitudes: [["wStart", "w start", "lineLoad"], ["wEnd", "w end", "lineLoad"]], atPoint: false },
+  point: { label: "point", magnitudes: [["P", "P", "force"]], atPoint: true },
+  moment: { label: "moment", magnitudes: [["M", "M", "moment"]], atPoint: true },
+};
+
+const endDefault = (k: number) => (k === 0 ? "pinned" : "roller");
+
+/** The same load as another kind: category, label and position kept; the magnitude is a different quantity, so it is asked for again. */
 function asKind(load: Item, kind: string): Item {
-  const kept = { category: load.category ?? "dead", label: load.label ?? "" };
-  if (kind === "point") return { type: "point", ...kept, ...(load.from !== undefined ? { at: load.from } : {}) };
-  return { type: "uniform", ...kept, ...(load.at !== undefined ? { from: load.at } : {}) };
+  const kept: Item = { type: kind, category: load.category ?? "dead", label: load.label ?? "" };
+  const start = load.from ?? load.at;
+  if (loadKinds[kind]?.atPoint) return { ...kept, ...(start !== undefined ? { at: start } : {}) };
+  return { ...kept, ...(start !== undefined ? { from: start } : {}), ...(load.to !== undefined ? { to: load.to } : {}) };
 }
 
 export function loadsStep(ctx: FormContext, number: number): HTMLElement {
-  const { state } = ctx;
+  const { state, schema } = ctx;
   const u = state.units;
   const span = unitLabel("span", u);
   const loads = state.list("beam.loads") as Item[];
   const at = (i: number, key: string) => `beam.loads[${i}].${key}`;
   const name = (i: number) => `Load ${i + 1}`;
-  const isPoint = (i: number) => loads[i]?.type === "point";
+  const kindOf = (i: number) => loadKinds[String(loads[i]?.type ?? "")];
+  const offered = (schema.choices("beam.loads[].type") ?? ["uniform", "point"]).filter((k) => k in loadKinds);
+  const kindChoices = offered.map((k) => ({ value: k, label: loadKinds[k]!.label }));
+  const categoryChoices = () => [
+    ...(schema.choices("beam.loads[].category") ?? schema.choices("beam.categories[].actsAs") ?? builtInCategories).map((c) => ({ value: c, label: c.replace("-", " ") })),
+    ...state.list("beam.categories").map((c) => String((c as Item).id ?? "")).filter(Boolean).map((id) => ({ value: id, label: `${id} (own)` })),
+  ];
 
-  const magnitude = (i: number) => {
-    const key = isPoint(i) ? "P" : "w";
-    const unit = unitLabel(isPoint(i) ? "force" : "lineLoad", u);
-    const input = numberControl(ctx, at(i, key), key);
-    return { path: at(i, key), name: `${key} (${unit})`, control: input, content: el("span", { className: "with-unit" }, [input, el("span", { className: "unit", text: unit, attrs: { "aria-hidden": "true" } })]) };
+  const magnitude = (i: number, notes: HTMLElement) => {
+    const kind = kindOf(i);
+    if (!kind) return { spanning: el("span", { className: "hint", text: `${String(loads[i]?.type ?? "?")} load: kept as in the job file` }), columns: 3 };
+    const inputs = kind.magnitudes.map(([key, label, quantity]) => {
+      const unit = unitLabel(quantity, u);
+      const input = numberControl(ctx, at(i, key), label);
+      input.setAttribute("aria-label", `${name(i)} ${label} (${unit})`);
+      ctx.registry.register({ path: at(i, key), label: `${name(i)} · ${label}`, control: input, marker: input, host: notes, prefix: label, numeric: true });
+      return el("span", { className: "with-unit" }, [kind.magnitudes.length > 1 ? el("span", { className: "unit", text: label.replace("w ", "") }) : null, input, el("span", { className: "unit", text: unit })]);
+    });
+    const [firstKey, firstLabel, firstQuantity] = kind.magnitudes[0]!;
+    return { path: at(i, firstKey), name: `${firstLabel} (${unitLabel(firstQuantity, u)})`, control: inputs[0]!.querySelector("input")!, content: el("div", { className: "stack" }, inputs) };
   };
 
   const { table, issues } = recordTable(ctx, {
@@ -51,7 +70,7 @@ export function loadsStep(ctx: FormContext, number: number): HTMLElement {
         cell: (i) => ({
           path: at(i, "type"),
           name: "kind",
-          control: selectControl(ctx, at(i, "type"), "kind", kindChoices, {
+          control: selectControl(ctx, at(i, "type"), "kind", kindOf(i) ? kindChoices : [{ value: String(loads[i]?.type ?? ""), label: String(loads[i]?.type ?? "?") }, ...kindChoices], {
             onChosen: (kind) => {
               state.replaceItem(`beam.loads[${i}]`, asKind(loads[i] ?? {}, kind));
               ctx.rerender(at(i, "type"));
@@ -61,13 +80,13 @@ export function loadsStep(ctx: FormContext, number: number): HTMLElement {
       },
       { header: "Category", className: "col-choice", cell: (i) => ({ path: at(i, "category"), name: "category", control: selectControl(ctx, at(i, "category"), "category", categoryChoices, { whenAbsent: "dead" }) }) },
       { header: "Label", className: "col-name", cell: (i) => ({ path: at(i, "label"), name: "label", control: textControl(ctx, at(i, "label"), "label", { maxLength: 60 }) }) },
-      { header: "w or P", className: "col-magnitude", cell: magnitude },
+      { header: "Magnitude", className: "col-magnitude", cell: magnitude },
       {
         header: "From / at",
         unit: span,
         className: "col-num",
         cell: (i) =>
-          isPoint(i)
+          kindOf(i)?.atPoint
             ? { path: at(i, "at"), name: "at", control: numberControl(ctx, at(i, "at"), "at") }
             : { path: at(i, "from"), name: "from", control: numberControl(ctx, at(i, "from"), "from", { placeholder: "start" }) },
       },
@@ -75,7 +94,7 @@ export function loadsStep(ctx: FormContext, number: number): HTMLElement {
         header: "To",
         unit: span,
         className: "col-num",
-        cell: (i) => (isPoint(i) ? null : { path: at(i, "to"), name: "to", control: numberControl(ctx, at(i, "to"), "to", { placeholder: "end" }) }),
+        cell: (i) => (kindOf(i)?.atPoint ? null : { path: at(i, "to"), name: "to", control: numberControl(ctx, at(i, "to"), "to", { placeholder: "end" }) }),
       },
     ],
     actions: (i) => [
@@ -86,17 +105,13 @@ export function loadsStep(ctx: FormContext, number: number): HTMLElement {
     ],
   });
 
-  const spanInput = numberControl(ctx, "beam.spans[0]", "Span");
-  const spanField = field(ctx, "beam.spans[0]", "Span", spanInput, { unit: span, hint: "One simply supported span" });
-  ctx.registry.register({ path: "beam.spans", label: "Span", control: spanInput, marker: spanField, host: spanField });
-
-  const addLoad = (load: Item, focusKey: string) => {
-    const i = state.insert("beam.loads", load);
-    ctx.rerender(at(i, focusKey));
+  const addLoad = (kind: string) => {
+    const i = state.insert("beam.loads", { type: kind, category: loadKinds[kind]!.atPoint ? "live" : "dead", label: "" });
+    ctx.rerender(at(i, loadKinds[kind]!.magnitudes[0]![0]));
   };
-  const box = step(number, "Span and loads", "Loads act downward; a uniform load without from/to covers the whole member.", [
+  const box = step(number, "Spans and loads", "Loads act downward; a line load without from/to covers the whole member. Positions are measured from the left end.", [
+    spansBlock(ctx),
     fieldGrid([
-      spanField,
       field(ctx, "beam.deflectionLimits.total", "Total-load deflection: span ÷", numberControl(ctx, "beam.deflectionLimits.total", "total", { placeholder: "240" })),
       field(ctx, "beam.deflectionLimits.live", "Live-load deflection: span ÷", numberControl(ctx, "beam.deflectionLimits.live", "live", { placeholder: "360" })),
       field(ctx, "beam.selfWeight", "Add the parts' self-weight as dead load", checkboxControl(ctx, "beam.selfWeight", "self-weight", true), { wide: true }),
@@ -104,12 +119,70 @@ export function loadsStep(ctx: FormContext, number: number): HTMLElement {
     el("h3", { text: "Loads" }),
     table,
     issues,
-    el("div", { className: "button-row" }, [
-      addButton("Add uniform load", () => addLoad({ type: "uniform", category: "dead", label: "" }, "w")),
-      addButton("Add point load", () => addLoad({ type: "point", category: "live", label: "" }, "P")),
-    ]),
+    el("div", { className: "button-row" }, offered.map((kind) => addButton(`Add ${loadKinds[kind]!.label} load`, () => addLoad(kind)))),
   ]);
   ctx.registry.register({ path: "beam.loads", label: "Loads", marker: box, host: issues });
-  ctx.registry.register({ path: "beam", label: "Span and loads", marker: box, host: issues });
+  ctx.registry.register({ path: "beam", label: "Spans and loads", marker: box, host: issues });
   return box;
+}
+
+/** The spans left to right and, where the service takes them, what holds each end. */
+function spansBlock(ctx: FormContext): HTMLElement {
+  const { state, schema } = ctx;
+  const span = unitLabel("span", state.units);
+  const count = state.list("beam.spans").length;
+  const maxSpans = schema.maxItems("beam.spans") ?? 1;
+  const supportChoices = schema.choices("beam.supports[]");
+  const issues = el("div", { className: "row-issues" });
+
+  const spanFields = Array.from({ length: Math.max(1, count) }, (_, k) => {
+    const label = count > 1 ? `Span ${k + 1}` : "Span";
+    const box = field(ctx, `beam.spans[${k}]`, label, numberControl(ctx, `beam.spans[${k}]`, label), { unit: span, ...(maxSpans === 1 ? { hint: "One simply supported span" } : {}) });
+    if (count > 1) {
+      box.querySelector(".with-unit")!.append(
+        rowButton("×", `Remove span ${k + 1}`, () => {
+          state.remove("beam.spans", k);
+          const supports = state.read("beam.supports");
+          if (Array.isArray(supports)) state.set("beam.supports", supports.filter((_, e) => e !== k + 1));
+          ctx.rerender(`beam.spans[${Math.max(0, k - 1)}]`);
+        }, "remove"),
+      );
+    }
+    return box;
+  });
+
+  const ends = supportChoices
+    ? Array.from({ length: Math.max(1, count) + 1 }, (_, k) => {
+        const label = k === 0 ? "Left end" : k === Math.max(1, count) ? "Right end" : `Support ${k + 1}`;
+        const select = selectControl(ctx, `beam.supports[${k}]`, label, supportChoices.map((c) => ({ value: c, label: c })), {
+          whenAbsent: endDefault(k),
+          // The service takes the supports as one list, so a change writes every end.
+          onChosen: (value) => {
+            const all = Array.from({ length: Math.max(1, count) + 1 }, (_, e) => String(state.read(`beam.supports[${e}]`) ?? endDefault(e)));
+            all[k] = value;
+            state.set("beam.supports", all);
+          },
+        });
+        return field(ctx, `beam.supports[${k}]`, label, select);
+      })
+    : [];
+
+  const block = el("div", { className: "spans" }, [
+    fieldGrid(spanFields),
+    count < maxSpans
+      ? addButton("Add span", () => {
+          state.insert("beam.spans", undefined);
+          const supports = state.read("beam.supports");
+          if (Array.isArray(supports)) state.set("beam.supports", [...supports, "roller"]);
+          ctx.rerender(`beam.spans[${count}]`);
+        })
+      : null,
+    ends.length ? el("h3", { text: "Supports" }) : null,
+    ends.length ? fieldGrid(ends) : null,
+    issues,
+  ]);
+  const spanInput = block.querySelector<HTMLElement>('[data-path="beam.spans[0]"]') ?? undefined;
+  ctx.registry.register({ path: "beam.spans", label: "Spans", ...(spanInput ? { control: spanInput } : {}), marker: block, host: issues });
+  ctx.registry.register({ path: "beam.supports", label: "Supports", marker: block, host: issues });
+  return block;
 }

@@ -29,14 +29,14 @@ export function materialsStep(ctx: FormContext, number: number): HTMLElement {
       {
         header: "Name, family, source",
         className: "col-name",
-        cell: (i) => {
+        cell: (i, notes) => {
           const nameInput = textControl(ctx, at(i, "name"), "name", { maxLength: 80, placeholder: "name" });
           const family = selectControl(ctx, at(i, "family"), `${name(i)} family`, families, { whenAbsent: "other" });
           const source = textControl(ctx, at(i, "source"), `${name(i)} source of values`, { maxLength: 160, placeholder: "source of values" });
           source.classList.add("source");
           const stack = el("div", { className: "stack" }, [nameInput, el("div", { className: "pair" }, [family, source])]);
-          ctx.registry.register({ path: at(i, "family"), label: `${name(i)} · family`, control: family, marker: family, host: stack });
-          ctx.registry.register({ path: at(i, "source"), label: `${name(i)} · source`, control: source, marker: source, host: stack });
+          ctx.registry.register({ path: at(i, "family"), label: `${name(i)} · family`, control: family, marker: family, host: notes, prefix: "family" });
+          ctx.registry.register({ path: at(i, "source"), label: `${name(i)} · source`, control: source, marker: source, host: notes, prefix: "source" });
           return { path: at(i, "name"), name: "name", control: nameInput, content: stack };
         },
       },

@@ -8,13 +8,29 @@ import { spacingPlot } from "./spacing-plot.js";
 
 const combinationLabel = (result: DesignResult, id: string) => result.beam.combinations.find((c) => c.id === id)?.name ?? id;
 
-/** V for each combination, and M drawn on the tension side (positive downward). */
-export function shearAndMoment(result: DesignResult, width: number): HTMLElement[] {
+/** Up to this many combinations are drawn one curve each; beyond it the envelope is drawn, with one chosen combination over it. */
+const MAX_CURVES = 3;
+
+/**
+ * V and M (M drawn on the tension side, positive downward): every combination when there are few,
+ * else the envelope, with the combination `chosen` drawn over it.
+ */
+export function shearAndMoment(result: DesignResult, width: number, chosen?: string): HTMLElement[] {
   const { beam, unitLabels: u } = result;
   const common = { xUnit: u.span ?? "", x: beam.stations, width, height: 190 };
+  const few = beam.perCombination.length <= MAX_CURVES;
+  const picked = beam.perCombination.find((c) => c.combination === chosen);
+  const curves = (pick: (c: (typeof beam.perCombination)[number]) => number[], envelope: [number[], number[]]) =>
+    few
+      ? beam.perCombination.map((c) => ({ label: combinationLabel(result, c.combination), values: pick(c), fill: true }))
+      : [
+          { label: "envelope, largest", values: envelope[0], fill: true, colour: palette.series[0] },
+          { label: "smallest", values: envelope[1], fill: true, colour: palette.series[0] },
+          ...(picked ? [{ label: picked.combination, values: pick(picked), colour: palette.series[1], dash: [5, 3] }] : []),
+        ];
   return [
-    figure(lineDiagram({ ...common, title: "Shear force V", yUnit: u.force ?? "", role: "shear", series: beam.perCombination.map((c) => ({ label: combinationLabel(result, c.combination), values: c.shear, fill: true })) })),
-    figure(lineDiagram({ ...common, title: "Bending moment M", yUnit: u.moment ?? "", role: "moment", invert: true, series: beam.perCombination.map((c) => ({ label: combinationLabel(result, c.combination), values: c.moment, fill: true })) })),
+    figure(lineDiagram({ ...common, title: "Shear force V", yUnit: u.force ?? "", role: "shear", series: curves((c) => c.shear, [beam.envelope.shearMax, beam.envelope.shearMin]) })),
+    figure(lineDiagram({ ...common, title: "Bending moment M", yUnit: u.moment ?? "", role: "moment", invert: true, series: curves((c) => c.moment, [beam.envelope.momentMax, beam.envelope.momentMin]) })),
   ];
 }
 
@@ -63,9 +79,9 @@ export function spacingDiagram(result: DesignResult, schedule: Schedule, width: 
   );
 }
 
-/** The load combinations the results refer to by id, with their factors. */
+/** The load combinations the results refer to by id, with their factors; folded away when there are many. */
 export function combinations(result: DesignResult): HTMLElement {
-  return el("dl", { className: "figures combinations" }, [
+  const list = el("dl", { className: "figures combinations" }, [
     ...result.beam.combinations.flatMap((c) => {
       const factors = Object.entries(c.factors)
         .filter(([, f]) => f !== 0)
@@ -74,4 +90,7 @@ export function combinations(result: DesignResult): HTMLElement {
       return [el("dt", { text: c.id }), el("dd", { text: `${c.name}: ${factors || "no loads"} (load duration: ${c.duration})` })];
     }),
   ]);
+  const count = result.beam.combinations.length;
+  if (count <= MAX_CURVES) return el("div", {}, [el("h3", { className: "minor", text: "Load combinations" }), list]);
+  return el("details", { className: "combinations-fold" }, [el("summary", { text: `${count} load combinations and live-load patterns` }), list]);
 }

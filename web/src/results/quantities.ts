@@ -22,10 +22,6 @@ export function utilisation(value: number, passes: boolean): HTMLElement {
   ]);
 }
 
-export const combinationName = (result: DesignResult, id: string) => {
-  const found = result.beam.combinations.find((c) => c.id === id);
-  return found ? `${found.id} (${found.name})` : id;
-};
 
 /** A simple table from header cells and rows of cells. */
 export function table(caption: string, headers: (string | Node)[], rows: { cells: (string | Node)[]; className?: string }[], options: { numeric?: number[]; className?: string; captionHidden?: boolean } = {}): HTMLElement {

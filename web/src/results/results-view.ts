@@ -30,6 +30,8 @@ export class ResultsView {
   #result: DesignResult | null = null;
   #freshness: Freshness = "updating";
   #drawnWidth = 0;
+  /** Combination drawn over the envelope, kept across recomputes. */
+  #combination: string | undefined;
 
   constructor(
     root: HTMLElement,
@@ -143,6 +145,35 @@ export class ResultsView {
     );
   }
 
+  /** V and M; with many combinations, the envelope and a chooser for one combination to draw over it. */
+  #actions(result: DesignResult, width: number): HTMLElement {
+    const box = el("div");
+    const ids = result.beam.perCombination.map((c) => c.combination);
+    if (!ids.includes(this.#combination ?? "")) this.#combination = undefined;
+    const draw = () => box.replaceChildren(...(chooser ? [chooser] : []), ...shearAndMoment(result, width, this.#combination));
+    const chooser =
+      ids.length > 3
+        ? el("label", { className: "combination-chooser" }, [
+            "Also draw ",
+            el(
+              "select",
+              {
+                on: {
+                  change: (event) => {
+                    this.#combination = (event.target as HTMLSelectElement).value || undefined;
+                    draw();
+                    box.querySelector("select")?.focus();
+                  },
+                },
+              },
+              [el("option", { text: "no single combination", attrs: { value: "" } }), ...ids.map((id) => el("option", { text: id, attrs: { value: id, selected: id === this.#combination } }))],
+            ),
+          ])
+        : null;
+    draw();
+    return box;
+  }
+
   #renderBody(): void {
     const result = this.#result;
     if (!result) return;
@@ -158,9 +189,8 @@ export class ResultsView {
       this.#section.render(result, this.#body),
       el("section", { className: "panel", attrs: { id: "diagrams", "aria-labelledby": "diagrams-title" } }, [
         el("h2", { text: "Shear, moment and shear flow", attrs: { id: "diagrams-title" } }),
-        el("h3", { className: "minor", text: "Load combinations" }),
         combinations(result),
-        ...shearAndMoment(result, width),
+        this.#actions(result, width),
         shearFlow(result, width),
       ]),
       schedules,

@@ -4,7 +4,7 @@ import { formatNumber, formatRatio } from "../../../core/units/format.js";
 import { el } from "../dom.js";
 import { spacingDiagram } from "./diagrams.js";
 import { figure } from "./figure.js";
-import { combinationName, header, range, shown, table, utilisation } from "./quantities.js";
+import { header, range, shown, table, utilisation } from "./quantities.js";
 
 /** One joint's schedule: the zones a builder follows, how economical they are, and the row-by-row check. */
 export function scheduleBlock(result: DesignResult, schedule: Schedule, width: number): HTMLElement {
@@ -20,7 +20,7 @@ export function scheduleBlock(result: DesignResult, schedule: Schedule, width: n
     })),
     { className: "schedule", numeric: [2, 3, 4, 5] },
   );
-  const resistance = schedule.resistance.map((r) => `${shown(result, r.value, "connectorForce")} for ${combinationName(result, r.combination)} (${r.governing}; ${r.reference})`).join("; ");
+  const resistance = resistanceText(result, schedule);
   const l = schedule.limits;
   const limits = [
     `minimum ${shown(result, l.minSpacing, "length")}`,
@@ -51,10 +51,23 @@ export function scheduleBlock(result: DesignResult, schedule: Schedule, width: n
     ]),
     el("p", { className: `verification${v.passes ? "" : " fails"}` }, [
       el("strong", { text: v.passes ? "Row check passes: " : "Row check fails: " }),
-      `largest utilisation ${formatRatio(v.maxUtilisation)} at x = ${shown(result, v.at, "span")} (${combinationName(result, v.combination)}). Method: ${v.method}.`,
+      `largest utilisation ${formatRatio(v.maxUtilisation)} at x = ${shown(result, v.at, "span")} (${v.combination}). Method: ${v.method}.`,
     ]),
     spacingDiagram(result, schedule, width),
   ]);
 }
 
 const term = (name: string, value: string) => [el("dt", { text: name }), el("dd", { text: value })];
+
+/** Resistance per connector, once for every group of combinations that share the same value and reason. */
+function resistanceText(result: DesignResult, schedule: Schedule): string {
+  const groups = new Map<string, string[]>();
+  for (const r of schedule.resistance) {
+    const text = `${shown(result, r.value, "connectorForce")} (${r.governing}; ${r.reference})`;
+    groups.set(text, [...(groups.get(text) ?? []), r.combination]);
+  }
+  const all = schedule.resistance.length;
+  return [...groups]
+    .map(([text, ids]) => (groups.size === 1 ? `${text}${all > 1 ? `, every combination` : `, ${ids[0]}`}` : `${text} for ${ids.join(", ")}`))
+    .join("; ");
+}
