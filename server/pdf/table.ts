@@ -101,6 +101,14 @@ export function table(sheet: Sheet, columns: Column[], rows: Row[], options: Tab
   rows.forEach((row, index) => {
     const style = { colour: options.rowColour?.(index), band: index % 2 === 1 ? "#f7f9fa" : undefined };
     let cells = row.map(asCell);
+    // No last row alone on a page (a total, the end of a list): the one before it goes over with it.
+    if (index === rows.length - 2 && rows.length >= 3) {
+      const pair = rowHeight(cells) + rowHeight(rows[index + 1]!.map(asCell));
+      if (pair > sheet.room && pair <= fullPage) {
+        sheet.newPage();
+        drawHeader();
+      }
+    }
     // A row taller than a whole page is the only thing ever split: it runs on, cell by cell, under a repeated header.
     for (;;) {
       const height = rowHeight(cells);

@@ -37,7 +37,8 @@ export function workingTables(c: WorksheetContext, what: string, entries: { comb
   const row = (step: WorkingStepLike) => [{ text: step.symbol, bold: true }, text.of(step.value, step.quantity), step.description, step.reference ?? ""];
 
   if (all.length === 1) {
-    sheet.heading(`Working for ${what}: ${named(all[0]!.combinations)}`, 2, 40);
+    const every = all[0]!.combinations.length > 1 && all[0]!.combinations.length === entries.length;
+    sheet.heading(`Working for ${what}: ${every ? "the same under every combination" : named(all[0]!.combinations)}`, 2, 40);
     table(sheet, columns, all[0]!.steps.map(row));
     return;
   }
