@@ -4,16 +4,16 @@ import { field, selectControl, type FormContext } from "./controls.js";
 import { fieldGrid, step } from "./step.js";
 
 const setNames: Record<string, string> = {
-  unfactored: "Loads as entered, unfactored",
-  "asce7-22-strength": "ASCE 7-22 strength combinations",
-  "asce7-22-allowable": "ASCE 7-22 allowable stress combinations",
-  "en1990-6.10": "EN 1990 expression 6.10",
-  custom: "Own combinations (from the job file)",
+  unfactored: "As entered, unfactored",
+  "asce7-22-strength": "ASCE 7-22, strength",
+  "asce7-22-allowable": "ASCE 7-22, allowable stress",
+  "en1990-6.10": "EN 1990, expression 6.10",
+  custom: "Own combinations (job file)",
 };
 
 const modeNames: Record<string, string> = {
-  design: "Lay out the connector schedule",
-  check: "Check the schedule given in the job file",
+  design: "Design the schedule",
+  check: "Check a given schedule",
 };
 
 export function basisStep(ctx: FormContext, number: number): HTMLElement {
@@ -38,11 +38,12 @@ export function basisStep(ctx: FormContext, number: number): HTMLElement {
   const optional = [
     sets && sets.length > 1
       ? field(ctx, "combinations.set", "Load combinations", selectControl(ctx, "combinations.set", "load combinations", sets.map((s) => ({ value: s, label: setNames[s] ?? s })), { whenAbsent: "unfactored" }), {
+          wide: true,
           ...(custom.length ? { hint: `${custom.length} own combination(s) in the job file.` } : {}),
         })
       : null,
     modes && modes.length > 1
-      ? field(ctx, "mode", "Task", selectControl(ctx, "mode", "task", modes.map((m) => ({ value: m, label: modeNames[m] ?? m })), { whenAbsent: "design" }))
+      ? field(ctx, "mode", "Task", selectControl(ctx, "mode", "task", modes.map((m) => ({ value: m, label: modeNames[m] ?? m })), { whenAbsent: "design" }), { hint: "A schedule to check is given in the job file." })
       : null,
   ].filter((f): f is HTMLElement => f !== null);
   ctx.registry.register({ path: "combinations", label: "Load combinations", marker: unitsBox, host: unitsBox });
