@@ -35,7 +35,7 @@ const PAD_Y = 2.5;
  */
 export function table(sheet: Sheet, columns: Column[], rows: Row[], options: TableOptions = {}): void {
   const size = options.size ?? 8.5;
-  const noteSize = size - 1.5;
+  const noteSize = size - 1;
   const width = options.width ?? sheet.width - (options.indent ?? 0);
   const x0 = sheet.left + (options.indent ?? 0);
   const total = columns.reduce((s, c) => s + c.weight, 0);

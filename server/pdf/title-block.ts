@@ -83,8 +83,9 @@ function footer(doc: PDFKit.PDFDocument, frame: PageFrame, facts: TitleBlockFact
   const noticeHeight = doc.heightOfString(REVIEW_NOTICE, { width });
   doc.text(REVIEW_NOTICE, x0, y, { width, height: noticeHeight + 2 });
   y += noticeHeight + 3;
-  doc.font("body").fontSize(6.5).fillColor(ink.faint).text("Input fingerprint (SHA-256 of the canonical job):", x0, y, { lineBreak: false });
-  const labelWidth = doc.widthOfString("Input fingerprint (SHA-256 of the canonical job): ");
-  doc.font("mono").fontSize(6.5).fillColor(ink.text).text(facts.fingerprint || "not set", x0 + labelWidth, y, { lineBreak: false });
-  doc.font("body").fontSize(6.5).fillColor(ink.faint).text(`printed ${facts.printed}`, x0, y, { width, align: "right", lineBreak: false });
+  const label = "Input fingerprint, SHA-256: ";
+  doc.font("body").fontSize(7).fillColor(ink.faint).text(label, x0, y, { lineBreak: false });
+  const labelWidth = doc.widthOfString(label);
+  doc.font("mono").fontSize(7).fillColor(ink.text).text(facts.fingerprint || "not set", x0 + labelWidth, y, { lineBreak: false });
+  doc.font("body").fontSize(7).fillColor(ink.faint).text(`printed ${facts.printed}`, x0, y, { width, align: "right", lineBreak: false });
 }
