@@ -1,3 +1,4 @@
+import { beamIssues } from "./beam/beam-issues.js";
 import { checkConnectorPlacement } from "./connector/check-placement.js";
 import { kindOf } from "./connector/registry.js";
 import { JobDocument } from "./schema/job.js";
@@ -96,16 +97,7 @@ export function checkJob(job: JobDocument): JobIssue[] {
   const L = job.beam.spans.reduce((s, l) => s + l, 0);
   const spanUnit = job.units === "si" ? "m" : "ft";
   if (job.mode === "check") issues.push(...checkProvidedSchedules(job, fastenedJoints(job, section, contacts), L, spanUnit));
-  job.beam.loads.forEach((load, i) => {
-    const path = `beam.loads[${i}]`;
-    if (load.type === "point" && load.at > L * (1 + 1e-12)) add(`${path}.at`, `${load.at} ${spanUnit} is beyond the end of the member (length ${round(L)} ${spanUnit})`);
-    if (load.type === "uniform") {
-      const from = load.from ?? 0;
-      const to = load.to ?? L;
-      if (to > L * (1 + 1e-12)) add(`${path}.to`, `${to} ${spanUnit} is beyond the end of the member (length ${round(L)} ${spanUnit})`);
-      else if (from >= to) add(`${path}.from`, `the loaded length must start before it ends (from ${from} to ${to} ${spanUnit})`);
-    }
-  });
+  for (const issue of beamIssues(job)) add(issue.path, issue.message);
 
   const defaults = spacingDefaults(job.units);
   const rules = job.spacing;

@@ -1,7 +1,9 @@
 import { analyseBeam, type BeamAnalysis } from "./beam/analyse-beam.js";
 import { combinationsOf } from "./beam/combinations.js";
-import { evaluate, maxAbsShear, maxDeflection, momentAt, momentExtremes, shearAt } from "./beam/member-actions.js";
-import { stationsFor, type Station } from "./beam/stations.js";
+import { beamAssumptions } from "./beam/beam-assumptions.js";
+import { beamResult } from "./beam/beam-result.js";
+import { maxAbsShear, shearAt } from "./beam/member-actions.js";
+import { stationsFor } from "./beam/stations.js";
 import { checkBondLine } from "./checks/bond-line.js";
 import { memberChecks } from "./checks/member-checks.js";
 import { governingLimits, type ConnectorContext, type JoinedMember } from "./connector/connector-kind.js";
@@ -239,7 +241,7 @@ export function designMember(job: JobDocument): DesignResult {
     welds,
     checks,
     notChecked,
-    assumptions: [...baseAssumptions(job), ...assumptions],
+    assumptions: [...baseAssumptions(job, beam), ...assumptions],
     standards: [
       "Connector resistances are the values given in the job or computed by the standards listed below; material strengths are the values given in the job, on its stated basis.",
       "Shear flow q = V·Q/I and stresses by elastic beam theory (mechanics of materials, e.g. Gere & Goodno, Mechanics of Materials, ch. 5).",
@@ -351,50 +353,15 @@ function shearStressSummary(section: SectionModel, profile: ReturnType<typeof st
   return { maxFactor: peak.factor, atY: peak.y, rectangleClosedForm: single ? 1.5 / section.area : null, webApproximations };
 }
 
-function beamResult(beam: BeamAnalysis, stations: Station[]): DesignResult["beam"] {
-  const perCombination = beam.results.map((r) => {
-    const { max, min } = momentExtremes(r.actions);
-    return {
-      combination: r.combination.id,
-      shear: stations.map((s) => shearAt(r.actions, s.x, s.side)),
-      moment: stations.map((s) => momentAt(r.actions, s.x, s.side)),
-      deflection: stations.map((s) => -evaluate(r.curve, s.x, "v")),
-      reactions: r.reactions.map((x) => ({ x: x.x, force: x.R, moment: x.M })),
-      maxShear: maxAbsShear(r.actions, 0, beam.length),
-      maxMoment: max,
-      minMoment: min,
-      maxDeflection: maxDeflection(r.curve),
-    };
-  });
-  const at = (i: number, pick: (p: (typeof perCombination)[number]) => number[]) => perCombination.map((p) => pick(p)[i]!);
-  return {
-    length: beam.length,
-    spans: beam.spans,
-    supports: beam.supports,
-    selfWeight: beam.selfWeight,
-    combinations: beam.results.map((r) => r.combination),
-    stations: stations.map((s) => s.x),
-    perCombination,
-    envelope: {
-      shearMax: stations.map((_, i) => Math.max(...at(i, (p) => p.shear))),
-      shearMin: stations.map((_, i) => Math.min(...at(i, (p) => p.shear))),
-      momentMax: stations.map((_, i) => Math.max(...at(i, (p) => p.moment))),
-      momentMin: stations.map((_, i) => Math.min(...at(i, (p) => p.moment))),
-      governingShear: stations.map((_, i) => {
-        const values = at(i, (p) => p.shear).map(Math.abs);
-        return perCombination[values.indexOf(Math.max(...values))]!.combination;
-      }),
-    },
-  };
-}
-
-function baseAssumptions(job: JobDocument): string[] {
+function baseAssumptions(job: JobDocument, beam: BeamAnalysis): string[] {
   return [
     "Linear-elastic member; plane sections remain plane; the parts act as one section (rigid connection), so q = V·Q/I about the transformed section's neutral axis.",
     "Parts of different stiffness are transformed by the modular ratio n = E/E_ref to the first part's material.",
-    `Loads are taken as entered, on the ${job.basis === "allowable" ? "allowable-stress (service load)" : "factored (strength) "} basis; resistances and strengths are compared on the same basis.`,
+    job.combinations.set === "unfactored"
+      ? `Loads are taken as entered, on the ${job.basis === "allowable" ? "allowable-stress (service load)" : "factored (strength)"} basis; resistances and strengths are compared on the same basis.`
+      : `Loads are entered as nominal values by category and combined by the factors of each load combination; resistances and strengths are on the ${job.basis === "allowable" ? "allowable-stress" : "factored (design)"} basis.`,
     job.beam.selfWeight ? "Self-weight of the parts (area × density × g) is added as a dead load over the whole member." : "Self-weight is not included (switched off in the job).",
-    "The member is simply supported: pinned at the left end, on a roller at the right end.",
+    ...beamAssumptions(job, beam),
     "Shear stress at a level is averaged over the full width cut at that level.",
     "Zone boundaries are on a round grid from the left end; the first and last rows sit at the end distance from the member ends.",
   ];

@@ -1,8 +1,14 @@
 import { GRAVITY } from "../units/quantity.js";
+import type { Beam } from "../schema/beam.js";
 import type { JobDocument } from "../schema/job.js";
 import type { Combination } from "../schema/result.js";
 import type { SectionModel } from "../section/section-model.js";
+import { beamModelOf, type LoadRegion, type Support, type SupportCondition } from "./beam-model.js";
+import { governingPatterns, regionsIn } from "./live-load-patterns.js";
+import { categoriesOf, presentCategories, shortestDuration } from "./load-categories.js";
 import {
+  combineActions,
+  combineCurves,
   deflectionCurve,
   emptyLoads,
   memberActions,
@@ -11,11 +17,9 @@ import {
   type MemberActions,
   type Reaction,
 } from "./member-actions.js";
+import { supportReactions } from "./support-reactions.js";
 
-export interface Support {
-  x: number;
-  type: "pinned" | "roller" | "fixed";
-}
+export type { Support } from "./beam-model.js";
 
 export interface CombinationActions {
   combination: Combination;
@@ -28,11 +32,21 @@ export interface CombinationActions {
 export interface BeamAnalysis {
   length: number;
   spans: number[];
+  /** The supports, left to right (free ends are not supports). */
   supports: Support[];
+  /** Condition at each span end. */
+  ends: SupportCondition[];
+  /** Spans between supports and overhangs: the regions live load is patterned over and deflection is measured on. */
+  regions: LoadRegion[];
   /** Self-weight as a dead line load, N/mm (0 when switched off). */
   selfWeight: number;
   flexuralRigidity: number;
+  /** One entry per combination and live-load pattern. */
   results: CombinationActions[];
+  /** Service-level cases for the deflection checks (loads as entered, factor 1), or null when the loads were entered factored. */
+  service: { total: CombinationActions[]; live: CombinationActions[]; liveCategories: string[] } | null;
+  /** The patterned categories actually placed span by span. */
+  patterned: string[];
 }
 
 /** Self-weight of the parts, N/mm: Σ ρ·g·A with ρ in kg/m³ and A in mm². */
@@ -40,18 +54,234 @@ export function selfWeightOf(section: SectionModel): number {
   return section.parts.reduce((s, p) => s + p.material.density * GRAVITY * p.area * 1e-9, 0);
 }
 
-/** Loads of the job scaled by a combination's factors, self-weight included as dead load. */
-export function factoredLoads(job: JobDocument, combination: Combination, selfWeight: number, length: number): LoadSet {
-  const set = emptyLoads();
-  const factor = (category: string) => combination.factors[category] ?? 0;
-  if (selfWeight > 0 && factor("dead") !== 0) set.lines.push({ x0: 0, x1: length, w0: factor("dead") * selfWeight, w1: factor("dead") * selfWeight });
-  for (const load of job.beam.loads) {
-    const f = factor(load.category);
-    if (f === 0) continue;
-    if (load.type === "point") set.points.push({ x: load.at, P: f * load.P });
-    else set.lines.push({ x0: load.from ?? 0, x1: load.to ?? length, w0: f * load.w, w1: f * load.w });
+/** The member of a job (core units) under each combination, with live-load patterns. */
+export function analyseBeam(job: JobDocument, section: SectionModel, combinations: Combination[]): BeamAnalysis {
+  return analyseMember({
+    beam: job.beam,
+    combinations,
+    selfWeight: job.beam.selfWeight ? selfWeightOf(section) : 0,
+    flexuralRigidity: section.referenceModulus * section.secondMoment,
+    serviceLoads: !(job.basis === "factored" && job.combinations.set === "unfactored"),
+  });
+}
+
+export interface MemberInput {
+  /** The job's beam in core units (mm, N, N/mm, N·mm). */
+  beam: Beam;
+  combinations: Combination[];
+  /** N/mm, dead load over the whole member. */
+  selfWeight: number;
+  /** E·I, N·mm². */
+  flexuralRigidity: number;
+  /** Whether the loads as entered are service (nominal) loads, so deflection can be checked. */
+  serviceLoads: boolean;
+}
+
+/**
+ * Reactions by the stiffness method for each load category (and each region of a patterned
+ * category), combined by superposition; exact V, M and deflection for every combination and every
+ * governing live-load pattern.
+ */
+export function analyseMember(input: MemberInput): BeamAnalysis {
+  const { beam, selfWeight, flexuralRigidity: EI } = input;
+  const model = beamModelOf(beam.spans, beam.supports);
+  const { length, regions } = model;
+  const info = categoriesOf(beam);
+  const present = presentCategories(beam, selfWeight);
+  const byCategory = loadsByCategory(beam, selfWeight, length);
+  const patterned = regions.length > 1 ? beam.patternedCategories.filter((c) => present.has(c)) : [];
+  const supportsForCurve = model.supports.map((s) => ({ x: s.x, fixed: s.type === "fixed" }));
+
+  // Every case is integrated on the same breaks, so that combinations are sums of pieces.
+  const everything = emptyLoads();
+  for (const set of byCategory.values()) {
+    everything.points.push(...set.points);
+    everything.moments.push(...set.moments);
+    everything.lines.push(...set.lines);
   }
-  return set;
+  const grid = memberActions(length, everything, model.supports.map((s) => ({ x: s.x, R: 0, M: 0 }))).breaks;
+
+  interface LoadCase {
+    loads: LoadSet;
+    reactions: Reaction[];
+    actions: MemberActions;
+    curve: DeflectionCurve;
+  }
+  const solved = (loads: LoadSet): LoadCase => {
+    const reactions = supportReactions(model, loads);
+    const actions = memberActions(length, loads, reactions, grid);
+    if (actions.pieces.length !== grid.length - 1) throw new Error("a load case does not share the member's breaks");
+    return { loads, reactions, actions, curve: deflectionCurve(actions, EI, supportsForCurve) };
+  };
+  const whole = new Map<string, LoadCase>();
+  const perRegion = new Map<string, (LoadCase | null)[]>();
+  for (const [category, loads] of byCategory) {
+    if (patterned.includes(category)) perRegion.set(category, regions.map((r) => (hasLoads(clip(loads, r, length)) ? solved(clip(loads, r, length)) : null)));
+    else whole.set(category, solved(loads));
+  }
+
+  type Term = { c: LoadCase; f: number };
+  const sum = (terms: Term[]) => ({
+    actions: combineActions(terms.map((t) => ({ actions: t.c.actions, f: t.f })), length, grid),
+    curve: combineCurves(terms.map((t) => ({ curve: t.c.curve, f: t.f })), grid),
+  });
+  const entry = (combination: Combination, terms: Term[]): CombinationActions => {
+    const { loads, reactions } = superpose(terms, model.supports);
+    return { combination, loads, reactions, ...sum(terms) };
+  };
+  const regionTerms = (factors: Record<string, number>) =>
+    regions.map((_, r) => {
+      const terms = patterned.flatMap((c) => {
+        const k = perRegion.get(c)?.[r];
+        return k && (factors[c] ?? 0) !== 0 ? [{ c: k, f: factors[c]! }] : [];
+      });
+      return terms.length > 0 ? terms : null;
+    });
+
+  const patternCache = new Map<string, number[]>();
+  const expand = (base: Combination, what: "actions" | "deflection"): CombinationActions[] => {
+    const fixedTerms = Object.entries(base.factors).flatMap(([c, f]) => (whole.has(c) && f !== 0 ? [{ c: whole.get(c)!, f }] : []));
+    const inPattern = patterned.filter((c) => (base.factors[c] ?? 0) !== 0);
+    if (inPattern.length === 0) {
+      const categories = base.categories.filter((c) => present.has(c));
+      return [entry({ ...base, categories, duration: customDuration(base) ?? durationOf(categories) }, fixedTerms)];
+    }
+    // The sets depend only on the ratios of the patterned categories' factors.
+    const lead = base.factors[inPattern[0]!]!;
+    const key = `${what}|${inPattern.map((c) => `${c}:${base.factors[c]! / lead}`).join("|")}`;
+    let masks = patternCache.get(key);
+    if (!masks) {
+      const parts = regionTerms(base.factors).map((terms) => (terms ? { ...sum(terms), reactions: superpose(terms, model.supports).reactions } : null));
+      masks =
+        what === "actions"
+          ? governingPatterns(parts.map((p) => p?.actions ?? null), "actions", parts.map((p) => (p ? p.reactions.map((r) => r.R) : null)))
+          : governingPatterns(parts.map((p) => p?.curve ?? null), "deflection");
+      patternCache.set(key, masks);
+    }
+    return masks.map((mask) => {
+      const loadedRegions = regionsIn(mask, regions.length);
+      const terms = [...fixedTerms];
+      for (const r of loadedRegions) for (const c of inPattern) {
+        const k = perRegion.get(c)?.[r];
+        if (k) terms.push({ c: k, f: base.factors[c]! });
+      }
+      const categories = base.categories.filter((c) => present.has(c) && (!inPattern.includes(c) || loadedRegions.some((r) => perRegion.get(c)?.[r])));
+      const spansText = loadedRegions.length === 0 ? "on no span" : `on ${placesText(loadedRegions.map((r) => regions[r]!.label))}`;
+      const combination: Combination = {
+        ...base,
+        id: `${base.id}/P${loadedRegions.length === 0 ? "0" : loadedRegions.map((r) => regions[r]!.spans[0]).join("-")}`,
+        name: `${base.name}, ${inPattern.map((c) => c.replace("-", " ")).join(" and ")} ${spansText}`,
+        categories,
+        duration: customDuration(base) ?? durationOf(categories),
+        base: base.id,
+        pattern: loadedRegions.map((r) => regions[r]!.spans[0]!),
+      };
+      return entry(combination, terms);
+    });
+  };
+  // A custom combination may fix its duration; any other takes the shortest of its categories present.
+  const durationOf = (categories: string[]) => shortestDuration(categories.flatMap((c) => (info.has(c) ? [info.get(c)!.duration] : [])));
+  const customDuration = (base: Combination) => {
+    const computed = durationOf(base.categories);
+    return base.duration !== computed ? base.duration : null;
+  };
+
+  const results = input.combinations.flatMap((c) => expand(c, "actions"));
+
+  let service: BeamAnalysis["service"] = null;
+  if (input.serviceLoads) {
+    const all = [...present];
+    const live = beam.deflectionLimits.liveCategories.filter((c) => present.has(c));
+    const serviceCombination = (id: string, name: string, categories: string[]): Combination => ({
+      id,
+      name,
+      factors: Object.fromEntries(categories.map((c) => [c, 1])),
+      duration: durationOf(categories),
+      categories,
+    });
+    const symbols = (cs: string[]) => cs.map((c) => info.get(c)!.symbol).join(" + ");
+    service = {
+      total: all.length > 0 ? expand(serviceCombination("SLS-total", `Service, all loads: ${symbols(all)}`, all), "deflection") : [],
+      live: live.length > 0 ? expand(serviceCombination("SLS-live", `Service, ${symbols(live)} alone`, live), "deflection") : [],
+      liveCategories: live,
+    };
+  }
+
+  return {
+    length,
+    spans: model.spans,
+    supports: model.supports,
+    ends: model.ends,
+    regions,
+    selfWeight,
+    flexuralRigidity: EI,
+    results,
+    service,
+    patterned,
+  };
+}
+
+/** "spans 1 and 3", "span 2 and span 3 (right overhang)". */
+function placesText(labels: string[]): string {
+  const plain = labels.every((l) => /^span \d+$/.test(l));
+  const items = plain && labels.length > 1 ? labels.map((l) => l.slice(5)) : labels;
+  const list = items.length > 1 ? `${items.slice(0, -1).join(", ")} and ${items[items.length - 1]}` : items[0]!;
+  return plain && labels.length > 1 ? `spans ${list}` : list;
+}
+
+/** The job's loads by category as core load sets, self-weight with dead load. */
+function loadsByCategory(beam: Beam, selfWeight: number, length: number): Map<string, LoadSet> {
+  const out = new Map<string, LoadSet>();
+  const of = (category: string) => {
+    let set = out.get(category);
+    if (!set) out.set(category, (set = emptyLoads()));
+    return set;
+  };
+  if (selfWeight !== 0) of("dead").lines.push({ x0: 0, x1: length, w0: selfWeight, w1: selfWeight });
+  for (const l of beam.loads) {
+    const set = of(l.category);
+    if (l.type === "point") set.points.push({ x: l.at, P: l.P });
+    else if (l.type === "moment") set.moments.push({ x: l.at, M: l.M });
+    else {
+      const [w0, w1] = l.type === "uniform" ? [l.w, l.w] : [l.wStart, l.wEnd];
+      set.lines.push({ x0: l.from ?? 0, x1: l.to ?? length, w0, w1 });
+    }
+  }
+  return out;
+}
+
+/** The part of a load set on one region; a point or couple on a boundary belongs to the region on its right. */
+function clip(loads: LoadSet, region: LoadRegion, length: number): LoadSet {
+  const inside = (x: number) => x >= region.x0 && (x < region.x1 || (region.x1 === length && x <= length));
+  return {
+    points: loads.points.filter((p) => inside(p.x)),
+    moments: loads.moments.filter((m) => inside(m.x)),
+    lines: loads.lines.flatMap((w) => {
+      const a = Math.max(w.x0, region.x0);
+      const b = Math.min(w.x1, region.x1);
+      if (!(b > a)) return [];
+      const at = (x: number) => w.w0 + ((w.w1 - w.w0) * (x - w.x0)) / (w.x1 - w.x0);
+      return [{ x0: a, x1: b, w0: at(a), w1: at(b) }];
+    }),
+  };
+}
+
+const hasLoads = (l: LoadSet) => l.points.some((p) => p.P !== 0) || l.moments.some((m) => m.M !== 0) || l.lines.some((w) => w.w0 !== 0 || w.w1 !== 0);
+
+/** Σ f·(loads, reactions) of load cases on the same supports. */
+function superpose(terms: { c: { loads: LoadSet; reactions: Reaction[] }; f: number }[], supports: Support[]): { loads: LoadSet; reactions: Reaction[] } {
+  const loads = emptyLoads();
+  const reactions: Reaction[] = supports.map((s) => ({ x: s.x, R: 0, M: 0 }));
+  for (const { c, f } of terms) {
+    for (const p of c.loads.points) loads.points.push({ x: p.x, P: f * p.P });
+    for (const m of c.loads.moments) loads.moments.push({ x: m.x, M: f * m.M });
+    for (const w of c.loads.lines) loads.lines.push({ x0: w.x0, x1: w.x1, w0: f * w.w0, w1: f * w.w1 });
+    c.reactions.forEach((r, i) => {
+      reactions[i]!.R += f * r.R;
+      reactions[i]!.M += f * r.M;
+    });
+  }
+  return { loads, reactions };
 }
 
 /** Reactions of a member on two supports that stop vertical movement, by statics. */
@@ -76,23 +306,4 @@ export function simpleSpanReactions(loads: LoadSet, xa: number, xb: number): Rea
     { x: xa, R: ra, M: 0 },
     { x: xb, R: total - ra, M: 0 },
   ];
-}
-
-export function analyseBeam(job: JobDocument, section: SectionModel, combinations: Combination[]): BeamAnalysis {
-  const spans = job.beam.spans;
-  const length = spans.reduce((s, l) => s + l, 0);
-  const supports: Support[] = [
-    { x: 0, type: "pinned" },
-    { x: length, type: "roller" },
-  ];
-  const selfWeight = job.beam.selfWeight ? selfWeightOf(section) : 0;
-  const flexuralRigidity = section.referenceModulus * section.secondMoment;
-  const results = combinations.map((combination) => {
-    const loads = factoredLoads(job, combination, selfWeight, length);
-    const reactions = simpleSpanReactions(loads, 0, length);
-    const actions = memberActions(length, loads, reactions);
-    const curve = deflectionCurve(actions, flexuralRigidity, supports.map((s) => ({ x: s.x, fixed: s.type === "fixed" })));
-    return { combination, loads, reactions, actions, curve };
-  });
-  return { length, spans, supports, selfWeight, flexuralRigidity, results };
 }

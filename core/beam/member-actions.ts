@@ -5,6 +5,7 @@
  * positive; reactions act upward when positive. V is the sum of upward forces left of x; M is
  * sagging-positive. Between breakpoints the line load is linear, so V is quadratic and M cubic.
  */
+import { rootsIn } from "./polynomial-roots.js";
 
 export interface PointForce {
   x: number;
@@ -59,8 +60,12 @@ export type Side = "left" | "right";
 
 export const emptyLoads = (): LoadSet => ({ points: [], lines: [], moments: [] });
 
-/** Integrates the loads and reactions from the left end into exact V(x) and M(x). */
-export function memberActions(length: number, loads: LoadSet, reactions: Reaction[]): MemberActions {
+/**
+ * Integrates the loads and reactions from the left end into exact V(x) and M(x). `extraBreaks` adds
+ * piece ends where nothing changes, so that members analysed on the same breaks can be superposed
+ * piece by piece (`combineActions`).
+ */
+export function memberActions(length: number, loads: LoadSet, reactions: Reaction[], extraBreaks: readonly number[] = []): MemberActions {
   const breaks = uniqueSorted([
     0,
     length,
@@ -68,6 +73,7 @@ export function memberActions(length: number, loads: LoadSet, reactions: Reactio
     ...loads.moments.map((m) => m.x),
     ...loads.lines.flatMap((l) => [l.x0, l.x1]),
     ...reactions.map((r) => r.x),
+    ...extraBreaks,
   ], length);
   const pieces: Piece[] = [];
   let v = 0;
@@ -95,6 +101,43 @@ export function memberActions(length: number, loads: LoadSet, reactions: Reactio
     m = poly(piece.m, u);
   }
   return { length, pieces, breaks };
+}
+
+/** Σ f·actions of members analysed on the same breaks (superposition). */
+export function combineActions(terms: { actions: MemberActions; f: number }[], length: number, breaks: number[]): MemberActions {
+  const pieces: Piece[] = [];
+  for (let k = 0; k < breaks.length - 1; k++) {
+    const v: [number, number, number] = [0, 0, 0];
+    const m: [number, number, number, number] = [0, 0, 0, 0];
+    for (const { actions, f } of terms) {
+      const p = actions.pieces[k]!;
+      v[0] += f * p.v[0];
+      v[1] += f * p.v[1];
+      v[2] += f * p.v[2];
+      m[0] += f * p.m[0];
+      m[1] += f * p.m[1];
+      m[2] += f * p.m[2];
+      m[3] += f * p.m[3];
+    }
+    pieces.push({ x0: breaks[k]!, x1: breaks[k + 1]!, v, m });
+  }
+  return { length, pieces, breaks };
+}
+
+/** Σ f·curve of deflection curves on the same pieces (their constants are linear in the loads too). */
+export function combineCurves(terms: { curve: DeflectionCurve; f: number }[], breaks: number[]): DeflectionCurve {
+  const pieces: DeflectionCurve["pieces"] = [];
+  for (let k = 0; k < breaks.length - 1; k++) {
+    const theta = [0, 0, 0, 0, 0];
+    const v = [0, 0, 0, 0, 0, 0];
+    for (const { curve, f } of terms) {
+      const p = curve.pieces[k]!;
+      for (let i = 0; i < 5; i++) theta[i]! += f * p.theta[i]!;
+      for (let i = 0; i < 6; i++) v[i]! += f * p.v[i]!;
+    }
+    pieces.push({ x0: breaks[k]!, x1: breaks[k + 1]!, theta, v });
+  }
+  return { pieces };
 }
 
 function uniqueSorted(xs: number[], length: number): number[] {
@@ -201,8 +244,10 @@ export interface DeflectionCurve {
 }
 
 /**
- * Integrates EI·v'' = M twice for a prismatic member, with the constants fixed by two support
- * conditions: a fixed support (v = 0, θ = 0) or two supports that stop vertical movement.
+ * Integrates EI·v'' = M twice for a prismatic member, with the constants fixed by the supports: a
+ * fixed support (v = 0, θ = 0) when there is one, else the two outermost supports (v = 0). The
+ * reactions must already satisfy compatibility (as statics or the stiffness method give them), so
+ * any other support then has v = 0 as well.
  */
 export function deflectionCurve(actions: MemberActions, flexuralRigidity: number, supports: { x: number; fixed: boolean }[]): DeflectionCurve {
   const pieces: DeflectionCurve["pieces"] = [];
@@ -224,8 +269,9 @@ export function deflectionCurve(actions: MemberActions, flexuralRigidity: number
     c1 = -evaluate(curve, fixed.x, "theta");
     c0 = -evaluate(curve, fixed.x, "v") - c1 * fixed.x;
   } else {
-    const [s1, s2] = supports;
-    if (!s1 || !s2) throw new Error("deflection needs two supports or one fixed support");
+    const s1 = supports.reduce<{ x: number } | undefined>((a, s) => (a === undefined || s.x < a.x ? s : a), undefined);
+    const s2 = supports.reduce<{ x: number } | undefined>((a, s) => (a === undefined || s.x > a.x ? s : a), undefined);
+    if (!s1 || !s2 || s2.x === s1.x) throw new Error("deflection needs two supports or one fixed support");
     const v1 = evaluate(curve, s1.x, "v");
     const v2 = evaluate(curve, s2.x, "v");
     c1 = -(v2 - v1) / (s2.x - s1.x);
@@ -244,32 +290,25 @@ export function evaluate(curve: DeflectionCurve, x: number, what: "v" | "theta")
   return poly(what === "v" ? p.v : p.theta, x - p.x0);
 }
 
-/** Largest downward deflection (as a positive number) and its position, found by sampling and refining each piece. */
-export function maxDeflection(curve: DeflectionCurve, a = -Infinity, b = Infinity): Extreme {
-  let best: Extreme = { value: -Infinity, x: 0 };
+/** Largest downward and upward deflection over [a, b], exact: piece ends and the roots of the rotation. */
+export function deflectionExtremes(curve: DeflectionCurve, a = -Infinity, b = Infinity): { down: Extreme; up: Extreme } {
+  let down: Extreme = { value: -Infinity, x: 0 };
+  let up: Extreme = { value: -Infinity, x: 0 };
   for (const p of curve.pieces) {
     const lo = Math.max(a, p.x0);
     const hi = Math.min(b, p.x1);
     if (hi < lo) continue;
-    const down = (x: number) => -poly(p.v, x - p.x0);
-    const n = 32;
-    for (let i = 0; i <= n; i++) {
-      let x = lo + ((hi - lo) * i) / n;
-      // Golden-section refinement around an interior sample.
-      if (i > 0 && i < n) {
-        let l = lo + ((hi - lo) * (i - 1)) / n;
-        let r = lo + ((hi - lo) * (i + 1)) / n;
-        for (let k = 0; k < 40; k++) {
-          const m1 = r - (r - l) / 1.618033988749895;
-          const m2 = l + (r - l) / 1.618033988749895;
-          if (down(m1) < down(m2)) l = m1;
-          else r = m2;
-        }
-        x = (l + r) / 2;
-      }
-      const value = down(x);
-      if (value > best.value) best = { value, x };
+    for (const u of [lo - p.x0, hi - p.x0, ...rootsIn(p.theta, lo - p.x0, hi - p.x0)]) {
+      const v = poly(p.v, u);
+      if (-v > down.value) down = { value: -v, x: p.x0 + u };
+      if (v > up.value) up = { value: v, x: p.x0 + u };
     }
   }
-  return best.value === -Infinity ? { value: 0, x: 0 } : best;
+  if (down.value === -Infinity) return { down: { value: 0, x: 0 }, up: { value: 0, x: 0 } };
+  return { down, up };
+}
+
+/** Largest downward deflection (as a positive number) and its position. */
+export function maxDeflection(curve: DeflectionCurve, a = -Infinity, b = Infinity): Extreme {
+  return deflectionExtremes(curve, a, b).down;
 }

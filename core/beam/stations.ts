@@ -6,13 +6,14 @@ export interface Station {
 }
 
 /**
- * Stations for diagrams and tables: a grid at a round step (about `divisions` of the length) plus
+ * Stations for diagrams and tables: a grid at a round step (about `divisions` of the length, or
+ * exactly that many when `roundToStep` is false) plus
  * every breakpoint; an interior breakpoint appears twice, the value just left of it first, so jumps
  * are drawn as vertical steps.
  */
-export function stationsFor(length: number, breaks: number[], divisions = 100): Station[] {
+export function stationsFor(length: number, breaks: number[], divisions = 100, roundToStep = true): Station[] {
   const tol = 1e-9 * length;
-  const step = roundStep(length / divisions);
+  const step = roundToStep ? roundStep(length / divisions) : length / divisions;
   const grid = Array.from({ length: Math.floor(length / step + 1e-9) + 1 }, (_, i) => i * step);
   const xs = [...breaks, ...grid, length].sort((a, b) => a - b);
   const unique: number[] = [];

@@ -1,8 +1,10 @@
 import type { BeamAnalysis } from "../beam/analyse-beam.js";
-import { maxAbsShear, maxDeflection, momentExtremes } from "../beam/member-actions.js";
+import { deflectionChecks } from "../beam/deflection-checks.js";
+import { maxAbsShear, momentExtremes } from "../beam/member-actions.js";
 import type { JobDocument } from "../schema/job.js";
 import type { MemberCheck } from "../schema/result.js";
 import type { SectionModel } from "../section/section-model.js";
+import { fromCore, unitLabel } from "../units/quantity.js";
 import type { ProfilePoint } from "../section/stress-profile.js";
 
 export interface MemberChecks {
@@ -52,36 +54,14 @@ export function memberChecks(job: JobDocument, section: SectionModel, beam: Beam
     }
   }
 
-  const L = beam.length;
-  if (job.basis === "allowable") {
-    const limit = L / job.beam.deflectionLimits.total;
-    let worst = { value: 0, x: 0, combination: "" };
-    for (const r of beam.results) {
-      const d = maxDeflection(r.curve);
-      if (d.value > worst.value) worst = { ...d, combination: r.combination.id };
-    }
-    checks.push({
-      id: "deflection-total",
-      title: `Deflection under all loads, limit span/${job.beam.deflectionLimits.total}`,
-      quantity: "deflection",
-      demand: worst.value,
-      capacity: limit,
-      utilisation: worst.value / limit,
-      passes: worst.value <= limit * (1 + 1e-9),
-      combination: worst.combination,
-      at: worst.x,
-      reference: "limit set in the job (span/240 is a common practice default for total load)",
-    });
-    notChecked.push("Deflection under live load alone: the loads are checked only as one combination here.");
-  } else {
-    notChecked.push("Deflection: the loads are factored, so no service-load deflection is checked.");
-  }
+  const deflection = deflectionChecks(beam, job.beam.deflectionLimits, (mm) => `${Number(fromCore(mm, "span", job.units).toPrecision(4))} ${unitLabel("span", job.units)}`);
+  checks.push(...deflection.checks);
+  notChecked.push(...deflection.notChecked);
   notChecked.push(
     "Lateral-torsional stability and lateral bracing of the compression edge.",
     "Bearing at the supports and under point loads, and the supports' own connections.",
     "Local buckling of thin plates and webs, and web crippling.",
     "Fire resistance, vibration and dynamic response.",
-    "Long-term deflection (creep) and the extra deflection from slip of mechanical connectors.",
     "Splices and end joints within any part, holes and notches.",
     "Withdrawal, pull-through and head capacity of connectors, and splitting of the parts.",
   );

@@ -2,6 +2,7 @@ import { z } from "zod";
 import { Connector } from "../connector/registry.js";
 import { unitSystems } from "../units/quantity.js";
 import { Id, Text, nonNegative, positive, quantity } from "./quantity.js";
+import { Beam, CombinationSettings } from "./beam.js";
 import { Shape } from "./shapes.js";
 
 export { Shape };
@@ -67,50 +68,7 @@ export const SectionPart = z
   });
 export type SectionPart = z.infer<typeof SectionPart>;
 
-export const loadCategories = ["dead", "live", "roof-live", "snow", "wind"] as const;
-export const LoadCategory = z.enum(loadCategories);
-export type LoadCategory = z.infer<typeof LoadCategory>;
-
-export const UniformLoad = z.strictObject({
-  type: z.literal("uniform"),
-  category: LoadCategory.default("dead"),
-  label: Text(60).default(""),
-  /** Intensity, downward positive. */
-  w: quantity("lineLoad"),
-  /** Start of the loaded length from the left end of the member; the left end if absent. */
-  from: nonNegative("span").optional(),
-  /** End of the loaded length; the right end if absent. */
-  to: nonNegative("span").optional(),
-});
-
-export const PointLoad = z.strictObject({
-  type: z.literal("point"),
-  category: LoadCategory.default("dead"),
-  label: Text(60).default(""),
-  /** Force, downward positive. */
-  P: quantity("force"),
-  /** Position from the left end of the member. */
-  at: nonNegative("span"),
-});
-
-export const Load = z.discriminatedUnion("type", [UniformLoad, PointLoad]);
-export type Load = z.infer<typeof Load>;
-
-export const Beam = z.strictObject({
-  /** Span lengths, left to right; the skeleton member is one simply supported span. */
-  spans: z.array(positive("span")).min(1, "needs at least one span").max(1, "only one simply supported span is supported"),
-  loads: z.array(Load).max(200, "at most 200 loads"),
-  /** Adds the parts' own weight as a dead load. */
-  selfWeight: z.boolean().default(true),
-  /** Deflection limits as span divided by this ratio. */
-  deflectionLimits: z
-    .strictObject({
-      total: z.number().positive().default(240),
-      live: z.number().positive().default(360),
-    })
-    .default({ total: 240, live: 360 }),
-});
-export type Beam = z.infer<typeof Beam>;
+export { loadCategories, LoadCategory, UniformLoad, LinearLoad, PointLoad, MomentLoad, Load, Beam } from "./beam.js";
 
 export const Fastening = z.strictObject({
   connector: Id,
@@ -172,7 +130,7 @@ export const JobDocument = z.strictObject({
     joints: z.array(JointFastening).max(32).default([]),
   }),
   beam: Beam,
-  combinations: z.strictObject({ set: z.enum(["unfactored"]).default("unfactored") }).default({ set: "unfactored" }),
+  combinations: CombinationSettings.default({ set: "unfactored" }),
   spacing: SpacingRules.default({ maxZonesPerSpan: 5, symmetric: true }),
 });
 export type JobDocument = z.infer<typeof JobDocument>;

@@ -2,6 +2,7 @@ import { z } from "zod";
 import { durationClasses } from "../connector/connector-kind.js";
 import { quantities, unitSystems, type Quantity } from "../units/quantity.js";
 import { quantity } from "./quantity.js";
+import { supportConditions } from "../beam/beam-model.js";
 
 export const RESULT_FORMAT = "stitchplan-result";
 export const RESULT_VERSION = 1;
@@ -112,6 +113,10 @@ export const Combination = z.object({
   duration: z.enum(durationClasses),
   /** Load categories present in the job with a non-zero factor in this combination. */
   categories: z.array(z.string()),
+  /** For one live-load pattern of a combination: that combination's id. */
+  base: z.string().optional(),
+  /** For one live-load pattern: the spans (the job's numbering from 1) carrying the patterned loads. */
+  pattern: z.array(z.number().int()).optional(),
 });
 export type Combination = z.infer<typeof Combination>;
 
@@ -119,6 +124,12 @@ export const BeamResult = z.object({
   length: q("span"),
   spans: z.array(q("span")),
   supports: z.array(z.object({ x: q("span"), type: z.enum(["pinned", "roller", "fixed"]) })),
+  /** Condition at each span end, left to right. */
+  ends: z.array(z.enum(supportConditions)),
+  /** Spans between supports and overhangs beyond the end supports: where live load is patterned and deflection is measured. */
+  regions: z.array(z.object({ x0: q("span"), x1: q("span"), kind: z.enum(["span", "overhang"]), spans: z.array(z.number().int()), label: z.string() })),
+  /** Categories placed span by span in live-load patterns. */
+  patterned: z.array(z.string()),
   selfWeight: q("lineLoad"),
   combinations: z.array(Combination),
   /** Stations along the member; a station repeats where V or M jumps (left value first). */
@@ -128,7 +139,10 @@ export const BeamResult = z.object({
       combination: z.string(),
       shear: z.array(q("force")),
       moment: z.array(q("moment")),
+      /** Downward positive. */
       deflection: z.array(q("deflection")),
+      /** Slope of the deflected member, radians, counter-clockwise positive. */
+      rotation: z.array(z.number()),
       reactions: z.array(z.object({ x: q("span"), force: q("force"), moment: q("moment") })),
       maxShear: Extreme("force"),
       maxMoment: Extreme("moment"),
@@ -143,7 +157,16 @@ export const BeamResult = z.object({
     momentMin: z.array(q("moment")),
     /** Combination whose |V| is largest at each station. */
     governingShear: z.array(z.string()),
+    /** Combination that gives each envelope value at each station. */
+    governing: z.object({
+      shearMax: z.array(z.string()),
+      shearMin: z.array(z.string()),
+      momentMax: z.array(z.string()),
+      momentMin: z.array(z.string()),
+    }),
   }),
+  /** Service-level cases the deflection checks use (empty when the loads were entered factored), with their deflection at the stations. */
+  service: z.array(z.object({ combination: Combination, deflection: z.array(q("deflection")), maxDeflection: Extreme("deflection") })),
 });
 export type BeamResult = z.infer<typeof BeamResult>;
 

@@ -1,0 +1,122 @@
+import type { BeamModel } from "./beam-model.js";
+import { coupleEndForces, lineLoadEndForces, noEndForces, pointLoadEndForces, type EndForces } from "./fixed-end-actions.js";
+import type { LoadSet, Reaction } from "./member-actions.js";
+
+/**
+ * Support reactions of a prismatic member on any supports, by the stiffness method: one element per
+ * span, two degrees of freedom per span end (deflection v upward, rotation θ counter-clockwise),
+ * loads brought to the ends as fixed-end actions, K·d = −Σ fixed-end forces over the free degrees of
+ * freedom, then each element's end forces k·d + fixed-end forces summed at the supports. EI is the
+ * same along the member, so it cancels from the reactions and is taken as 1.
+ * Reactions are in member-actions' convention: R upward, M clockwise on the member.
+ */
+export function supportReactions(model: BeamModel, loads: LoadSet): Reaction[] {
+  const { nodes, ends } = model;
+  const n = nodes.length - 1;
+  const fixedEnd: EndForces[] = Array.from({ length: n }, noEndForces);
+  const add = (e: number, f: EndForces) => {
+    const t = fixedEnd[e]!;
+    t.F1 += f.F1;
+    t.M1 += f.M1;
+    t.F2 += f.F2;
+    t.M2 += f.M2;
+  };
+  const elementAt = (x: number) => {
+    for (let e = 0; e < n; e++) if (x <= nodes[e + 1]!) return e;
+    return n - 1;
+  };
+  for (const p of loads.points) {
+    const e = elementAt(p.x);
+    add(e, pointLoadEndForces(p.P, p.x - nodes[e]!, nodes[e + 1]! - nodes[e]!));
+  }
+  for (const c of loads.moments) {
+    const e = elementAt(c.x);
+    add(e, coupleEndForces(c.M, c.x - nodes[e]!, nodes[e + 1]! - nodes[e]!));
+  }
+  for (const w of loads.lines) {
+    if (!(w.x1 > w.x0)) continue;
+    const slope = (w.w1 - w.w0) / (w.x1 - w.x0);
+    for (let e = 0; e < n; e++) {
+      const a = Math.max(w.x0, nodes[e]!);
+      const b = Math.min(w.x1, nodes[e + 1]!);
+      if (!(b > a)) continue;
+      add(e, lineLoadEndForces(a - nodes[e]!, b - nodes[e]!, w.w0 + slope * (a - w.x0), w.w0 + slope * (b - w.x0), nodes[e + 1]! - nodes[e]!));
+    }
+  }
+
+  const dof = 2 * (n + 1);
+  const K = Array.from({ length: dof }, () => new Float64Array(dof));
+  const F = new Float64Array(dof);
+  const stiffness = (L: number) => [
+    [12 / L ** 3, 6 / L ** 2, -12 / L ** 3, 6 / L ** 2],
+    [6 / L ** 2, 4 / L, -6 / L ** 2, 2 / L],
+    [-12 / L ** 3, -6 / L ** 2, 12 / L ** 3, -6 / L ** 2],
+    [6 / L ** 2, 2 / L, -6 / L ** 2, 4 / L],
+  ];
+  const elementDofs = (e: number) => [2 * e, 2 * e + 1, 2 * e + 2, 2 * e + 3];
+  for (let e = 0; e < n; e++) {
+    const k = stiffness(nodes[e + 1]! - nodes[e]!);
+    const d = elementDofs(e);
+    const f = fixedEnd[e]!;
+    const fe = [f.F1, f.M1, f.F2, f.M2];
+    for (let i = 0; i < 4; i++) {
+      F[d[i]!]! -= fe[i]!;
+      for (let j = 0; j < 4; j++) K[d[i]!]![d[j]!]! += k[i]![j]!;
+    }
+  }
+  const restrained = new Set<number>();
+  ends.forEach((c, i) => {
+    if (c !== "free") restrained.add(2 * i);
+    if (c === "fixed") restrained.add(2 * i + 1);
+  });
+  const free = Array.from({ length: dof }, (_, i) => i).filter((i) => !restrained.has(i));
+  const solved = solveSymmetric(
+    free.map((i) => free.map((j) => K[i]![j]!)),
+    free.map((i) => F[i]!),
+  );
+  const d = new Float64Array(dof);
+  free.forEach((i, k) => (d[i] = solved[k]!));
+
+  // End forces on each element, summed at each node: what the node (its support) gives the member.
+  const atNode = new Float64Array(dof);
+  for (let e = 0; e < n; e++) {
+    const k = stiffness(nodes[e + 1]! - nodes[e]!);
+    const dofs = elementDofs(e);
+    const f = fixedEnd[e]!;
+    const fe = [f.F1, f.M1, f.F2, f.M2];
+    for (let i = 0; i < 4; i++) {
+      let s = fe[i]!;
+      for (let j = 0; j < 4; j++) s += k[i]![j]! * d[dofs[j]!]!;
+      atNode[dofs[i]!]! += s;
+    }
+  }
+  return ends.flatMap((c, i) => (c === "free" ? [] : [{ x: nodes[i]!, R: atNode[2 * i]!, M: c === "fixed" ? -atNode[2 * i + 1]! : 0 }]));
+}
+
+/** Gaussian elimination with partial pivoting after symmetric diagonal scaling (rotations and deflections differ in scale by a length). */
+function solveSymmetric(A: number[][], b: number[]): number[] {
+  const m = b.length;
+  const s = A.map((row, i) => 1 / Math.sqrt(Math.abs(row[i]!) || 1));
+  const M = A.map((row, i) => row.map((v, j) => v * s[i]! * s[j]!));
+  const y = b.map((v, i) => v * s[i]!);
+  for (let c = 0; c < m; c++) {
+    let p = c;
+    for (let r = c + 1; r < m; r++) if (Math.abs(M[r]![c]!) > Math.abs(M[p]![c]!)) p = r;
+    if (!(Math.abs(M[p]![c]!) > 1e-10)) throw new Error("the supports do not hold the member (singular stiffness matrix)");
+    [M[c], M[p]] = [M[p]!, M[c]!];
+    [y[c], y[p]] = [y[p]!, y[c]!];
+    for (let r = c + 1; r < m; r++) {
+      const f = M[r]![c]! / M[c]![c]!;
+      if (f === 0) continue;
+      for (let k = c; k < m; k++) M[r]![k]! -= f * M[c]![k]!;
+      y[r]! -= f * y[c]!;
+    }
+  }
+  const x = new Array<number>(m).fill(0);
+  for (let r = m - 1; r >= 0; r--) {
+    let t = y[r]!;
+    for (let k = r + 1; k < m; k++) t -= M[r]![k]! * x[k]!;
+    x[r] = t / M[r]![r]!;
+  }
+  return x.map((v, i) => v * s[i]!);
+}
