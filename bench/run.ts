@@ -4,6 +4,7 @@ import { availableParallelism, cpus } from "node:os";
 import { designMember, prepareJob } from "../core/index.js";
 import { runDesign } from "../server/design-service.js";
 import { renderWorksheet } from "../server/pdf/worksheet.js";
+import { beamBench } from "./beam.js";
 import { spacingBench } from "./spacing.js";
 
 const root = new URL("../", import.meta.url);
@@ -45,5 +46,6 @@ for (const file of readdirSync(folder).filter((f) => f.endsWith(".json")).sort()
   say(`| ${file} | ${t.median.toFixed(2)} | ${t.p95.toFixed(2)} | ${ratios.length ? Math.max(...ratios).toFixed(3) : "—"} | ${pdfMs.toFixed(0)} | ${(pdf.length / 1024).toFixed(0)} |`);
 }
 spacingBench(say);
+beamBench(say);
 mkdirSync(new URL("bench/results/", root), { recursive: true });
 writeFileSync(new URL("bench/results/latest.md", root), lines.join("\n") + "\n");
