@@ -5,6 +5,7 @@ import { designMember, prepareJob } from "../core/index.js";
 import { runDesign } from "../server/design-service.js";
 import { renderWorksheet } from "../server/pdf/worksheet.js";
 import { beamBench } from "./beam.js";
+import { batchBench } from "./batch.js";
 import { spacingBench } from "./spacing.js";
 
 const root = new URL("../", import.meta.url);
@@ -47,5 +48,6 @@ for (const file of readdirSync(folder).filter((f) => f.endsWith(".json")).sort()
 }
 spacingBench(say);
 beamBench(say);
+await batchBench(say);
 mkdirSync(new URL("bench/results/", root), { recursive: true });
 writeFileSync(new URL("bench/results/latest.md", root), lines.join("\n") + "\n");

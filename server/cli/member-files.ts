@@ -1,0 +1,112 @@
+import { readFile, writeFile } from "node:fs/promises";
+import type { JobIssue, UnitSystem } from "../../core/index.js";
+import { positionsCsv, scheduleCsv } from "../../core/export/schedule-csv.js";
+import { designInUnits } from "../design-in-units.js";
+import { ApiError } from "../errors.js";
+import { summariseResult, type ResultSummary } from "../result-summary.js";
+
+/** One job file of a batch, and where its outputs go. */
+export interface MemberTask {
+  index: number;
+  file: string;
+  /** Output path without extension: `<out>/<name>`; `.result.json`, `.schedule.csv`, `.positions.csv`, `.pdf` are added. */
+  outBase: string;
+  mode: "design" | "check";
+  units?: UnitSystem | undefined;
+  pdf: boolean;
+  /** Print date on the worksheets, YYYY-MM-DD. */
+  printDate: string;
+}
+
+export interface MemberOutcome {
+  index: number;
+  file: string;
+  /** The member's mark, or "" when the file could not be read. */
+  mark: string;
+  /** invalid: the file or its job has problems · error: the program or the output folder failed. */
+  status: "pass" | "fail" | "invalid" | "error";
+  summary: ResultSummary | null;
+  /** Each problem with its field path; `(file)` for the file itself. */
+  problems: JobIssue[];
+  written: string[];
+  milliseconds: { design: number; pdf: number };
+}
+
+/** Line and column of a position in a text, for a JSON syntax error a person can find. */
+function lineAndColumn(text: string, position: number): string {
+  const before = text.slice(0, position);
+  const line = before.split("\n").length;
+  return `line ${line}, column ${position - before.lastIndexOf("\n")}`;
+}
+
+/** Reads a job file: a problem at `(file)` when it cannot be read or is not JSON. */
+export async function readJobFile(file: string): Promise<{ job: unknown } | { problems: JobIssue[] }> {
+  let text: string;
+  try {
+    text = await readFile(file, "utf8");
+  } catch (error) {
+    const code = (error as NodeJS.ErrnoException).code;
+    return { problems: [{ path: "(file)", message: code === "ENOENT" ? "does not exist" : code === "EISDIR" ? "is a folder, not a job file" : `cannot be read (${code ?? String(error)})` }] };
+  }
+  if (text.trim() === "") return { problems: [{ path: "(file)", message: "is empty; a job file holds one job document as JSON" }] };
+  try {
+    return { job: JSON.parse(text.replace(/^\uFEFF/, "")) };
+  } catch (error) {
+    const message = error instanceof Error ? error.message : String(error);
+    const at = /position (\d+)/.exec(message);
+    return { problems: [{ path: "(file)", message: `is not valid JSON (${message.replace(/ in JSON at position \d+.*$/, "")}${at ? `, at ${lineAndColumn(text, Number(at[1]))}` : ""})` }] };
+  }
+}
+
+/** Designs (or checks) one job file and writes its result JSON, schedule and positions CSV and, if asked, its worksheet PDF. */
+export async function runMemberTask(task: MemberTask): Promise<MemberOutcome> {
+  const outcome: MemberOutcome = { index: task.index, file: task.file, mark: "", status: "invalid", summary: null, problems: [], written: [], milliseconds: { design: 0, pdf: 0 } };
+  const read = await readJobFile(task.file);
+  if ("problems" in read) return { ...outcome, problems: read.problems };
+  const job = read.job as { mode?: unknown; member?: { mark?: unknown } };
+  if (job && typeof job === "object" && typeof job.member?.mark === "string") outcome.mark = job.member.mark;
+  if (task.mode === "check" && job && typeof job === "object" && job.mode !== "check") {
+    const problems = [{ path: "mode", message: `is ${JSON.stringify(job.mode ?? "design")}; stitchplan check runs check-mode jobs ("mode": "check" with the schedules in fastening.*.provided); use stitchplan design for this one` }];
+    return { ...outcome, problems };
+  }
+  const started = performance.now();
+  let run;
+  try {
+    run = designInUnits(read.job, task.units);
+  } catch (error) {
+    if (error instanceof ApiError) return { ...outcome, problems: error.issues.length > 0 ? error.issues : [{ path: "(document)", message: error.message }] };
+    return { ...outcome, status: "error", problems: [{ path: "(program)", message: `stitchplan failed on this job (a bug; please report it with the file): ${error instanceof Error ? error.message : String(error)}` }] };
+  }
+  outcome.milliseconds.design = performance.now() - started;
+  outcome.mark = run.job.member.mark;
+  outcome.summary = summariseResult(run.shown);
+  outcome.status = run.shown.status.passes ? "pass" : "fail";
+
+  const files: [string, string | Buffer][] = [
+    [`${task.outBase}.result.json`, `${JSON.stringify(run.shown, null, 2)}\n`],
+    [`${task.outBase}.schedule.csv`, scheduleCsv(run.shown)],
+    [`${task.outBase}.positions.csv`, positionsCsv(run.shown)],
+  ];
+  if (task.pdf) {
+    const t0 = performance.now();
+    try {
+      // pdfkit and the fonts load only for batches that draw worksheets.
+      const { renderWorksheet } = await import("../pdf/worksheet.js");
+      files.push([`${task.outBase}.pdf`, await renderWorksheet(run.job, run.result, { printDate: task.printDate })]);
+    } catch (error) {
+      return { ...outcome, status: "error", problems: [{ path: "(program)", message: `the worksheet could not be drawn (a bug; please report it with the file): ${error instanceof Error ? error.message : String(error)}` }] };
+    }
+    outcome.milliseconds.pdf = performance.now() - t0;
+  }
+  const failed: JobIssue[] = [];
+  await Promise.all(
+    files.map(([path, content]) =>
+      writeFile(path, content).then(
+        () => outcome.written.push(path),
+        (error: NodeJS.ErrnoException) => failed.push({ path: "(output)", message: `cannot write ${path} (${error.code ?? String(error)})` }),
+      ),
+    ),
+  );
+  outcome.written.sort();
+  return failed.length > 0 ? { ...outcome, status: "error", problems: failed } : outcome;
+}

@@ -1,0 +1,111 @@
+import { mkdir, writeFile } from "node:fs/promises";
+import { availableParallelism } from "node:os";
+import { join, resolve } from "node:path";
+import type { UnitSystem } from "../../core/index.js";
+import { collectJobFiles, outputNames } from "./collect-job-files.js";
+import { runMemberTask, type MemberOutcome, type MemberTask } from "./member-files.js";
+import { summaryCsv } from "./summary-table.js";
+import { runInWorkers } from "./worker-pool.js";
+
+export interface BatchOptions {
+  mode: "design" | "check";
+  /** Job files and folders of job files. */
+  inputs: string[];
+  /** Output folder, created if needed. */
+  out: string;
+  /** Results and CSV in this system (worksheets stay in each job's own units); each job's own when absent. */
+  units?: UnitSystem | undefined;
+  pdf: boolean;
+  /** Worker threads; 1 runs everything on this thread; chosen from the batch when absent. */
+  threads?: number | undefined;
+  /** Print date on the worksheets, YYYY-MM-DD; today when absent. */
+  printDate?: string | undefined;
+  /** Also write summary.csv into the output folder. */
+  summaryFile?: boolean;
+  onOutcome?: (done: number, total: number, outcome: MemberOutcome) => void;
+}
+
+export interface BatchReport {
+  /** One per job file and per command-line path that gave none, in command-line order. */
+  outcomes: MemberOutcome[];
+  threads: number;
+  seconds: number;
+  /** 0 all pass · 1 a member does not pass · 3 a file is invalid or could not be done. */
+  exitCode: number;
+}
+
+/**
+ * Worker threads pay off once the work outweighs starting them (about a second each, loading the
+ * TypeScript sources): see bench/batch.ts for the figures behind these estimates.
+ */
+export const WORKER_START_MS = 1000;
+export const ESTIMATED_MS = { design: 15, pdf: 150 };
+
+export function autoThreads(members: number, pdf: boolean, cores = availableParallelism()): number {
+  const serial = members * (ESTIMATED_MS.design + (pdf ? ESTIMATED_MS.pdf : 0));
+  if (cores < 2 || serial < 2 * WORKER_START_MS) return 1;
+  return Math.min(cores, members);
+}
+
+/** Tasks kept in flight on one thread, so that one member's file writes overlap the next one's design. */
+export const IN_FLIGHT = 3;
+
+async function runInThisThread(tasks: MemberTask[], onOutcome: (outcome: MemberOutcome) => void): Promise<MemberOutcome[]> {
+  const outcomes: MemberOutcome[] = [];
+  let next = 0;
+  const lane = async () => {
+    while (next < tasks.length) {
+      const outcome = await runMemberTask(tasks[next++]!);
+      outcomes.push(outcome);
+      onOutcome(outcome);
+    }
+  };
+  await Promise.all(Array.from({ length: IN_FLIGHT }, lane));
+  return outcomes;
+}
+
+export function exitCodeOf(outcomes: MemberOutcome[]): number {
+  if (outcomes.some((o) => o.status === "invalid" || o.status === "error")) return 3;
+  if (outcomes.some((o) => o.status === "fail")) return 1;
+  return 0;
+}
+
+/** Designs (or checks) every job file and writes each member's result JSON, schedule CSV, positions CSV and worksheet PDF. */
+export async function runBatch(options: BatchOptions): Promise<BatchReport> {
+  const started = performance.now();
+  const collected = await collectJobFiles(options.inputs);
+  const outcomes: MemberOutcome[] = collected.problems.map((p, i) => ({
+    index: i - collected.problems.length,
+    file: p.file,
+    mark: "",
+    status: "invalid",
+    summary: null,
+    problems: p.problems,
+    written: [],
+    milliseconds: { design: 0, pdf: 0 },
+  }));
+  await mkdir(options.out, { recursive: true });
+  const names = outputNames(collected.files);
+  const inputsResolved = new Set(collected.files.map((f) => resolve(f)));
+  const tasks: MemberTask[] = [];
+  collected.files.forEach((file, index) => {
+    const outBase = join(options.out, names[index]!);
+    const clash = [".result.json", ".schedule.csv", ".positions.csv", ".pdf"].map((ext) => resolve(outBase + ext)).find((p) => inputsResolved.has(p));
+    if (clash) {
+      outcomes.push({ index, file, mark: "", status: "error", summary: null, problems: [{ path: "(output)", message: `writing its outputs would overwrite the input file ${clash}; choose another --out folder` }], written: [], milliseconds: { design: 0, pdf: 0 } });
+      return;
+    }
+    tasks.push({ index, file, outBase, mode: options.mode, units: options.units, pdf: options.pdf, printDate: options.printDate ?? new Date().toISOString().slice(0, 10) });
+  });
+
+  const total = tasks.length;
+  let done = 0;
+  const onOutcome = (outcome: MemberOutcome) => options.onOutcome?.(++done, total, outcome);
+  const threads = Math.max(1, Math.min(options.threads ?? autoThreads(total, options.pdf), Math.max(total, 1)));
+  if (threads > 1) outcomes.push(...(await runInWorkers(tasks, threads, onOutcome)));
+  else outcomes.push(...(await runInThisThread(tasks, onOutcome)));
+  // Command-line paths that gave no file first, then the job files in order.
+  outcomes.sort((a, b) => a.index - b.index);
+  if (options.summaryFile !== false) await writeFile(join(options.out, "summary.csv"), summaryCsv(outcomes));
+  return { outcomes, threads, seconds: (performance.now() - started) / 1000, exitCode: exitCodeOf(outcomes) };
+}
