@@ -12,6 +12,10 @@ export function beamIssues(job: JobDocument): JobIssue[] {
   const L = beam.spans.reduce((s, l) => s + l, 0);
   const round = (x: number) => Number(x.toPrecision(4));
 
+  const longest = Math.max(...beam.spans);
+  beam.spans.forEach((l, i) => {
+    if (l < 1e-3 * longest) add(`beam.spans[${i}]`, `${l} ${spanUnit} is less than 1/1000 of the longest span (${round(longest)} ${spanUnit}); so short a span adds only numerical error: join it to its neighbour`);
+  });
   if (beam.supports) {
     if (beam.supports.length !== beam.spans.length + 1) {
       add("beam.supports", `lists ${beam.supports.length} support(s), but ${beam.spans.length} span(s) have ${beam.spans.length + 1} ends; give pinned, roller, fixed or free for each end, left to right`);

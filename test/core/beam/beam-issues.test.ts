@@ -17,6 +17,7 @@ describe("prepareJob refuses a beam that makes no physical sense, naming the fie
     ["a zero span", (j) => void (j.beam.spans = [0]), "beam.spans[0]", /greater than 0/],
     ["a negative span", (j) => void (j.beam.spans = [4, -1]), "beam.spans[1]", /greater than 0/],
     ["no span at all", (j) => void (j.beam.spans = []), "beam.spans", /at least one span/],
+    ["a span under 1/1000 of the longest", (j) => void ((j.beam.spans = [4, 0.002]), (j.beam.supports = ["pinned", "roller", "roller"])), "beam.spans[1]", /less than 1\/1000 of the longest span \(4 m\)/],
     ["no supports", (j) => void (j.beam.supports = ["free", "free"]), "beam.supports", /has no supports/],
     ["a single roller", (j) => void (j.beam.supports = ["roller", "free"]), "beam.supports", /mechanism/],
     ["one pin under two spans with free ends", (j) => void ((j.beam.spans = [4, 2]), (j.beam.supports = ["free", "pinned", "free"])), "beam.supports", /mechanism: one pinned or roller support lets the member rotate about it/],
