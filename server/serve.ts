@@ -35,7 +35,14 @@ export async function serve(options: ServeOptions): Promise<number | undefined> 
     }
     throw error;
   }
-  await app.listen({ port, host: options.host });
+  try {
+    await app.listen({ port, host: options.host });
+  } catch (error) {
+    await app.close();
+    const code = (error as NodeJS.ErrnoException).code;
+    console.error(code === "EADDRINUSE" ? `Port ${port} on ${options.host} is already in use; pick another with --port.` : `Cannot listen on ${options.host}:${port}: ${(error as Error).message}`);
+    return 1;
+  }
   const address = app.server.address();
   const shown = typeof address === "object" && address ? address.port : port;
   const store = (await app.inject("/api/store")).json() as { file: string; upgrade: { from: number; to: number; backup: string | null } };
