@@ -79,7 +79,25 @@ export const Fastening = z.strictObject({
    * side, or "auto" — the part that is thinner in the driving direction.
    */
   headSide: z.enum(["auto", "held", "other"]).default("auto"),
+  /** Check mode: the schedule that exists or is proposed, to be checked instead of designed. */
+  provided: z
+    .discriminatedUnion("type", [
+      z.strictObject({
+        type: z.literal("zones"),
+        zones: z
+          .array(z.strictObject({ from: nonNegative("span"), to: positive("span"), spacing: positive("length") }))
+          .min(1, "needs at least one zone")
+          .max(60, "at most 60 zones"),
+      }),
+      z.strictObject({
+        type: z.literal("positions"),
+        /** Rows along the member, from the left end. */
+        positions: z.array(nonNegative("span")).min(1, "needs at least one position").max(5000, "at most 5000 positions"),
+      }),
+    ])
+    .optional(),
 });
+export type Fastening = z.infer<typeof Fastening>;
 
 export const JointFastening = Fastening.extend({
   /** The parts held by this joint's connectors; names the joint. */
@@ -110,6 +128,8 @@ export const JobDocument = z.strictObject({
   units: z.enum(unitSystems),
   /** allowable: service loads against allowable values · factored: factored loads against design values */
   basis: z.enum(["allowable", "factored"]),
+  /** design: stitchplan lays out the schedules · check: it checks the schedules given in `fastening` */
+  mode: z.enum(["design", "check"]).default("design"),
   project: z.strictObject({
     name: Text(120).min(1, "must not be empty"),
     number: Text(40).default(""),
