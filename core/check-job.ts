@@ -125,9 +125,12 @@ function checkProvidedSchedules(job: JobDocument, joints: FastenedJoint[], L: nu
   const issues: JobIssue[] = [];
   const seen = new Set<string>();
   for (const { connector, fastening, path } of joints) {
-    if (seen.has(path) || kindOf(connector).mechanism === "bond-line") continue;
+    const mechanism = kindOf(connector).mechanism;
+    if (seen.has(path) || mechanism === "bond-line") continue;
     seen.add(path);
     const provided = fastening.provided;
+    // A weld without a provided schedule is checked as the connector lays it out (continuous, or segments at its pitch).
+    if (!provided && mechanism === "weld") continue;
     if (!provided) {
       issues.push({ path: `${path}.provided`, message: "check mode needs the schedule to check here: zones (from, to, spacing) or the positions of the rows" });
       continue;

@@ -1,4 +1,5 @@
-import { contextFor, jointsOf } from "../design-member.js";
+import { contextFor } from "../fastening/connector-context.js";
+import { fastenedJoints } from "../section/fastened-joints.js";
 import type { JobDocument } from "../schema/job.js";
 import type { JobIssue } from "../schema/job-issues.js";
 import type { Combination } from "../schema/result.js";
@@ -8,7 +9,7 @@ import { allowedSpacings } from "../spacing/allowed-spacings.js";
 import { spacingDefaults } from "../spacing/spacing-defaults.js";
 import { toCore } from "../units/quantity.js";
 import { governingLimits, type ConnectorContext } from "./connector-kind.js";
-import { inJobUnits } from "./quantity-text.js";
+import { inJobUnits } from "../units/format.js";
 import { kindOf } from "./registry.js";
 
 /** Placement does not depend on the load combination; kinds are given a neutral one. */
@@ -24,7 +25,7 @@ const PLACEMENT: Combination = { id: "placement", name: "placement check", facto
 export function checkConnectorPlacement(job: JobDocument): JobIssue[] {
   const section = buildSection(positioned(job.parts), job.materials);
   const contacts = findContacts(section);
-  const joints = jointsOf(job, section, contacts);
+  const joints = fastenedJoints(job, section, contacts);
   const issues: JobIssue[] = [];
   const seen = new Set<string>();
   const add = (path: string, message: string) => {
@@ -37,11 +38,9 @@ export function checkConnectorPlacement(job: JobDocument): JobIssue[] {
   const connectorIndex = new Map(job.connectors.map((c, i) => [c.id, i]));
   const materialIndex = new Map(job.materials.map((m, i) => [m.id, i]));
 
-  joints.forEach(({ joint, connector, rows, headSide }, k) => {
+  joints.forEach(({ joint, connector, fastening: { rows, headSide }, path: fastening }) => {
     const kind = kindOf(connector);
     const i = connectorIndex.get(connector.id)!;
-    // jointsOf lists the joints named in fastening.joints first, in order, then those found for the default.
-    const fastening = k < job.fastening.joints.length ? `fastening.joints[${k}]` : "fastening.default";
     const contexts: ConnectorContext[] = joint.lines.map((line) => contextFor(PLACEMENT, job, joint, line, headSide, rows, section));
     for (const context of contexts) {
       for (const p of kind.problems?.(connector, context) ?? []) {

@@ -124,6 +124,8 @@ export interface WeldLayout {
   pattern: "continuous" | "intermittent";
   segmentLength: number | null;
   pitch: number | null;
+  /** Intermittent segments on the two sides of a web: opposite each other, or alternating. */
+  arrangement: "chain" | "staggered";
 }
 
 /**

@@ -1,8 +1,8 @@
 import { z } from "zod";
 import { Id, positive, Text } from "../schema/quantity.js";
-import { formatNumber } from "../units/format.js";
+import { formatNumber, inJobUnits } from "../units/format.js";
 import type { ConnectorContext, JoinedMember, PlacementProblem, WeldDetailing, WeldKind, WeldResistance, WorkingStep } from "./connector-kind.js";
-import { inJobUnits, MM_PER_IN, N_PER_KIP, MPA_PER_KSI } from "./quantity-text.js";
+import { MM_PER_IN, N_PER_KIP, MPA_PER_KSI } from "./quantity-text.js";
 import { EN1993_GAMMA_M2 } from "./steel/en1993-bolt.js";
 import {
   aiscFilletStrength,
@@ -29,9 +29,14 @@ export const FilletWeld = z
     /** AISC: filler metal classification; E70 when absent. EN 1993-1-8: matching electrodes are assumed (§4.2). */
     electrode: z.enum(electrodes).optional(),
     pattern: z.enum(["continuous", "intermittent"]).default("continuous"),
-    /** Intermittent welds: length of each segment and its centre-to-centre pitch. */
+    /**
+     * Intermittent welds: length of each segment and its centre-to-centre pitch. In design mode the
+     * pitch is the largest wanted; each zone gets its own pitch up to it.
+     */
     segmentLength: positive("length").optional(),
     pitch: positive("length").optional(),
+    /** Intermittent segments on the two sides of a web: opposite each other (chain) or alternating (staggered). */
+    arrangement: z.enum(["chain", "staggered"]).default("staggered"),
   })
   .superRefine((c, ctx) => {
     if ((c.leg === undefined) === (c.throat === undefined)) ctx.addIssue({ code: "custom", path: [c.leg === undefined ? "leg" : "throat"], message: "give either the leg size or the throat" });
@@ -197,5 +202,5 @@ export const filletWeldKind: WeldKind<FilletWeld> = {
   problems,
   resistancePerLength,
   detailing,
-  layout: (c) => ({ pattern: c.pattern, segmentLength: c.segmentLength ?? null, pitch: c.pitch ?? null }),
+  layout: (c) => ({ pattern: c.pattern, segmentLength: c.segmentLength ?? null, pitch: c.pitch ?? null, arrangement: c.arrangement }),
 };

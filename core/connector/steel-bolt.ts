@@ -1,8 +1,8 @@
 import { z } from "zod";
 import { Id, positive, Text } from "../schema/quantity.js";
-import { formatNumber } from "../units/format.js";
+import { formatNumber, inJobUnits } from "../units/format.js";
 import type { ConnectorContext, ConnectorResistance, DetailingLimits, DiscreteConnectorKind, JoinedMember, PlacementProblem, WorkingStep } from "./connector-kind.js";
-import { inJobUnits, MM_PER_IN, MPA_PER_KSI, N_PER_KIP } from "./quantity-text.js";
+import { MM_PER_IN, MPA_PER_KSI, N_PER_KIP } from "./quantity-text.js";
 import { aiscBolt, holeTypes, type AiscPly } from "./steel/aisc-bolt.js";
 import { aiscBoltGroup, inchBolt, knownAiscGrades, knownInchSizes, knownMetricSizes, metricBoltSize, propertyClasses, standardHoleIn, type InchBolt, type MetricBolt } from "./steel/bolt-sizes.js";
 import { en1993Bolt, EN1993_GAMMA_M2, type En1993Ply } from "./steel/en1993-bolt.js";

@@ -202,6 +202,8 @@ export const Zone = z.object({
 export type Zone = z.infer<typeof Zone>;
 
 export const Schedule = z.object({
+  /** design: zones chosen by stitchplan · check: the schedule given in the job, checked. */
+  mode: z.enum(["design", "check"]),
   joint: z.string(),
   connector: z.string(),
   connectorLabel: z.string(),
@@ -244,6 +246,10 @@ export const Schedule = z.object({
     passes: z.boolean(),
     method: z.string(),
   }),
+  /** The worst row under each combination on its own. */
+  perCombination: z.array(z.object({ combination: z.string(), maxUtilisation: z.number(), at: q("span") })),
+  /** Check mode: spacings of the given schedule outside the detailing limits. */
+  detailingProblems: z.array(z.string()),
   passes: z.boolean(),
   infeasible: z
     .object({
@@ -261,6 +267,7 @@ export type Schedule = z.infer<typeof Schedule>;
 
 /** A weld joint: the continuous (or given intermittent) weld checked against the shear flow per line. */
 export const WeldResult = z.object({
+  mode: z.enum(["design", "check"]),
   joint: z.string(),
   connector: z.string(),
   connectorLabel: z.string(),
@@ -270,6 +277,8 @@ export const WeldResult = z.object({
   pattern: z.enum(["continuous", "intermittent"]),
   segmentLength: q("length").nullable(),
   pitch: q("length").nullable(),
+  /** Intermittent segments on the two sides of a web: opposite each other (chain) or alternating (staggered). */
+  arrangement: z.enum(["chain", "staggered"]),
   /** Resistance of one fillet per unit length of weld, per combination. */
   resistance: z.array(
     z.object({
@@ -291,6 +300,24 @@ export const WeldResult = z.object({
     maxGap: q("length").nullable(),
     sources: z.array(z.string()),
   }),
+  /** Zones along the member: continuous, or segments of a length at a pitch. */
+  zones: z.array(
+    z.object({
+      from: q("span"),
+      to: q("span"),
+      pattern: z.enum(["continuous", "intermittent"]),
+      segmentLength: q("length").nullable(),
+      pitch: q("length").nullable(),
+      utilisation: z.number(),
+      passes: z.boolean(),
+      failingCombinations: z.array(z.string()),
+    }),
+  ),
+  /** Length of weld deposited, all fillets on all lines. */
+  weldLength: q("span"),
+  /** Where even a continuous weld of the given size fails: the leg size that would carry the flow. */
+  sizeNeeded: q("length").nullable(),
+  sizeNote: z.string().nullable(),
   /** Largest shear flow per line over the member and where, and the utilisation q/(fillets × R × segment/pitch). */
   maxShearFlow: q("shearFlow"),
   at: q("span"),
@@ -341,6 +368,7 @@ export const DesignResult = z.object({
   units: z.enum(unitSystems),
   unitLabels: z.record(z.string(), z.string()),
   basis: z.enum(["allowable", "factored"]),
+  mode: z.enum(["design", "check"]),
   project: z.object({ name: z.string(), number: z.string(), engineer: z.string(), client: z.string() }),
   member: z.object({ mark: z.string(), description: z.string(), revision: z.string(), date: z.string().optional() }),
   status: z.object({ passes: z.boolean(), summary: z.string(), failures: z.array(z.string()) }),

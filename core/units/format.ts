@@ -1,3 +1,5 @@
+import { fromCore, unitLabel, type Quantity, type UnitSystem } from "./quantity.js";
+
 /**
  * A number as a person reads it on a page or worksheet: `digits` significant figures (4 by default),
  * no floating-point noise, no exponent for everyday magnitudes, a true minus sign.
@@ -17,3 +19,8 @@ export const withUnit = (value: number, unit: string, digits = 4) => `${formatNu
 
 /** A utilisation as a ratio with two decimals, e.g. 0.87. */
 export const formatRatio = (value: number) => (Number.isFinite(value) ? value.toFixed(2) : "—");
+
+/** A core-unit value as a person reads it in the job's own units: "38 mm", "1.5 in". */
+export function inJobUnits(value: number, quantity: Quantity, units: UnitSystem): string {
+  return `${formatNumber(fromCore(value, quantity, units))} ${unitLabel(quantity, units)}`;
+}

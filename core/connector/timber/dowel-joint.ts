@@ -1,6 +1,7 @@
 import type { Material } from "../../schema/job.js";
 import type { ConnectorContext, ConnectorResistance, DetailingLimits, JoinedMember, ModeValue, PlacementProblem, SlipModuli, WorkingStep } from "../connector-kind.js";
-import { inJobUnits, MM_PER_IN, MPA_PER_PSI, N_PER_LBF } from "../quantity-text.js";
+import { MM_PER_IN, MPA_PER_PSI, N_PER_LBF } from "../quantity-text.js";
+import { inJobUnits } from "../../units/format.js";
 import { ec5DurationOf, ec5Kmod, ec5SlipModulus, EC5_GAMMA_M_CONNECTIONS, jointMeanDensity, type Ec5Product, type ServiceClass } from "./ec5-factors.js";
 import { ec5BoltEmbedment, ec5NailEmbedment, type Ec5Wood, type Embedment } from "./ec5-embedment.js";
 import { johansenSteelCentral, johansenSteelSides, johansenSteelSingle, johansenTimberDouble, johansenTimberSingle, type JohansenResult, type RopeEffect } from "./ec5-johansen.js";

@@ -1,0 +1,193 @@
+import type { BeamAnalysis } from "../beam/analyse-beam.js";
+import { maxAbsShear, shearAt } from "../beam/member-actions.js";
+import type { Station } from "../beam/stations.js";
+import { governingLimits, type ConnectorContext, type ConnectorResistance, type DiscreteConnectorKind } from "../connector/connector-kind.js";
+import type { Connector } from "../connector/registry.js";
+import type { Fastening, JobDocument } from "../schema/job.js";
+import type { Schedule } from "../schema/result.js";
+import type { JointPlane } from "../section/joints.js";
+import { checkSchedule } from "../spacing/check-schedule.js";
+import { demandCurve, designSchedule } from "../spacing/design-schedule.js";
+import { spacingDefaults } from "../spacing/spacing-defaults.js";
+import { inJobUnits } from "../units/format.js";
+import { toCore } from "../units/quantity.js";
+
+export interface JointInput {
+  job: JobDocument;
+  beam: BeamAnalysis;
+  stations: Station[];
+  joint: JointPlane;
+  connector: Connector;
+  fastening: Fastening;
+  /** Per combination, one context per contact line. */
+  contexts: ConnectorContext[][];
+  /** Q/I, 1/mm. */
+  flowFactor: number;
+  /** Q/(I·t), 1/mm². */
+  stressFactor: number;
+}
+
+const VERIFICATION_METHOD =
+  "each row: tributary length (halfway to its neighbours or to the member end) × the largest shear flow over that length ÷ (connectors per row × R)";
+
+const leastOf = <T extends { value: number }>(values: T[]) => values.reduce((a, b) => (b.value < a.value ? b : a));
+
+/** Envelope of the shear flow on one contact line at the beam stations, N/mm. */
+export function lineFlow(beam: BeamAnalysis, stations: Station[], flowFactor: number, lines: number): number[] {
+  return stations.map((s) => (Math.max(...beam.results.map((r) => Math.abs(shearAt(r.actions, s.x, s.side)))) * flowFactor) / lines);
+}
+
+/**
+ * The schedule of a joint fastened by connectors placed one by one: designed (zones chosen for the
+ * fewest connectors) or, in check mode, the provided schedule checked row by row.
+ */
+export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<Connector>): { schedule: Schedule; warnings: string[]; mirrored: boolean } {
+  const { job, beam, stations, joint, connector, fastening, contexts, flowFactor, stressFactor } = input;
+  const rows = fastening.rows;
+  const lineCount = joint.lines.length;
+  const resistances: ConnectorResistance[] = contexts.map((lines) => leastOf(lines.map((c) => kind.resistance(connector, c))));
+  const warnings = [...new Set(resistances.flatMap((r) => r.warnings ?? []))];
+  const limits = governingLimits(contexts[0]!.map((c) => kind.detailing(connector, c)));
+  const defaults = spacingDefaults(job.units);
+  const coreDefault = (v: number) => toCore(v, "length", job.units);
+  const minSpacing = Math.max(limits.minSpacing, job.spacing.minimum ?? 0);
+  const maxSpacing = Math.min(limits.maxSpacing ?? coreDefault(defaults.maxSpacing), job.spacing.maximum ?? Infinity);
+  const module = job.spacing.preferred ? null : job.spacing.module ?? coreDefault(defaults.module);
+  const minZoneLength = job.spacing.minZoneLength ?? coreDefault(defaults.minZoneLength);
+  const sources = [...limits.sources];
+  if (limits.maxSpacing === null && job.spacing.maximum === undefined) sources.push(`maximum spacing ${inJobUnits(coreDefault(defaults.maxSpacing), "length", job.units)} (common practice; the connector sets none)`);
+  const problem = {
+    length: beam.length,
+    combinations: beam.results.map((r, i) => ({ id: r.combination.id, actions: r.actions, resistance: resistances[i]!.value })),
+    flowFactor,
+    lines: lineCount,
+    rows,
+  };
+  const label = kind.describe(connector);
+  const len = (mm: number) => inJobUnits(mm, "length", job.units);
+  const common = {
+    joint: joint.id,
+    connector: connector.id,
+    connectorLabel: label,
+    rows,
+    lineCount,
+    resistance: resistances.map((r, i) => ({
+      combination: beam.results[i]!.combination.id,
+      value: r.value,
+      governing: r.governing,
+      reference: r.reference,
+      steps: r.steps,
+      modes: r.modes ?? [],
+      slip: r.slip ?? null,
+      warnings: r.warnings ?? [],
+    })),
+    limits: {
+      minSpacing,
+      maxSpacing,
+      endDistance: limits.endDistance,
+      module,
+      preferred: job.spacing.preferred ?? null,
+      minZoneLength,
+      edgeDistance: limits.edgeDistance ?? null,
+      rowSpacing: limits.rowSpacing ?? null,
+      penetration: limits.penetration ?? null,
+      sources,
+    },
+    shearFlow: lineFlow(beam, stations, flowFactor, lineCount),
+  };
+
+  if (job.mode === "check" && fastening.provided) {
+    const demand = demandCurve(problem);
+    const provided = fastening.provided;
+    const check = checkSchedule({
+      demand,
+      rows,
+      lines: lineCount,
+      endDistance: limits.endDistance,
+      provided: provided.type === "zones" ? { zones: provided.zones } : { positions: provided.positions },
+    });
+    const worst = check.rowChecks.reduce((w, r) => (r.utilisation > w.utilisation ? r : w));
+    const detailing = check.zones.flatMap((z) => [
+      ...(z.spacing < minSpacing * (1 - 1e-9) ? [`zone ${len(z.from)}–${len(z.to)}: spacing ${len(z.spacing)} is below the minimum ${len(minSpacing)}`] : []),
+      ...(z.spacing > maxSpacing * (1 + 1e-9) ? [`zone ${len(z.from)}–${len(z.to)}: spacing ${len(z.spacing)} is above the maximum ${len(maxSpacing)}`] : []),
+    ]);
+    const passes = worst.utilisation <= 1 + 1e-9 && detailing.length === 0;
+    return {
+      mirrored: false,
+      warnings,
+      schedule: {
+        ...common,
+        mode: "check",
+        zones: check.zones,
+        positions: check.positions,
+        count: check.positions.length * rows * lineCount,
+        efficiency: efficiencyOf(demand.integral(1 / maxSpacing) * rows * lineCount, demand.integral() * rows * lineCount, check.positions.length * rows * lineCount, null),
+        verification: { maxUtilisation: worst.utilisation, at: worst.x, combination: worst.combination, passes: worst.utilisation <= 1 + 1e-9, method: VERIFICATION_METHOD },
+        perCombination: check.perCombination,
+        detailingProblems: detailing,
+        passes,
+        infeasible: null,
+        requiredSpacing: requiredAt(stations, demand),
+      },
+    };
+  }
+
+  const design = designSchedule({
+    ...problem,
+    minSpacing,
+    maxSpacing,
+    module,
+    preferred: job.spacing.preferred ?? null,
+    endDistance: limits.endDistance,
+    minZoneLength,
+    maxZones: job.spacing.maxZonesPerSpan * beam.spans.length,
+    symmetric: job.spacing.symmetric,
+    system: job.units,
+  });
+  const worst = design.rowChecks.reduce((w, r) => (r.utilisation > w.utilisation ? r : w));
+  const peakShear = Math.max(...beam.results.map((r) => maxAbsShear(r.actions, 0, beam.length).value));
+  const options = design.infeasible
+    ? [
+        `${design.infeasible.connectorsPerRowNeeded} connectors per row at the minimum spacing of ${len(design.spacings[0]!)}.`,
+        `A connector with at least ${design.infeasible.resistanceFactorNeeded.toFixed(2)} × the resistance of ${label} at the same spacing.`,
+        ...(limits.endDistance > design.spacings[0]! / 2 ? [`A shorter end distance than ${len(limits.endDistance)}, or an extra row near each end: the end row carries the flow from the member end to halfway to the next row.`] : []),
+        `A glued joint: the bond-line stress would peak at ${inJobUnits(peakShear * stressFactor, "stress", job.units)} (τ = q/t over t = ${len(joint.contactWidth)}).`,
+      ]
+    : [];
+  return {
+    mirrored: design.mirrored,
+    warnings,
+    schedule: {
+      ...common,
+      mode: "design",
+      zones: design.zones,
+      positions: design.positions,
+      count: design.count,
+      efficiency: efficiencyOf(design.lowerBound, design.demandIntegral, design.count, design.uniform),
+      verification: { maxUtilisation: worst.utilisation, at: worst.x, combination: worst.combination, passes: worst.utilisation <= 1 + 1e-9, method: VERIFICATION_METHOD },
+      perCombination: design.perCombination,
+      detailingProblems: [],
+      passes: !design.infeasible && worst.utilisation <= 1 + 1e-9,
+      infeasible: design.infeasible ? { where: design.infeasible.where, smallestRequired: design.infeasible.smallestRequired, minSpacing: design.spacings[0]!, options } : null,
+      requiredSpacing: requiredAt(stations, design.demand),
+    },
+  };
+}
+
+function requiredAt(stations: Station[], demand: ReturnType<typeof demandCurve>): (number | null)[] {
+  return stations.map((s) => {
+    const d = demand.at(s.x, s.side).value;
+    return d > 0 ? 1 / d : null;
+  });
+}
+
+function efficiencyOf(lowerBound: number, demandIntegral: number, count: number, uniform: { spacing: number; count: number } | null): Schedule["efficiency"] {
+  return {
+    lowerBound,
+    demandIntegral,
+    uniformSpacing: uniform?.spacing ?? null,
+    uniformCount: uniform?.count ?? null,
+    countOverLowerBound: lowerBound > 0 ? count / lowerBound : null,
+    uniformOverCount: uniform ? uniform.count / count : null,
+  };
+}

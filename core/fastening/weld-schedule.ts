@@ -1,0 +1,143 @@
+import { maxAbsShear } from "../beam/member-actions.js";
+import type { WeldKind, WeldResistance } from "../connector/connector-kind.js";
+import type { Connector } from "../connector/registry.js";
+import type { WeldResult } from "../schema/result.js";
+import { allowedSpacings } from "../spacing/allowed-spacings.js";
+import { checkSchedule } from "../spacing/check-schedule.js";
+import { demandCurve, designSchedule } from "../spacing/design-schedule.js";
+import { spacingDefaults } from "../spacing/spacing-defaults.js";
+import { inJobUnits } from "../units/format.js";
+import { toCore } from "../units/quantity.js";
+import { lineFlow, type JointInput } from "./discrete-schedule.js";
+
+const leastOf = <T extends { value: number }>(values: T[]) => values.reduce((a, b) => (b.value < a.value ? b : a));
+
+/**
+ * The weld of a joint. An intermittent weld is laid out like rows of connectors: each segment of
+ * length L_s carries R_w·L_s per fillet over its pitch, so zones of pitch are chosen for the least
+ * weld (pitch = L_s is a continuous weld). A continuous weld is checked along the member; where even
+ * a continuous weld of the given size cannot carry the flow, the leg size that would is reported.
+ */
+export function weldSchedule(input: JointInput, kind: WeldKind<Connector>): { weld: WeldResult; warnings: string[] } {
+  const { job, beam, stations, joint, connector, fastening, contexts, flowFactor } = input;
+  const fillets = fastening.rows;
+  const lineCount = joint.lines.length;
+  const strengths: WeldResistance[] = contexts.map((lines) => leastOf(lines.map((c) => kind.resistancePerLength(connector, c))));
+  const warnings = [...new Set(strengths.flatMap((s) => s.warnings ?? []))];
+  const thinnest = contexts[0]!.reduce((a, b) => (Math.min(b.members[0].thickness, b.members[1].thickness) < Math.min(a.members[0].thickness, a.members[1].thickness) ? b : a));
+  const limits = kind.detailing(connector, thinnest);
+  const layout = kind.layout(connector);
+  const len = (mm: number) => inJobUnits(mm, "length", job.units);
+
+  // Ratio of the flow per line to what a continuous weld of the given size carries, per combination.
+  const continuousRatio = Math.max(
+    ...beam.results.map((r, i) => (maxAbsShear(r.actions, 0, beam.length).value * flowFactor) / lineCount / (fillets * strengths[i]!.value)),
+  );
+  const sizeStep = job.units === "us" ? 25.4 / 16 : 1;
+  const sizeNeeded = continuousRatio > 1 + 1e-9 ? Math.ceil((limits.size * continuousRatio) / sizeStep - 1e-9) * sizeStep : null;
+
+  const segment = layout.pattern === "intermittent" ? layout.segmentLength! : Math.max(limits.minSegmentLength, sizeStep);
+  const defaults = spacingDefaults(job.units);
+  const module = job.spacing.module ?? toCore(defaults.module, "length", job.units);
+  const pitchLimits = [limits.maxPitch, limits.maxGap !== null ? limits.maxGap + segment : null, layout.pattern === "intermittent" ? layout.pitch : null].filter((v): v is number => v !== null);
+  const maxPitch = Math.max(segment, Math.min(...pitchLimits, toCore(defaults.maxSpacing, "length", job.units)));
+  const pitches = [...new Set([segment, ...allowedSpacings({ module, preferred: null, min: segment, max: maxPitch })])].sort((a, b) => a - b);
+  const problem = {
+    length: beam.length,
+    combinations: beam.results.map((r, i) => ({ id: r.combination.id, actions: r.actions, resistance: strengths[i]!.value * segment })),
+    flowFactor,
+    lines: lineCount,
+    rows: fillets,
+  };
+  const toZones = (zones: { from: number; to: number; spacing: number; utilisation: number; passes: boolean; failingCombinations: string[] }[]) =>
+    zones.map((z) => ({
+      from: z.from,
+      to: z.to,
+      pattern: z.spacing <= segment * (1 + 1e-9) ? ("continuous" as const) : ("intermittent" as const),
+      segmentLength: z.spacing <= segment * (1 + 1e-9) ? null : segment,
+      pitch: z.spacing <= segment * (1 + 1e-9) ? null : z.spacing,
+      utilisation: z.utilisation,
+      passes: z.passes,
+      failingCombinations: z.failingCombinations,
+    }));
+
+  const mode: WeldResult["mode"] = job.mode === "check" ? "check" : "design";
+  let zones: WeldResult["zones"];
+  let utilisation: number;
+  let at = 0;
+  let combination = beam.results[0]?.combination.id ?? "";
+  let weldPerLine: number;
+  // A continuous weld is checked as one; an intermittent one is zoned (design) or checked as provided.
+  if (layout.pattern === "continuous" && !(job.mode === "check" && fastening.provided)) {
+    const worst = beam.results
+      .map((r, i) => {
+        const v = maxAbsShear(r.actions, 0, beam.length);
+        return { u: (v.value * flowFactor) / lineCount / (fillets * strengths[i]!.value), x: v.x, id: r.combination.id };
+      })
+      .reduce((a, b) => (b.u > a.u ? b : a));
+    utilisation = worst.u;
+    at = worst.x;
+    combination = worst.id;
+    zones = [{ from: 0, to: beam.length, pattern: "continuous", segmentLength: null, pitch: null, utilisation, passes: utilisation <= 1 + 1e-9, failingCombinations: utilisation > 1 + 1e-9 ? [worst.id] : [] }];
+    weldPerLine = beam.length;
+  } else if (job.mode === "check") {
+    const provided = fastening.provided?.type === "zones" ? fastening.provided.zones : [{ from: 0, to: beam.length, spacing: layout.pitch ?? segment }];
+    const check = checkSchedule({ demand: demandCurve(problem), rows: fillets, lines: lineCount, endDistance: segment / 2, provided: { zones: provided } });
+    const worst = check.rowChecks.reduce((w, r) => (r.utilisation > w.utilisation ? r : w));
+    utilisation = worst.utilisation;
+    at = worst.x;
+    combination = worst.combination;
+    zones = toZones(check.zones);
+    weldPerLine = Math.min(beam.length, check.positions.length * segment);
+  } else {
+    const design = designSchedule({
+      ...problem,
+      minSpacing: segment,
+      maxSpacing: maxPitch,
+      module: null,
+      preferred: pitches,
+      endDistance: segment / 2,
+      minZoneLength: job.spacing.minZoneLength ?? toCore(defaults.minZoneLength, "length", job.units),
+      maxZones: job.spacing.maxZonesPerSpan * beam.spans.length,
+      symmetric: job.spacing.symmetric,
+      system: job.units,
+    });
+    const worst = design.rowChecks.reduce((w, r) => (r.utilisation > w.utilisation ? r : w));
+    utilisation = worst.utilisation;
+    at = worst.x;
+    combination = worst.combination;
+    zones = toZones(design.zones);
+    weldPerLine = Math.min(beam.length, design.positions.length * segment);
+  }
+
+  return {
+    warnings,
+    weld: {
+      mode,
+      joint: joint.id,
+      connector: connector.id,
+      connectorLabel: kind.describe(connector),
+      fillets,
+      lineCount,
+      pattern: layout.pattern,
+      segmentLength: layout.segmentLength,
+      pitch: layout.pitch,
+      arrangement: layout.arrangement,
+      resistance: strengths.map((s, i) => ({ combination: beam.results[i]!.combination.id, value: s.value, governing: s.governing, reference: s.reference, steps: s.steps, modes: s.modes ?? [], warnings: s.warnings ?? [] })),
+      limits,
+      zones,
+      weldLength: weldPerLine * fillets * lineCount,
+      sizeNeeded,
+      sizeNote:
+        sizeNeeded === null
+          ? null
+          : `A continuous weld of ${len(limits.size)} carries ${(1 / continuousRatio).toFixed(2)} of the peak flow; a leg of ${len(sizeNeeded)} is needed${sizeNeeded > limits.maxSize ? `, above the largest ${len(limits.maxSize)} the parts allow: use a stronger electrode, more fillets or thicker parts` : ""}.`,
+      maxShearFlow: Math.max(...lineFlow(beam, stations, flowFactor, lineCount)),
+      at,
+      combination,
+      utilisation,
+      passes: utilisation <= 1 + 1e-9,
+      shearFlow: lineFlow(beam, stations, flowFactor, lineCount),
+    },
+  };
+}
