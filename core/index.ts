@@ -4,6 +4,8 @@ export { JobDocument, JOB_FORMAT, JOB_VERSION, type JobInput } from "./schema/jo
 export { DesignResult, RESULT_FORMAT, RESULT_VERSION } from "./schema/result.js";
 export { issuesFromZod, formatPath, type JobIssue } from "./schema/job-issues.js";
 export { toCoreUnits, toDisplayUnits } from "./units/convert.js";
+export { convertJob } from "./units/convert-job.js";
+export { quantityOf } from "./schema/quantity.js";
 export { quantityUnits, unitLabel, unitLabels, toCore, fromCore, type Quantity, type UnitSystem } from "./units/quantity.js";
 export { formatNumber, formatRatio, withUnit } from "./units/format.js";
 export { canonicalJson } from "./canonical-json.js";

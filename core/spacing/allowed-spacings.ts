@@ -1,12 +1,16 @@
-/** Spacings a builder may be given, ascending, mm: multiples of the module, or the preferred list, within the limits. */
+/**
+ * Spacings a builder may be given, ascending, mm: multiples of the module, or the preferred list, within
+ * the limits. Limits are compared with a relative tolerance of 1e-6, so a limit that is a module multiple
+ * before a unit conversion stays one after it.
+ */
 export function allowedSpacings(p: { module: number | null; preferred: number[] | null; min: number; max: number }): number[] {
-  const tol = 1e-9 * p.max;
+  const tol = 1e-6;
   if (p.preferred && p.preferred.length > 0) {
-    return [...new Set(p.preferred)].filter((s) => s >= p.min - tol && s <= p.max + tol).sort((a, b) => a - b);
+    return [...new Set(p.preferred)].filter((s) => s >= p.min * (1 - tol) && s <= p.max * (1 + tol)).sort((a, b) => a - b);
   }
   const module = p.module!;
   const out: number[] = [];
-  for (let k = Math.ceil(p.min / module - 1e-9); k * module <= p.max + tol; k++) if (k > 0) out.push(round(k * module));
+  for (let k = Math.ceil((p.min * (1 - tol)) / module); k * module <= p.max * (1 + tol); k++) if (k > 0) out.push(round(k * module));
   return out;
 }
 

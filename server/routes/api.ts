@@ -1,6 +1,6 @@
 import type { FastifyInstance } from "fastify";
 import { z } from "zod";
-import { grades, JobDocument, Material, materialFromGrade, PROGRAM, toDisplayUnits } from "../../core/index.js";
+import { convertJob, grades, JobDocument, Material, materialFromGrade, prepareJob, PROGRAM, quantityOf, toDisplayUnits } from "../../core/index.js";
 import { runDesign } from "../design-service.js";
 import { ApiError } from "../errors.js";
 import type { Example } from "../examples.js";
@@ -8,7 +8,8 @@ import { renderWorksheet, worksheetFileName } from "../pdf/worksheet.js";
 
 /** The JSON API: every route parses, calls core through the design service, and returns. */
 export async function apiRoutes(app: FastifyInstance, options: { examples: Example[] }) {
-  const jobSchema = z.toJSONSchema(JobDocument, { io: "input", unrepresentable: "any" });
+  // Each number carries its quantity kind ("length", "span", "force" …) so a client can label and convert it.
+  const jobSchema = z.toJSONSchema(JobDocument, { io: "input", unrepresentable: "any", metadata: quantityOf });
 
   app.get("/api/health", async () => ({ status: "ok", program: PROGRAM.name, version: PROGRAM.version }));
 
@@ -31,6 +32,14 @@ export async function apiRoutes(app: FastifyInstance, options: { examples: Examp
   });
 
   app.post("/api/designs", async (request) => runDesign(request.body).result);
+
+  app.post<{ Querystring: { to?: string } }>("/api/conversions", async (request) => {
+    const to = request.query.to;
+    if (to !== "si" && to !== "us") throw new ApiError("ERR_INPUT_INVALID", undefined, [{ path: "to", message: `must be "si" or "us", not ${JSON.stringify(to ?? null)}` }]);
+    const prepared = prepareJob(request.body);
+    if (!prepared.ok) throw new ApiError("ERR_INPUT_INVALID", undefined, prepared.issues);
+    return convertJob(prepared.job, to);
+  });
 
   app.post("/api/worksheets", async (request, reply) => {
     const run = runDesign(request.body);

@@ -56,6 +56,23 @@ describe("GET routes", () => {
     expect(bad.body.issues[0].path).toBe("units");
   });
 
+  test("POST /api/conversions?to=us rewrites a job in the other unit system; a bad target is a 400 naming `to`", async () => {
+    const res = await request(app.server).post("/api/conversions?to=us").send(plankIJob());
+    expect(res.status).toBe(200);
+    expect(res.body.units).toBe("us");
+    expect(res.body.parts[0].shape.b).toBeCloseTo(100 / 25.4, 6);
+    expect(res.body.beam.spans[0]).toBeCloseTo(4000 / 304.8, 6);
+    const bad = await request(app.server).post("/api/conversions?to=metric").send(plankIJob());
+    expect(bad.status).toBe(400);
+    expect(bad.body.issues[0].path).toBe("to");
+  });
+
+  test("GET /api/schema/job names the quantity kind of every number, so a client can label and convert it", async () => {
+    const res = await request(app.server).get("/api/schema/job");
+    expect(res.status).toBe(200);
+    expect(res.body.properties.beam.properties.spans.items.quantity).toBe("span");
+  });
+
   test("the page and its script are served", async () => {
     const page = await request(app.server).get("/");
     expect(page.status).toBe(200);
