@@ -1,34 +1,40 @@
 import { beamIssues } from "./beam/beam-issues.js";
 import { checkConnectorPlacement } from "./connector/check-placement.js";
 import { kindOf } from "./connector/registry.js";
+import { multiPlyOf } from "./fastening/side-load-transfer.js";
 import { JobDocument } from "./schema/job.js";
 import { issuesFromZod, type JobIssue } from "./schema/job-issues.js";
 import { connectedGroups, findContacts, findOverlaps } from "./section/contacts.js";
 import { fastenedJoints, type FastenedJoint } from "./section/fastened-joints.js";
 import { resolvePlacement } from "./section/place-parts.js";
 import { buildSection, positioned } from "./section/section-model.js";
-import { allowedSpacings } from "./spacing/allowed-spacings.js";
 import { toCoreUnits } from "./units/convert.js";
-import { spacingDefaults } from "./spacing/spacing-defaults.js";
+import { inJobUnits } from "./units/format.js";
 
 export type PreparedJob = { ok: true; job: JobDocument; core: JobDocument } | { ok: false; issues: JobIssue[] };
 
-/** Parses a job document, checks what the schema cannot, and converts it to core units. */
+/**
+ * Parses a job document, checks what the schema cannot, and converts it to core units. Checks of
+ * fields against each other run on the job as written; checks of the geometry run in core units
+ * (after placements are resolved) and quote their numbers back in the job's units.
+ */
 export function prepareJob(input: unknown): PreparedJob {
   const parsed = JobDocument.safeParse(input, { reportInput: true });
   if (!parsed.success) return { ok: false, issues: issuesFromZod(parsed.error) };
-  const placement = resolvePlacement(parsed.data.parts);
-  if (placement.issues.length > 0) return { ok: false, issues: placement.issues };
-  const job = { ...parsed.data, parts: placement.parts };
-  const issues = checkJob(job);
+  const issues = checkJob(parsed.data);
   if (issues.length > 0) return { ok: false, issues };
-  const core = toCoreUnits(JobDocument, job, job.units);
+  const converted = toCoreUnits(JobDocument, parsed.data, parsed.data.units);
+  const placement = resolvePlacement(converted.parts);
+  if (placement.issues.length > 0) return { ok: false, issues: placement.issues };
+  const core = { ...converted, parts: placement.parts };
+  const geometric = checkGeometry(core);
+  if (geometric.length > 0) return { ok: false, issues: geometric };
   const placed = checkConnectorPlacement(core);
   if (placed.length > 0) return { ok: false, issues: placed };
   return { ok: true, job: parsed.data, core };
 }
 
-/** Checks of a schema-valid job (placements resolved) that need more than one field: references, geometry, positions, limits. */
+/** Checks of a schema-valid job that need more than one field: ids and references, the beam and its loads. */
 export function checkJob(job: JobDocument): JobIssue[] {
   const issues: JobIssue[] = [];
   const add = (path: string, message: string) => issues.push({ path, message });
@@ -56,13 +62,34 @@ export function checkJob(job: JobDocument): JobIssue[] {
       add(`connectors[${i}].maxSpacing`, `${c.maxSpacing} is less than the minimum spacing ${c.minSpacing}`);
     }
   });
+  const heldSeen = new Map<string, number>();
+  job.fastening.joints.forEach((j, k) => {
+    const path = `fastening.joints[${k}]`;
+    checkConnector(`${path}.connector`, j.connector);
+    const unknown = j.held.filter((id) => !partIds.has(id));
+    if (unknown.length > 0) return add(`${path}.held`, `names part(s) not in the section: ${unknown.join(", ")}`);
+    const held = new Set(j.held);
+    if (held.size === partIds.size) return add(`${path}.held`, "holds every part of the section; a joint must leave some parts on the other side of the cut");
+    const key = [...held].sort().join("+");
+    const first = heldSeen.get(key);
+    if (first !== undefined) add(`${path}.held`, `the same held group as fastening.joints[${first}]`);
+    else heldSeen.set(key, k);
+  });
   if (issues.length > 0) return issues;
+  for (const issue of beamIssues(job)) add(issue.path, issue.message);
+  return issues;
+}
 
+/** Checks of the section and what depends on it, on a job in core units with its placements resolved. */
+export function checkGeometry(job: JobDocument): JobIssue[] {
+  const issues: JobIssue[] = [];
+  const add = (path: string, message: string) => issues.push({ path, message });
+  const text = (value: number, quantity: Parameters<typeof inJobUnits>[1]) => inJobUnits(value, quantity, job.units);
   const section = buildSection(positioned(job.parts), job.materials);
   for (const o of findOverlaps(section)) {
     const i = job.parts.findIndex((p) => p.id === o.b);
     const j = job.parts.findIndex((p) => p.id === o.a);
-    add(`parts[${i}]`, `part "${o.b}" overlaps part "${o.a}" (parts[${j}]) over an area of ${round(o.area)} ${job.units === "si" ? "mm²" : "in²"}; parts may touch but not overlap`);
+    add(`parts[${i}]`, `part "${o.b}" overlaps part "${o.a}" (parts[${j}]) over an area of ${text(o.area, "area")}; parts may touch but not overlap`);
   }
   if (issues.length > 0) return issues;
   const contacts = findContacts(section);
@@ -78,50 +105,25 @@ export function checkJob(job: JobDocument): JobIssue[] {
     }
     return issues;
   }
-
-  const heldSeen = new Map<string, number>();
   job.fastening.joints.forEach((j, k) => {
-    const path = `fastening.joints[${k}]`;
-    checkConnector(`${path}.connector`, j.connector);
-    const unknown = j.held.filter((id) => !partIds.has(id));
-    if (unknown.length > 0) return add(`${path}.held`, `names part(s) not in the section: ${unknown.join(", ")}`);
     const held = new Set(j.held);
-    if (held.size === partIds.size) return add(`${path}.held`, "holds every part of the section; a joint must leave some parts on the other side of the cut");
-    if (!contacts.some((c) => held.has(c.a) !== held.has(c.b))) return add(`${path}.held`, "these parts touch no other part, so no connectors can hold them");
-    const key = [...held].sort().join("+");
-    const first = heldSeen.get(key);
-    if (first !== undefined) add(`${path}.held`, `the same held group as fastening.joints[${first}]`);
-    else heldSeen.set(key, k);
+    if (!contacts.some((c) => held.has(c.a) !== held.has(c.b))) add(`fastening.joints[${k}].held`, "these parts touch no other part, so no connectors can hold them");
   });
-
+  if (!multiPlyOf(section)) {
+    job.beam.loads.forEach((load, i) => {
+      if (load.type !== "moment" && load.face !== "top") {
+        add(`beam.loads[${i}].face`, `a load on the ${load.face} face applies to members of side-by-side plies of one depth; this section is not one, so the load must act on top`);
+      }
+    });
+  }
+  if (issues.length > 0) return issues;
   const L = job.beam.spans.reduce((s, l) => s + l, 0);
-  const spanUnit = job.units === "si" ? "m" : "ft";
-  if (job.mode === "check") issues.push(...checkProvidedSchedules(job, fastenedJoints(job, section, contacts), L, spanUnit));
-  for (const issue of beamIssues(job)) add(issue.path, issue.message);
-
-  const defaults = spacingDefaults(job.units);
-  const rules = job.spacing;
-  const usedDiscrete = new Set([job.fastening.default, ...job.fastening.joints].map((f) => f.connector));
-  job.connectors.forEach((c, i) => {
-    if (!usedDiscrete.has(c.id)) return;
-    const kind = kindOf(c);
-    if (kind.mechanism !== "discrete") return;
-    const limits = kind.detailing(c);
-    const min = Math.max(limits.minSpacing, rules.minimum ?? 0);
-    const max = Math.min(limits.maxSpacing ?? defaults.maxSpacing, rules.maximum ?? Infinity);
-    if (min > max) {
-      add(rules.maximum !== undefined ? "spacing.maximum" : `connectors[${i}].minSpacing`, `connector "${c.id}" needs a spacing of at least ${round(min)} but at most ${round(max)} is allowed`);
-    } else if (allowedSpacings({ module: rules.module ?? defaults.module, preferred: rules.preferred ?? null, min, max }).length === 0) {
-      add(rules.preferred ? "spacing.preferred" : "spacing.module", `no spacing on this module or list lies between ${round(min)} and ${round(max)} for connector "${c.id}"`);
-    }
-  });
+  if (job.mode === "check") issues.push(...checkProvidedSchedules(job, fastenedJoints(job, section, contacts), L, (x) => text(x, "span")));
   return issues;
 }
 
-const round = (x: number) => Number(x.toPrecision(4));
-
 /** Check mode: every connector joint needs the schedule to check, with zones from end to end and rows on the member. */
-function checkProvidedSchedules(job: JobDocument, joints: FastenedJoint[], L: number, spanUnit: string): JobIssue[] {
+function checkProvidedSchedules(job: JobDocument, joints: FastenedJoint[], L: number, span: (x: number) => string): JobIssue[] {
   const issues: JobIssue[] = [];
   const seen = new Set<string>();
   for (const { connector, fastening, path } of joints) {
@@ -135,19 +137,19 @@ function checkProvidedSchedules(job: JobDocument, joints: FastenedJoint[], L: nu
       issues.push({ path: `${path}.provided`, message: "check mode needs the schedule to check here: zones (from, to, spacing) or the positions of the rows" });
       continue;
     }
-    const tol = 1e-9 * Math.max(L, 1);
+    const tol = 1e-6 * Math.max(L, 1);
     if (provided.type === "zones") {
       provided.zones.forEach((z, i) => {
         const at = `${path}.provided.zones[${i}]`;
         const expectedFrom = i === 0 ? 0 : provided.zones[i - 1]!.to;
-        if (Math.abs(z.from - expectedFrom) > tol) issues.push({ path: `${at}.from`, message: `must be ${round(expectedFrom)} ${spanUnit}: zones run from the left end to the right end without gaps or overlaps` });
-        if (z.to <= z.from) issues.push({ path: `${at}.to`, message: `must be beyond its start (${round(z.from)} ${spanUnit})` });
+        if (Math.abs(z.from - expectedFrom) > tol) issues.push({ path: `${at}.from`, message: `must be ${span(expectedFrom)}: zones run from the left end to the right end without gaps or overlaps` });
+        if (z.to <= z.from) issues.push({ path: `${at}.to`, message: `must be beyond its start (${span(z.from)})` });
       });
       const last = provided.zones[provided.zones.length - 1]!;
-      if (Math.abs(last.to - L) > tol) issues.push({ path: `${path}.provided.zones[${provided.zones.length - 1}].to`, message: `must be the member's length, ${round(L)} ${spanUnit}` });
+      if (Math.abs(last.to - L) > tol) issues.push({ path: `${path}.provided.zones[${provided.zones.length - 1}].to`, message: `must be the member's length, ${span(L)}` });
     } else {
       provided.positions.forEach((x, i) => {
-        if (x > L + tol) issues.push({ path: `${path}.provided.positions[${i}]`, message: `${x} ${spanUnit} is beyond the end of the member (length ${round(L)} ${spanUnit})` });
+        if (x > L + tol) issues.push({ path: `${path}.provided.positions[${i}]`, message: `${span(x)} is beyond the end of the member (length ${span(L)})` });
         else if (i > 0 && x <= provided.positions[i - 1]!) issues.push({ path: `${path}.provided.positions[${i}]`, message: "positions must increase from the left end" });
       });
     }

@@ -8,6 +8,8 @@ import { kindOf } from "./connector/registry.js";
 import { bondLineResult } from "./fastening/bond-line-result.js";
 import { contextFor } from "./fastening/connector-context.js";
 import { discreteSchedule, type JointInput } from "./fastening/discrete-schedule.js";
+import { interfaceDemand, interfaceOf, multiPlyOf, type MultiPly } from "./fastening/side-load-transfer.js";
+import { interfaceTransfer, plyShares } from "./multi-ply/ply-shares.js";
 import { weldSchedule } from "./fastening/weld-schedule.js";
 import type { JobDocument } from "./schema/job.js";
 import { RESULT_FORMAT, RESULT_VERSION, type BondLineResult, type DesignResult, type JointResult, type Schedule, type WeldResult } from "./schema/result.js";
@@ -31,6 +33,7 @@ export function designMember(job: JobDocument): DesignResult {
   const stations = stationsFor(beam.length, [...new Set(beam.results.flatMap((r) => r.actions.breaks))]);
   const profile = stressProfile(section);
   const I = section.secondMoment;
+  const plies = multiPlyOf(section);
 
   const schedules: Schedule[] = [];
   const bondLines: BondLineResult[] = [];
@@ -48,9 +51,10 @@ export function designMember(job: JobDocument): DesignResult {
     const flowFactor = joint.firstMoment / I;
     const stressFactor = joint.firstMoment / (I * joint.contactWidth);
     const inPlaneOfBending = joint.firstMoment <= 1e-9 * section.transformedArea * (section.bounds.y1 - section.bounds.y0);
-    if (inPlaneOfBending) {
+    const plyInterface = inPlaneOfBending && plies ? interfaceOf(plies, joint) : null;
+    if (inPlaneOfBending && plyInterface === null) {
       warnings.add(
-        `Joint ${joint.id}: its held parts are balanced about the neutral axis (Q = 0), so bending in the plane of the member puts no shear flow on it; its connectors are placed by the spacing limits only. Loads that arrive on one side of side-by-side plies must be passed across this joint by other means (not checked here).`,
+        `Joint ${joint.id}: its held parts are balanced about the neutral axis (Q = 0), so bending in the plane of the member puts no shear flow on it; its connectors are placed by the spacing limits only.`,
       );
     }
     jointResults.push({
@@ -66,14 +70,20 @@ export function designMember(job: JobDocument): DesignResult {
       connectorLabel: kind.describe(connector),
       mechanism: kind.mechanism,
       rows: fastening.rows,
+      demand: plyInterface === null ? "shear-flow" : "side-load",
       sharing:
-        lineCount > 1
-          ? `q is shared equally by the ${lineCount} contact lines (the same connector on each, so equal stiffness).`
-          : "One contact line carries the whole shear flow.",
+        plyInterface !== null
+          ? `Interface ${plyInterface + 1} of side-by-side plies: its connectors pass the loads that arrive on one face (or on top of plies of unequal stiffness) to the plies beyond, in proportion to each ply's E·I; q = V·Q/I is zero here.`
+          : lineCount > 1
+            ? `q is shared equally by the ${lineCount} contact lines (the same connector on each, so equal stiffness).`
+            : "One contact line carries the whole shear flow.",
     });
     // One context per combination and contact line; a combination's resistance is the least over the lines.
     const contexts = beam.results.map((r) => joint.lines.map((line) => contextFor(r.combination, job, joint, line, fastening.headSide, fastening.rows, section)));
-    const input: JointInput = { job, beam, stations, joint, connector, fastening, contexts, flowFactor, stressFactor };
+    const input: JointInput =
+      plyInterface === null
+        ? { job, beam, stations, joint, connector, fastening, contexts, flowFactor, stressFactor }
+        : { job, beam, stations, joint, connector, fastening, contexts, flowFactor: 1, stressFactor: 1 / joint.contactWidth, demandActions: interfaceDemand(job, beam, plies!, plyInterface) };
     if (kind.mechanism === "bond-line") bondLines.push(bondLineResult(input, kind));
     else if (kind.mechanism === "weld") {
       const { weld, warnings: w } = weldSchedule(input, kind);
@@ -87,6 +97,11 @@ export function designMember(job: JobDocument): DesignResult {
     }
   }
 
+  if (plies) {
+    assumptions.add("Side-by-side plies of one depth deflect together, so each carries a share of the load in proportion to its E·I; connectors at each interface pass what arrives on one side beyond its share.");
+    assumptions.add("A load on top bears on each ply in proportion to its thickness (common practice); the self-weight of each ply is carried by that ply.");
+    assumptions.add("A concentrated load hung on a face is passed by the connectors within half the member depth each side of it (common practice).");
+  }
   const { checks, notChecked } = memberChecks(job, section, beam, profile);
   if (section.parts.length > 1 && joints.length === 0) warnings.add("No joint was found between the parts; check that the parts touch face to face.");
   const failures = [
@@ -112,6 +127,7 @@ export function designMember(job: JobDocument): DesignResult {
       failures,
     },
     section: sectionResult(section, profile),
+    multiPly: plies ? multiPlyResult(plies, jointResults) : null,
     joints: jointResults,
     beam: beamResult(beam, stations),
     schedules,
@@ -126,6 +142,21 @@ export function designMember(job: JobDocument): DesignResult {
       ...standards,
     ],
     warnings: [...warnings],
+  };
+}
+
+function multiPlyResult(plies: MultiPly, joints: JointResult[]): DesignResult["multiPly"] {
+  const transfer = (face: "left" | "right" | "top") => interfaceTransfer(plies.plies, [{ face, magnitude: 1 }]);
+  const shares = plyShares(plies.plies);
+  return {
+    plies: plies.parts.map((part, i) => ({ part, share: shares[i]! })),
+    interfaces: plies.parts.slice(0, -1).map((left, k) => ({
+      between: [left, plies.parts[k + 1]!] as [string, string],
+      joint: joints.find((j) => j.lines.length === 1 && j.lines[0]!.between[0] === left && j.lines[0]!.between[1] === plies.parts[k + 1])?.id ?? null,
+      fromLeftFace: transfer("left").interfaces[k]!.force,
+      fromRightFace: transfer("right").interfaces[k]!.force,
+      fromTop: transfer("top").interfaces[k]!.force,
+    })),
   };
 }
 

@@ -1,5 +1,5 @@
 import type { BeamAnalysis } from "../beam/analyse-beam.js";
-import { maxAbsShear, shearAt } from "../beam/member-actions.js";
+import { maxAbsShear, shearAt, type MemberActions } from "../beam/member-actions.js";
 import type { Station } from "../beam/stations.js";
 import { governingLimits, type ConnectorContext, type ConnectorResistance, type DiscreteConnectorKind } from "../connector/connector-kind.js";
 import type { Connector } from "../connector/registry.js";
@@ -25,6 +25,11 @@ export interface JointInput {
   flowFactor: number;
   /** Q/(I·t), 1/mm². */
   stressFactor: number;
+  /**
+   * Per combination, what the connectors must carry along the member in place of V (the force per
+   * length passed across a ply interface); flowFactor then 1. Absent: the shear force V.
+   */
+  demandActions?: MemberActions[];
 }
 
 const VERIFICATION_METHOD =
@@ -32,9 +37,14 @@ const VERIFICATION_METHOD =
 
 const leastOf = <T extends { value: number }>(values: T[]) => values.reduce((a, b) => (b.value < a.value ? b : a));
 
-/** Envelope of the shear flow on one contact line at the beam stations, N/mm. */
-export function lineFlow(beam: BeamAnalysis, stations: Station[], flowFactor: number, lines: number): number[] {
-  return stations.map((s) => (Math.max(...beam.results.map((r) => Math.abs(shearAt(r.actions, s.x, s.side)))) * flowFactor) / lines);
+/** The actions the connectors of a joint answer to, per combination: V, or the demand given in its place. */
+export function demandActionsOf(input: Pick<JointInput, "beam" | "demandActions">): MemberActions[] {
+  return input.demandActions ?? input.beam.results.map((r) => r.actions);
+}
+
+/** Envelope of the flow on one contact line at the beam stations, N/mm. */
+export function lineFlow(actions: MemberActions[], stations: Station[], flowFactor: number, lines: number): number[] {
+  return stations.map((s) => (Math.max(...actions.map((a) => Math.abs(shearAt(a, s.x, s.side)))) * flowFactor) / lines);
 }
 
 /**
@@ -56,9 +66,10 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
   const minZoneLength = job.spacing.minZoneLength ?? coreDefault(defaults.minZoneLength);
   const sources = [...limits.sources];
   if (limits.maxSpacing === null && job.spacing.maximum === undefined) sources.push(`maximum spacing ${inJobUnits(coreDefault(defaults.maxSpacing), "length", job.units)} (common practice; the connector sets none)`);
+  const actions = demandActionsOf(input);
   const problem = {
     length: beam.length,
-    combinations: beam.results.map((r, i) => ({ id: r.combination.id, actions: r.actions, resistance: resistances[i]!.value })),
+    combinations: beam.results.map((r, i) => ({ id: r.combination.id, actions: actions[i]!, resistance: resistances[i]!.value })),
     flowFactor,
     lines: lineCount,
     rows,
@@ -93,7 +104,7 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
       penetration: limits.penetration ?? null,
       sources,
     },
-    shearFlow: lineFlow(beam, stations, flowFactor, lineCount),
+    shearFlow: lineFlow(actions, stations, flowFactor, lineCount),
   };
 
   if (job.mode === "check" && fastening.provided) {
@@ -145,7 +156,7 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
     system: job.units,
   });
   const worst = design.rowChecks.reduce((w, r) => (r.utilisation > w.utilisation ? r : w));
-  const peakShear = Math.max(...beam.results.map((r) => maxAbsShear(r.actions, 0, beam.length).value));
+  const peakShear = Math.max(...actions.map((a) => maxAbsShear(a, 0, beam.length).value));
   const options = design.infeasible
     ? [
         `${design.infeasible.connectorsPerRowNeeded} connectors per row at the minimum spacing of ${len(design.spacings[0]!)}.`,

@@ -8,7 +8,7 @@ import { demandCurve, designSchedule } from "../spacing/design-schedule.js";
 import { spacingDefaults } from "../spacing/spacing-defaults.js";
 import { inJobUnits } from "../units/format.js";
 import { toCore } from "../units/quantity.js";
-import { lineFlow, type JointInput } from "./discrete-schedule.js";
+import { demandActionsOf, lineFlow, type JointInput } from "./discrete-schedule.js";
 
 const leastOf = <T extends { value: number }>(values: T[]) => values.reduce((a, b) => (b.value < a.value ? b : a));
 
@@ -28,10 +28,11 @@ export function weldSchedule(input: JointInput, kind: WeldKind<Connector>): { we
   const limits = kind.detailing(connector, thinnest);
   const layout = kind.layout(connector);
   const len = (mm: number) => inJobUnits(mm, "length", job.units);
+  const actions = demandActionsOf(input);
 
   // Ratio of the flow per line to what a continuous weld of the given size carries, per combination.
   const continuousRatio = Math.max(
-    ...beam.results.map((r, i) => (maxAbsShear(r.actions, 0, beam.length).value * flowFactor) / lineCount / (fillets * strengths[i]!.value)),
+    ...actions.map((a, i) => (maxAbsShear(a, 0, beam.length).value * flowFactor) / lineCount / (fillets * strengths[i]!.value)),
   );
   const sizeStep = job.units === "us" ? 25.4 / 16 : 1;
   const sizeNeeded = continuousRatio > 1 + 1e-9 ? Math.ceil((limits.size * continuousRatio) / sizeStep - 1e-9) * sizeStep : null;
@@ -44,7 +45,7 @@ export function weldSchedule(input: JointInput, kind: WeldKind<Connector>): { we
   const pitches = [...new Set([segment, ...allowedSpacings({ module, preferred: null, min: segment, max: maxPitch })])].sort((a, b) => a - b);
   const problem = {
     length: beam.length,
-    combinations: beam.results.map((r, i) => ({ id: r.combination.id, actions: r.actions, resistance: strengths[i]!.value * segment })),
+    combinations: beam.results.map((r, i) => ({ id: r.combination.id, actions: actions[i]!, resistance: strengths[i]!.value * segment })),
     flowFactor,
     lines: lineCount,
     rows: fillets,
@@ -71,7 +72,7 @@ export function weldSchedule(input: JointInput, kind: WeldKind<Connector>): { we
   if (layout.pattern === "continuous" && !(job.mode === "check" && fastening.provided)) {
     const worst = beam.results
       .map((r, i) => {
-        const v = maxAbsShear(r.actions, 0, beam.length);
+        const v = maxAbsShear(actions[i]!, 0, beam.length);
         return { u: (v.value * flowFactor) / lineCount / (fillets * strengths[i]!.value), x: v.x, id: r.combination.id };
       })
       .reduce((a, b) => (b.u > a.u ? b : a));
@@ -132,12 +133,12 @@ export function weldSchedule(input: JointInput, kind: WeldKind<Connector>): { we
         sizeNeeded === null
           ? null
           : `A continuous weld of ${len(limits.size)} carries ${(1 / continuousRatio).toFixed(2)} of the peak flow; a leg of ${len(sizeNeeded)} is needed${sizeNeeded > limits.maxSize ? `, above the largest ${len(limits.maxSize)} the parts allow: use a stronger electrode, more fillets or thicker parts` : ""}.`,
-      maxShearFlow: Math.max(...lineFlow(beam, stations, flowFactor, lineCount)),
+      maxShearFlow: Math.max(...lineFlow(actions, stations, flowFactor, lineCount)),
       at,
       combination,
       utilisation,
       passes: utilisation <= 1 + 1e-9,
-      shearFlow: lineFlow(beam, stations, flowFactor, lineCount),
+      shearFlow: lineFlow(actions, stations, flowFactor, lineCount),
     },
   };
 }

@@ -18,9 +18,16 @@ const loadFields = {
   label: Text(60).default(""),
 };
 
+/**
+ * Where a load arrives on a member of side-by-side plies: on top of every ply, or hung on the left or
+ * right face (joists on one side), so that connectors must pass it across the plies.
+ */
+const face = z.enum(["top", "left", "right"]).default("top");
+
 export const UniformLoad = z.strictObject({
   type: z.literal("uniform"),
   ...loadFields,
+  face,
   /** Intensity, downward positive. */
   w: quantity("lineLoad"),
   /** Start of the loaded length from the left end of the member; the left end if absent. */
@@ -33,6 +40,7 @@ export const UniformLoad = z.strictObject({
 export const LinearLoad = z.strictObject({
   type: z.literal("linear"),
   ...loadFields,
+  face,
   /** Intensity at the start of the loaded length, downward positive. */
   wStart: quantity("lineLoad"),
   /** Intensity at the end of the loaded length, downward positive. */
@@ -44,6 +52,7 @@ export const LinearLoad = z.strictObject({
 export const PointLoad = z.strictObject({
   type: z.literal("point"),
   ...loadFields,
+  face,
   /** Force, downward positive. */
   P: quantity("force"),
   /** Position from the left end of the member. */

@@ -101,6 +101,8 @@ export const JointResult = z.object({
   connectorLabel: z.string(),
   mechanism: z.enum(["discrete", "bond-line", "weld"]),
   rows: z.number().int(),
+  /** shear-flow: q = V·Q/I · side-load: force passed across a ply interface per length (side-by-side plies). */
+  demand: z.enum(["shear-flow", "side-load"]),
   sharing: z.string(),
 });
 export type JointResult = z.infer<typeof JointResult>;
@@ -373,6 +375,13 @@ export const DesignResult = z.object({
   member: z.object({ mark: z.string(), description: z.string(), revision: z.string(), date: z.string().optional() }),
   status: z.object({ passes: z.boolean(), summary: z.string(), failures: z.array(z.string()) }),
   section: SectionResult,
+  /** Side-by-side plies of equal depth: each ply's share of a load by E·I, and the fraction of a unit load each interface passes, by the face it arrives on. */
+  multiPly: z
+    .object({
+      plies: z.array(z.object({ part: z.string(), share: z.number() })),
+      interfaces: z.array(z.object({ between: z.tuple([z.string(), z.string()]), joint: z.string().nullable(), fromLeftFace: z.number(), fromRightFace: z.number(), fromTop: z.number() })),
+    })
+    .nullable(),
   joints: z.array(JointResult),
   beam: BeamResult,
   schedules: z.array(Schedule),

@@ -142,9 +142,9 @@ export function evaluateZone(p: ZoningProblem, a: number, b: number, first: bool
 function zoneSpacing(p: ZoningProblem, a: number, b: number, first: boolean, last: boolean): number | undefined {
   const L = p.length;
   const e = p.endDistance;
+  // Start from the largest spacing the zone's own demand allows; its rows' reach into the neighbours is checked below.
   const peak = p.demand(a, b);
-  if (peak <= 0) return p.spacings[p.spacings.length - 1];
-  let s = largestAtMost(p.spacings, 1 / peak);
+  let s = peak > 0 ? largestAtMost(p.spacings, 1 / peak) : p.spacings[p.spacings.length - 1];
   while (s !== undefined) {
     const reachLeft = first ? 0 : a - s / 2;
     const reachRight = last ? (p.mirrored ? b : L) : b + s / 2;
