@@ -3,6 +3,7 @@
 import { mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { availableParallelism, loadavg, tmpdir } from "node:os";
 import { join } from "node:path";
+import { Worker } from "node:worker_threads";
 import { runBatch, type BatchReport } from "../server/cli/run-batch.js";
 
 /** Mulberry32: a small seeded generator, so every run invents the same members. */
@@ -46,6 +47,19 @@ export function inventMembers(folder: string, count: number, seed = 10): string[
   return files;
 }
 
+/** How many cores this process really gets now: the same spin on 1 and on 2 worker threads (1.0 = a second core is free, 0 = none). */
+async function spareCoreProbe(): Promise<{ one: number; two: number; spare: number }> {
+  const spin = "let x = 0; for (let i = 0; i < 2e8; i++) x += i % 7; require('node:worker_threads').parentPort.postMessage(x);";
+  const run = async (n: number) => {
+    const t0 = performance.now();
+    await Promise.all(Array.from({ length: n }, () => new Promise((resolve) => new Worker(spin, { eval: true }).once("message", resolve))));
+    return performance.now() - t0;
+  };
+  const one = await run(1);
+  const two = await run(2);
+  return { one, two, spare: Math.max(0, Math.min(1, (2 * one - two) / one)) };
+}
+
 const mean = (xs: number[]) => xs.reduce((a, b) => a + b, 0) / xs.length;
 
 const median = (xs: number[]) => {
@@ -59,7 +73,10 @@ export async function batchBench(say: (line: string) => void): Promise<void> {
     say("");
     say(`## Batch (stitchplan design): invented members, variations of the examples, ${availableParallelism()} cores`);
     say("");
-    say(`Load average when the batch bench started: ${loadavg().map((l) => l.toFixed(1)).join(", ")} (1, 5, 15 min). Other work on the machine slows every figure and hides the gain from threads.`);
+    const probe = await spareCoreProbe();
+    say(
+      `Load average when the batch bench started: ${loadavg().map((l) => l.toFixed(1)).join(", ")} (1, 5, 15 min). The same spin took ${probe.one.toFixed(0)} ms on one worker thread and ${probe.two.toFixed(0)} ms on each of two at once: about ${probe.spare.toFixed(1)} of a second core was free. Other work on the machine slows every figure and hides the gain from threads.`,
+    );
     say("");
     say("| members | worksheets | threads | seconds | members/s | design mean (ms) | worksheet median (ms) | worksheet p95 (ms) | pass / fail / other |");
     say("|---|---|---|---|---|---|---|---|---|");

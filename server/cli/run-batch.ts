@@ -1,5 +1,5 @@
 import { mkdir, writeFile } from "node:fs/promises";
-import { availableParallelism } from "node:os";
+import { availableParallelism, loadavg } from "node:os";
 import { join, resolve } from "node:path";
 import type { UnitSystem } from "../../core/index.js";
 import { collectJobFiles, outputNames } from "./collect-job-files.js";
@@ -41,10 +41,15 @@ export interface BatchReport {
 export const WORKER_START_MS = 1000;
 export const ESTIMATED_MS = { design: 15, pdf: 150 };
 
-export function autoThreads(members: number, pdf: boolean, cores = availableParallelism()): number {
+/**
+ * Worker threads for a batch: none for small batches, and none when other programs already keep the
+ * cores busy (the load average), since a worker then only competes with this thread for the same core.
+ */
+export function autoThreads(members: number, pdf: boolean, cores = availableParallelism(), load = loadavg()[0] ?? 0): number {
   const serial = members * (ESTIMATED_MS.design + (pdf ? ESTIMATED_MS.pdf : 0));
-  if (cores < 2 || serial < 2 * WORKER_START_MS) return 1;
-  return Math.min(cores, members);
+  const spare = cores - Math.floor(load);
+  if (spare < 2 || serial < 2 * WORKER_START_MS) return 1;
+  return Math.min(spare, members);
 }
 
 /** Tasks kept in flight on one thread, so that one member's file writes overlap the next one's design. */

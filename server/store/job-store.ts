@@ -86,7 +86,7 @@ export interface FingerprintLookUp {
   /** Worksheets issued with this fingerprint, oldest first. */
   issues: WorksheetIssue[];
   /** Saved revisions whose input has this fingerprint. */
-  revisions: { projectId: number; projectName: string; memberId: number; mark: string; revision: number; savedAt: string }[];
+  revisions: { projectId: number; projectName: string; memberId: number; mark: string; revision: number; savedAt: string; fingerprint: string }[];
 }
 
 export interface StoreOptions {
@@ -447,16 +447,17 @@ export class JobStore {
     const revisions = (
       this.db
         .prepare(
-          `SELECT p.id AS project_id, p.name AS project_name, m.id AS member_id, m.mark, r.number, r.saved_at
+          `SELECT p.id AS project_id, p.name AS project_name, m.id AS member_id, m.mark, r.number, r.saved_at, r.fingerprint
            FROM revisions r JOIN members m ON m.id = r.member_id JOIN projects p ON p.id = m.project_id
            WHERE r.fingerprint >= ? AND r.fingerprint < ? ORDER BY r.saved_at`,
         )
-        .all(...range) as { project_id: number; project_name: string; member_id: number; mark: string; number: number; saved_at: string }[]
-    ).map((r) => ({ projectId: r.project_id, projectName: r.project_name, memberId: r.member_id, mark: r.mark, revision: r.number, savedAt: r.saved_at }));
+        .all(...range) as { project_id: number; project_name: string; member_id: number; mark: string; number: number; saved_at: string; fingerprint: string }[]
+    ).map((r) => ({ projectId: r.project_id, projectName: r.project_name, memberId: r.member_id, mark: r.mark, revision: r.number, savedAt: r.saved_at, fingerprint: r.fingerprint }));
     if (issues.length === 0 && revisions.length === 0) {
       throw new ApiError("ERR_WORKSHEET_NOT_FOUND", `No issued worksheet or saved revision in this job store has the fingerprint ${fingerprint}.`);
     }
-    const full = new Set([...issues.map((i) => i.fingerprint)]);
+    // A prefix that matches one fingerprint answers with it in full.
+    const full = new Set([...issues.map((i) => i.fingerprint), ...revisions.map((r) => r.fingerprint)]);
     return { fingerprint: full.size === 1 ? [...full][0]! : fingerprint, issues, revisions };
   }
 

@@ -152,11 +152,13 @@ describe("runBatch", () => {
     expect(readFileSync(join(work.dir, "threads-2", "workshop-box-beam.si.schedule.csv"), "utf8")).toBe(readFileSync(join(work.dir, "threads-1", "workshop-box-beam.si.schedule.csv"), "utf8"));
   });
 
-  test("autoThreads(…) keeps small batches on one thread and spreads large ones over the cores", () => {
-    expect(autoThreads(5, false, 2)).toBe(1);
-    expect(autoThreads(1000, false, 2)).toBe(2);
-    expect(autoThreads(40, true, 2)).toBe(2);
-    expect(autoThreads(1000, true, 1)).toBe(1);
+  test("autoThreads(…) keeps small batches on one thread and spreads large ones over the idle cores", () => {
+    expect(autoThreads(5, false, 2, 0)).toBe(1);
+    expect(autoThreads(1000, false, 2, 0)).toBe(2);
+    expect(autoThreads(40, true, 2, 0.5)).toBe(2);
+    expect(autoThreads(1000, true, 1, 0)).toBe(1);
+    expect(autoThreads(1000, false, 2, 1.2)).toBe(1);
+    expect(autoThreads(1000, false, 8, 3)).toBe(5);
   });
 });
 

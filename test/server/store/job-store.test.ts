@@ -147,7 +147,9 @@ describe("JobStore worksheet issues", () => {
     const found = store.lookUp(fingerprint);
     expect(found.issues).toEqual([issue]);
     expect(found.revisions).toMatchObject([{ projectId: project.id, mark: "LB-1", revision: 1 }]);
-    expect(store.lookUp(fingerprint.slice(0, 10).toUpperCase()).issues).toEqual([issue]);
+    const byPrefix = store.lookUp(fingerprint.slice(0, 10).toUpperCase());
+    expect(byPrefix.issues).toEqual([issue]);
+    expect(byPrefix.fingerprint).toBe(fingerprint);
     expect(store.worksheetPdf(project.id, saved.memberId, issue.id).pdf.toString()).toBe("%PDF");
     expect(thrown(() => store.lookUp("0".repeat(64))).code).toBe("ERR_WORKSHEET_NOT_FOUND");
   });
