@@ -1,6 +1,7 @@
 import { beamIssues } from "./beam/beam-issues.js";
 import { checkConnectorPlacement } from "./connector/check-placement.js";
 import { kindOf } from "./connector/registry.js";
+import { layersFromSection } from "./composite/layers-from-section.js";
 import { multiPlyOf } from "./fastening/side-load-transfer.js";
 import { JobDocument } from "./schema/job.js";
 import { issuesFromZod, type JobIssue } from "./schema/job-issues.js";
@@ -115,6 +116,10 @@ export function checkGeometry(job: JobDocument): JobIssue[] {
         add(`beam.loads[${i}].face`, `a load on the ${load.face} face applies to members of side-by-side plies of one depth; this section is not one, so the load must act on top`);
       }
     });
+  }
+  if (job.compositeAction.model === "slip-aware") {
+    const layered = layersFromSection(section);
+    if (!layered.covered) add("compositeAction.model", `slip-aware composite action (the γ-method of EN 1995-1-1 Annex B) does not apply to this section: ${layered.reason}`);
   }
   if (issues.length > 0) return issues;
   const L = job.beam.spans.reduce((s, l) => s + l, 0);

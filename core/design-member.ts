@@ -7,6 +7,7 @@ import { memberChecks } from "./checks/member-checks.js";
 import { kindOf } from "./connector/registry.js";
 import { bondLineResult } from "./fastening/bond-line-result.js";
 import { contextFor } from "./fastening/connector-context.js";
+import { compositeDesign } from "./fastening/composite-design.js";
 import { discreteSchedule, type JointInput } from "./fastening/discrete-schedule.js";
 import { interfaceDemand, interfaceOf, multiPlyOf, type MultiPly } from "./fastening/side-load-transfer.js";
 import { interfaceTransfer, plyShares } from "./multi-ply/ply-shares.js";
@@ -35,15 +36,12 @@ export function designMember(job: JobDocument): DesignResult {
   const I = section.secondMoment;
   const plies = multiPlyOf(section);
 
-  const schedules: Schedule[] = [];
-  const bondLines: BondLineResult[] = [];
-  const welds: WeldResult[] = [];
-  const jointResults: JointResult[] = [];
   const assumptions = new Set<string>();
   const standards = new Set<string>();
   const warnings = new Set<string>();
+  const jointResults: JointResult[] = [];
 
-  for (const { joint, connector, fastening } of joints) {
+  const prepared = joints.map(({ joint, connector, fastening }) => {
     const kind = kindOf(connector);
     kind.assumptions(connector).forEach((a) => assumptions.add(a));
     kind.standards(connector).forEach((s) => standards.add(s));
@@ -84,17 +82,34 @@ export function designMember(job: JobDocument): DesignResult {
       plyInterface === null
         ? { job, beam, stations, joint, connector, fastening, contexts, flowFactor, stressFactor }
         : { job, beam, stations, joint, connector, fastening, contexts, flowFactor: 1, stressFactor: 1 / joint.contactWidth, demandActions: interfaceDemand(job, beam, plies!, plyInterface) };
-    if (kind.mechanism === "bond-line") bondLines.push(bondLineResult(input, kind));
-    else if (kind.mechanism === "weld") {
-      const { weld, warnings: w } = weldSchedule(input, kind);
-      welds.push(weld);
-      w.forEach((x) => warnings.add(x));
-    } else {
-      const { schedule, warnings: w, mirrored } = discreteSchedule(input, kind);
-      schedules.push(schedule);
-      w.forEach((x) => warnings.add(x));
-      if (mirrored) assumptions.add("Zones are mirrored about midspan where the connector demand is symmetric.");
+    return { joint, kind, input };
+  });
+
+  type Run = { schedule?: Schedule; bondLine?: BondLineResult; weld?: WeldResult; warnings: string[]; mirrored: boolean };
+  const run = ({ kind, input }: (typeof prepared)[number], override: Partial<Pick<JointInput, "flowFactor" | "maxSpacingCap">> = {}): Run => {
+    const inputs = { ...input, ...override };
+    if (kind.mechanism === "bond-line") return { bondLine: bondLineResult(inputs, kind), warnings: [], mirrored: false };
+    if (kind.mechanism === "weld") {
+      const { weld, warnings: w } = weldSchedule(inputs, kind);
+      return { weld, warnings: w, mirrored: false };
     }
+    const { schedule, warnings: w, mirrored } = discreteSchedule(inputs, kind);
+    return { schedule, warnings: w, mirrored };
+  };
+  const runs = new Map(prepared.map((p) => [p.joint.id, run(p)]));
+  const composite = compositeDesign({ job, section, beam, prepared, runs, rerun: (id, override) => run(prepared.find((p) => p.joint.id === id)!, override) });
+  composite.assumptions.forEach((a) => assumptions.add(a));
+
+  const schedules: Schedule[] = [];
+  const bondLines: BondLineResult[] = [];
+  const welds: WeldResult[] = [];
+  for (const p of prepared) {
+    const r = runs.get(p.joint.id)!;
+    if (r.schedule) schedules.push(r.schedule);
+    if (r.bondLine) bondLines.push(r.bondLine);
+    if (r.weld) welds.push(r.weld);
+    r.warnings.forEach((w) => warnings.add(w));
+    if (r.mirrored) assumptions.add("Zones are mirrored about midspan where the connector demand is symmetric.");
   }
 
   if (plies) {
@@ -102,13 +117,15 @@ export function designMember(job: JobDocument): DesignResult {
     assumptions.add("A load on top bears on each ply in proportion to its thickness (common practice); the self-weight of each ply is carried by that ply.");
     assumptions.add("A concentrated load hung on a face is passed by the connectors within half the member depth each side of it (common practice).");
   }
-  const { checks, notChecked } = memberChecks(job, section, beam, profile);
+  const { checks, notChecked } = memberChecks(job, section, beam, profile, composite.stiffness);
+  checks.push(...composite.checks);
   if (section.parts.length > 1 && joints.length === 0) warnings.add("No joint was found between the parts; check that the parts touch face to face.");
   const failures = [
     ...schedules.filter((s) => !s.passes).map((s) => `Joint ${s.joint}: ${scheduleFailure(s)} (utilisation ${s.verification.maxUtilisation.toFixed(2)}).`),
     ...bondLines.filter((b) => !b.passes).map((b) => `Bond line ${b.joint}: stress exceeds the strength (utilisation ${b.utilisation.toFixed(2)}).`),
     ...welds.filter((w) => !w.passes).map((w) => `Weld ${w.joint}: shear flow exceeds the weld's resistance (utilisation ${w.utilisation.toFixed(2)}).${w.sizeNote ? ` ${w.sizeNote}` : ""}`),
     ...checks.filter((c) => !c.passes).map((c) => `${c.title}: utilisation ${c.utilisation.toFixed(2)}.`),
+    ...(composite.result && !composite.result.applies ? [`Slip-aware composite action was asked for but cannot be applied: ${composite.result.reason}`] : []),
   ];
 
   return {
@@ -128,6 +145,7 @@ export function designMember(job: JobDocument): DesignResult {
     },
     section: sectionResult(section, profile),
     multiPly: plies ? multiPlyResult(plies, jointResults) : null,
+    composite: composite.result,
     joints: jointResults,
     beam: beamResult(beam, stations),
     schedules,

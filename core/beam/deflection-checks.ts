@@ -14,7 +14,13 @@ export interface DeflectionChecks {
  * the largest deflection, down or up, inside the region. A cantilever or overhang is checked on twice
  * its length (common practice [CP]; codes state limits for spans between supports).
  */
-export function deflectionChecks(beam: BeamAnalysis, limits: Beam["deflectionLimits"], spanUnit: (mm: number) => string): DeflectionChecks {
+export function deflectionChecks(
+  beam: BeamAnalysis,
+  limits: Beam["deflectionLimits"],
+  spanUnit: (mm: number) => string,
+  /** Slip of mechanical connectors: deflections scale by (EI)_rigid/(EI)_ef, and by the final stiffness for the long-term check. */
+  stiffness: { factor: number; finalFactor: number | null; note: string } | null = null,
+): DeflectionChecks {
   if (!beam.service) {
     return {
       checks: [],
@@ -36,11 +42,12 @@ export function deflectionChecks(beam: BeamAnalysis, limits: Beam["deflectionLim
       const length = region.x1 - region.x0;
       const measured = region.kind === "overhang" ? 2 * length : length;
       const limit = measured / c.ratio;
-      const worst = largestIn(c.entries, region.x0, region.x1);
+      const measuredWorst = largestIn(c.entries, region.x0, region.x1);
+      const worst = { ...measuredWorst, value: measuredWorst.value * (stiffness?.factor ?? 1) };
       const basis = region.kind === "overhang" ? `2 × ${spanUnit(length)}/${c.ratio}` : `span/${c.ratio}`;
       checks.push({
         id: `deflection-${c.key}${many ? `-${region.spans[0]}` : ""}`,
-        title: `Deflection under ${c.what}${many ? `, ${region.label}` : ""}, limit ${basis}`,
+        title: `Deflection under ${c.what}${many ? `, ${region.label}` : ""}, limit ${basis}${stiffness ? ` (${stiffness.note})` : ""}`,
         quantity: "deflection",
         demand: worst.value,
         capacity: limit,
@@ -55,7 +62,30 @@ export function deflectionChecks(beam: BeamAnalysis, limits: Beam["deflectionLim
       });
     });
   }
-  const notChecked: string[] = ["Long-term deflection (creep) and the extra deflection from slip of mechanical connectors."];
+  if (stiffness?.finalFactor) {
+    beam.regions.forEach((region) => {
+      const length = region.x1 - region.x0;
+      const measured = region.kind === "overhang" ? 2 * length : length;
+      const limit = measured / limits.total;
+      const w = largestIn(beam.service!.total, region.x0, region.x1);
+      const value = w.value * stiffness.finalFactor!;
+      checks.push({
+        id: `deflection-final${many ? `-${region.spans[0]}` : ""}`,
+        title: `Final (long-term) deflection under all loads${many ? `, ${region.label}` : ""}, limit span/${limits.total}`,
+        quantity: "deflection",
+        demand: value,
+        capacity: limit,
+        utilisation: value / limit,
+        passes: value <= limit * (1 + 1e-9),
+        combination: w.combination,
+        at: w.x,
+        reference: "every load with the final stiffness (E/(1 + ψ2·k_def), K_ser/(1 + ψ2·k_def,c)), EN 1995-1-1 §2.3.2.2 [M]: conservative for permanent loads, which take ψ2 = 1",
+      });
+    });
+  }
+  const notChecked: string[] = [
+    ...(stiffness?.finalFactor ? [] : ["Long-term deflection (creep)" + (stiffness ? "; give ψ2 and k_def under compositeAction.longTerm to check it." : " and the extra deflection from slip of mechanical connectors (choose the slip-aware model).")]),
+  ];
   if (beam.service.live.length === 0) notChecked.push(`Deflection under ${limits.liveCategories.join(", ")} alone: the job has no such loads.`);
   return { checks, notChecked };
 }

@@ -6,6 +6,7 @@ import type { MemberCheck } from "../schema/result.js";
 import type { SectionModel } from "../section/section-model.js";
 import { fromCore, unitLabel } from "../units/quantity.js";
 import type { ProfilePoint } from "../section/stress-profile.js";
+import type { StiffnessFactor } from "../fastening/composite-design.js";
 
 export interface MemberChecks {
   checks: MemberCheck[];
@@ -16,7 +17,7 @@ const BENDING = "σ = n·M·y/I (elastic bending of the transformed section)";
 const SHEAR = "τ = V·Q/(I·t) (elastic shear stress, averaged over the width at each level)";
 
 /** Bending and shear stress per material and deflection, for every combination. */
-export function memberChecks(job: JobDocument, section: SectionModel, beam: BeamAnalysis, profile: ProfilePoint[]): MemberChecks {
+export function memberChecks(job: JobDocument, section: SectionModel, beam: BeamAnalysis, profile: ProfilePoint[], stiffness: StiffnessFactor | null = null): MemberChecks {
   const checks: MemberCheck[] = [];
   const notChecked: string[] = [];
   const materials = [...new Map(section.parts.map((p) => [p.material.id, p.material])).values()];
@@ -54,7 +55,7 @@ export function memberChecks(job: JobDocument, section: SectionModel, beam: Beam
     }
   }
 
-  const deflection = deflectionChecks(beam, job.beam.deflectionLimits, (mm) => `${Number(fromCore(mm, "span", job.units).toPrecision(4))} ${unitLabel("span", job.units)}`);
+  const deflection = deflectionChecks(beam, job.beam.deflectionLimits, (mm) => `${Number(fromCore(mm, "span", job.units).toPrecision(4))} ${unitLabel("span", job.units)}`, stiffness);
   checks.push(...deflection.checks);
   notChecked.push(...deflection.notChecked);
   notChecked.push(

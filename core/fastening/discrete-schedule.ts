@@ -30,6 +30,8 @@ export interface JointInput {
    * length passed across a ply interface); flowFactor then 1. Absent: the shear force V.
    */
   demandActions?: MemberActions[];
+  /** A largest spacing set from outside the connector's rules (the s_max ≤ 4·s_min rule of slip-aware design), mm. */
+  maxSpacingCap?: number;
 }
 
 const VERIFICATION_METHOD =
@@ -61,10 +63,11 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
   const defaults = spacingDefaults(job.units);
   const coreDefault = (v: number) => toCore(v, "length", job.units);
   const minSpacing = Math.max(limits.minSpacing, job.spacing.minimum ?? 0);
-  const maxSpacing = Math.min(limits.maxSpacing ?? coreDefault(defaults.maxSpacing), job.spacing.maximum ?? Infinity);
+  const maxSpacing = Math.max(minSpacing, Math.min(limits.maxSpacing ?? coreDefault(defaults.maxSpacing), job.spacing.maximum ?? Infinity, input.maxSpacingCap ?? Infinity));
   const module = job.spacing.preferred ? null : job.spacing.module ?? coreDefault(defaults.module);
   const minZoneLength = job.spacing.minZoneLength ?? coreDefault(defaults.minZoneLength);
   const sources = [...limits.sources];
+  if (input.maxSpacingCap !== undefined && input.maxSpacingCap < (limits.maxSpacing ?? Infinity)) sources.push(`maximum spacing ${inJobUnits(input.maxSpacingCap, "length", job.units)}: at most 4 × the smallest, for the effective spacing of EN 1995-1-1 Annex B`);
   if (limits.maxSpacing === null && job.spacing.maximum === undefined) sources.push(`maximum spacing ${inJobUnits(coreDefault(defaults.maxSpacing), "length", job.units)} (common practice; the connector sets none)`);
   const actions = demandActionsOf(input);
   const problem = {

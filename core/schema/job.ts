@@ -152,6 +152,18 @@ export const JobDocument = z.strictObject({
   beam: Beam,
   combinations: CombinationSettings.default({ set: "unfactored" }),
   spacing: SpacingRules.default({ maxZonesPerSpan: 5, symmetric: true }),
+  /**
+   * How the parts act together: "rigid" designs on q = V·Q/I; "slip-aware" uses the connectors' slip
+   * moduli (EN 1995-1-1 Annex B, the γ-method) for timber flanges nailed or screwed to a web. Either way
+   * the result shows both side by side where the section and connectors allow.
+   */
+  compositeAction: z
+    .strictObject({
+      model: z.enum(["rigid", "slip-aware"]).default("rigid"),
+      /** Long-term deflection: ψ2 of the variable actions and k_def of the timber (EN 1995-1-1 Table 3.2). */
+      longTerm: z.strictObject({ psi2: z.number().min(0).max(1), kdef: z.number().min(0).max(4) }).optional(),
+    })
+    .default({ model: "rigid" }),
 });
 export type JobDocument = z.infer<typeof JobDocument>;
 export type JobInput = z.input<typeof JobDocument>;

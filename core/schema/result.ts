@@ -382,6 +382,53 @@ export const DesignResult = z.object({
       interfaces: z.array(z.object({ between: z.tuple([z.string(), z.string()]), joint: z.string().nullable(), fromLeftFace: z.number(), fromRightFace: z.number(), fromTop: z.number() })),
     })
     .nullable(),
+  /** Rigid and slip-aware composite action side by side (EN 1995-1-1 Annex B), or why the γ-method does not apply. */
+  composite: z
+    .object({
+      model: z.enum(["rigid", "slip-aware"]),
+      applies: z.boolean(),
+      reason: z.string().nullable(),
+      effectiveLength: q("span").nullable(),
+      effectiveLengthRule: z.string().nullable(),
+      stiffness: z
+        .object({
+          rigid: q("flexuralRigidity"),
+          serviceability: q("flexuralRigidity"),
+          ultimate: q("flexuralRigidity"),
+          final: q("flexuralRigidity").nullable(),
+          noConnection: q("flexuralRigidity"),
+        })
+        .nullable(),
+      /** Deflection with slip over deflection if rigid, (EI)_rigid/(EI)_ef with K_ser; and with the final stiffness. */
+      deflectionFactor: z.number().nullable(),
+      finalDeflectionFactor: z.number().nullable(),
+      joints: z.array(
+        z.object({
+          joint: z.string(),
+          flange: z.enum(["top", "bottom"]),
+          serviceabilitySlip: q("slipModulus").nullable(),
+          ultimateSlip: q("slipModulus").nullable(),
+          shearPlanesPerRow: z.number().int(),
+          /** The spacing in γ: s, or s_ef from s_min and s_max. */
+          spacing: q("length"),
+          minSpacing: q("length"),
+          maxSpacing: q("length"),
+          withinFourTimes: z.boolean(),
+          gammaUltimate: z.number(),
+          gammaServiceability: z.number(),
+          /** q/V rigid (Q/I) and with slip (γ·E·A·a/(EI)_ef), per unit shear. */
+          flowFactorRigid: q("perLength"),
+          flowFactorSlip: q("perLength"),
+          /** Connectors the rigid and the slip-aware schedules need. */
+          rigidCount: z.number().int().nullable(),
+          slipAwareCount: z.number().int().nullable(),
+        }),
+      ),
+      iterations: z.number().int(),
+      converged: z.boolean(),
+      reference: z.string(),
+    })
+    .nullable(),
   joints: z.array(JointResult),
   beam: BeamResult,
   schedules: z.array(Schedule),

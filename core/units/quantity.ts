@@ -42,6 +42,8 @@ export const quantityUnits = {
   area: { si: { label: "mm²", factor: 1 }, us: { label: "in²", factor: INCH ** 2 } },
   firstMoment: { si: { label: "mm³", factor: 1 }, us: { label: "in³", factor: INCH ** 3 } },
   secondMoment: { si: { label: "mm⁴", factor: 1 }, us: { label: "in⁴", factor: INCH ** 4 } },
+  /** E·I. */
+  flexuralRigidity: { si: { label: "kN·m²", factor: 1e9 }, us: { label: "lbf·in²", factor: LBF * INCH ** 2 } },
   /** Q/I: shear flow per unit shear force. */
   perLength: { si: { label: "1/mm", factor: 1 }, us: { label: "1/in", factor: 1 / INCH } },
   /** Q/(I·t): shear stress per unit shear force. */
