@@ -11,6 +11,10 @@ export interface TitleBlockFacts {
   printed: string;
   program: string;
   fingerprint: string;
+  /** The line over the title block: what the sheet is. */
+  heading: string;
+  /** A different heading for some pages, by their index among the buffered pages (the field sheet). */
+  pageHeadings?: Map<number, string>;
 }
 
 export const REVIEW_NOTICE =
@@ -24,7 +28,7 @@ export function stampPages(doc: PDFKit.PDFDocument, frame: PageFrame, facts: Tit
     // Header and footer sit outside the body margins; without this pdfkit would start a new page.
     const margins = { ...doc.page.margins };
     doc.page.margins = { top: 0, bottom: 0, left: 0, right: 0 };
-    titleBlock(doc, frame, facts, `Page ${i - range.start + 1} of ${range.count}`);
+    titleBlock(doc, frame, facts, `Page ${i - range.start + 1} of ${range.count}`, facts.pageHeadings?.get(i - range.start) ?? facts.heading);
     footer(doc, frame, facts);
     doc.page.margins = margins;
   }
@@ -37,11 +41,11 @@ interface BlockCell {
   bold?: boolean;
 }
 
-function titleBlock(doc: PDFKit.PDFDocument, frame: PageFrame, facts: TitleBlockFacts, page: string): void {
+function titleBlock(doc: PDFKit.PDFDocument, frame: PageFrame, facts: TitleBlockFacts, page: string, heading: string): void {
   const x0 = frame.left;
   const width = frame.right - frame.left;
   let y = 26;
-  doc.font("bold").fontSize(8).fillColor(ink.rule).text("BUILT-UP MEMBER · CONNECTOR SPACING WORKSHEET", x0, y, { width: width * 0.7, lineBreak: false });
+  doc.font("bold").fontSize(8).fillColor(ink.rule).text(heading, x0, y, { width: width * 0.7, lineBreak: false });
   doc.font("body").fontSize(7).fillColor(ink.faint).text(facts.program, x0 + width * 0.7, y + 1, { width: width * 0.3, align: "right", lineBreak: false });
   y += 12;
   const rowHeight = 25;

@@ -3,6 +3,7 @@ import type { DesignResult, JobDocument } from "../../core/index.js";
 import { actionsSection } from "./actions-section.js";
 import { bondLineSection } from "./bond-line-section.js";
 import { closingSection } from "./closing-section.js";
+import { FIELD_SHEET_HEADING, fieldSheet } from "./field-sheet.js";
 import { inputsSection } from "./inputs-section.js";
 import { memberChecksSection } from "./member-checks-section.js";
 import { quantityText } from "./quantity-text.js";
@@ -65,6 +66,7 @@ export function renderWorksheet(job: JobDocument, result: DesignResult, options:
   for (const weld of weldsOf(context)) weldSection(context, weld);
   memberChecksSection(context);
   closingSection(context);
+  const fieldPage = fieldSheet(context);
 
   stampPages(doc, frame, {
     projectName: job.project.name,
@@ -77,6 +79,8 @@ export function renderWorksheet(job: JobDocument, result: DesignResult, options:
     printed,
     program: `${result.program.name} ${result.program.version}`,
     fingerprint: result.fingerprint ?? "",
+    heading: result.mode === "check" ? "BUILT-UP MEMBER · CONNECTOR SCHEDULE CHECK WORKSHEET" : "BUILT-UP MEMBER · CONNECTOR SPACING WORKSHEET",
+    pageHeadings: new Map([[fieldPage, FIELD_SHEET_HEADING]]),
   });
   doc.end();
   return done;

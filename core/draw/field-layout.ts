@@ -1,0 +1,189 @@
+import type { BondLineResult, DesignResult, Schedule, WeldResult } from "../schema/result.js";
+import { placeRows } from "../spacing/place-rows.js";
+import { builderDimensions } from "./builder-dimensions.js";
+
+/** One zone of a joint as built: numbers in the result's units (positions in span units, spacings in length units). */
+export interface FieldZone {
+  from: number;
+  to: number;
+  /** Spacing of the rows, or pitch of the weld segments; null for a continuous weld or a bond line. */
+  spacing: number | null;
+  /** Length of each weld segment; null for connectors, continuous welds and bond lines. */
+  segment: number | null;
+  /** Rows of connectors (or weld segments) whose position falls in the zone, on one line. */
+  rows: number;
+  /** Connectors in the zone, all lines; null for welds and bond lines. */
+  connectors: number | null;
+  passes: boolean;
+  failingCombinations: string[];
+}
+
+export type FieldJointKind = "connectors" | "weld" | "bond-line";
+
+/** A joint (or joints built alike) as the builder lays it out along the member. */
+export interface FieldJoint {
+  joints: string[];
+  kind: FieldJointKind;
+  mode: "design" | "check";
+  /** The connector as the builder names it; a weld by its leg, as its zones set the segments and pitch. */
+  connectorLabel: string;
+  /** Connectors side by side in one row (gauge lines), or fillets on each line; 1 for a bond line. */
+  across: number;
+  lineCount: number;
+  zones: FieldZone[];
+  /** Rows (connectors) or segment centres (intermittent weld) from END A, span units; empty when continuous. */
+  positions: number[];
+  /** Distance of the first and last row from END A and END B, length units; null when there are no rows. */
+  endDistance: { start: number; end: number } | null;
+  /** Intermittent segments on the two sides of a web: opposite each other or alternating. */
+  arrangement: "chain" | "staggered" | null;
+  /** Least distances across the line, length units, where the connector has them: between the connectors of a row, and to an edge. */
+  acrossLine: { spacing: number | null; edge: number | null };
+  /** Contact width of a bond line, length units. */
+  bondWidth: number | null;
+  passes: boolean;
+}
+
+export interface FieldLayoutOptions {
+  /** Whether a designed intermittent weld with zones symmetric about midspan was laid out mirrored (the job's spacing.symmetric). */
+  mirrorSymmetricWelds: boolean;
+  /** A weld's electrode by connector id ("E70"), for its name on the sheet. */
+  electrodeOf?: (connector: string) => string | undefined;
+}
+
+type Source = { kind: "schedule"; item: Schedule } | { kind: "weld"; item: WeldResult } | { kind: "bond-line"; item: BondLineResult };
+
+/**
+ * The joints of a result as the builder lays them out, in the result's joint order, with joints
+ * whose layout is the same in every number (the top and bottom joints of a symmetric box beam)
+ * gathered into one entry so the sheet shows them once.
+ */
+export function fieldLayout(result: Pick<DesignResult, "joints" | "schedules" | "welds" | "bondLines" | "beam" | "units">, options: FieldLayoutOptions): FieldJoint[] {
+  const sources: Source[] = [];
+  for (const j of result.joints) {
+    const schedule = result.schedules.find((s) => s.joint === j.id);
+    const weld = (result.welds ?? []).find((w) => w.joint === j.id);
+    const bond = result.bondLines.find((b) => b.joint === j.id);
+    if (schedule) sources.push({ kind: "schedule", item: schedule });
+    else if (weld) sources.push({ kind: "weld", item: weld });
+    else if (bond) sources.push({ kind: "bond-line", item: bond });
+  }
+  const groups = new Map<string, FieldJoint>();
+  for (const source of sources) {
+    const joint = fieldJointOf(result, source, options);
+    const key = JSON.stringify({ ...joint, joints: [] }, (_k, v: unknown) => (typeof v === "number" ? Number(v.toPrecision(9)) : v));
+    const same = groups.get(key);
+    if (same) same.joints.push(...joint.joints);
+    else groups.set(key, joint);
+  }
+  return [...groups.values()];
+}
+
+function fieldJointOf(result: Pick<DesignResult, "beam" | "units">, source: Source, options: FieldLayoutOptions): FieldJoint {
+  const length = result.beam.length;
+  const k = builderDimensions(result.units).spanToLength;
+  const ends = (positions: number[]) =>
+    positions.length > 0 ? { start: positions[0]! * k, end: (length - positions[positions.length - 1]!) * k } : null;
+
+  if (source.kind === "schedule") {
+    const s = source.item;
+    return {
+      joints: [s.joint],
+      kind: "connectors",
+      mode: s.mode,
+      connectorLabel: s.connectorLabel,
+      across: s.rows,
+      lineCount: s.lineCount,
+      zones: s.zones.map((z, i) => ({
+        from: z.from,
+        to: z.to,
+        spacing: z.spacing,
+        segment: null,
+        rows: s.positions.filter(inZone(z, i === s.zones.length - 1)).length,
+        connectors: z.count,
+        passes: z.passes,
+        failingCombinations: z.failingCombinations,
+      })),
+      positions: s.positions,
+      endDistance: ends(s.positions),
+      arrangement: null,
+      acrossLine: { spacing: s.rows > 1 ? (s.limits.rowSpacing ?? null) : null, edge: s.limits.edgeDistance ?? null },
+      bondWidth: null,
+      passes: s.passes,
+    };
+  }
+
+  if (source.kind === "weld") {
+    const w = source.item;
+    const segment = w.zones.find((z) => z.segmentLength !== null)?.segmentLength ?? w.segmentLength;
+    const intermittent = w.zones.some((z) => z.pattern === "intermittent") && segment !== null;
+    const mirrored = w.mode === "design" && options.mirrorSymmetricWelds && isMirrorSymmetric(w.zones, length);
+    // The segments are placed as the weld was designed: a segment at each end of the member, then each zone's pitch from its start.
+    const positions = intermittent
+      ? placeRows(
+          w.zones.map((z) => ({ from: z.from * k, to: z.to * k, spacing: z.pitch ?? segment!, feasible: true })),
+          length * k,
+          segment! / 2,
+          mirrored,
+        ).map((x) => x / k)
+      : [];
+    return {
+      joints: [w.joint],
+      kind: "weld",
+      mode: w.mode,
+      connectorLabel: weldName(w, result.units, options.electrodeOf?.(w.connector)),
+      across: w.fillets,
+      lineCount: w.lineCount,
+      zones: w.zones.map((z, i) => ({
+        from: z.from,
+        to: z.to,
+        spacing: z.pattern === "intermittent" ? z.pitch : null,
+        segment: z.pattern === "intermittent" ? z.segmentLength : null,
+        rows: z.pattern === "intermittent" ? positions.filter(inZone(z, i === w.zones.length - 1)).length : 0,
+        connectors: null,
+        passes: z.passes,
+        failingCombinations: z.failingCombinations,
+      })),
+      positions,
+      endDistance: intermittent ? { start: 0, end: 0 } : null,
+      arrangement: intermittent ? w.arrangement : null,
+      acrossLine: { spacing: null, edge: null },
+      bondWidth: null,
+      passes: w.passes,
+    };
+  }
+
+  const b = source.item;
+  return {
+    joints: [b.joint],
+    kind: "bond-line",
+    mode: "design",
+    connectorLabel: b.connectorLabel,
+    across: 1,
+    lineCount: 1,
+    zones: [{ from: 0, to: length, spacing: null, segment: null, rows: 0, connectors: null, passes: b.passes, failingCombinations: b.passes ? [] : [b.combination] }],
+    positions: [],
+    endDistance: null,
+    arrangement: null,
+    acrossLine: { spacing: null, edge: null },
+    bondWidth: b.width,
+    passes: b.passes,
+  };
+}
+
+/** A weld by its leg and electrode: "3/16 in E70 fillet weld", "fillet weld, leg 6 mm"; its zones give the segments and pitch. */
+function weldName(w: WeldResult, units: DesignResult["units"], electrode: string | undefined): string {
+  const leg = builderDimensions(units).length(w.limits.size);
+  return units === "us" ? `${leg}${electrode ? ` ${electrode}` : ""} fillet weld` : `fillet weld, leg ${leg}${electrode ? `, ${electrode}` : ""}`;
+}
+
+/** Whether x falls in a zone: from its start up to (not including) its end, the last zone including the member end. */
+const inZone = (z: { from: number; to: number }, last: boolean) => (x: number) => x >= z.from - 1e-9 && (last ? x <= z.to + 1e-9 : x < z.to - 1e-9);
+
+function isMirrorSymmetric(zones: { from: number; to: number; pitch: number | null; pattern: string }[], length: number): boolean {
+  const tol = 1e-6 * Math.max(1, length);
+  return zones.every((z, i) => {
+    const m = zones[zones.length - 1 - i]!;
+    return Math.abs(z.from - (length - m.to)) < tol && Math.abs(z.to - (length - m.from)) < tol && z.pattern === m.pattern && z.pitch === m.pitch;
+  });
+}

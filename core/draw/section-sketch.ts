@@ -1,0 +1,83 @@
+import type { DesignResult } from "../schema/result.js";
+import { lineTo, moveTo, palette, rectPath, type Drawing, type DrawItem } from "./drawing.js";
+import { labelWidth } from "./label-tiers.js";
+
+export interface SectionSketchOptions {
+  width: number;
+  height: number;
+}
+
+const LABEL = 8;
+
+/** Spreads wanted label heights apart by at least `gap`, kept within [lo, hi], order kept. */
+export function spreadApart(wanted: number[], gap: number, lo: number, hi: number): number[] {
+  const order = wanted.map((y, i) => ({ y, i })).sort((a, b) => a.y - b.y);
+  const ys = order.map((o) => Math.max(lo, o.y));
+  for (let k = 1; k < ys.length; k++) ys[k] = Math.max(ys[k]!, ys[k - 1]! + gap);
+  const over = ys.length > 0 ? ys[ys.length - 1]! - hi : 0;
+  if (over > 0) for (let k = ys.length - 1; k >= 0; k--) ys[k] = Math.max(lo, Math.min(ys[k]!, (k === ys.length - 1 ? hi : ys[k + 1]! - gap)));
+  const out = new Array<number>(wanted.length);
+  order.forEach((o, k) => (out[o.i] = ys[k]!));
+  return out;
+}
+
+/**
+ * A small cross-section for the builder: the parts to scale with their ids on the left, and every
+ * joint line drawn and named on the right, so the strips of the field sheet can be found on the member.
+ */
+export function sectionSketch(result: Pick<DesignResult, "section" | "joints">, options: SectionSketchOptions): Drawing {
+  const { section, joints } = result;
+  const { x0, x1, y0, y1 } = section.bounds;
+  const partLabels = section.parts.map((p) => p.id);
+  const jointLabels = joints.map((j) => `joint ${j.id}`);
+  const leftRoom = Math.min(options.width * 0.3, Math.max(0, ...partLabels.map((t) => labelWidth(t, LABEL))) + 14);
+  const rightRoom = Math.min(options.width * 0.4, Math.max(0, ...jointLabels.map((t) => labelWidth(t, LABEL, true))) + 16);
+  const margin = { left: leftRoom, right: rightRoom, top: 8, bottom: 8 };
+  const scale = Math.min((options.width - margin.left - margin.right) / (x1 - x0 || 1), (options.height - margin.top - margin.bottom) / (y1 - y0 || 1));
+  const ox = margin.left + (options.width - margin.left - margin.right - (x1 - x0) * scale) / 2;
+  const oy = margin.top + (options.height - margin.top - margin.bottom + (y1 - y0) * scale) / 2;
+  const X = (x: number) => ox + (x - x0) * scale;
+  const Y = (y: number) => oy - (y - y0) * scale;
+  const items: DrawItem[] = [];
+  const materials = [...new Set(section.parts.map((p) => p.material))];
+
+  for (const part of section.parts) {
+    const fill = palette.material[materials.indexOf(part.material) % palette.material.length];
+    for (const r of part.rects) items.push({ type: "path", d: rectPath(X(r.x0), Y(r.y1), (r.x1 - r.x0) * scale, (r.y1 - r.y0) * scale), fill, stroke: palette.ink, strokeWidth: 0.8, role: `part ${part.id}` });
+  }
+
+  // Part ids on the left, each led to a dot in its largest rectangle; parts further right take the lower labels at one height, so leaders do not cross.
+  const anchors = section.parts.map((p) => {
+    const r = p.rects.reduce((a, b) => ((b.x1 - b.x0) * (b.y1 - b.y0) > (a.x1 - a.x0) * (a.y1 - a.y0) ? b : a));
+    return { x: X((r.x0 + r.x1) / 2), y: Y((r.y0 + r.y1) / 2) };
+  });
+  const partYs = spreadApart(anchors.map((a) => a.y + a.x * 1e-3), LABEL + 2, margin.top + LABEL, options.height - 2);
+  section.parts.forEach((p, i) => {
+    const a = anchors[i]!;
+    items.push({ type: "path", d: `${moveTo(leftRoom - 4, partYs[i]! - 3)}${lineTo(a.x, a.y)}`, stroke: palette.faint, strokeWidth: 0.5 });
+    items.push({ type: "path", d: rectPath(a.x - 1.2, a.y - 1.2, 2.4, 2.4), fill: palette.ink });
+    items.push({ type: "text", x: leftRoom - 6, y: partYs[i]!, text: partLabels[i]!, size: LABEL, anchor: "end", fill: palette.ink, role: `part-label ${p.id}` });
+  });
+
+  // Joint lines, each joint named on the right with a leader to every one of its lines.
+  const right = options.width - rightRoom + 6;
+  const lineEnds = joints.map((j) =>
+    j.lines.map((l) => (l.orientation === "horizontal" ? { x: X(l.to), y: Y(l.level) } : { x: X(l.level), y: Y((l.from + l.to) / 2) })),
+  );
+  // Joints further right take the upper labels at one height, so leaders do not cross.
+  const jointYs = spreadApart(
+    lineEnds.map((ends) => ends.reduce((s, e) => s + e.y - e.x * 1e-3, 0) / Math.max(1, ends.length) + 3),
+    LABEL + 3,
+    margin.top + LABEL,
+    options.height - 2,
+  );
+  joints.forEach((j, i) => {
+    for (const l of j.lines) {
+      const d = l.orientation === "horizontal" ? `${moveTo(X(l.from), Y(l.level))}${lineTo(X(l.to), Y(l.level))}` : `${moveTo(X(l.level), Y(l.from))}${lineTo(X(l.level), Y(l.to))}`;
+      items.push({ type: "path", d, stroke: palette.joint, strokeWidth: 2.6, role: `joint-line ${j.id}` });
+    }
+    for (const e of lineEnds[i]!) items.push({ type: "path", d: `${moveTo(e.x, e.y)}${lineTo(right - 2, jointYs[i]! - 3)}`, stroke: palette.joint, strokeWidth: 0.6 });
+    items.push({ type: "text", x: right, y: jointYs[i]!, text: jointLabels[i]!, size: LABEL, anchor: "start", bold: true, fill: palette.joint, role: `joint-label ${j.id}` });
+  });
+  return { width: options.width, height: options.height, items, title: `Cross-section naming ${joints.length} joint${joints.length === 1 ? "" : "s"}` };
+}

@@ -1,0 +1,190 @@
+import { builderDimensions, type BuilderDimensions } from "../../core/draw/builder-dimensions.js";
+import { fieldElevation } from "../../core/draw/field-elevation.js";
+import { fieldLayout, type FieldJoint } from "../../core/draw/field-layout.js";
+import { jointNames, zoneCallOut } from "../../core/draw/joint-strip.js";
+import { sectionSketch } from "../../core/draw/section-sketch.js";
+import { paintDrawing } from "./paint-drawing.js";
+import { ink, type TextStyle } from "./sheet.js";
+import { table, type Cell, type Column, type Row } from "./table.js";
+import type { WorksheetContext } from "./worksheet-context.js";
+
+export const FIELD_SHEET_BAND = "FOR REVIEW — NOT FOR CONSTRUCTION UNTIL SEALED";
+export const FIELD_SHEET_HEADING = "FIELD SHEET · CONNECTOR LAYOUT FOR THE BUILDER";
+
+const SKETCH = { width: 190, height: 112 };
+/** Past this many zones a joint's table is set in two columns side by side. */
+const ONE_COLUMN_ZONES = 6;
+
+/**
+ * The builder's page: the member in elevation with every joint's zones, spacings, rows and end
+ * distances, a section naming the joints, and the zones as a table. Starts a page of its own and
+ * returns its index among the buffered pages, for the title block.
+ */
+export function fieldSheet(c: WorksheetContext): number {
+  const { sheet, job, result } = c;
+  if (!sheet.atTop) sheet.newPage();
+  const page = sheet.doc.bufferedPageRange().count - 1;
+  const dims = builderDimensions(result.units);
+  const electrodeOf = (id: string) => {
+    const k = job.connectors.find((k) => k.id === id) as { kind: string; standard?: string; electrode?: string } | undefined;
+    return k?.kind === "fillet-weld" && k.standard === "AISC-360-16" ? (k.electrode ?? "E70") : undefined;
+  };
+  const joints = fieldLayout(result, { mirrorSymmetricWelds: job.spacing.symmetric, electrodeOf });
+
+  band(c);
+  if (!result.status.passes) failureBox(c);
+  introWithSketch(c, joints, dims);
+
+  const elevation = fieldElevation(
+    {
+      dims,
+      length: result.beam.length,
+      spans: result.beam.spans,
+      supports: result.beam.supports,
+      pointLoads: job.beam.loads.flatMap((l) => (l.type === "point" ? [{ at: l.at, label: l.label }] : [])),
+      joints,
+    },
+    { width: sheet.width },
+  );
+  sheet.ensure(elevation.height);
+  paintDrawing(sheet.doc, elevation, sheet.left, sheet.y);
+  sheet.y += elevation.height + 8;
+
+  zonesTable(c, joints, dims);
+  return page;
+}
+
+function band(c: WorksheetContext): void {
+  const { sheet } = c;
+  const height = 34;
+  sheet.ensure(height + 6);
+  sheet.doc.save().rect(sheet.left, sheet.y, sheet.width, height).fill(ink.text).restore();
+  sheet.textAt(FIELD_SHEET_BAND, sheet.left, sheet.y + 5, { font: "bold", size: 13, width: sheet.width, align: "center", colour: "#ffffff" });
+  sheet.textAt("Build only from a copy reviewed and sealed by the engineer of record. Local codes and the engineer of record govern.", sheet.left, sheet.y + 21, {
+    size: 7.5,
+    width: sheet.width,
+    align: "center",
+    colour: "#ffffff",
+  });
+  sheet.y += height + 6;
+}
+
+function failureBox(c: WorksheetContext): void {
+  const { sheet, result } = c;
+  const lines = ["DOES NOT PASS — DO NOT BUILD FROM THIS SHEET. What is drawn in red fails:", ...result.status.failures];
+  const style = (i: number): TextStyle & { width: number } => ({ font: i === 0 ? "bold" : "body", size: 8.5, width: sheet.width - 16 });
+  const height = lines.reduce((h, t, i) => h + sheet.textHeight(t, style(i)) + 2, 8);
+  sheet.ensure(height + 6);
+  sheet.doc.save().rect(sheet.left, sheet.y, sheet.width, height).lineWidth(1.4).strokeColor(ink.fail).stroke().restore();
+  sheet.doc.save().rect(sheet.left, sheet.y, 4, height).fill(ink.fail).restore();
+  let y = sheet.y + 4;
+  lines.forEach((t, i) => {
+    sheet.textAt(t, sheet.left + 10, y, { ...style(i), colour: ink.fail });
+    y += sheet.textHeight(t, style(i)) + 2;
+  });
+  sheet.y += height + 6;
+}
+
+/** How to read the sheet, beside the section that names the joints. */
+function introWithSketch(c: WorksheetContext, joints: FieldJoint[], dims: BuilderDimensions): void {
+  const { sheet, result } = c;
+  const hasRows = joints.some((j) => j.kind === "connectors" && j.positions.length > 0);
+  const hasSegments = joints.some((j) => j.kind === "weld" && j.positions.length > 0);
+  const lines: [string, TextStyle["font"]][] = [
+    [
+      result.mode === "check"
+        ? "GIVEN SCHEDULE, AS CHECKED: the layout below is the one given in the job and checked by this worksheet, not designed by it."
+        : "The layout below is the one this worksheet designs.",
+      "bold",
+    ],
+    [
+      `Measure every position from END A, the left end as drawn, and mark END A on the member before laying out. Positions are in ${dims.positionUnit === "mm" ? "millimetres" : "feet and inches"}${hasRows || hasSegments ? `, ${[hasRows ? "spacings" : "", hasSegments ? "segments and pitches" : ""].filter(Boolean).join(", ")} in ${dims.spacingUnit === "mm" ? "millimetres" : "inches"}` : ""}.`,
+      "body",
+    ],
+    ...(hasRows
+      ? ([["Rows as drawn: the first and last at the end distance, each zone at its spacing or closer; where two zones meet the gap may be shorter than either spacing.", "body"]] as [string, "body"][])
+      : []),
+    ...(hasSegments
+      ? ([["Weld segments as drawn: one at each end of the member, the rest at each zone's pitch, centre to centre, or closer where two zones meet.", "body"]] as [string, "body"][])
+      : []),
+    ["Any change of connector, size, spacing, end or edge distance needs the engineer of record's approval.", "body"],
+  ];
+  const width = sheet.width - SKETCH.width - 12;
+  const style = (font: TextStyle["font"]): TextStyle & { width: number } => ({ size: 8.5, width, font });
+  const textHeight = lines.reduce((h, [t, f]) => h + sheet.textHeight(t, style(f)) + 3, 0);
+  const height = Math.max(textHeight, SKETCH.height);
+  sheet.ensure(height + 6);
+  let y = sheet.y;
+  for (const [t, f] of lines) {
+    sheet.textAt(t, sheet.left, y, style(f));
+    y += sheet.textHeight(t, style(f)) + 3;
+  }
+  const x = sheet.frame.right - SKETCH.width;
+  sheet.doc.save().rect(x, sheet.y, SKETCH.width, SKETCH.height).lineWidth(0.5).strokeColor(ink.light).stroke().restore();
+  paintDrawing(sheet.doc, sectionSketch(result, SKETCH), x, sheet.y);
+  sheet.y += height + 6;
+}
+
+/** The zones of every joint as numbers to lay out from, under the drawing; two columns when there are many. */
+function zonesTable(c: WorksheetContext, joints: FieldJoint[], dims: BuilderDimensions): void {
+  const { sheet, result } = c;
+  for (const j of joints.filter((k) => k.kind === "bond-line")) {
+    sheet.heading(`Bond line — ${jointNames(j.joints)}`, 2, 20);
+    sheet.paragraph(`${j.connectorLabel}: glued over the whole contact width${j.bondWidth !== null ? ` of ${dims.length(j.bondWidth)}` : ""} and the whole length of ${dims.run(result.beam.length)}, with the adhesive and curing the engineer of record specifies.`, {
+      size: 8.5,
+      colour: j.passes ? ink.text : ink.fail,
+      font: j.passes ? "body" : "bold",
+    });
+  }
+  const laidOut = joints.filter((k) => k.kind !== "bond-line");
+  if (laidOut.length === 0) return;
+  const fails = laidOut.some((j) => !j.passes);
+  const welds = laidOut.some((j) => j.kind === "weld");
+  const connectors = laidOut.some((j) => j.kind === "connectors");
+  const named = laidOut.length > 1;
+  const rows: Row[] = laidOut.flatMap((j) =>
+    j.zones.map((z, i) => {
+      const bad = !z.passes;
+      const cell = (text: string, bold = false): Cell => ({ text, bold: bold || bad, colour: bad ? ink.fail : undefined });
+      return [
+        ...(named ? [i === 0 ? { text: j.joints.join(", "), bold: true, colour: j.passes ? undefined : ink.fail } : ""] : []),
+        cell(String(i + 1)),
+        cell(dims.position(z.from)),
+        cell(dims.position(z.to)),
+        cell(zoneCallOut(j, z, dims), true),
+        cell(j.kind === "weld" && z.spacing === null ? "—" : String(z.rows)),
+        ...(connectors ? [cell(z.connectors === null ? "—" : String(z.connectors))] : []),
+        ...(fails ? [bad ? { text: "FAILS", bold: true, colour: ink.fail, note: z.failingCombinations.length ? `under ${z.failingCombinations.join(", ")}` : undefined } : { text: "carries it", colour: ink.pass }] : []),
+      ];
+    }),
+  );
+  const columns: Column[] = [
+    ...(named ? [{ header: "Joint", weight: 1 }] : []),
+    { header: "Zone", weight: 0.55, align: "right" },
+    { header: "From END A", weight: 0.95, align: "right" },
+    { header: "To", weight: 0.85, align: "right" },
+    { header: welds ? (connectors ? "Spacing, or segment @ pitch" : "Segment @ pitch") : "Spacing", weight: welds ? 1.5 : 1.1 },
+    { header: welds ? (connectors ? "Rows or segments" : "Segments each side") : "Rows", weight: welds ? 0.9 : 0.6, align: "right" },
+    ...(connectors ? [{ header: "Count", weight: 0.75, align: "right" as const }] : []),
+    ...(fails ? [{ header: "Result", weight: 1.1 }] : []),
+  ];
+  const note = connectors ? "; count: connectors on all lines of the joint" : "";
+  sheet.heading(`Zones of ${named ? "every joint" : jointNames(laidOut[0]!.joints).toLowerCase()} (positions in ${dims.positionUnit}${note})`, 2, 60);
+  const twoColumns = rows.length > ONE_COLUMN_ZONES && !named && !fails;
+  if (!twoColumns) {
+    table(sheet, columns, rows, { size: 8.5 });
+    return;
+  }
+  const half = Math.ceil(rows.length / 2);
+  const gutter = 12;
+  const width = (sheet.width - gutter) / 2;
+  // Room for the taller half first, so both columns start on this page.
+  sheet.ensure(30 + half * 15);
+  const top = sheet.y;
+  const right = rows.slice(half);
+  table(sheet, columns, rows.slice(0, half), { size: 8, width });
+  const leftBottom = sheet.y;
+  sheet.y = top;
+  table(sheet, columns, right, { size: 8, width, indent: width + gutter });
+  sheet.y = Math.max(leftBottom, sheet.y);
+}
