@@ -58,13 +58,26 @@ export function actionsSection(c: WorksheetContext): void {
       { header: "max deflection", weight: 1.3, align: "right" },
       { header: "Reactions", weight: 2 },
     ],
-    beam.perCombination.map((p) => [
+    beam.perCombination.map((p) => {
+      // A moment that is zero but for rounding (the free end of a simple span) prints as 0, not 3.5×10⁻¹⁰.
+      const scale = Math.max(Math.abs(p.maxMoment.value), Math.abs(p.minMoment.value));
+      const moment = (v: number) => text.of(Math.abs(v) < 1e-9 * scale ? 0 : v, "moment");
+      const forceScale = Math.max(...p.reactions.map((r) => Math.abs(r.force)), Math.abs(p.maxShear.value));
+      const momentScale = Math.max(scale, ...p.reactions.map((r) => Math.abs(r.moment)));
+      return [
       { text: p.combination, bold: true },
       { text: text.of(p.maxShear.value, "force"), note: `at ${text.of(p.maxShear.x, "span")}` },
-      { text: text.of(p.maxMoment.value, "moment"), note: `at ${text.of(p.maxMoment.x, "span")}` },
-      { text: text.of(p.minMoment.value, "moment"), note: `at ${text.of(p.minMoment.x, "span")}` },
+      { text: moment(p.maxMoment.value), note: `at ${text.of(p.maxMoment.x, "span")}` },
+      { text: moment(p.minMoment.value), note: `at ${text.of(p.minMoment.x, "span")}` },
       { text: text.of(p.maxDeflection.value, "deflection"), note: `at ${text.of(p.maxDeflection.x, "span")}` },
-      p.reactions.map((r) => `${text.of(r.force, "force")} at ${text.of(r.x, "span")}${r.moment !== 0 ? `, ${text.of(r.moment, "moment")}` : ""}`).join("; "),
-    ]),
+      p.reactions
+        .map((r) => {
+          const force = Math.abs(r.force) < 1e-9 * forceScale ? 0 : r.force;
+          const fixedEnd = Math.abs(r.moment) >= 1e-9 * momentScale && r.moment !== 0;
+          return `${text.of(force, "force")} at ${text.of(r.x, "span")}${fixedEnd ? `, ${text.of(r.moment, "moment")}` : ""}`;
+        })
+        .join("; "),
+      ];
+    }),
   );
 }

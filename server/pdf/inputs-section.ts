@@ -21,6 +21,7 @@ export function inputsSection(c: WorksheetContext): void {
       ["Client", job.project.client || "—"],
       ["Units", UNIT_SYSTEMS[job.units]],
       ["Design basis", BASES[job.basis]],
+      ["Task", job.mode === "check" ? "check the schedules given in the job (check mode)" : "design the schedules (design mode)"],
     ],
     { keyWeight: 0.6 },
   );

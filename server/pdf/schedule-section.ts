@@ -40,18 +40,25 @@ export function scheduleSection(c: WorksheetContext, group: Schedule[]): void {
   ]
     .filter(Boolean)
     .join(" ");
+  const check = s.mode === "check";
   const flowCaption = `Shear flow q per joint line, ${name} (envelope of the combinations)`;
-  const spacingCaption = `Spacing along ${name}: required by q, and the zones provided`;
+  const spacingCaption = `Spacing along ${name}: required by q, and the zones ${check ? "given" : "provided"}`;
+  const given = check ? "This is the schedule given in the job, checked row by row here; it was not designed by this worksheet." : "";
   // The heading, the verdict and both diagrams read as one block: start a page rather than split them.
-  sheet.heading(`Connector schedule — ${name}`, 1, sheet.textHeight(intro) + 40 + figureHeight(sheet, flowCaption) + figureHeight(sheet, spacingCaption));
+  sheet.heading(
+    check ? `Given schedule, checked — ${name}` : `Connector schedule — ${name}`,
+    1,
+    sheet.textHeight(intro) + (given ? sheet.textHeight(given) : 0) + 40 + figureHeight(sheet, flowCaption) + figureHeight(sheet, spacingCaption),
+  );
+  if (given) sheet.paragraph(given, { size: 9, font: "bold" });
   sheet.paragraph(intro, { size: 9 });
   scheduleVerdict(c, s, ids.length === 1 ? `Joint ${s.joint}` : `Joints ${ids.join(", ")}`);
 
   figure(sheet, flowCaption, shearFlowDiagram(s, result.beam.stations, text, sheet.width));
   figure(sheet, spacingCaption, spacingDiagram(s, result.beam.stations, text, sheet.width));
 
-  sheet.heading("Zones", 2, 50);
-  if (!s.passes) sheet.paragraph("Red rows do not carry the shear flow at the spacing shown.", { font: "bold", size: 8.5, colour: ink.fail }, 2);
+  sheet.heading(check ? "Zones given" : "Zones", 2, 50);
+  if (s.zones.some((z) => !z.passes)) sheet.paragraph("Red rows do not carry the shear flow at the spacing shown.", { font: "bold", size: 8.5, colour: ink.fail }, 2);
   table(
     sheet,
     [
@@ -81,6 +88,12 @@ export function scheduleSection(c: WorksheetContext, group: Schedule[]): void {
     ],
     { rowColour: (i) => (s.zones[i] && !s.zones[i]!.passes ? ink.fail : undefined) },
   );
+
+  if (s.detailingProblems.length > 0) {
+    sheet.heading(check ? "Detailing problems of the given schedule" : "Detailing problems", 2, 30);
+    sheet.list(s.detailingProblems, { font: "bold", size: 8.5, colour: ink.fail });
+  }
+  if (check || !s.passes) worstRowPerCombination(c, s);
 
   sheet.heading("Resistance per connector", 2, 50);
   table(
@@ -160,17 +173,48 @@ export function scheduleSection(c: WorksheetContext, group: Schedule[]): void {
   );
 }
 
+/** The worst row of the schedule under each combination on its own, worst first. */
+function worstRowPerCombination(c: WorksheetContext, s: Schedule): void {
+  const { sheet, result, text } = c;
+  if (s.perCombination.length === 0) return;
+  sheet.heading("Worst row under each combination", 2, 50);
+  const rows = [...s.perCombination].sort((a, b) => b.maxUtilisation - a.maxUtilisation);
+  table(
+    sheet,
+    [
+      { header: "Combination", weight: 2.2 },
+      { header: "Largest row utilisation", weight: 1.1, align: "right" },
+      { header: "At x", weight: 1, align: "right" },
+      { header: "Result", weight: 0.9 },
+    ],
+    rows.map((r) => {
+      const passes = r.maxUtilisation <= 1 + 1e-9;
+      return [
+        combinationsCell(result, [r.combination]),
+        { text: formatRatio(r.maxUtilisation), bold: !passes },
+        text.of(r.at, "span"),
+        passes ? { text: "passes", colour: ink.pass } : { text: "FAILS", bold: true, colour: ink.fail },
+      ];
+    }),
+    { rowColour: (i) => (rows[i] && rows[i]!.maxUtilisation > 1 + 1e-9 ? ink.fail : undefined) },
+  );
+}
+
 function scheduleVerdict(c: WorksheetContext, s: Schedule, name: string): void {
   const { sheet } = c;
+  const check = s.mode === "check";
   if (s.passes) {
-    sheet.paragraph(`Schedule passes: largest row utilisation ${formatRatio(s.verification.maxUtilisation)} ≤ 1.00.`, { font: "bold", colour: ink.pass });
+    sheet.paragraph(`${check ? "The given schedule passes" : "Schedule passes"}: largest row utilisation ${formatRatio(s.verification.maxUtilisation)} ≤ 1.00.`, { font: "bold", colour: ink.pass });
     return;
   }
   const lines = [
-    `THIS SCHEDULE DOES NOT CARRY THE SHEAR FLOW. Do not build from it as printed: the zones below are the closest the limits allow, shown for review only.`,
+    check
+      ? "THE GIVEN SCHEDULE DOES NOT PASS. Do not build from it as printed: the zones below are the ones given, shown for review only."
+      : `THIS SCHEDULE DOES NOT CARRY THE SHEAR FLOW. Do not build from it as printed: the zones below are the closest the limits allow, shown for review only.`,
     ...infeasibleStatement(c, s, name),
   ];
-  if (!s.infeasible) lines.push(`A row is over-utilised: ${formatRatio(s.verification.maxUtilisation)} > 1.00 at x = ${c.text.of(s.verification.at, "span")}.`);
+  if (!s.infeasible && !s.verification.passes) lines.push(`A row is over-utilised: ${formatRatio(s.verification.maxUtilisation)} > 1.00 at x = ${c.text.of(s.verification.at, "span")}, ${combinationName(c.result, s.verification.combination)}.`);
+  for (const problem of s.detailingProblems) lines.push(`Detailing: ${problem}`);
   const height = lines.reduce((h, t, i) => h + sheet.textHeight(t, { font: i === 0 ? "bold" : "body", size: 8.5, width: sheet.width - 16 }) + 3, 8);
   sheet.ensure(height);
   sheet.doc.save().rect(sheet.left, sheet.y, sheet.width, height).lineWidth(1.2).strokeColor(ink.fail).stroke().restore();

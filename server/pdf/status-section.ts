@@ -2,6 +2,7 @@ import { formatRatio } from "../../core/index.js";
 import { ink } from "./sheet.js";
 import { table } from "./table.js";
 import { weldsOf } from "./weld-section.js";
+import { weldZoneText } from "./weld-zones.js";
 import { combinationName, type Schedule, type WorksheetContext } from "./worksheet-context.js";
 
 /** What an infeasible schedule lacks, where, and the ways out the result lists. */
@@ -19,6 +20,8 @@ export function infeasibleStatement(c: WorksheetContext, s: Schedule, name = `Jo
 export function statusSection(c: WorksheetContext): void {
   const { sheet, result } = c;
   sheet.heading("Status", 1, 40);
+  if (result.mode === "check")
+    sheet.paragraph("CHECK OF GIVEN SCHEDULES: this worksheet checks the connector schedules and welds given in the job, row by row; it does not design them.", { font: "bold", size: 9.5 });
   if (result.status.passes) {
     sheet.paragraph(`PASSES — ${result.status.summary}`, { font: "bold", size: 10, colour: ink.pass });
     sheet.paragraph("Passing here means: under the loads, combinations and values entered, and within what this worksheet checks. See “Not checked” before relying on it.", { size: 8.5, colour: ink.faint });
@@ -68,12 +71,12 @@ export function glanceSection(c: WorksheetContext): void {
     }
     const w = weldsOf(c).find((k) => k.joint === j.id);
     if (w) {
-      const layout = w.pattern === "intermittent" && w.segmentLength !== null && w.pitch !== null ? `intermittent ${text.of(w.segmentLength, "length")} @ ${text.of(w.pitch, "length")}` : "continuous";
+      const zones = w.zones.map((z) => `${text.range(z.from, z.to)}: ${weldZoneText(c, z)}`).join("\n");
       return [
         { text: j.id, bold: true },
         `${w.connectorLabel}, ${w.fillets} fillet${w.fillets === 1 ? "" : "s"} per line on ${w.lineCount} line${w.lineCount === 1 ? "" : "s"}`,
-        `${layout} over the whole member`,
-        "—",
+        zones || "—",
+        { text: text.of(w.weldLength, "span"), note: "of weld" },
         w.passes ? { text: `passes (${formatRatio(w.utilisation)})`, colour: ink.pass } : { text: `FAILS (${formatRatio(w.utilisation)})`, colour: ink.fail, bold: true },
       ];
     }
@@ -84,7 +87,7 @@ export function glanceSection(c: WorksheetContext): void {
     [
       { header: "Joint", weight: 0.9 },
       { header: "Connector", weight: 2.8 },
-      { header: "Zones from the left end", weight: 2.9 },
+      { header: result.mode === "check" ? "Zones given, from the left end" : "Zones from the left end", weight: 2.9 },
       { header: "Count", weight: 0.6, align: "right" },
       { header: "Result", weight: 1.3 },
     ],

@@ -1,73 +1,82 @@
-import { formatRatio, lineDiagram } from "../../core/index.js";
-import { DIAGRAM_HEIGHT, figure, figureHeight } from "./figure.js";
+import { formatRatio } from "../../core/index.js";
+import { figure, figureHeight } from "./figure.js";
 import { ink } from "./sheet.js";
 import { keyValueTable, table } from "./table.js";
+import { weldDiagram } from "./weld-diagram.js";
+import { weldedShare, weldZoneText, zoneAt, type WeldJoint } from "./weld-zones.js";
 import { workingTables } from "./working-table.js";
 import { byOutcome, combinationName, combinationsCell, type WorksheetContext } from "./worksheet-context.js";
 
-/** A welded joint as the result reports it (fields read here only). */
-export interface WeldJoint {
-  joint: string;
-  connectorLabel: string;
-  fillets: number;
-  lineCount: number;
-  pattern: string;
-  segmentLength: number | null;
-  pitch: number | null;
-  resistance: { combination: string; value: number; governing: string; reference: string; steps: { symbol: string; description: string; value: number; quantity: string }[]; modes?: { mode: string; value: number }[]; warnings?: string[] }[];
-  limits: { size: number; minSize: number; maxSize: number; minSegmentLength: number; maxPitch: number | null; maxGap: number | null; sources: string[] };
-  maxShearFlow: number;
-  at: number;
-  combination: string;
-  utilisation: number;
-  passes: boolean;
-  shearFlow: number[];
-}
+/** The welds of the result. */
+export const weldsOf = (c: WorksheetContext): WeldJoint[] => c.result.welds ?? [];
 
-/** The welds of the result; results from before welds existed have none. */
-export const weldsOf = (c: WorksheetContext): WeldJoint[] => (c.result as { welds?: WeldJoint[] }).welds ?? [];
-
-/** Share of each line that is welded: segment ÷ pitch for an intermittent weld. */
-const weldedFraction = (w: WeldJoint) => (w.pattern === "intermittent" && w.segmentLength !== null && w.pitch !== null ? w.segmentLength / w.pitch : 1);
-
-/** A welded joint: the shear flow per line against fillets × resistance per length × welded fraction. */
+/** A welded joint: the shear flow per line against fillets × resistance per length × welded share, zone by zone. */
 export function weldSection(c: WorksheetContext, w: WeldJoint): void {
   const { sheet, result, text } = c;
-  const caption = `Shear flow q per joint line along joint ${w.joint}, against the weld's resistance per line`;
-  sheet.heading(`Weld — joint ${w.joint}`, 1, 70 + figureHeight(sheet, caption));
-  const layout =
-    w.pattern === "intermittent" && w.segmentLength !== null && w.pitch !== null
-      ? `intermittent, ${text.of(w.segmentLength, "length")} segments at ${text.of(w.pitch, "length")} pitch`
-      : "continuous";
-  sheet.paragraph(`${w.connectorLabel}: ${w.fillets} fillet${w.fillets === 1 ? "" : "s"} on each of ${w.lineCount} joint line${w.lineCount === 1 ? "" : "s"}, ${layout}.`, { size: 9 });
+  const check = w.mode === "check";
+  const caption = `Shear flow q per joint line along joint ${w.joint}, against what the weld of each zone carries per line`;
+  const given = check ? "This is the weld given in the job, checked here zone by zone; it was not designed by this worksheet." : "";
+  sheet.heading(check ? `Given weld, checked — joint ${w.joint}` : `Weld — joint ${w.joint}`, 1, 90 + figureHeight(sheet, caption));
+  if (given) sheet.paragraph(given, { size: 9, font: "bold" });
+  const sides = w.fillets === 2 ? "one fillet each side of the joint line" : `${w.fillets} fillet${w.fillets === 1 ? "" : "s"} per joint line`;
+  const arrangement = w.zones.some((z) => z.pattern === "intermittent") && w.fillets > 1 ? `; intermittent segments ${w.arrangement === "staggered" ? "staggered from one side to the other" : "opposite each other (chain)"}` : "";
+  sheet.paragraph(
+    `${w.connectorLabel}: ${sides}, on ${w.lineCount === 1 ? "its 1 joint line" : `each of its ${w.lineCount} joint lines`}${arrangement}. ${
+      w.pattern === "intermittent"
+        ? `Each segment of length L_s carries the shear flow over its pitch p: q·p ≤ ${w.fillets} × R × L_s per line, so a zone of segments carries ${w.fillets} × R × L_s/p per unit length.${check ? " The zones given set each pitch; the connector's own pitch is not used." : " Zones of pitch are laid out for the least weld; the connector's own pitch is the largest allowed."}`
+        : "A continuous weld carries the shear flow per line up to the fillets × R."
+    }`,
+    { size: 9 },
+  );
 
   const governing = w.resistance.find((r) => r.combination === w.combination) ?? w.resistance[0];
-  if (governing) {
-    const capacity = w.fillets * governing.value * weldedFraction(w);
+  const zone = zoneAt(w, w.at);
+  if (governing && zone) {
+    const capacity = w.fillets * governing.value * weldedShare(zone);
+    const share = weldedShare(zone) < 1 ? ` × ${formatRatio(weldedShare(zone))}` : "";
+    const where = `at x = ${text.of(w.at, "span")} (zone ${w.zones.indexOf(zone) + 1}, ${weldZoneText(c, zone)}), ${combinationName(result, w.combination)}`;
     sheet.paragraph(
-      `q max = ${text.of(w.maxShearFlow, "shearFlow")} ${w.passes ? "≤" : ">"} ${w.fillets} × ${text.of(governing.value, "shearFlow")}${weldedFraction(w) < 1 ? ` × ${formatRatio(weldedFraction(w))}` : ""} = ${text.of(capacity, "shearFlow")} per line at x = ${text.of(w.at, "span")}, ${combinationName(result, w.combination)}: utilisation ${formatRatio(w.utilisation)} — ${w.passes ? "passes" : "FAILS"}`,
+      `Largest utilisation ${formatRatio(w.utilisation)} ${w.passes ? "≤" : ">"} 1.00 ${where}; the weld there carries ${w.fillets} × ${text.of(governing.value, "shearFlow")}${share} = ${text.of(capacity, "shearFlow")} per line, against q max = ${text.of(w.maxShearFlow, "shearFlow")} on the member — ${w.passes ? "passes" : "FAILS"}`,
       { font: "bold", size: 9.5, colour: w.passes ? ink.pass : ink.fail },
     );
   }
-  if (!w.passes) sheet.paragraph("The weld does not carry the shear flow. Do not build from it as printed.", { font: "bold", colour: ink.fail });
+  if (!w.passes) sheet.paragraph(`${check ? "The given weld" : "The weld"} does not carry the shear flow. Do not build from it as printed.`, { font: "bold", colour: ink.fail });
+  if (w.sizeNote) sheet.paragraph(w.sizeNote, { font: "bold", size: 9, colour: w.sizeNeeded !== null ? ink.fail : ink.text });
 
-  const least = Math.min(...w.resistance.map((r) => r.value)) * w.fillets * weldedFraction(w);
-  figure(
+  figure(sheet, caption, weldDiagram(c, w));
+
+  sheet.heading(check ? "Weld zones given" : "Weld zones", 2, 50);
+  table(
     sheet,
-    caption,
-    lineDiagram({
-      title: "",
-      xUnit: text.unit("span"),
-      yUnit: text.unit("shearFlow"),
-      x: result.beam.stations,
-      series: [
-        { label: "q per line", values: w.shearFlow, fill: true, colour: w.passes ? "#1f5f99" : ink.fail },
-        { label: "resistance per line (least)", values: result.beam.stations.map(() => least), colour: "#8a96a3", dash: [4, 3] },
-      ],
-      width: sheet.width,
-      height: DIAGRAM_HEIGHT,
-      role: `weld ${w.joint}`,
-    }),
+    [
+      { header: "Zone", weight: 0.5, align: "right" },
+      { header: "From – to", weight: 1.4 },
+      { header: "Weld", weight: 1.3 },
+      { header: "Welded share L_s/p", weight: 0.9, align: "right" },
+      { header: "Utilisation", weight: 0.9, align: "right" },
+      { header: "Result", weight: 1.4 },
+    ],
+    w.zones.map((z, i) => [
+      String(i + 1),
+      c.text.range(z.from, z.to),
+      { text: weldZoneText(c, z), bold: true },
+      formatRatio(weldedShare(z)),
+      formatRatio(z.utilisation),
+      z.passes
+        ? { text: "passes", colour: ink.pass }
+        : { text: "FAILS", bold: true, colour: ink.fail, note: z.failingCombinations.length > 0 ? `under ${z.failingCombinations.map((k) => combinationName(result, k)).join(", ")}` : undefined },
+    ]),
+    { rowColour: (i) => (w.zones[i] && !w.zones[i]!.passes ? ink.fail : undefined) },
+  );
+  keyValueTable(
+    sheet,
+    [
+      ["Weld deposited, all fillets on all lines", text.of(w.weldLength, "span")],
+      ["Fillets per joint line × joint lines", `${w.fillets} × ${w.lineCount}`],
+      ["Intermittent segments on the two sides", w.fillets > 1 && w.zones.some((z) => z.pattern === "intermittent") ? (w.arrangement === "staggered" ? "staggered" : "chain (opposite each other)") : "—"],
+      ["Leg size a continuous weld would need", w.sizeNeeded === null ? "— (the size given is enough for a continuous weld)" : { text: text.of(w.sizeNeeded, "length"), colour: ink.fail, bold: true }],
+    ],
+    { keyWeight: 1.3 },
   );
 
   sheet.heading("Weld resistance per unit length, one fillet", 2, 40);
@@ -95,15 +104,20 @@ export function weldSection(c: WorksheetContext, w: WeldJoint): void {
 
   sheet.heading("Weld limits used", 2, 40);
   const l = w.limits;
+  const segments = w.zones.flatMap((z) => (z.segmentLength !== null ? [z.segmentLength] : []));
+  const pitches = w.zones.flatMap((z) => (z.pitch !== null ? [z.pitch] : []));
   keyValueTable(
     sheet,
     [
-      ["Size provided", text.of(l.size, "length")],
+      ["Size provided (leg)", text.of(l.size, "length")],
       ["Least size", { text: text.of(l.minSize, "length"), colour: l.size < l.minSize ? ink.fail : undefined }],
       ["Largest size", { text: text.of(l.maxSize, "length"), colour: l.size > l.maxSize ? ink.fail : undefined }],
-      ["Least segment length (intermittent)", text.of(l.minSegmentLength, "length")],
-      ["Largest pitch (intermittent)", l.maxPitch === null ? "—" : text.of(l.maxPitch, "length")],
-      ["Largest clear gap (intermittent)", l.maxGap === null ? "—" : text.of(l.maxGap, "length")],
+      ["Least segment length (intermittent)", { text: text.of(l.minSegmentLength, "length"), colour: segments.some((s) => s < l.minSegmentLength - 1e-9) ? ink.fail : undefined }],
+      ["Largest pitch (intermittent)", l.maxPitch === null ? "—" : { text: text.of(l.maxPitch, "length"), colour: pitches.some((p) => p > l.maxPitch! + 1e-9) ? ink.fail : undefined }],
+      [
+        "Largest clear gap (intermittent)",
+        l.maxGap === null ? "—" : { text: text.of(l.maxGap, "length"), colour: w.zones.some((z) => z.pitch !== null && z.segmentLength !== null && z.pitch - z.segmentLength > l.maxGap! + 1e-9) ? ink.fail : undefined },
+      ],
       ["Sources", l.sources.join("; ")],
     ],
     { keyWeight: 1.2 },
