@@ -5,7 +5,7 @@ export interface ResultSummary {
   passes: boolean;
   /** The result's one-sentence status. */
   status: string;
-  /** The most utilised item: a schedule, a bond line or a member check; null when the result has none. */
+  /** The most utilised item: a schedule, a bond line, a weld or a member check; null when the result has none. */
   governing: { item: string; utilisation: number } | null;
   /** Connectors placed (or checked) in every schedule, all lines. */
   connectors: number;
@@ -16,6 +16,7 @@ export function summariseResult(result: DesignResult): ResultSummary {
   const items: { item: string; utilisation: number }[] = [
     ...result.schedules.map((s) => ({ item: `joint ${s.joint}: ${s.connectorLabel || s.connector}`, utilisation: s.verification.maxUtilisation })),
     ...result.bondLines.map((b) => ({ item: `joint ${b.joint}: bond line`, utilisation: b.utilisation })),
+    ...(result.welds ?? []).map((w) => ({ item: `joint ${w.joint}: ${w.connectorLabel || "weld"}`, utilisation: w.utilisation })),
     ...result.checks.map((c) => ({ item: c.title, utilisation: c.utilisation })),
   ];
   let governing: ResultSummary["governing"] = null;

@@ -27,7 +27,7 @@ const lines = (rows: string[][], options: CsvOptions) => rows.map((r) => r.join(
 
 /**
  * The connector schedule: one row per zone per joint, units named in the header (the result's units).
- * Bond lines have no zones and no rows here.
+ * Bond lines have no zones and no rows here; welded joints are in weldsCsv.
  */
 export function scheduleCsv(result: DesignResult, options: CsvOptions = {}): string {
   const span = result.unitLabels.span ?? "";
@@ -47,6 +47,34 @@ export function positionsCsv(result: DesignResult, options: CsvOptions = {}): st
   const rows = [["joint", "row", `x (${result.unitLabels.span ?? ""})`]];
   for (const schedule of result.schedules) {
     schedule.positions.forEach((x, i) => rows.push([csvText(schedule.joint), String(i + 1), csvNumber(x)]));
+  }
+  return lines(rows, options);
+}
+
+/** Welded joints: one row per zone per joint, continuous or segments of a length at a pitch; null when the member has no welds. */
+export function weldsCsv(result: DesignResult, options: CsvOptions = {}): string | null {
+  const welds = result.welds ?? [];
+  if (welds.length === 0) return null;
+  const span = result.unitLabels.span ?? "";
+  const length = result.unitLabels.length ?? "";
+  const member = csvText(options.member ?? result.member.mark);
+  const rows = [["member", "joint", "zone", `from (${span})`, `to (${span})`, "pattern", `segment (${length})`, `pitch (${length})`, `leg size (${length})`, "fillets", "utilisation"]];
+  for (const weld of welds) {
+    weld.zones.forEach((zone, i) => {
+      rows.push([
+        member,
+        csvText(weld.joint),
+        String(i + 1),
+        csvNumber(zone.from),
+        csvNumber(zone.to),
+        zone.pattern,
+        zone.segmentLength === null ? "" : csvNumber(zone.segmentLength),
+        zone.pitch === null ? "" : csvNumber(zone.pitch),
+        csvNumber(weld.limits.size),
+        String(weld.fillets),
+        csvNumber(zone.utilisation, 4),
+      ]);
+    });
   }
   return lines(rows, options);
 }

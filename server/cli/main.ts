@@ -14,8 +14,8 @@ Usage
 Commands
   design   designs each member (or checks it, if its job says "mode": "check") and writes, per job
            file <name>.json, into the output folder: <name>.result.json, <name>.schedule.csv (one row
-           per zone per joint), <name>.positions.csv (every row of connectors) and <name>.pdf (the
-           worksheet); then summary.csv and a summary table. A folder means the *.json files directly
+           per zone per joint), <name>.positions.csv (every row of connectors), <name>.welds.csv
+           (welded joints only) and <name>.pdf (the worksheet); then summary.csv and a summary table. A folder means the *.json files directly
            in it (not *.result.json).
   check    the same for check-mode jobs only ("mode": "check", the schedules to check given in
            fastening.default.provided or fastening.joints[i].provided); a design-mode job is reported.

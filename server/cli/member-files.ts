@@ -1,6 +1,6 @@
 import { readFile, writeFile } from "node:fs/promises";
 import type { JobIssue, UnitSystem } from "../../core/index.js";
-import { positionsCsv, scheduleCsv } from "../../core/export/schedule-csv.js";
+import { positionsCsv, scheduleCsv, weldsCsv } from "../../core/export/schedule-csv.js";
 import { designInUnits } from "../design-in-units.js";
 import { ApiError } from "../errors.js";
 import { summariseResult, type ResultSummary } from "../result-summary.js";
@@ -9,7 +9,7 @@ import { summariseResult, type ResultSummary } from "../result-summary.js";
 export interface MemberTask {
   index: number;
   file: string;
-  /** Output path without extension: `<out>/<name>`; `.result.json`, `.schedule.csv`, `.positions.csv`, `.pdf` are added. */
+  /** Output path without extension: `<out>/<name>`; `.result.json`, `.schedule.csv`, `.positions.csv`, `.welds.csv` (welded members), `.pdf` are added. */
   outBase: string;
   mode: "design" | "check";
   units?: UnitSystem | undefined;
@@ -87,6 +87,8 @@ export async function runMemberTask(task: MemberTask): Promise<MemberOutcome> {
     [`${task.outBase}.schedule.csv`, scheduleCsv(run.shown)],
     [`${task.outBase}.positions.csv`, positionsCsv(run.shown)],
   ];
+  const welds = weldsCsv(run.shown);
+  if (welds) files.push([`${task.outBase}.welds.csv`, welds]);
   if (task.pdf) {
     const t0 = performance.now();
     try {

@@ -95,7 +95,7 @@ export async function runBatch(options: BatchOptions): Promise<BatchReport> {
   const tasks: MemberTask[] = [];
   collected.files.forEach((file, index) => {
     const outBase = join(options.out, names[index]!);
-    const clash = [".result.json", ".schedule.csv", ".positions.csv", ".pdf"].map((ext) => resolve(outBase + ext)).find((p) => inputsResolved.has(p));
+    const clash = [".result.json", ".schedule.csv", ".positions.csv", ".welds.csv", ".pdf"].map((ext) => resolve(outBase + ext)).find((p) => inputsResolved.has(p));
     if (clash) {
       outcomes.push({ index, file, mark: "", status: "error", summary: null, problems: [{ path: "(output)", message: `writing its outputs would overwrite the input file ${clash}; choose another --out folder` }], written: [], milliseconds: { design: 0, pdf: 0 } });
       return;

@@ -126,6 +126,8 @@ export interface ResultChanges {
   connectors: Pair<number>;
   schedules: ScheduleChange[];
   bondLines: UtilisationChange[];
+  /** Welded joints by their largest utilisation (zones of segment and pitch are in the results themselves). */
+  welds: UtilisationChange[];
   checks: UtilisationChange[];
 }
 
@@ -145,7 +147,7 @@ function matchBy<T>(a: T[], b: T[], key: (item: T) => string): [string, T | unde
 }
 
 /**
- * How the schedules, bond lines and member checks changed between two results, which must be in the
+ * How the schedules, bond lines, welds and member checks changed between two results, which must be in the
  * same unit system (utilisations and counts are pure numbers either way). Schedules are matched by
  * joint, zones by their number along the member.
  */
@@ -202,6 +204,7 @@ export function resultChanges(from: DesignResult, to: DesignResult, options: { r
     connectors: { from: total(from), to: total(to) },
     schedules,
     bondLines: utilisations(from.bondLines, to.bondLines, (b) => b.joint, (b) => ({ title: `joint ${b.joint}: bond line`, utilisation: b.utilisation, passes: b.passes })),
+    welds: utilisations(from.welds ?? [], to.welds ?? [], (w) => w.joint, (w) => ({ title: `joint ${w.joint}: ${w.connectorLabel || "weld"}`, utilisation: w.utilisation, passes: w.passes })),
     checks: utilisations(from.checks, to.checks, (c) => c.id, (c) => ({ title: c.title, utilisation: c.utilisation, passes: c.passes })),
   };
 }

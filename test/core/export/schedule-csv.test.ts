@@ -1,7 +1,7 @@
 import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import { describe, expect, test } from "vitest";
-import { csvNumber, csvText, positionsCsv, scheduleCsv } from "../../../core/export/schedule-csv.js";
+import { csvNumber, csvText, positionsCsv, scheduleCsv, weldsCsv } from "../../../core/export/schedule-csv.js";
 import { runDesign } from "../../../server/design-service.js";
 
 const example = (name: string) => JSON.parse(readFileSync(join(import.meta.dirname, "../../../fixtures/examples", `${name}.json`), "utf8"));
@@ -43,6 +43,17 @@ describe("positionsCsv", () => {
     const top = rows.filter((r) => r[0] === "top");
     expect(top.map((r) => Number(r[1]))).toEqual(top.map((_, i) => i + 1));
     expect(top.every((r, i) => i === 0 || Number(r[2]) > Number(top[i - 1]![2]))).toBe(true);
+  });
+});
+
+describe("weldsCsv", () => {
+  test("weldsCsv(welded girder) has one row per weld zone per joint with leg size and pitch in inches; null without welds", () => {
+    const { result } = runDesign(example("girder-intermittent-welds.us"));
+    const [header, ...rows] = rowsOf(weldsCsv(result)!);
+    expect(header).toEqual(["member", "joint", "zone", "from (ft)", "to (ft)", "pattern", "segment (in)", "pitch (in)", "leg size (in)", "fillets", "utilisation"]);
+    expect(rows).toHaveLength(result.welds.reduce((n, w) => n + w.zones.length, 0));
+    expect(rows.every((r) => r[5] === "continuous" || (r[5] === "intermittent" && Number(r[7]) >= Number(r[6])))).toBe(true);
+    expect(weldsCsv(runDesign(example("loft-beam-16d.us")).result)).toBeNull();
   });
 });
 
