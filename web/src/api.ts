@@ -36,7 +36,33 @@ export const fetchExamples = () => getJson<ExampleEntry[]>("/api/examples");
 export const fetchExample = (id: string) => getJson<unknown>(`/api/examples/${encodeURIComponent(id)}`);
 export const fetchJobSchema = () => getJson<unknown>("/api/schema/job");
 
-const postJob = (url: string, job: JobDraft, signal?: AbortSignal) =>
+/** One grade of the service's material library, as a job material in the units asked for. */
+export interface GradeEntry {
+  grade: string;
+  name: string;
+  family: string;
+  material: Record<string, unknown>;
+}
+
+export const fetchGrades = (units: string, basis: string) => getJson<GradeEntry[]>(`/api/materials?units=${encodeURIComponent(units)}&basis=${encodeURIComponent(basis)}`);
+
+export type ConversionAnswer = { kind: "converted"; job: JobDraft } | { kind: "invalid"; message: string; issues: JobIssue[] } | { kind: "unreachable"; message: string };
+
+/** The whole job in the other unit system, as the service converts it (the job must be valid). */
+export async function requestConversion(job: JobDraft, to: "si" | "us"): Promise<ConversionAnswer> {
+  let response: Response;
+  try {
+    response = await postJob(`/api/conversions?to=${to}`, job);
+  } catch {
+    return { kind: "unreachable", message: "The stitchplan service did not answer. Is it still running?" };
+  }
+  if (response.ok) return { kind: "converted", job: (await response.json()) as JobDraft };
+  const body = await errorOf(response);
+  if (response.status === 400) return { kind: "invalid", message: body.message ?? "The job has problems.", issues: body.issues ?? [] };
+  return { kind: "unreachable", message: body.message ?? `The service answered ${response.status}.` };
+}
+
+const postJob = (url: string, job: unknown, signal?: AbortSignal) =>
   fetch(url, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(job), ...(signal ? { signal } : {}) });
 
 /** Designs the job; bad input and an unreachable service are answers, not exceptions. Aborting rethrows. */

@@ -1,4 +1,5 @@
 import type { JobIssue } from "../../core/schema/job-issues.js";
+import type { DesignResult } from "../../core/schema/result.js";
 import { requestDesign } from "./api.js";
 import { DebouncedDesign } from "./debounced-design.js";
 import { FieldRegistry } from "./form/field-registry.js";
@@ -20,17 +21,22 @@ export class DesignSession {
   /** Issues shown at the fields now, and the part of them the service reported. */
   #issues: JobIssue[] = [];
   #serviceIssues: JobIssue[] = [];
+  /** The joints of the last result, as the form last listed them. */
+  #jointsSeen = "";
+  #keepResults = false;
+  readonly #designedListeners: ((result: DesignResult) => void)[] = [];
 
   constructor(formRoot: HTMLElement, resultsRoot: HTMLElement, job: JobDraft, schema: JobSchema) {
     this.state = new JobState(job);
     this.#results = new ResultsView(resultsRoot, (path) => this.registry.focus(path));
-    this.#form = new JobForm(formRoot, this.state, this.registry, schema, () => this.registry.show(this.#issues));
+    this.#form = new JobForm(formRoot, this.state, this.registry, schema, () => this.#results.result, () => this.registry.show(this.#issues));
     this.#design = new DebouncedDesign((signal) => this.#compute(signal));
     this.state.onChange((change, path) => {
       storeJob(this.state.job);
       if (change !== "field") this.#issues = this.#serviceIssues = [];
       if (change === "replace") {
-        this.#results.clear();
+        if (!this.#keepResults) this.#results.clear();
+        this.#jointsSeen = "";
         this.#form.render();
       }
       if (change === "field" && REFERENCED_TEXT.test(path)) this.#form.refreshReferences();
@@ -41,13 +47,35 @@ export class DesignSession {
     storeJob(this.state.job);
   }
 
+  get result(): DesignResult | null {
+    return this.#results.result;
+  }
+
+  /** The result shown matches the input now entered: no edit is waiting and the last answer was a result. */
+  get resultsCurrent(): boolean {
+    return this.#results.isCurrent;
+  }
+
+  /** Called with every new result (the toolbar's exports follow it). */
+  onDesigned(listener: (result: DesignResult) => void): void {
+    this.#designedListeners.push(listener);
+  }
+
+  /** Draws the form again, e.g. after the units changed. */
+  redrawForm(): void {
+    this.#form.render();
+  }
+
   /** Designs now, without waiting for the pause after typing. */
   designNow(): Promise<void> {
     return this.#design.now();
   }
 
-  replaceJob(job: JobDraft): void {
+  /** Another job, or the same job rewritten (units converted): with `keepResults` the last results stay, marked as updating, until the new ones come. */
+  replaceJob(job: JobDraft, options: { keepResults?: boolean } = {}): void {
+    this.#keepResults = options.keepResults ?? false;
     this.state.replaceAll(job);
+    this.#keepResults = false;
     void this.designNow();
   }
 
@@ -67,6 +95,12 @@ export class DesignSession {
       this.registry.show([]);
       this.#results.showResult(answer.result);
       this.#results.showNotice({ freshness: "current", issues: [] });
+      const joints = JSON.stringify(answer.result.joints.map((j) => [j.id, j.connector, j.connectorLabel, j.rows, j.mechanism, j.contactWidth]));
+      if (joints !== this.#jointsSeen) {
+        this.#jointsSeen = joints;
+        this.#form.refreshFromResult();
+      }
+      for (const listener of this.#designedListeners) listener(answer.result);
       return;
     }
     // When the service cannot answer, its last word on the other fields still stands.

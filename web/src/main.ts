@@ -1,25 +1,14 @@
 import { fetchExample, fetchExamples, fetchJobSchema, type ExampleEntry } from "./api.js";
 import { DesignSession } from "./design-session.js";
 import { el } from "./dom.js";
+import { emptyJob } from "./empty-job.js";
 import { JobSchema } from "./job-schema.js";
 import { storedJob } from "./job-storage.js";
 import { openableJob, type JobDraft } from "./job-state.js";
+import { storeInfo } from "./store/store-api.js";
+import { StoreLinkState } from "./store/store-link.js";
+import { StoreView } from "./store/store-view.js";
 import { toolbar } from "./toolbar.js";
-
-/** A job with nothing entered, for when no example can be fetched. */
-const emptyJob = (): JobDraft => ({
-  format: "stitchplan-job",
-  version: 1,
-  units: "si",
-  basis: "allowable",
-  project: { name: "" },
-  member: { mark: "" },
-  materials: [],
-  parts: [],
-  connectors: [],
-  fastening: { default: { connector: "", rows: 1 } },
-  beam: { spans: [], loads: [] },
-});
 
 interface Start {
   job: JobDraft;
@@ -31,7 +20,7 @@ async function startingJob(examples: ExampleEntry[]): Promise<Start> {
   const wanted = new URLSearchParams(location.search).get("example");
   if (!wanted) {
     const stored = storedJob();
-    if (stored) return { job: stored, note: "Restored the job you were working on in this browser. Use “Start from example” to begin again." };
+    if (stored) return { job: stored, note: "Restored the job you were working on in this browser." };
   }
   const id = wanted ?? examples[0]?.id;
   if (!id) return { job: emptyJob(), note: "No example jobs are available; enter a member from scratch or open a job file." };
@@ -42,10 +31,13 @@ async function startingJob(examples: ExampleEntry[]): Promise<Start> {
 async function boot(): Promise<void> {
   const formRoot = document.getElementById("job-form")!;
   const resultsRoot = document.getElementById("results")!;
+  const workspace = document.getElementById("workspace")!;
+  const storeRoot = document.getElementById("store-root")!;
   const identity = document.getElementById("job-identity")!;
   let examples: ExampleEntry[] = [];
   let problem: string | undefined;
   const schemaAnswer = fetchJobSchema().catch(() => null);
+  const storeAnswer = storeInfo();
   try {
     examples = await fetchExamples();
   } catch (error) {
@@ -59,13 +51,41 @@ async function boot(): Promise<void> {
     start = { job: storedJob() ?? emptyJob(), note: `The example could not be loaded (${(error as Error).message}).` };
   }
 
+  const link = new StoreLinkState();
+  // A job opened from an example is not the one saved in the store.
+  if (start.example) link.set(null);
   const session = new DesignSession(formRoot, resultsRoot, start.job, schema);
   // The job now lives in this browser; without this a reload would load the example over the user's edits.
   if (location.search) history.replaceState(null, "", location.pathname);
-  const bar = toolbar(session, examples, start.example);
-  document.getElementById("toolbar")!.append(bar);
+
+  const storeAvailable = (await storeAnswer).ok;
+  let storeView: StoreView | null = null;
+  const showView = (view: "member" | "store") => {
+    workspace.hidden = view === "store";
+    storeRoot.hidden = view !== "store";
+    bar.setView(view);
+    if (view === "store") {
+      if (!storeView) {
+        storeView = new StoreView({
+          schema,
+          link,
+          open: (job, opened) => {
+            session.replaceJob(job);
+            link.set(opened);
+            bar.say(`Opened revision ${opened.revision} of ${opened.mark} from “${opened.projectName}”. A save makes revision ${opened.revision}’s successor; nothing saved is changed.`);
+            showView("member");
+          },
+        });
+        storeRoot.append(storeView.element);
+      }
+      void storeView.show();
+    }
+    window.scrollTo({ top: 0 });
+  };
+  const bar = toolbar({ session, schema, examples, link, storeAvailable, showView });
+  document.getElementById("toolbar")!.append(bar.element);
   const note = [problem, start.note].filter(Boolean).join(" ");
-  if (note) bar.querySelector(".toolbar-message")!.textContent = note;
+  if (note) bar.say(note);
 
   const showIdentity = () => {
     const job = session.state.job as { project?: { name?: unknown }; member?: { mark?: unknown; revision?: unknown } };

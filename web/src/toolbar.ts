@@ -1,42 +1,64 @@
-import { fetchExample, requestWorksheet, type ExampleEntry } from "./api.js";
+import { fetchExample, type ExampleEntry } from "./api.js";
 import type { DesignSession } from "./design-session.js";
 import { el } from "./dom.js";
+import { emptyJob } from "./empty-job.js";
+import { downloadCsv, downloadWorksheet } from "./exports.js";
 import { jobFileName, saveBlob } from "./file-transfer.js";
+import type { JobSchema } from "./job-schema.js";
 import { openableJob, type JobDraft } from "./job-state.js";
+import { menu, menuItem } from "./menu.js";
+import type { StoreLinkState } from "./store/store-link.js";
+import { storeSaveControls } from "./store/store-save.js";
+import { unitsSwitch } from "./units-switch.js";
 
-/** Start from an example, open and save job files, and download the worksheet. */
-export function toolbar(session: DesignSession, examples: ExampleEntry[], shownExample?: string): HTMLElement {
+export type Tone = "info" | "problem" | "caution";
+export type Say = (text: string, tone?: Tone, action?: HTMLElement) => void;
+
+export interface ToolbarOptions {
+  session: DesignSession;
+  schema: JobSchema;
+  examples: ExampleEntry[];
+  link: StoreLinkState;
+  /** Whether the server keeps a job store (it may run without one). */
+  storeAvailable: boolean;
+  showView: (view: "member" | "store") => void;
+}
+
+/** The bar over the page: the job's files and examples, its units, what it exports, and its place in the job store. */
+export function toolbar(options: ToolbarOptions): { element: HTMLElement; say: Say; setView: (view: "member" | "store") => void } {
+  const { session, schema, examples, link } = options;
   const message = el("p", { className: "toolbar-message", attrs: { role: "status", "aria-live": "polite" } });
-  const say = (text: string, tone: "info" | "problem" = "info", action?: HTMLElement) => {
+  const say: Say = (text, tone = "info", action) => {
     message.className = `toolbar-message ${tone}`;
     message.replaceChildren(text, ...(action ? [" ", action] : []));
   };
 
-  const exampleSelect = el(
-    "select",
-    { attrs: { id: "example-choice", "aria-label": "Example job" } },
-    examples.map((e) => el("option", { text: `${e.title} (${e.units.toUpperCase()})`, attrs: { value: e.id } })),
-  );
-  if (shownExample) exampleSelect.value = shownExample;
-  const startFromExample = async () => {
-    const id = exampleSelect.value;
+  /** Another job in the form, with a way back to the one it replaced. */
+  const replaceWith = (job: JobDraft, said: string) => {
     const previous = structuredClone(session.state.job);
-    try {
-      const opened = openableJob(await fetchExample(id));
-      if (!opened.ok) return say(`The example could not be opened: ${opened.problems.join("; ")}.`, "problem");
-      session.replaceJob(opened.job);
-      const putBack = el("button", {
-        className: "link-button",
-        text: "Put back the job I had",
-        attrs: { type: "button" },
-        on: {
-          click: () => {
-            session.replaceJob(previous);
-            say("Your previous job is back.");
-          },
+    const previousLink = link.link;
+    session.replaceJob(job);
+    link.set(null);
+    const putBack = el("button", {
+      className: "link-button",
+      text: "Put back the job I had",
+      attrs: { type: "button" },
+      on: {
+        click: () => {
+          session.replaceJob(previous);
+          link.set(previousLink);
+          say("Your previous job is back.");
         },
-      });
-      say(`Started from the example “${exampleSelect.selectedOptions[0]?.textContent ?? id}”.`, "info", putBack);
+      },
+    });
+    say(said, "info", putBack);
+  };
+
+  const openExample = async (entry: ExampleEntry) => {
+    try {
+      const opened = openableJob(await fetchExample(entry.id));
+      if (!opened.ok) return say(`The example could not be opened: ${opened.problems.join("; ")}.`, "problem");
+      replaceWith(opened.job, `Opened the example “${entry.title}”.`);
     } catch (error) {
       say(`The example could not be loaded: ${(error as Error).message}`, "problem");
     }
@@ -55,46 +77,51 @@ export function toolbar(session: DesignSession, examples: ExampleEntry[], shownE
     }
     const opened = openableJob(parsed);
     if (!opened.ok) return say(`“${file.name}” cannot be opened: ${opened.problems.join("; ")}. Your current job is unchanged.`, "problem");
-    session.replaceJob(opened.job as JobDraft);
-    say(`Opened “${file.name}”. Checking it now; any problems are marked at their fields.`);
+    replaceWith(opened.job, `Opened “${file.name}”. Checking it now; any problems are marked at their fields.`);
   });
 
   const saveJob = () => {
     const job = session.state.job;
     saveBlob(new Blob([`${JSON.stringify(job, null, 2)}\n`], { type: "application/json" }), jobFileName(job));
-    say(`Saved ${jobFileName(job)}.`);
+    say(`Saved ${jobFileName(job)} (a stitchplan job file, format version ${String(job.version ?? 1)}).`);
   };
 
-  const worksheetButton = el("button", { className: "primary", text: "Download worksheet (PDF)", attrs: { type: "button" } });
-  worksheetButton.addEventListener("click", async () => {
-    worksheetButton.disabled = true;
-    say("Preparing the worksheet…");
-    try {
-      const answer = await requestWorksheet(session.state.job);
-      if (answer.kind === "pdf") {
-        saveBlob(answer.blob, answer.fileName);
-        say(`Worksheet ${answer.fileName} downloaded. It is for review by the engineer of record before any use.`);
-      } else {
-        if (answer.issues.length) session.showIssues(answer.issues);
-        say(answer.issues.length ? "No worksheet: the input has problems, marked at their fields. Fix them and try again." : `No worksheet: ${answer.message}`, "problem");
-      }
-    } finally {
-      worksheetButton.disabled = false;
-    }
-  });
+  const fileMenu = menu("File", [
+    menuItem("New member (empty form)", () => replaceWith(emptyJob(session.state.units), "Started an empty member. Enter materials, parts, a connector, a span and loads; results appear as soon as the input is complete."), {
+      hint: "in the units now chosen",
+    }),
+    menuItem("Open job file…", () => fileInput.click()),
+    menuItem("Save job file", saveJob, { hint: "the job document as JSON" }),
+  ]);
+  const examplesMenu = menu(
+    "Examples",
+    examples.length
+      ? examples.map((e) => menuItem(e.title, () => void openExample(e), { hint: e.units === "us" ? "US customary" : "SI" }))
+      : [el("p", { className: "menu-note", text: "No examples are available." })],
+    "examples-menu",
+  );
+  const exportMenu = menu("Export", [
+    menuItem("Worksheet (PDF)", () => void downloadWorksheet(session, say), { hint: "for the engineer of record" }),
+    menuItem("Schedule (CSV)", () => downloadCsv(session, "schedule", say), { hint: "one row per zone per joint" }),
+    menuItem("Connector positions (CSV)", () => downloadCsv(session, "positions", say), { hint: "joint, row, x" }),
+  ]);
 
-  return el("div", { className: "toolbar" }, [
-    el("div", { className: "toolbar-group" }, [
-      el("label", { text: "Example", attrs: { for: "example-choice" } }),
-      exampleSelect,
-      el("button", { text: "Start from example", attrs: { type: "button", disabled: examples.length === 0 }, on: { click: () => void startFromExample() } }),
-    ]),
-    el("div", { className: "toolbar-group" }, [
-      fileInput,
-      el("button", { text: "Open job file…", attrs: { type: "button" }, on: { click: () => fileInput.click() } }),
-      el("button", { text: "Save job file", attrs: { type: "button" }, on: { click: saveJob } }),
-      worksheetButton,
-    ]),
+  const viewButton = el("button", { className: "view-switch", text: "Projects and revisions", attrs: { type: "button", "aria-pressed": "false" } });
+  viewButton.addEventListener("click", () => {
+    const toStore = viewButton.getAttribute("aria-pressed") !== "true";
+    options.showView(toStore ? "store" : "member");
+  });
+  const setView = (view: "member" | "store") => {
+    viewButton.setAttribute("aria-pressed", view === "store" ? "true" : "false");
+    viewButton.textContent = view === "store" ? "Back to the member" : "Projects and revisions";
+  };
+
+  const element = el("div", { className: "toolbar" }, [
+    el("div", { className: "toolbar-group" }, [fileInput, fileMenu, examplesMenu]),
+    unitsSwitch(session, schema, say),
+    el("div", { className: "toolbar-group" }, [exportMenu]),
+    options.storeAvailable ? el("div", { className: "toolbar-group store-group" }, [storeSaveControls(session, link, say, () => options.showView("store")), viewButton]) : null,
     message,
   ]);
+  return { element, say, setView };
 }

@@ -1,3 +1,4 @@
+import type { DesignResult } from "../../../core/schema/result.js";
 import { el, nextId } from "../dom.js";
 import type { JobSchema } from "../job-schema.js";
 import type { JobState } from "../job-state.js";
@@ -13,6 +14,8 @@ export interface FormContext {
   references: (() => void)[];
   /** Re-renders the form after a change of structure, then focuses `focusPath` if given. */
   rerender: (focusPath?: string) => void;
+  /** The last result the service gave for this job (its joints, schedules), or null. */
+  result: () => DesignResult | null;
 }
 
 const display = (value: unknown) => (value === undefined || value === null ? "" : String(value));
@@ -70,11 +73,12 @@ export function selectControl(
   return select;
 }
 
-export function checkboxControl(ctx: FormContext, path: string, name: string, whenAbsent: boolean): HTMLInputElement {
+/** A yes/no field; with `removeWhenOff` an optional flag is left out of the document rather than written false. */
+export function checkboxControl(ctx: FormContext, path: string, name: string, whenAbsent: boolean, options: { removeWhenOff?: boolean } = {}): HTMLInputElement {
   const input = el("input", { attrs: { type: "checkbox", "aria-label": name, "data-path": path } });
   const value = ctx.state.read(path);
   input.checked = typeof value === "boolean" ? value : whenAbsent;
-  input.addEventListener("change", () => ctx.state.set(path, input.checked));
+  input.addEventListener("change", () => ctx.state.set(path, options.removeWhenOff && !input.checked ? undefined : input.checked));
   return input;
 }
 
@@ -116,7 +120,16 @@ export interface Column {
 /** A table of records (materials, parts, loads): one row per item, units in the headers, messages under the table. */
 export function recordTable(
   ctx: FormContext,
-  options: { caption: string; listPath: string; itemName: (i: number) => string; columns: Column[]; actions: (i: number) => HTMLElement[]; count: number },
+  options: {
+    caption: string;
+    listPath: string;
+    itemName: (i: number) => string;
+    columns: Column[];
+    actions: (i: number) => HTMLElement[];
+    count: number;
+    /** More of the row's fields on a full-width line under it (folded extras, helpers). */
+    extra?: (i: number, notes: HTMLElement) => HTMLElement | null;
+  },
 ): { table: HTMLElement; issues: HTMLElement } {
   const issues = el("div", { className: "row-issues", attrs: { "aria-live": "polite" } });
   const head = el("tr", {}, [
@@ -159,7 +172,10 @@ export function recordTable(
     }
     row.append(el("td", { className: "actions" }, options.actions(i)));
     ctx.registry.register({ path: rowPath, label: options.itemName(i), marker: row, host: notes, prefix: options.itemName(i) });
-    rows.push(row, el("tr", { className: "row-notes" }, [notes]));
+    const extra = options.extra?.(i, notes);
+    rows.push(row);
+    if (extra) rows.push(el("tr", { className: "row-extra" }, [el("td", { attrs: { colspan: options.columns.length + 1 } }, [extra])]));
+    rows.push(el("tr", { className: "row-notes" }, [notes]));
   }
   const table = el("div", { className: "table-scroll" }, [
     el("table", { className: "records" }, [el("caption", { className: "visually-hidden", text: options.caption }), el("thead", {}, [head]), el("tbody", {}, rows)]),

@@ -47,6 +47,11 @@ export class FieldRegistry {
     this.#entries.clear();
   }
 
+  /** Forgets the fields of a part of the form that was drawn again and is gone from the page. */
+  forgetDetached(): void {
+    for (const [path, entry] of this.#entries) if (!entry.marker.isConnected) this.#entries.delete(path);
+  }
+
   /** The entry for a path, or for the nearest enclosing path that has one. */
   find(path: string): FieldEntry | undefined {
     for (let p = path; ; p = parentPath(p)) {
@@ -81,6 +86,9 @@ export class FieldRegistry {
       const note = el("p", { className: "field-issue", text: entry.prefix ? `${entry.prefix}: ${issue.message}` : issue.message, attrs: { id: nextId("issue") } });
       entry.host.append(note);
       entry.marker.classList.add("has-issue");
+      // A problem inside a closed fold must be seen: open it.
+      const folded = entry.marker.closest("details");
+      if (folded) folded.open = true;
       const control = entry.control;
       const describedBy = control?.getAttribute("aria-describedby");
       if (control) {

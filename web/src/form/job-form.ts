@@ -1,28 +1,39 @@
+import type { DesignResult } from "../../../core/schema/result.js";
 import type { JobSchema } from "../job-schema.js";
 import type { JobState } from "../job-state.js";
-import { basisStep } from "./basis-step.js";
+import { checkStep } from "./check-step.js";
+import { combinationsStep } from "./combinations-step.js";
 import { connectorsStep } from "./connectors-step.js";
 import type { FormContext } from "./controls.js";
-import { fasteningStep } from "./fastening-step.js";
 import type { FieldRegistry } from "./field-registry.js";
+import { jointsStep } from "./joints-step.js";
 import { loadsStep } from "./loads-step.js";
 import { materialsStep } from "./materials-step.js";
 import { partsStep } from "./parts-step.js";
 import { projectStep } from "./project-step.js";
 import { spacingStep } from "./spacing-step.js";
 
-const steps = [projectStep, basisStep, materialsStep, partsStep, loadsStep, connectorsStep, fasteningStep, spacingStep];
+/** In the order a person thinks a member through. */
+const steps = [projectStep, materialsStep, partsStep, connectorsStep, jointsStep, loadsStep, combinationsStep, checkStep, spacingStep];
+/** Steps drawn from the last result (the joints it found), drawn again when those change. */
+const fromResult = new Set<(typeof steps)[number]>([jointsStep, checkStep]);
 
 /** The job form: rebuilt whole when rows are added or removed, edited in place otherwise. */
 export class JobForm {
   readonly #ctx: FormContext;
   readonly #root: HTMLElement;
   readonly #afterRender: () => void;
+  #drawn: HTMLElement[] = [];
+  #pendingResultSteps = false;
 
-  constructor(root: HTMLElement, state: JobState, registry: FieldRegistry, schema: JobSchema, afterRender: () => void) {
+  constructor(root: HTMLElement, state: JobState, registry: FieldRegistry, schema: JobSchema, result: () => DesignResult | null, afterRender: () => void) {
     this.#root = root;
     this.#afterRender = afterRender;
-    this.#ctx = { state, registry, schema, references: [], rerender: (focusPath) => this.render(focusPath) };
+    this.#ctx = { state, registry, schema, references: [], rerender: (focusPath) => this.render(focusPath), result };
+    // Steps drawn from the result wait while the user is typing in them, and catch up when they leave.
+    root.addEventListener("focusout", () => {
+      if (this.#pendingResultSteps) queueMicrotask(() => this.refreshFromResult());
+    });
   }
 
   render(focusPath?: string): void {
@@ -30,9 +41,30 @@ export class JobForm {
     const activePath = active instanceof HTMLElement && this.#root.contains(active) ? active.dataset.path : undefined;
     this.#ctx.registry.clearEntries();
     this.#ctx.references.length = 0;
-    this.#root.replaceChildren(...steps.map((make, i) => make(this.#ctx, i + 1)));
+    this.#drawn = steps.map((make, i) => make(this.#ctx, i + 1));
+    this.#root.replaceChildren(...this.#drawn);
+    this.#pendingResultSteps = false;
     const target = focusPath ?? activePath;
     if (target) this.#root.querySelector<HTMLElement>(`[data-path="${CSS.escape(target)}"]`)?.focus();
+    this.#afterRender();
+  }
+
+  /** The joints found changed: draws the steps that list them again, unless the user is typing in one. */
+  refreshFromResult(): void {
+    const active = document.activeElement;
+    const busy = this.#drawn.some((node, i) => fromResult.has(steps[i]!) && node.contains(active));
+    if (busy) {
+      this.#pendingResultSteps = true;
+      return;
+    }
+    this.#pendingResultSteps = false;
+    steps.forEach((make, i) => {
+      if (!fromResult.has(make)) return;
+      const next = make(this.#ctx, i + 1);
+      this.#drawn[i]?.replaceWith(next);
+      this.#drawn[i] = next;
+    });
+    this.#ctx.registry.forgetDetached();
     this.#afterRender();
   }
 

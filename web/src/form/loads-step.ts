@@ -1,15 +1,12 @@
-import type { LoadCategory } from "../../../core/schema/job.js";
 import { unitLabel, type Quantity } from "../../../core/units/quantity.js";
 import { el } from "../dom.js";
 import { addButton, checkboxControl, field, numberControl, recordTable, rowButton, selectControl, textControl, type FormContext } from "./controls.js";
+import { categoriesBlock, categoryChecks, categoryIds } from "./categories-block.js";
+import { fold } from "./fold.js";
 import { fieldGrid, step } from "./step.js";
 
 type Item = Record<string, unknown>;
 
-// Listed here rather than imported so the page bundle does not carry zod; the check below keeps the lists equal.
-const builtInCategories = ["dead", "live", "roof-live", "snow", "wind"] as const satisfies readonly LoadCategory[];
-const everyCategoryListed: [Exclude<LoadCategory, (typeof builtInCategories)[number]>] extends [never] ? true : never = true;
-void everyCategoryListed;
 
 /** The load kinds this form can edit: their magnitudes with the quantity of each, and whether they act at a point. */
 const loadKinds: Record<string, { label: string; magnitudes: [key: string, label: string, quantity: Quantity][]; atPoint: boolean }> = {
@@ -39,10 +36,8 @@ export function loadsStep(ctx: FormContext, number: number): HTMLElement {
   const kindOf = (i: number) => loadKinds[String(loads[i]?.type ?? "")];
   const offered = (schema.choices("beam.loads[].type") ?? ["uniform", "point"]).filter((k) => k in loadKinds);
   const kindChoices = offered.map((k) => ({ value: k, label: loadKinds[k]!.label }));
-  const categoryChoices = () => [
-    ...(schema.choices("beam.loads[].category") ?? schema.choices("beam.categories[].actsAs") ?? builtInCategories).map((c) => ({ value: c, label: c.replace("-", " ") })),
-    ...state.list("beam.categories").map((c) => String((c as Item).id ?? "")).filter(Boolean).map((id) => ({ value: id, label: `${id} (own)` })),
-  ];
+  const own = new Set(state.list("beam.categories").map((c) => String((c as Item)?.id ?? "")));
+  const categoryChoices = () => categoryIds(ctx).map((c) => ({ value: c, label: own.has(c) ? `${c} (own)` : c.replace("-", " ") }));
 
   const magnitude = (i: number, notes: HTMLElement) => {
     const kind = kindOf(i);
@@ -109,17 +104,23 @@ export function loadsStep(ctx: FormContext, number: number): HTMLElement {
     const i = state.insert("beam.loads", { type: kind, category: loadKinds[kind]!.atPoint ? "live" : "dead", label: "" });
     ctx.rerender(at(i, loadKinds[kind]!.magnitudes[0]![0]));
   };
-  const box = step(number, "Spans and loads", "Loads act downward; a line load without from/to covers the whole member. Positions are measured from the left end.", [
+  const spans = state.list("beam.spans").length;
+  const box = step(number, "Spans, supports and loads", "Loads act downward, each in a load category; a line load without from/to covers the whole member. Positions are measured from the left end.", [
     spansBlock(ctx),
-    fieldGrid([
-      field(ctx, "beam.deflectionLimits.total", "Total-load deflection: span ÷", numberControl(ctx, "beam.deflectionLimits.total", "total", { placeholder: "240" })),
-      field(ctx, "beam.deflectionLimits.live", "Live-load deflection: span ÷", numberControl(ctx, "beam.deflectionLimits.live", "live", { placeholder: "360" })),
-      field(ctx, "beam.selfWeight", "Add the parts' self-weight as dead load", checkboxControl(ctx, "beam.selfWeight", "self-weight", true), { wide: true }),
-    ]),
     el("h3", { text: "Loads" }),
     table,
     issues,
     el("div", { className: "button-row" }, offered.map((kind) => addButton(`Add ${loadKinds[kind]!.label} load`, () => addLoad(kind)))),
+    fieldGrid([field(ctx, "beam.selfWeight", "Add the parts' self-weight as dead load", checkboxControl(ctx, "beam.selfWeight", "self-weight", true), { wide: true })]),
+    fold("beam.categories", `Load categories of your own${state.list("beam.categories").length ? ` (${state.list("beam.categories").length})` : ""}`, [categoriesBlock(ctx)]),
+    fold("beam.serviceability", "Deflection limits and live-load patterns", [
+      fieldGrid([
+        field(ctx, "beam.deflectionLimits.total", "Total-load deflection: span ÷", numberControl(ctx, "beam.deflectionLimits.total", "total", { placeholder: "240" })),
+        field(ctx, "beam.deflectionLimits.live", "Live-load deflection: span ÷", numberControl(ctx, "beam.deflectionLimits.live", "live", { placeholder: "360" })),
+        categoryChecks(ctx, "beam.deflectionLimits.liveCategories", "Categories the live-load limit applies to", ["live"]),
+        ...(spans > 1 ? [categoryChecks(ctx, "beam.patternedCategories", "Categories placed span by span (patterns)", ["live"])] : []),
+      ]),
+    ]),
   ]);
   ctx.registry.register({ path: "beam.loads", label: "Loads", marker: box, host: issues });
   ctx.registry.register({ path: "beam", label: "Spans and loads", marker: box, host: issues });

@@ -1,8 +1,14 @@
 import { unitLabel } from "../../../core/units/quantity.js";
 import { el } from "../dom.js";
 import { addButton, numberControl, recordTable, rowButton, selectControl, textControl, type FormContext } from "./controls.js";
+import { fold } from "./fold.js";
+import { gradeChooser } from "./material-grades.js";
 import { renameReferences, uniqueId } from "./references.js";
-import { step } from "./step.js";
+import { schemaFields } from "./schema-fields.js";
+import { fieldGrid, step } from "./step.js";
+
+/** Shown in the row itself; every other property of a material goes in the row's fold. */
+const inRow = new Set(["id", "name", "family", "source", "E", "density", "strength"]);
 
 const families = [
   { value: "sawn-timber", label: "sawn timber" },
@@ -55,6 +61,18 @@ export function materialsStep(ctx: FormContext, number: number): HTMLElement {
         cell: (i) => ({ path: at(i, "strength.shear"), name: "shear strength", control: numberControl(ctx, at(i, "strength.shear"), "shear strength", { placeholder: "none" }) }),
       },
     ],
+    extra: (i) => {
+      const extras = [
+        ...ctx.schema.fieldsAt("materials[].strength").filter((f) => f.key !== "bending" && f.key !== "shear").map((f) => ({ f, path: at(i, "strength") })),
+        ...ctx.schema.fieldsAt("materials[]").filter((f) => !inRow.has(f.key)).map((f) => ({ f, path: `materials[${i}]` })),
+      ];
+      const given = extras.filter(({ f, path }) => state.read(`${path}.${f.key}`) !== undefined).length;
+      const fields = extras.flatMap(({ f, path }) => schemaFields(ctx, path, [f], { owner: name(i), scope: "material" }));
+      return el("div", { className: "row-helpers" }, [
+        gradeChooser(ctx, i, name(i)),
+        fields.length ? fold(`materials[${i}].more`, `More properties for connectors${given ? ` (${given} given)` : ""}: G, ρ_k, ρ_mean, F_y, F_u, rolling shear`, [fieldGrid(fields)]) : null,
+      ]);
+    },
     actions: (i) => [
       rowButton("Copy", `Copy ${name(i)}`, () => {
         const copy = structuredClone(state.list("materials")[i]) as Record<string, unknown>;
@@ -68,7 +86,7 @@ export function materialsStep(ctx: FormContext, number: number): HTMLElement {
       }, "remove"),
     ],
   });
-  const box = step(number, "Materials", "E, density and the bending and shear strengths, on the job's basis. A strength left empty is listed under “not checked”.", [
+  const box = step(number, "Materials", "E, density and the bending and shear strengths, on the job's basis. A strength left empty is listed under “not checked”. Fill a row from a common grade, then check every value against your own source.", [
     table,
     issues,
     addButton("Add material", () => {

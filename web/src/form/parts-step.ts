@@ -1,14 +1,21 @@
-import { unitLabel } from "../../../core/units/quantity.js";
-import { addButton, numberControl, recordTable, rowButton, selectControl, textControl, type FormContext } from "./controls.js";
+import { el } from "../dom.js";
+import { addButton, recordTable, rowButton, selectControl, textControl, type FormContext } from "./controls.js";
 import { placementCell, shapeCell } from "./part-shape.js";
 import { renameReferences, uniqueId } from "./references.js";
+import { shapeNames, shapePreset } from "./shape-presets.js";
 import { step } from "./step.js";
 
 type Item = Record<string, unknown>;
 
+const sides = [
+  { value: "top", label: "on top of" },
+  { value: "bottom", label: "under" },
+  { value: "right", label: "right of" },
+  { value: "left", label: "left of" },
+];
+
 export function partsStep(ctx: FormContext, number: number): HTMLElement {
   const { state } = ctx;
-  const length = unitLabel("length", state.units);
   const count = state.list("parts").length;
   const at = (i: number, key: string) => `parts[${i}].${key}`;
   const name = (i: number) => `Part ${i + 1}`;
@@ -17,20 +24,14 @@ export function partsStep(ctx: FormContext, number: number): HTMLElement {
       const id = String((m as Item).id ?? "");
       return { value: id, label: id };
     });
-  const parts = state.list("parts") as Item[];
-  const isRectangle = (i: number) => (parts[i]?.shape as Item | undefined)?.type === "rectangle";
-  const isPlaced = (i: number) => parts[i]?.place !== undefined;
-  const num = (key: string, label: string, cover?: (i: number) => HTMLElement | null) => ({
-    header: label,
-    unit: length,
-    className: "col-num",
-    cell: (i: number) => {
-      const spanning = cover?.(i);
-      return spanning ? { spanning, columns: 2 } : { path: at(i, key), name: label, control: numberControl(ctx, at(i, key), label) };
-    },
-  });
-  const shape = (i: number) => (isRectangle(i) ? null : shapeCell(ctx, `parts[${i}]`, name(i), length));
-  const placement = (i: number) => (isPlaced(i) ? placementCell(ctx, `parts[${i}]`, name(i)) : null);
+  const partId = (i: number) => String((state.list("parts")[i] as Item | undefined)?.id ?? "");
+  /** A new part against part i (stacked on it, or beside it), of the same material. */
+  const placeAgainst = (i: number, side: string, shape: Item) => {
+    const source = (state.list("parts")[i] ?? {}) as Item;
+    const item: Item = { id: uniqueId(state.list("parts"), `P${count + 1}`), name: "", material: source.material ?? "", shape, place: { on: partId(i), side, align: "centre" } };
+    const k = state.insert("parts", item, i + 1);
+    ctx.rerender(at(k, "shape.type"));
+  };
   const { table, issues } = recordTable(ctx, {
     caption: "Section parts",
     listPath: "parts",
@@ -38,40 +39,88 @@ export function partsStep(ctx: FormContext, number: number): HTMLElement {
     count,
     columns: [
       { header: "Id", className: "col-id", cell: (i) => ({ path: at(i, "id"), name: "id", control: idControl(ctx, i) }) },
-      { header: "Name", className: "col-name", cell: (i) => ({ path: at(i, "name"), name: "name", control: textControl(ctx, at(i, "name"), "name", { maxLength: 80 }) }) },
-      { header: "Material", className: "col-choice", cell: (i) => ({ path: at(i, "material"), name: "material", control: selectControl(ctx, at(i, "material"), "material", materialChoices) }) },
-      num("shape.b", "b", shape),
-      num("shape.h", "h"),
-      num("x", "x", placement),
-      num("y", "y"),
+      {
+        header: "Name, material",
+        className: "col-name",
+        cell: (i, notes) => {
+          const nameInput = textControl(ctx, at(i, "name"), "name", { maxLength: 80, placeholder: "name" });
+          const material = selectControl(ctx, at(i, "material"), `${name(i)} material`, materialChoices);
+          ctx.registry.register({ path: at(i, "material"), label: `${name(i)} · material`, control: material, marker: material, host: notes, prefix: "material" });
+          return { path: at(i, "name"), name: "name", control: nameInput, content: el("div", { className: "stack" }, [nameInput, material]) };
+        },
+      },
+      {
+        header: "Shape",
+        className: "col-shape",
+        cell: (i, notes) => {
+          const { control, content } = shapeCell(ctx, i, name(i), notes);
+          return { path: at(i, "shape.type"), name: "shape", control, content };
+        },
+      },
+      {
+        header: "Placed",
+        className: "col-place",
+        cell: (i, notes) => {
+          const { control, content } = placementCell(ctx, i, name(i), notes);
+          return { path: at(i, "place.side"), name: "placed", control, content };
+        },
+      },
     ],
     actions: (i) => [
       rowButton("Copy", `Copy ${name(i)} (the copy sits on top of it)`, () => {
         const copy = structuredClone(state.list("parts")[i]) as Item;
-        copy.id = uniqueId(state.list("parts"), String(copy.id ?? "P"));
-        const shape = copy.shape as Item | undefined;
-        if (typeof copy.y === "number" && typeof shape?.h === "number") copy.y = copy.y + shape.h;
-        state.insert("parts", copy, i + 1);
-        ctx.rerender(at(i + 1, "id"));
+        placeAgainst(i, "top", (copy.shape as Item | undefined) ?? shapePreset("rectangle", state.units));
       }),
       rowButton("×", `Remove ${name(i)}`, () => {
+        // Parts placed against the removed one keep its id, and the service reports them until they are moved.
         state.remove("parts", i);
         ctx.rerender(count > 1 ? at(Math.max(0, i - 1), "id") : undefined);
       }, "remove"),
     ],
   });
+
+  const shapeChoice = el(
+    "select",
+    { attrs: { id: "new-part-shape", "aria-label": "Shape of the new part" } },
+    Object.entries(shapeNames)
+      .filter(([type]) => ctx.schema.kinds("parts[].shape", "type").includes(type) || !ctx.schema.known)
+      .map(([type, label]) => el("option", { text: label, attrs: { value: type } })),
+  );
+  const sideChoice = el("select", { attrs: { id: "new-part-side", "aria-label": "Where the new part goes" } }, [
+    ...(count ? sides.map((s) => el("option", { text: s.label, attrs: { value: s.value } })) : []),
+    el("option", { text: "at x, y", attrs: { value: "xy" } }),
+  ]);
+  const againstChoice = el(
+    "select",
+    { attrs: { id: "new-part-against", "aria-label": "Part the new one goes against" } },
+    state.list("parts").map((p, i) => el("option", { text: String((p as Item).id ?? `part ${i + 1}`), attrs: { value: String(i) } })),
+  );
+  againstChoice.value = String(count - 1);
+  const refreshAgainst = () => (againstChoice.hidden = sideChoice.value === "xy");
+  sideChoice.addEventListener("change", refreshAgainst);
+  refreshAgainst();
+  const addPart = () => {
+    const shape = shapePreset(shapeChoice.value, state.units);
+    if (sideChoice.value !== "xy" && count > 0) return placeAgainst(Number(againstChoice.value), sideChoice.value, shape);
+    const material = (state.list("materials")[0] as Item | undefined)?.id ?? "";
+    const i = state.insert("parts", { id: uniqueId(state.list("parts"), "P1"), name: "", material, shape, x: 0, y: 0 });
+    ctx.rerender(at(i, "shape.type"));
+  };
+
   const box = step(
     number,
     "Section parts",
-    `Rectangles b wide and h deep, with x and y at each part's lower left corner (${length}). Parts may touch but not overlap; every face where two parts touch is a joint plane.`,
+    "Each part with its shape and where it sits: stacked on, under or beside another part, or by the lower-left corner of its box (x, y). Parts may touch but not overlap; every face where two parts touch is a joint plane.",
     [
       table,
       issues,
-      addButton("Add part", () => {
-        const material = (state.list("materials")[0] as Item | undefined)?.id ?? "";
-        const i = state.insert("parts", { id: uniqueId(state.list("parts"), "P1"), name: "", material, shape: { type: "rectangle" }, x: 0, y: 0 });
-        ctx.rerender(at(i, "shape.b"));
-      }),
+      el("div", { className: "add-with-choice" }, [
+        el("label", { text: "New part:", attrs: { for: "new-part-shape" } }),
+        shapeChoice,
+        sideChoice,
+        againstChoice,
+        addButton("Add part", addPart),
+      ]),
     ],
   );
   ctx.registry.register({ path: "parts", label: "Section parts", marker: box, host: issues });
@@ -84,6 +133,9 @@ function idControl(ctx: FormContext, i: number): HTMLInputElement {
     ctx.state.list("fastening.joints").forEach((joint, k) => {
       const held = (joint as Item).held;
       if (Array.isArray(held) && held.includes(oldId)) ctx.state.set(`fastening.joints[${k}].held`, held.map((id) => (id === oldId ? newId : id)));
+    });
+    ctx.state.list("parts").forEach((part, k) => {
+      if (((part as Item).place as Item | undefined)?.on === oldId) ctx.state.set(`parts[${k}].place.on`, newId);
     });
   });
   return input;

@@ -3,6 +3,7 @@ import { unitLabel } from "../../../core/units/quantity.js";
 import { formatNumber } from "../../../core/units/format.js";
 import { el } from "../dom.js";
 import { checkboxControl, field, numberControl, type FormContext } from "./controls.js";
+import { numberFromText } from "./field-registry.js";
 import { fieldGrid, step } from "./step.js";
 
 export function spacingStep(ctx: FormContext, number: number): HTMLElement {
@@ -11,9 +12,8 @@ export function spacingStep(ctx: FormContext, number: number): HTMLElement {
   const defaults = spacingDefaults(state.units);
   const num = (key: string, label: string, placeholder: string, hint?: string) =>
     field(ctx, `spacing.${key}`, label, numberControl(ctx, `spacing.${key}`, label, { placeholder }), { unit: length, ...(hint ? { hint } : {}) });
-  const preferred = state.read("spacing.preferred");
   const issues = el("div", { className: "row-issues" });
-  const box = step(number, "Spacing rules", "How the schedule is laid out for the builder. Empty fields use the defaults shown.", [
+  const box = step(number, "Spacing limits and module", "How the schedule is laid out for the builder. Empty fields use the defaults shown.", [
     fieldGrid([
       num("module", "Spacing module", formatNumber(defaults.module), "Spacings are whole multiples of this"),
       num("minZoneLength", "Shortest zone", formatNumber(defaults.minZoneLength)),
@@ -22,9 +22,30 @@ export function spacingStep(ctx: FormContext, number: number): HTMLElement {
       num("maximum", "Maximum spacing override", "connector's", "Used when smaller than the connector's own"),
       field(ctx, "spacing.symmetric", "Mirror the zones about midspan when the demand is symmetric", checkboxControl(ctx, "spacing.symmetric", "symmetric", true), { wide: true }),
     ]),
-    Array.isArray(preferred) ? el("p", { className: "hint", text: `Preferred spacings from the job file: ${preferred.map((v) => `${String(v)} ${length}`).join(", ")}.` }) : null,
+    preferredField(ctx, length),
     issues,
   ]);
   ctx.registry.register({ path: "spacing", label: "Spacing rules", marker: box, host: issues });
+  return box;
+}
+
+/** Preferred spacings: when given, only these are used (instead of multiples of the module). */
+function preferredField(ctx: FormContext, length: string): HTMLElement {
+  const { state } = ctx;
+  const input = el("input", { attrs: { type: "text", id: "preferred-spacings", "data-path": "spacing.preferred", autocomplete: "off", spellcheck: "false", placeholder: "none: multiples of the module", "aria-label": `Preferred spacings (${length})` } });
+  const value = state.read("spacing.preferred");
+  input.value = Array.isArray(value) ? value.map(String).join(", ") : "";
+  input.addEventListener("input", () => {
+    const tokens = input.value.split(/[\s,;]+/).filter(Boolean);
+    state.set("spacing.preferred", tokens.length ? tokens.map((t) => numberFromText(t) ?? t) : undefined);
+  });
+  const issues = el("div", { className: "row-issues" });
+  const box = el("div", { className: "field wide preferred" }, [
+    el("label", { text: "Preferred spacings", attrs: { for: "preferred-spacings" } }),
+    el("span", { className: "with-unit" }, [input, el("span", { className: "unit", text: length, attrs: { "aria-hidden": "true" } })]),
+    el("span", { className: "hint", text: `When given, only these spacings are used, e.g. ${state.units === "us" ? "3, 4, 6, 8, 12" : "50, 75, 100, 150, 200"}.` }),
+    issues,
+  ]);
+  ctx.registry.register({ path: "spacing.preferred", label: "Preferred spacings", control: input, marker: box, host: issues });
   return box;
 }

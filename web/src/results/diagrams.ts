@@ -28,15 +28,38 @@ export function shearAndMoment(result: DesignResult, width: number, chosen?: str
           { label: "smallest", values: envelope[1], fill: true, colour: palette.series[0] },
           ...(picked ? [{ label: picked.combination, values: pick(picked), colour: palette.series[1], dash: [5, 3] }] : []),
         ];
+  const extreme = (values: number[], governing: string[], sign: 1 | -1) => {
+    let k = 0;
+    values.forEach((v, i) => {
+      if (sign * v > sign * (values[k] ?? 0)) k = i;
+    });
+    return { value: values[k] ?? 0, x: beam.stations[k] ?? 0, combination: governing[k] ?? "" };
+  };
+  const g = beam.envelope.governing;
+  const vMax = extreme(beam.envelope.shearMax, g.shearMax, 1);
+  const vMin = extreme(beam.envelope.shearMin, g.shearMin, -1);
+  const v = Math.abs(vMax.value) >= Math.abs(vMin.value) ? vMax : vMin;
+  const mMax = extreme(beam.envelope.momentMax, g.momentMax, 1);
+  const mMin = extreme(beam.envelope.momentMin, g.momentMin, -1);
+  const at = (e: { value: number; x: number; combination: string }, unit: string | undefined) =>
+    `${formatNumber(e.value)} ${unit ?? ""} at x = ${formatNumber(e.x)} ${u.span ?? ""} (${combinationLabel(result, e.combination)})`;
   return [
-    figure(lineDiagram({ ...common, title: "Shear force V", yUnit: u.force ?? "", role: "shear", series: curves((c) => c.shear, [beam.envelope.shearMax, beam.envelope.shearMin]) })),
-    figure(lineDiagram({ ...common, title: "Bending moment M", yUnit: u.moment ?? "", role: "moment", invert: true, series: curves((c) => c.moment, [beam.envelope.momentMax, beam.envelope.momentMin]) })),
+    figure(lineDiagram({ ...common, title: "Shear force V", yUnit: u.force ?? "", role: "shear", series: curves((c) => c.shear, [beam.envelope.shearMax, beam.envelope.shearMin]) }), "diagram", `Largest |V|: ${at(v, u.force)}.`),
+    figure(
+      lineDiagram({ ...common, title: "Bending moment M", yUnit: u.moment ?? "", role: "moment", invert: true, series: curves((c) => c.moment, [beam.envelope.momentMax, beam.envelope.momentMin]) }),
+      "diagram",
+      `Largest sagging M: ${at(mMax, u.moment)}.${mMin.value < 0 ? ` Largest hogging M: ${at(mMin, u.moment)}.` : ""}`,
+    ),
   ];
 }
 
 /** Envelope of q along each discrete joint, per connector line. */
 export function shearFlow(result: DesignResult, width: number): HTMLElement | null {
-  if (result.schedules.length === 0) return null;
+  const lines = [
+    ...result.schedules.map((s) => ({ label: `joint ${s.joint}`, values: s.shearFlow })),
+    ...result.welds.map((w) => ({ label: `joint ${w.joint} (weld)`, values: w.shearFlow })),
+  ];
+  if (lines.length === 0) return null;
   const u = result.unitLabels;
   return figure(
     lineDiagram({
@@ -47,7 +70,7 @@ export function shearFlow(result: DesignResult, width: number): HTMLElement | nu
       width,
       height: 190,
       role: "shear-flow",
-      series: result.schedules.map((s) => ({ label: `joint ${s.joint}`, values: s.shearFlow })),
+      series: lines,
     }),
     "diagram",
     "q = V·Q/I shared among the joint's contact lines, the largest over the load combinations at each point.",
@@ -87,7 +110,8 @@ export function combinations(result: DesignResult): HTMLElement {
         .filter(([, f]) => f !== 0)
         .map(([category, f]) => `${formatNumber(f, 3)} × ${category}`)
         .join(" + ");
-      return [el("dt", { text: c.id }), el("dd", { text: `${c.name}: ${factors || "no loads"} (load duration: ${c.duration})` })];
+      const pattern = c.pattern ? `; ${result.beam.patterned.join(", ")} on ${c.pattern.length ? `span${c.pattern.length === 1 ? "" : "s"} ${c.pattern.join(", ")}` : "no span"} only` : "";
+      return [el("dt", { text: c.id }), el("dd", { text: `${c.name}: ${factors || "no loads"} (load duration: ${c.duration}${pattern})` })];
     }),
   ]);
   const count = result.beam.combinations.length;

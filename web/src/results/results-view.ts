@@ -8,6 +8,7 @@ import { notes } from "./notes-view.js";
 import { scheduleBlock } from "./schedule-view.js";
 import { SectionView } from "./section-view.js";
 import { statusBanner } from "./status-banner.js";
+import { weldBlock } from "./welds-view.js";
 
 /** How the results shown relate to the input in the form. */
 export type Freshness = "current" | "updating" | "invalid" | "unreachable";
@@ -70,8 +71,14 @@ export class ResultsView {
     return this.#result;
   }
 
+  /** Whether the result shown was computed from the input as it stood at the last answer. */
+  get isCurrent(): boolean {
+    return this.#result !== null && this.#freshness === "current";
+  }
+
   /** An edit is waiting to be designed: says so, and keeps any red notice until the answer comes. */
   markUpdating(): void {
+    if (this.#freshness === "current") this.#freshness = "updating";
     this.#state.textContent = "Updating…";
     this.#state.className = "results-state updating";
     this.#renderSummary();
@@ -179,9 +186,14 @@ export class ResultsView {
     if (!result) return;
     const width = drawingWidth(this.#body);
     this.#drawnWidth = width;
-    const schedules = el("section", { className: "panel", attrs: { id: "schedules", "aria-labelledby": "schedules-title" } }, [
-      el("h2", { text: "Connector schedule", attrs: { id: "schedules-title" } }),
-      ...(result.schedules.length ? result.schedules.map((s) => scheduleBlock(result, s, width)) : [el("p", { className: "hint", text: "No joint is fastened with discrete connectors." })]),
+    const checked = result.mode === "check";
+    const fastened = result.schedules.length + result.welds.length;
+    const schedules = el("section", { className: `panel${checked ? " checked-mode" : ""}`, attrs: { id: "schedules", "aria-labelledby": "schedules-title" } }, [
+      el("h2", { text: checked ? "Checked schedule (given in the job)" : "Connector schedule", attrs: { id: "schedules-title" } }),
+      checked ? el("p", { className: "hint", text: "Check mode: the zones below are the ones entered in step 8, checked against the shear flow; nothing was laid out by stitchplan." }) : null,
+      ...result.schedules.map((s) => scheduleBlock(result, s, width)),
+      ...result.welds.map((w) => weldBlock(result, w, width)),
+      fastened ? null : el("p", { className: "hint", text: "No joint is fastened with discrete connectors or welds." }),
     ]);
     const bond = bondLines(result, width);
     this.#body.replaceChildren(

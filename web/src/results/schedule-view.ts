@@ -11,12 +11,28 @@ export function scheduleBlock(result: DesignResult, schedule: Schedule, width: n
   const u = result.unitLabels;
   const e = schedule.efficiency;
   const v = schedule.verification;
+  const checked = schedule.mode === "check";
   const zones = table(
-    `Schedule, joint ${schedule.joint}`,
-    ["Zone", header("From – to", u.span), header("Spacing", u.length), "Per row", "Count", header("Required", u.length), "Utilisation"],
+    `${checked ? "Checked schedule" : "Schedule"}, joint ${schedule.joint}`,
+    ["Zone", header("From – to", u.span), header(checked ? "Spacing given" : "Spacing", u.length), "Per row", "Count", header("Required", u.length), "Utilisation"],
     schedule.zones.map((z, k) => ({
       className: z.passes ? "" : "fails",
-      cells: [String(k + 1), range(result, z.from, z.to).replace(` ${u.span ?? ""}`, ""), formatNumber(z.spacing), String(z.rows), String(z.count), z.requiredSpacing === null ? "any" : formatNumber(z.requiredSpacing), utilisation(z.utilisation, z.passes)],
+      cells: [
+        String(k + 1),
+        range(result, z.from, z.to).replace(` ${u.span ?? ""}`, ""),
+        formatNumber(z.spacing),
+        String(z.rows),
+        String(z.count),
+        z.requiredSpacing === null ? "any" : formatNumber(z.requiredSpacing),
+        el("span", {}, [
+          utilisation(z.utilisation, z.passes),
+          z.failingCombinations.length
+            ? el("span", { className: "sub", text: `fails under ${z.failingCombinations.join(", ")}` })
+            : result.beam.combinations.length > 1
+              ? el("span", { className: "sub", text: z.governingCombination })
+              : null,
+        ]),
+      ],
     })),
     { className: "schedule", numeric: [2, 3, 4, 5] },
   );
@@ -27,15 +43,20 @@ export function scheduleBlock(result: DesignResult, schedule: Schedule, width: n
     `maximum ${shown(result, l.maxSpacing, "length")}`,
     `end distance ${shown(result, l.endDistance, "length")}`,
     l.module !== null ? `module ${shown(result, l.module, "length")}` : null,
+    l.edgeDistance ? `edge distance ${shown(result, l.edgeDistance, "length")}` : null,
+    l.rowSpacing ? `spacing within a row ${shown(result, l.rowSpacing, "length")}` : null,
+    l.penetration ? `penetration ${shown(result, l.penetration.provided, "length")} (at least ${shown(result, l.penetration.required, "length")})` : null,
     l.preferred ? `preferred ${l.preferred.map((p) => formatNumber(p)).join(", ")} ${u.length ?? ""}` : null,
     `shortest zone ${shown(result, l.minZoneLength, "length")}`,
   ].filter(Boolean);
   const fails = !schedule.passes;
-  return el("article", { className: `schedule-block${fails ? " fails" : ""}`, attrs: { "aria-label": `Schedule for joint ${schedule.joint}` } }, [
+  return el("article", { className: `schedule-block${fails ? " fails" : ""}`, attrs: { "aria-label": `${checked ? "Checked schedule" : "Schedule"} for joint ${schedule.joint}` } }, [
     el("h3", {}, [
-      `Joint ${schedule.joint}: ${schedule.connectorLabel}, ${schedule.rows} per row on ${schedule.lineCount} line${schedule.lineCount === 1 ? "" : "s"}`,
+      `${checked ? "Checked: joint" : "Joint"} ${schedule.joint}: ${schedule.connectorLabel}, ${schedule.rows} per row on ${schedule.lineCount} line${schedule.lineCount === 1 ? "" : "s"}`,
       el("span", { className: `verdict ${fails ? "fails" : "passes"}`, text: fails ? "fails" : "passes" }),
     ]),
+    fails ? el("p", { className: "fails-text", text: checked ? "This schedule does not carry the shear flow everywhere (or breaks a detailing limit): do not build it as given." : "This schedule does not pass: see the red rows and the options above. Do not build it as it stands." }) : null,
+    schedule.detailingProblems.length ? el("ul", { className: "fails-text detailing" }, schedule.detailingProblems.map((d) => el("li", { text: d }))) : null,
     figure(scheduleElevation(result, schedule, { width, height: 92 }), "diagram elevation"),
     zones,
     el("dl", { className: "figures" }, [
@@ -53,11 +74,50 @@ export function scheduleBlock(result: DesignResult, schedule: Schedule, width: n
       el("strong", { text: v.passes ? "Row check passes: " : "Row check fails: " }),
       `largest utilisation ${formatRatio(v.maxUtilisation)} at x = ${shown(result, v.at, "span")} (${v.combination}). Method: ${v.method}.`,
     ]),
+    perCombination(result, schedule),
+    resistanceDetails(result, schedule),
     spacingDiagram(result, schedule, width),
   ]);
 }
 
 const term = (name: string, value: string) => [el("dt", { text: name }), el("dd", { text: value })];
+
+/** The worst row under each combination, folded when there are many. */
+function perCombination(result: DesignResult, schedule: Schedule): HTMLElement | null {
+  if (schedule.perCombination.length < 2) return null;
+  const rows = table(
+    `Worst row per combination, joint ${schedule.joint}`,
+    ["Combination", header("At", result.unitLabels.span), "Utilisation"],
+    schedule.perCombination.map((c) => ({ className: c.maxUtilisation > 1 ? "fails" : "", cells: [c.combination, formatNumber(c.at), utilisation(c.maxUtilisation, c.maxUtilisation <= 1)] })),
+    { numeric: [1], captionHidden: true },
+  );
+  return el("details", { className: "result-fold" }, [el("summary", { text: `Worst row under each of the ${schedule.perCombination.length} combinations` }), rows]);
+}
+
+/** Every mode the connector's resistance was checked for, its slip moduli and the conditions a reviewer must confirm. */
+function resistanceDetails(result: DesignResult, schedule: Schedule): HTMLElement | null {
+  const first = schedule.resistance[0];
+  if (!first) return null;
+  const warnings = [...new Set(schedule.resistance.flatMap((r) => r.warnings ?? []))];
+  const modes = first.modes ?? [];
+  const body: (HTMLElement | null)[] = [
+    modes.length
+      ? table(
+          `Resistance modes, joint ${schedule.joint} (${first.combination})`,
+          ["Mode", header("Resistance", result.unitLabels.connectorForce), "Reference"],
+          modes.map((m) => ({ className: m.value === first.value ? "selected" : "", cells: [m.mode, formatNumber(m.value), m.reference ?? ""] })),
+          { numeric: [1] },
+        )
+      : null,
+    first.slip ? el("p", { className: "hint", text: `Slip modulus per connector and shear plane: K_ser = ${shown(result, first.slip.serviceability, "slipModulus")}, K_u = ${shown(result, first.slip.ultimate, "slipModulus")} (${first.slip.reference}).` }) : null,
+    warnings.length ? el("div", { className: "confirm" }, [el("strong", { text: "To confirm: " }), el("ul", {}, warnings.map((w) => el("li", { text: w })))]) : null,
+  ];
+  if (body.every((b) => b === null)) return null;
+  return el("details", { className: `result-fold${warnings.length ? " has-warnings" : ""}`, attrs: warnings.length ? { open: true } : {} }, [
+    el("summary", { text: `Resistance: ${modes.length ? `${modes.length} modes checked` : "from the rating"}${warnings.length ? `, ${warnings.length} condition${warnings.length === 1 ? "" : "s"} to confirm` : ""}` }),
+    ...body,
+  ]);
+}
 
 /** Resistance per connector, once for every group of combinations that share the same value and reason. */
 function resistanceText(result: DesignResult, schedule: Schedule): string {

@@ -1,4 +1,7 @@
+import type { Drawing, PathItem } from "../../../core/draw/drawing.js";
 import { sectionDrawing } from "../../../core/draw/section-drawing.js";
+import { spreadSectionLabels } from "../../../core/draw/section-labels.js";
+import { shearStressProfile } from "../../../core/draw/shear-stress-profile.js";
 import type { DesignResult, JointResult } from "../../../core/schema/result.js";
 import { formatNumber } from "../../../core/units/format.js";
 import { el } from "../dom.js";
@@ -17,8 +20,13 @@ export class SectionView {
     if (!result.joints.some((j) => j.id === this.#joint)) this.#joint = result.joints[0]?.id;
     const box = el("section", { className: "panel", attrs: { id: "section", "aria-labelledby": "section-title" } });
     const draw = () => {
-      const size = drawingSize(result, Math.min(420, drawingWidth(container)));
-      return figure(sectionDrawing(result, { ...size, ...(this.#joint ? { joint: this.#joint } : {}) }), "section-figure");
+      // Room for the τ profile beside the section when the column is wide enough.
+      const size = drawingSize(result, Math.max(260, Math.min(400, drawingWidth(container) - 230)));
+      const drawing = spreadSectionLabels(sectionDrawing(result, { ...size, ...(this.#joint ? { joint: this.#joint } : {}) }));
+      const section = figure(drawing, "section-figure");
+      const frame = partsFrame(drawing);
+      const profile = shearStressProfile(result, { width: 210, height: size.height, ...(frame ? { frame } : {}) });
+      return el("div", { className: "section-pair" }, [section, profile ? figure(profile, "section-figure stress-figure") : null]);
     };
     const picture = el("div", { className: "section-picture" }, [draw()]);
     const chooser = el("div", { className: "joint-chooser", attrs: { role: "group", "aria-label": "Joint shown on the section" } });
@@ -75,6 +83,14 @@ function drawingSize(result: DesignResult, maxWidth: number): { width: number; h
   const width = aspect * (fullHeight - 52) + labels;
   if (width <= maxWidth) return { width: Math.round(Math.max(260, width)), height: fullHeight };
   return { width: maxWidth, height: Math.round(Math.max(170, (maxWidth - labels) / aspect + 52)) };
+}
+
+/** Drawing y of the top and bottom of the parts, from their outlines, so the τ profile lines up with the section. */
+function partsFrame(drawing: Drawing): { top: number; bottom: number } | null {
+  const ys = drawing.items
+    .filter((i) => i.type === "path" && (i.role ?? "").startsWith("part "))
+    .flatMap((i) => [...(i as PathItem).d.matchAll(/[ML]\s*(-?[\d.]+)[ ,](-?[\d.]+)/g)].map((m) => Number(m[2])));
+  return ys.length ? { top: Math.min(...ys), bottom: Math.max(...ys) } : null;
 }
 
 const property = (term: string, value: string) => [el("dt", { text: term }), el("dd", { text: value })];

@@ -23,12 +23,18 @@ export function statusBanner(result: DesignResult): HTMLElement {
     }),
     el("p", {
       className: "status-meta",
-      text: `${result.member.mark} rev ${result.member.revision} · ${result.basis} basis · ${result.units === "us" ? "US customary" : "SI"} units · ${result.program.name} ${result.program.version} · ${connectorTotal(result)}`,
+      text: `${result.member.mark} rev ${result.member.revision} · ${result.mode === "check" ? "check of the schedule given" : "schedule designed"} · ${result.basis} basis · ${result.units === "us" ? "US customary" : "SI"} units · ${result.program.name} ${result.program.version} · ${connectorTotal(result)}`,
     }),
   ]);
 }
 
 function connectorTotal(result: DesignResult): string {
   const count = result.schedules.reduce((n, s) => n + s.count, 0);
-  return result.schedules.length ? `${formatNumber(count)} connectors in all` : "glued throughout, no discrete connectors";
+  const weld = result.welds.reduce((n, w) => n + w.weldLength, 0);
+  const parts = [
+    result.schedules.length ? `${formatNumber(count)} connectors in all` : null,
+    result.welds.length ? `${formatNumber(weld)} ${result.unitLabels.span ?? ""} of fillet weld` : null,
+    result.bondLines.length ? `${result.bondLines.length} glue line${result.bondLines.length === 1 ? "" : "s"}` : null,
+  ].filter(Boolean);
+  return parts.join(", ") || "no fastened joints";
 }

@@ -1,0 +1,105 @@
+import { readFileSync } from "node:fs";
+import { join } from "node:path";
+import type { Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { shots, startHarness, toolbarMessage, untilText, upToDate, type Harness } from "./page-harness.js";
+
+let h: Harness;
+let page: Page;
+
+beforeAll(async () => {
+  h = await startHarness({ store: true });
+  page = h.page;
+});
+
+afterAll(async () => {
+  await h?.close();
+});
+
+const saveMenu = () => page.locator("details.save-menu");
+const storeMessage = () => page.locator(".store-message");
+
+async function saveFromToolbar(note: string): Promise<string> {
+  const before = (await toolbarMessage(page).textContent()) ?? "";
+  await saveMenu().locator("summary").click();
+  await page.getByLabel("Note").fill(note);
+  await saveMenu().getByRole("button", { name: /^Save/ }).click();
+  return untilText(page, toolbarMessage(page), (t) => t !== before && (t.startsWith("Saved as revision") || t.startsWith("Not saved")), "the save did not answer");
+}
+
+describe("the job store on the page", () => {
+  test("saves a member into a new project as revision 1", async () => {
+    await page.goto(`${h.base}/?example=workshop-box-beam.si`);
+    await upToDate(page);
+    await expect(page.locator(".store-chip").textContent()).resolves.toContain("Not saved in a project");
+    await saveMenu().locator("summary").click();
+    await page.getByLabel("Project to save into").selectOption("new");
+    await page.getByLabel("New project name").fill("Harbour Lane");
+    await page.getByLabel("Note").fill("first issue for review");
+    await saveMenu().getByRole("button", { name: "Save", exact: true }).click();
+    await untilText(page, toolbarMessage(page), (t) => t.includes("Saved as revision 1 of MB-2"), "revision 1 was not saved");
+    await expect(page.locator(".store-chip").textContent()).resolves.toContain("Harbour Lane › MB-2 · saved revision 1");
+  });
+
+  test("saves a changed member as revision 2", async () => {
+    await page.getByLabel("Span (m)").fill("5.4");
+    await upToDate(page);
+    expect(await saveFromToolbar("longer span")).toContain("Saved as revision 2 of MB-2");
+    await expect(page.locator(".store-chip").textContent()).resolves.toContain("saved revision 2");
+  });
+
+  test("two tabs saving at once both become revisions, and the later one is told", async () => {
+    const other = await h.context.newPage();
+    await other.goto(`${h.base}/`);
+    await other.locator(".status-banner").waitFor();
+    await other.locator("details.save-menu summary").click();
+    await other.getByLabel("Note").fill("from the second tab");
+    await other.locator("details.save-menu").getByRole("button", { name: /^Save/ }).click();
+    await untilText(other, other.locator(".toolbar-message"), (t) => t.includes("Saved as revision 3"), "the second tab did not save revision 3");
+    await other.close();
+    const said = await saveFromToolbar("from the first tab");
+    expect(said).toContain("Saved as revision 4 of MB-2");
+    expect(said).toContain("3");
+    await expect(toolbarMessage(page).getAttribute("class")).resolves.toContain("caution");
+  });
+
+  test("lists the project, the member and its revisions, and compares two of them", async () => {
+    await page.getByRole("button", { name: "Projects and revisions" }).click();
+    await page.getByRole("button", { name: "Revisions of MB-2" }).click();
+    const revisions = page.getByRole("table", { name: "Revisions of MB-2" });
+    await untilText(page, revisions.locator("tbody"), (t) => t.includes("longer span"), "the revisions were not listed");
+    await expect(revisions.locator("tbody tr").count()).resolves.toBe(4);
+    for (const n of [4, 3]) await page.getByLabel(`Compare revision ${n}`).uncheck();
+    for (const n of [1, 2]) await page.getByLabel(`Compare revision ${n}`).check();
+    await page.getByRole("button", { name: "Compare the two ticked" }).click();
+    const comparison = page.locator(".comparison");
+    await untilText(page, comparison, (t) => t.includes("Revision 1 → revision 2"), "no comparison");
+    const inputs = page.getByRole("table", { name: /Inputs changed/ });
+    await expect(inputs.textContent()).resolves.toMatch(/beam\.spans\[0\]changed4\.8 m5\.4 m/);
+    await expect(comparison.textContent()).resolves.toMatch(/Joint bottom: changed/);
+    await page.screenshot({ path: join(shots, "store-1280.png"), fullPage: true });
+  });
+
+  test("issues a worksheet, records it, and finds it by the fingerprint printed on it", async () => {
+    const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "Issue the worksheet of revision 2" }).click()]);
+    expect(readFileSync((await download.path())!).subarray(0, 4).toString("latin1")).toBe("%PDF");
+    const said = await untilText(page, storeMessage(), (t) => t.includes("Issued worksheet #1"), "the issue was not recorded");
+    const fingerprint = /fingerprint ([0-9a-f]{64})/.exec(said)![1]!;
+    await untilText(page, page.getByRole("table", { name: "Revisions of MB-2" }).locator("tr[data-revision='2']"), (t) => t.includes("#1"), "the issue is not listed with revision 2");
+
+    await page.getByLabel("Fingerprint from the sheet's footer").fill(fingerprint.slice(0, 10));
+    await page.getByRole("button", { name: "Find" }).click();
+    const found = page.locator(".lookup-found");
+    await untilText(page, found, (t) => t.includes("Worksheet #1: Harbour Lane › MB-2, revision 2"), "the fingerprint was not found");
+    await expect(found.locator(".fingerprint").textContent()).resolves.toBe(fingerprint);
+  });
+
+  test("opens a saved revision in the form", async () => {
+    await page.getByRole("button", { name: "Open revision 1", exact: true }).click();
+    await page.locator("#job-form").waitFor({ state: "visible" });
+    await expect(page.getByLabel("Span (m)").inputValue()).resolves.toBe("4.8");
+    await expect(page.locator(".store-chip").textContent()).resolves.toContain("saved revision 1");
+    await upToDate(page);
+    expect(h.errors).toEqual([]);
+  });
+});
