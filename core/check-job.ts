@@ -6,8 +6,9 @@ import { multiPlyOf } from "./fastening/side-load-transfer.js";
 import { JobDocument } from "./schema/job.js";
 import { issuesFromZod, type JobIssue } from "./schema/job-issues.js";
 import { connectedGroups, findContacts, findOverlaps } from "./section/contacts.js";
-import { fastenedJoints, type FastenedJoint } from "./section/fastened-joints.js";
+import { memberJoints, type MemberJoint } from "./fastening/member-joints.js";
 import { resolvePlacement } from "./section/place-parts.js";
+import { partExtent, partStretches, sectionStretches } from "./section/stretches.js";
 import { buildSection, positioned } from "./section/section-model.js";
 import { toCoreUnits } from "./units/convert.js";
 import { inJobUnits } from "./units/format.js";
@@ -86,31 +87,50 @@ export function checkGeometry(job: JobDocument): JobIssue[] {
   const issues: JobIssue[] = [];
   const add = (path: string, message: string) => issues.push({ path, message });
   const text = (value: number, quantity: Parameters<typeof inJobUnits>[1]) => inJobUnits(value, quantity, job.units);
-  const section = buildSection(positioned(job.parts), job.materials);
-  for (const o of findOverlaps(section)) {
-    const i = job.parts.findIndex((p) => p.id === o.b);
-    const j = job.parts.findIndex((p) => p.id === o.a);
-    add(`parts[${i}]`, `part "${o.b}" overlaps part "${o.a}" (parts[${j}]) over an area of ${text(o.area, "area")}; parts may touch but not overlap`);
-  }
+  const L = job.beam.spans.reduce((s, l) => s + l, 0);
+  job.parts.forEach((p, i) => {
+    if (!p.extent) return;
+    const { from, to } = partExtent(p, L);
+    if (to > L * (1 + 1e-9)) add(`parts[${i}].extent.to`, `${text(to, "span")} is beyond the end of the member (length ${text(L, "span")})`);
+    else if (from >= to) add(`parts[${i}].extent.from`, `the part must start before it ends (from ${text(from, "span")} to ${text(to, "span")})`);
+  });
   if (issues.length > 0) return issues;
-  const contacts = findContacts(section);
-  const groups = connectedGroups(section, contacts);
-  if (groups.length > 1) {
-    const main = groups.reduce((a, b) => (b.length > a.length ? b : a));
-    for (const g of groups) {
-      if (g === main) continue;
-      for (const id of g) {
-        const i = job.parts.findIndex((p) => p.id === id);
-        add(`parts[${i}]`, `part "${id}" does not touch the rest of the section (${main.join(", ")}); every part must share a face with another over some length`);
+  const all = positioned(job.parts);
+  const stretches = partStretches(job, L);
+  const several = stretches.length > 1;
+  for (const stretch of stretches) {
+    const where = several ? ` between ${text(stretch.x0, "span")} and ${text(stretch.x1, "span")} along the member` : "";
+    if (stretch.parts.length === 0) {
+      add("parts", `no part runs${where}: every point of the member needs a section`);
+      continue;
+    }
+    const here = buildSection(all.filter((p) => stretch.parts.includes(p.id)), job.materials);
+    for (const o of findOverlaps(here)) {
+      const i = job.parts.findIndex((p) => p.id === o.b);
+      const j = job.parts.findIndex((p) => p.id === o.a);
+      add(`parts[${i}]`, `part "${o.b}" overlaps part "${o.a}" (parts[${j}]) over an area of ${text(o.area, "area")}${where}; parts may touch but not overlap`);
+    }
+    if (issues.length > 0) return issues;
+    const groups = connectedGroups(here, findContacts(here));
+    if (groups.length > 1) {
+      const main = groups.reduce((a, b) => (b.length > a.length ? b : a));
+      for (const g of groups) {
+        if (g === main) continue;
+        for (const id of g) {
+          const i = job.parts.findIndex((p) => p.id === id);
+          add(`parts[${i}]`, `part "${id}" does not touch the rest of the section (${main.join(", ")})${where}; every part must share a face with another over some length`);
+        }
       }
     }
-    return issues;
   }
+  if (issues.length > 0) return issues;
+  const section = buildSection(all, job.materials);
+  const contacts = findContacts(section);
   job.fastening.joints.forEach((j, k) => {
     const held = new Set(j.held);
     if (!contacts.some((c) => held.has(c.a) !== held.has(c.b))) add(`fastening.joints[${k}].held`, "these parts touch no other part, so no connectors can hold them");
   });
-  if (!multiPlyOf(section)) {
+  if (several || !multiPlyOf(section)) {
     job.beam.loads.forEach((load, i) => {
       if (load.type !== "moment" && load.face !== "top") {
         add(`beam.loads[${i}].face`, `a load on the ${load.face} face applies to members of side-by-side plies of one depth; this section is not one, so the load must act on top`);
@@ -119,19 +139,20 @@ export function checkGeometry(job: JobDocument): JobIssue[] {
   }
   if (job.compositeAction.model === "slip-aware") {
     const layered = layersFromSection(section);
-    if (!layered.covered) add("compositeAction.model", `slip-aware composite action (the γ-method of EN 1995-1-1 Annex B) does not apply to this section: ${layered.reason}`);
+    if (several) add("compositeAction.model", "slip-aware composite action (the γ-method of EN 1995-1-1 Annex B) is for members of one section; parts here start or stop along the member");
+    else if (!layered.covered) add("compositeAction.model", `slip-aware composite action (the γ-method of EN 1995-1-1 Annex B) does not apply to this section: ${layered.reason}`);
   }
   if (issues.length > 0) return issues;
-  const L = job.beam.spans.reduce((s, l) => s + l, 0);
-  if (job.mode === "check") issues.push(...checkProvidedSchedules(job, fastenedJoints(job, section, contacts), L, (x) => text(x, "span")));
+  if (job.mode === "check") issues.push(...checkProvidedSchedules(memberJoints(job, sectionStretches(job, L), L), L, (x) => text(x, "span")));
   return issues;
 }
 
 /** Check mode: every connector joint needs the schedule to check, with zones from end to end and rows on the member. */
-function checkProvidedSchedules(job: JobDocument, joints: FastenedJoint[], L: number, span: (x: number) => string): JobIssue[] {
+function checkProvidedSchedules(joints: MemberJoint[], L: number, span: (x: number) => string): JobIssue[] {
   const issues: JobIssue[] = [];
   const seen = new Set<string>();
-  for (const { connector, fastening, path } of joints) {
+  for (const { connector, fastening, path, extent } of joints) {
+    const [start, end] = extent ? [extent.from, extent.to] : [0, L];
     const mechanism = kindOf(connector).mechanism;
     if (seen.has(path) || mechanism === "bond-line") continue;
     seen.add(path);
@@ -146,15 +167,15 @@ function checkProvidedSchedules(job: JobDocument, joints: FastenedJoint[], L: nu
     if (provided.type === "zones") {
       provided.zones.forEach((z, i) => {
         const at = `${path}.provided.zones[${i}]`;
-        const expectedFrom = i === 0 ? 0 : provided.zones[i - 1]!.to;
+        const expectedFrom = i === 0 ? start : provided.zones[i - 1]!.to;
         if (Math.abs(z.from - expectedFrom) > tol) issues.push({ path: `${at}.from`, message: `must be ${span(expectedFrom)}: zones run from the left end to the right end without gaps or overlaps` });
         if (z.to <= z.from) issues.push({ path: `${at}.to`, message: `must be beyond its start (${span(z.from)})` });
       });
       const last = provided.zones[provided.zones.length - 1]!;
-      if (Math.abs(last.to - L) > tol) issues.push({ path: `${path}.provided.zones[${provided.zones.length - 1}].to`, message: `must be the member's length, ${span(L)}` });
+      if (Math.abs(last.to - end) > tol) issues.push({ path: `${path}.provided.zones[${provided.zones.length - 1}].to`, message: extent ? `must be where the joint ends, ${span(end)}` : `must be the member's length, ${span(L)}` });
     } else {
       provided.positions.forEach((x, i) => {
-        if (x > L + tol) issues.push({ path: `${path}.provided.positions[${i}]`, message: `${span(x)} is beyond the end of the member (length ${span(L)})` });
+        if (x > end + tol || x < start - tol) issues.push({ path: `${path}.provided.positions[${i}]`, message: extent ? `${span(x)} is outside the joint, which runs from ${span(start)} to ${span(end)}` : `${span(x)} is beyond the end of the member (length ${span(L)})` });
         else if (i > 0 && x <= provided.positions[i - 1]!) issues.push({ path: `${path}.provided.positions[${i}]`, message: "positions must increase from the left end" });
       });
     }

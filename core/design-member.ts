@@ -6,19 +6,21 @@ import { stationsFor } from "./beam/stations.js";
 import { memberChecks } from "./checks/member-checks.js";
 import { kindOf } from "./connector/registry.js";
 import { bondLineResult } from "./fastening/bond-line-result.js";
-import { contextFor } from "./fastening/connector-context.js";
 import { compositeDesign } from "./fastening/composite-design.js";
+import { contextFor } from "./fastening/connector-context.js";
 import { discreteSchedule, type JointInput } from "./fastening/discrete-schedule.js";
+import { globalise, jointDemand, localView, memberJoints } from "./fastening/member-joints.js";
+import { partTerminations } from "./fastening/part-terminations.js";
 import { interfaceDemand, interfaceOf, multiPlyOf, type MultiPly } from "./fastening/side-load-transfer.js";
-import { interfaceTransfer, plyShares } from "./multi-ply/ply-shares.js";
 import { weldSchedule } from "./fastening/weld-schedule.js";
+import { interfaceTransfer, plyShares } from "./multi-ply/ply-shares.js";
 import type { JobDocument } from "./schema/job.js";
-import { RESULT_FORMAT, RESULT_VERSION, type BondLineResult, type DesignResult, type JointResult, type Schedule, type WeldResult } from "./schema/result.js";
-import { findContacts } from "./section/contacts.js";
-import { fastenedJoints } from "./section/fastened-joints.js";
+import { RESULT_FORMAT, RESULT_VERSION, type BondLineResult, type DesignResult, type JointResult, type MemberCheck, type Schedule, type WeldResult } from "./schema/result.js";
 import { buildSection, positioned } from "./section/section-model.js";
 import { sectionResult } from "./section/section-result.js";
 import { stressProfile } from "./section/stress-profile.js";
+import { sectionStretches } from "./section/stretches.js";
+import { inJobUnits } from "./units/format.js";
 import { unitLabels } from "./units/quantity.js";
 import { PROGRAM } from "./version.js";
 
@@ -27,28 +29,31 @@ import { PROGRAM } from "./version.js";
  * Pure: no I/O, no clock.
  */
 export function designMember(job: JobDocument): DesignResult {
-  const section = buildSection(positioned(job.parts), job.materials);
-  const contacts = findContacts(section);
-  const joints = fastenedJoints(job, section, contacts);
-  const beam = analyseBeam(job, section, combinationsOf(job));
+  const length = job.beam.spans.reduce((sum, l) => sum + l, 0);
+  const stretches = sectionStretches(job, length);
+  const stepped = stretches.length > 1;
+  // The section drawn and reported: every part, wherever along the member it runs.
+  const section = stepped ? buildSection(positioned(job.parts), job.materials) : stretches[0]!.section;
+  const joints = memberJoints(job, stretches, length);
+  const beam = analyseBeam(job, stretches, combinationsOf(job));
   const stations = stationsFor(beam.length, [...new Set(beam.results.flatMap((r) => r.actions.breaks))]);
   const profile = stressProfile(section);
-  const I = section.secondMoment;
-  const plies = multiPlyOf(section);
+  const plies = stepped ? null : multiPlyOf(section);
 
   const assumptions = new Set<string>();
   const standards = new Set<string>();
   const warnings = new Set<string>();
   const jointResults: JointResult[] = [];
 
-  const prepared = joints.map(({ joint, connector, fastening }) => {
+  const prepared = joints.map((mj) => {
+    const { joint, connector, fastening } = mj;
     const kind = kindOf(connector);
     kind.assumptions(connector).forEach((a) => assumptions.add(a));
     kind.standards(connector).forEach((s) => standards.add(s));
     const lineCount = joint.lines.length;
-    const flowFactor = joint.firstMoment / I;
-    const stressFactor = joint.firstMoment / (I * joint.contactWidth);
-    const inPlaneOfBending = joint.firstMoment <= 1e-9 * section.transformedArea * (section.bounds.y1 - section.bounds.y0);
+    const flowFactor = Math.max(...mj.stretches.map((x) => x.flowFactor));
+    const stressFactor = Math.max(...mj.stretches.map((x) => x.stressFactor));
+    const inPlaneOfBending = !stepped && joint.firstMoment <= 1e-9 * section.transformedArea * (section.bounds.y1 - section.bounds.y0);
     const plyInterface = inPlaneOfBending && plies ? interfaceOf(plies, joint) : null;
     if (inPlaneOfBending && plyInterface === null) {
       warnings.add(
@@ -61,7 +66,7 @@ export function designMember(job: JobDocument): DesignResult {
       found: joint.found,
       lines: joint.lines.map((l) => ({ between: [l.a, l.b], orientation: l.orientation, level: l.level, from: l.from, to: l.to, length: l.length })),
       contactWidth: joint.contactWidth,
-      firstMoment: joint.firstMoment,
+      firstMoment: Math.max(...mj.stretches.map((x) => x.firstMoment)),
       flowFactor,
       stressFactor,
       connector: connector.id,
@@ -69,6 +74,8 @@ export function designMember(job: JobDocument): DesignResult {
       mechanism: kind.mechanism,
       rows: fastening.rows,
       demand: plyInterface === null ? "shear-flow" : "side-load",
+      extent: mj.extent,
+      stretches: stepped ? mj.stretches.map((x) => ({ from: x.from, to: x.to, firstMoment: x.firstMoment, flowFactor: x.flowFactor })) : [],
       sharing:
         plyInterface !== null
           ? `Interface ${plyInterface + 1} of side-by-side plies: its connectors pass the loads that arrive on one face (or on top of plies of unequal stiffness) to the plies beyond, in proportion to each ply's E·I; q = V·Q/I is zero here.`
@@ -77,24 +84,32 @@ export function designMember(job: JobDocument): DesignResult {
             : "One contact line carries the whole shear flow.",
     });
     // One context per combination and contact line; a combination's resistance is the least over the lines.
-    const contexts = beam.results.map((r) => joint.lines.map((line) => contextFor(r.combination, job, joint, line, fastening.headSide, fastening.rows, section)));
-    const input: JointInput =
-      plyInterface === null
-        ? { job, beam, stations, joint, connector, fastening, contexts, flowFactor, stressFactor }
-        : { job, beam, stations, joint, connector, fastening, contexts, flowFactor: 1, stressFactor: 1 / joint.contactWidth, demandActions: interfaceDemand(job, beam, plies!, plyInterface) };
-    return { joint, kind, input };
+    const contexts = beam.results.map((r) => joint.lines.map((line) => contextFor(r.combination, job, joint, line, fastening.headSide, fastening.rows, mj.section)));
+    const common = { job, joint, connector, fastening, contexts };
+    let input: JointInput;
+    if (plyInterface !== null) {
+      input = { ...common, beam, stations, flowFactor: 1, stressFactor: 1 / joint.contactWidth, demandActions: interfaceDemand(job, beam, plies!, plyInterface) };
+    } else if (!stepped) {
+      input = { ...common, beam, stations, flowFactor, stressFactor };
+    } else {
+      const view = mj.extent ? localView(beam, stations, mj.extent) : { beam, stations };
+      const local = mj.extent ? { ...common, fastening: shiftProvided(fastening, -mj.extent.from) } : common;
+      input = { ...local, ...view, flowFactor: 1, stressFactor: 1 / joint.contactWidth, demandActions: jointDemand(beam, mj) };
+    }
+    return { joint, kind, input, extent: mj.extent };
   });
 
   type Run = { schedule?: Schedule; bondLine?: BondLineResult; weld?: WeldResult; warnings: string[]; mirrored: boolean };
-  const run = ({ kind, input }: (typeof prepared)[number], override: Partial<Pick<JointInput, "flowFactor" | "maxSpacingCap">> = {}): Run => {
+  const run = ({ kind, input, extent }: (typeof prepared)[number], override: Partial<Pick<JointInput, "flowFactor" | "maxSpacingCap">> = {}): Run => {
     const inputs = { ...input, ...override };
-    if (kind.mechanism === "bond-line") return { bondLine: bondLineResult(inputs, kind), warnings: [], mirrored: false };
+    const back = <T extends Schedule | WeldResult | BondLineResult>(r: T): T => (extent ? globalise(r, stations, extent) : r);
+    if (kind.mechanism === "bond-line") return { bondLine: back(bondLineResult(inputs, kind)), warnings: [], mirrored: false };
     if (kind.mechanism === "weld") {
       const { weld, warnings: w } = weldSchedule(inputs, kind);
-      return { weld, warnings: w, mirrored: false };
+      return { weld: back(weld), warnings: w, mirrored: false };
     }
     const { schedule, warnings: w, mirrored } = discreteSchedule(inputs, kind);
-    return { schedule, warnings: w, mirrored };
+    return { schedule: back(schedule), warnings: w, mirrored };
   };
   const runs = new Map(prepared.map((p) => [p.joint.id, run(p)]));
   const composite = compositeDesign({ job, section, beam, prepared, runs, rerun: (id, override) => run(prepared.find((p) => p.joint.id === id)!, override) });
@@ -117,8 +132,22 @@ export function designMember(job: JobDocument): DesignResult {
     assumptions.add("A load on top bears on each ply in proportion to its thickness (common practice); the self-weight of each ply is carried by that ply.");
     assumptions.add("A concentrated load hung on a face is passed by the connectors within half the member depth each side of it (common practice).");
   }
-  const { checks, notChecked } = memberChecks(job, section, beam, profile, composite.stiffness);
+  const { checks, notChecked } = stepped ? steppedChecks(job, stretches, beam, composite.stiffness) : memberChecks(job, section, beam, profile, composite.stiffness);
   checks.push(...composite.checks);
+  const terminations = partTerminations({
+    job,
+    beam,
+    stretches,
+    joints: joints.map((mj) => {
+      const r = runs.get(mj.joint.id)!;
+      const rowResistance = r.schedule ? Math.min(...r.schedule.resistance.map((x) => x.value)) * r.schedule.rows * r.schedule.lineCount : null;
+      const weldResistance = r.weld ? Math.min(...r.weld.resistance.map((x) => x.value)) * r.weld.fillets * r.weld.lineCount : null;
+      return { joint: mj, schedule: r.schedule, weld: r.weld, rowResistance, weldResistance };
+    }),
+  });
+  if (terminations.length > 0) {
+    assumptions.add("A part that stops short of the member's ends is developed at its theoretical cut-off: the point where the section without it first reaches its elastic bending strength under the largest moment of any combination; its force there is M·Q/I of the section with it (AISC 360-16 §F13.3 [M]).");
+  }
   if (section.parts.length > 1 && joints.length === 0) warnings.add("No joint was found between the parts; check that the parts touch face to face.");
   const failures = [
     ...schedules.filter((s) => !s.passes).map((s) => `Joint ${s.joint}: ${scheduleFailure(s)} (utilisation ${s.verification.maxUtilisation.toFixed(2)}).`),
@@ -126,6 +155,7 @@ export function designMember(job: JobDocument): DesignResult {
     ...welds.filter((w) => !w.passes).map((w) => `Weld ${w.joint}: shear flow exceeds the weld's resistance (utilisation ${w.utilisation.toFixed(2)}).${w.sizeNote ? ` ${w.sizeNote}` : ""}`),
     ...checks.filter((c) => !c.passes).map((c) => `${c.title}: utilisation ${c.utilisation.toFixed(2)}.`),
     ...(composite.result && !composite.result.applies ? [`Slip-aware composite action was asked for but cannot be applied: ${composite.result.reason}`] : []),
+    ...terminations.filter((t) => !t.passes).map((t) => `End of ${t.part} (${t.end}, joint ${t.joint}): ${t.note || "the connectors there do not develop the part's force"} (utilisation ${Number.isFinite(t.utilisation) ? t.utilisation.toFixed(2) : "∞"}).`),
   ];
 
   return {
@@ -146,6 +176,10 @@ export function designMember(job: JobDocument): DesignResult {
     section: sectionResult(section, profile),
     multiPly: plies ? multiPlyResult(plies, jointResults) : null,
     composite: composite.result,
+    stretches: stepped
+      ? stretches.map((x) => ({ from: x.x0, to: x.x1, parts: x.parts, area: x.section.area, centroidY: x.section.centroidY, secondMoment: x.section.secondMoment }))
+      : [],
+    terminations,
     joints: jointResults,
     beam: beamResult(beam, stations),
     schedules,
@@ -176,6 +210,32 @@ function multiPlyResult(plies: MultiPly, joints: JointResult[]): DesignResult["m
       fromTop: transfer("top").interfaces[k]!.force,
     })),
   };
+}
+
+/** A fastening's provided schedule moved along the member by dx (into a joint's own coordinate). */
+function shiftProvided(fastening: JobDocument["fastening"]["default"], dx: number): JobDocument["fastening"]["default"] {
+  const p = fastening.provided;
+  if (!p) return fastening;
+  return {
+    ...fastening,
+    provided: p.type === "zones" ? { ...p, zones: p.zones.map((z) => ({ ...z, from: z.from + dx, to: z.to + dx })) } : { ...p, positions: p.positions.map((x) => x + dx) },
+  };
+}
+
+/** Member checks stretch by stretch, where the section changes along the member; the worst stretch of each check stands. */
+function steppedChecks(job: JobDocument, stretches: ReturnType<typeof sectionStretches>, beam: BeamAnalysis, stiffness: Parameters<typeof memberChecks>[4]) {
+  const worst = new Map<string, MemberCheck>();
+  const notChecked = new Set<string>();
+  stretches.forEach((s, i) => {
+    const label = `${inJobUnits(s.x0, "span", job.units)}–${inJobUnits(s.x1, "span", job.units)}`;
+    const part = memberChecks(job, s.section, beam, stressProfile(s.section), stiffness, { from: s.x0, to: s.x1, label }, i === 0);
+    for (const c of part.checks) {
+      const before = worst.get(c.id);
+      if (!before || c.utilisation > before.utilisation) worst.set(c.id, c);
+    }
+    part.notChecked.forEach((n) => notChecked.add(n));
+  });
+  return { checks: [...worst.values()], notChecked: [...notChecked] };
 }
 
 function scheduleFailure(s: Schedule): string {

@@ -17,6 +17,7 @@ import {
   type MemberActions,
   type Reaction,
 } from "./member-actions.js";
+import type { RigidityStep } from "./rigidity.js";
 import { supportReactions } from "./support-reactions.js";
 
 export type { Support } from "./beam-model.js";
@@ -54,13 +55,27 @@ export function selfWeightOf(section: SectionModel): number {
   return section.parts.reduce((s, p) => s + p.material.density * GRAVITY * p.area * 1e-9, 0);
 }
 
-/** The member of a job (core units) under each combination, with live-load patterns. */
-export function analyseBeam(job: JobDocument, section: SectionModel, combinations: Combination[]): BeamAnalysis {
+/** A stretch of the member and the section it has there. */
+export interface SectionStretch {
+  x0: number;
+  x1: number;
+  section: SectionModel;
+}
+
+/**
+ * The member of a job (core units) under each combination, with live-load patterns. A member whose
+ * section changes along it (parts that start and stop) gives one stretch per section: its E·I steps
+ * and its self-weight follows the parts present.
+ */
+export function analyseBeam(job: JobDocument, stretches: SectionStretch[], combinations: Combination[]): BeamAnalysis {
+  const stepped = stretches.length > 1;
   return analyseMember({
     beam: job.beam,
     combinations,
-    selfWeight: job.beam.selfWeight ? selfWeightOf(section) : 0,
-    flexuralRigidity: section.referenceModulus * section.secondMoment,
+    selfWeight: job.beam.selfWeight ? Math.max(...stretches.map((s) => selfWeightOf(s.section))) : 0,
+    selfWeightSteps: stepped && job.beam.selfWeight ? stretches.map((s) => ({ x0: s.x0, x1: s.x1, value: selfWeightOf(s.section) })) : null,
+    flexuralRigidity: Math.max(...stretches.map((s) => s.section.referenceModulus * s.section.secondMoment)),
+    rigidity: stepped ? stretches.map((s) => ({ x0: s.x0, x1: s.x1, value: s.section.referenceModulus * s.section.secondMoment })) : null,
     serviceLoads: !(job.basis === "factored" && job.combinations.set === "unfactored"),
   });
 }
@@ -69,10 +84,14 @@ export interface MemberInput {
   /** The job's beam in core units (mm, N, N/mm, N·mm). */
   beam: Beam;
   combinations: Combination[];
-  /** N/mm, dead load over the whole member. */
+  /** N/mm, dead load over the whole member (the largest, where it changes along the member). */
   selfWeight: number;
-  /** E·I, N·mm². */
+  /** Self-weight stretch by stretch where the section changes along the member, N/mm; replaces `selfWeight` as a load. */
+  selfWeightSteps?: RigidityStep[] | null;
+  /** E·I, N·mm² (the largest, where it changes along the member). */
   flexuralRigidity: number;
+  /** E·I stretch by stretch where the section changes along the member, N·mm². */
+  rigidity?: RigidityStep[] | null;
   /** Whether the loads as entered are service (nominal) loads, so deflection can be checked. */
   serviceLoads: boolean;
 }
@@ -88,7 +107,8 @@ export function analyseMember(input: MemberInput): BeamAnalysis {
   const { length, regions } = model;
   const info = categoriesOf(beam);
   const present = presentCategories(beam, selfWeight);
-  const byCategory = loadsByCategory(beam, selfWeight, length);
+  const byCategory = loadsByCategory(beam, input.selfWeightSteps ?? (selfWeight !== 0 ? [{ x0: 0, x1: length, value: selfWeight }] : []), length);
+  const rigidity = input.rigidity ?? null;
   const patterned = regions.length > 1 ? beam.patternedCategories.filter((c) => present.has(c)) : [];
   const supportsForCurve = model.supports.map((s) => ({ x: s.x, fixed: s.type === "fixed" }));
 
@@ -99,7 +119,7 @@ export function analyseMember(input: MemberInput): BeamAnalysis {
     everything.moments.push(...set.moments);
     everything.lines.push(...set.lines);
   }
-  const grid = memberActions(length, everything, model.supports.map((s) => ({ x: s.x, R: 0, M: 0 }))).breaks;
+  const grid = memberActions(length, everything, model.supports.map((s) => ({ x: s.x, R: 0, M: 0 })), (rigidity ?? []).map((r) => r.x0)).breaks;
 
   interface LoadCase {
     loads: LoadSet;
@@ -108,10 +128,10 @@ export function analyseMember(input: MemberInput): BeamAnalysis {
     curve: DeflectionCurve;
   }
   const solved = (loads: LoadSet): LoadCase => {
-    const reactions = supportReactions(model, loads);
+    const reactions = supportReactions(model, loads, rigidity);
     const actions = memberActions(length, loads, reactions, grid);
     if (actions.pieces.length !== grid.length - 1) throw new Error("a load case does not share the member's breaks");
-    return { loads, reactions, actions, curve: deflectionCurve(actions, EI, supportsForCurve) };
+    return { loads, reactions, actions, curve: deflectionCurve(actions, rigidity ?? EI, supportsForCurve) };
   };
   const whole = new Map<string, LoadCase>();
   const perRegion = new Map<string, (LoadCase | null)[]>();
@@ -230,14 +250,14 @@ function placesText(labels: string[]): string {
 }
 
 /** The job's loads by category as core load sets, self-weight with dead load. */
-function loadsByCategory(beam: Beam, selfWeight: number, length: number): Map<string, LoadSet> {
+function loadsByCategory(beam: Beam, selfWeight: RigidityStep[], length: number): Map<string, LoadSet> {
   const out = new Map<string, LoadSet>();
   const of = (category: string) => {
     let set = out.get(category);
     if (!set) out.set(category, (set = emptyLoads()));
     return set;
   };
-  if (selfWeight !== 0) of("dead").lines.push({ x0: 0, x1: length, w0: selfWeight, w1: selfWeight });
+  for (const w of selfWeight) if (w.value !== 0) of("dead").lines.push({ x0: w.x0, x1: w.x1, w0: w.value, w1: w.value });
   for (const l of beam.loads) {
     const set = of(l.category);
     if (l.type === "point") set.points.push({ x: l.at, P: l.P });

@@ -5,6 +5,8 @@
  * positive; reactions act upward when positive. V is the sum of upward forces left of x; M is
  * sagging-positive. Between breakpoints the line load is linear, so V is quadratic and M cubic.
  */
+
+import { rigidityAt, type RigidityStep } from "./rigidity.js";
 import { rootsIn } from "./polynomial-roots.js";
 
 export interface PointForce {
@@ -244,17 +246,20 @@ export interface DeflectionCurve {
 }
 
 /**
- * Integrates EI·v'' = M twice for a prismatic member, with the constants fixed by the supports: a
+ * Integrates EI·v'' = M twice (EI constant, or constant between the steps given), with the constants fixed by the supports: a
  * fixed support (v = 0, θ = 0) when there is one, else the two outermost supports (v = 0). The
  * reactions must already satisfy compatibility (as statics or the stiffness method give them), so
  * any other support then has v = 0 as well.
  */
-export function deflectionCurve(actions: MemberActions, flexuralRigidity: number, supports: { x: number; fixed: boolean }[]): DeflectionCurve {
+export function deflectionCurve(actions: MemberActions, flexuralRigidity: number | RigidityStep[], supports: { x: number; fixed: boolean }[]): DeflectionCurve {
   const pieces: DeflectionCurve["pieces"] = [];
   let theta = 0;
   let v = 0;
+  // A stepped E·I must step at piece boundaries (pass its steps as breaks when building the actions).
+  const ei = (p: Piece) => (typeof flexuralRigidity === "number" ? flexuralRigidity : rigidityAt(flexuralRigidity, (p.x0 + p.x1) / 2));
   for (const p of actions.pieces) {
-    const m = p.m.map((c) => c / flexuralRigidity);
+    const rigidity = ei(p);
+    const m = p.m.map((c) => c / rigidity);
     const t = [theta, m[0]!, m[1]! / 2, m[2]! / 3, m[3]! / 4];
     const w = [v, theta, m[0]! / 2, m[1]! / 6, m[2]! / 12, m[3]! / 20];
     pieces.push({ x0: p.x0, x1: p.x1, theta: t, v: w });

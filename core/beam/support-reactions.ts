@@ -1,18 +1,27 @@
 import type { BeamModel } from "./beam-model.js";
 import { coupleEndForces, lineLoadEndForces, noEndForces, pointLoadEndForces, type EndForces } from "./fixed-end-actions.js";
 import type { LoadSet, Reaction } from "./member-actions.js";
+import { rigidityAt, type RigidityStep } from "./rigidity.js";
 
 /**
  * Support reactions of a prismatic member on any supports, by the stiffness method: one element per
  * span, two degrees of freedom per span end (deflection v upward, rotation θ counter-clockwise),
  * loads brought to the ends as fixed-end actions, K·d = −Σ fixed-end forces over the free degrees of
  * freedom, then each element's end forces k·d + fixed-end forces summed at the supports. EI is the
- * same along the member, so it cancels from the reactions and is taken as 1.
+ * same along the member, so it cancels from the reactions and is taken as 1; a member whose EI steps
+ * (a cover plate over part of the span) is split at each step into prismatic elements, each with its EI.
  * Reactions are in member-actions' convention: R upward, M clockwise on the member.
  */
-export function supportReactions(model: BeamModel, loads: LoadSet): Reaction[] {
-  const { nodes, ends } = model;
+export function supportReactions(model: BeamModel, loads: LoadSet, rigidity: RigidityStep[] | null = null): Reaction[] {
+  // A member whose section changes along it is split at each change into prismatic elements with free nodes between.
+  const inner = (rigidity ?? []).map((r) => r.x0).filter((x) => x > 0 && !model.nodes.some((n) => Math.abs(n - x) <= 1e-9 * model.length));
+  const nodes = [...model.nodes, ...inner].sort((a, b) => a - b);
+  const ends = nodes.map((x) => {
+    const i = model.nodes.findIndex((n) => Math.abs(n - x) <= 1e-9 * model.length);
+    return i >= 0 ? model.ends[i]! : ("free" as const);
+  });
   const n = nodes.length - 1;
+  const relative = (e: number) => (rigidity ? rigidityAt(rigidity, (nodes[e]! + nodes[e + 1]!) / 2) / rigidity[0]!.value : 1);
   const fixedEnd: EndForces[] = Array.from({ length: n }, noEndForces);
   const add = (e: number, f: EndForces) => {
     const t = fixedEnd[e]!;
@@ -47,15 +56,16 @@ export function supportReactions(model: BeamModel, loads: LoadSet): Reaction[] {
   const dof = 2 * (n + 1);
   const K = Array.from({ length: dof }, () => new Float64Array(dof));
   const F = new Float64Array(dof);
-  const stiffness = (L: number) => [
-    [12 / L ** 3, 6 / L ** 2, -12 / L ** 3, 6 / L ** 2],
-    [6 / L ** 2, 4 / L, -6 / L ** 2, 2 / L],
-    [-12 / L ** 3, -6 / L ** 2, 12 / L ** 3, -6 / L ** 2],
-    [6 / L ** 2, 2 / L, -6 / L ** 2, 4 / L],
-  ];
+  const stiffness = (L: number, ei: number) =>
+    [
+      [12 / L ** 3, 6 / L ** 2, -12 / L ** 3, 6 / L ** 2],
+      [6 / L ** 2, 4 / L, -6 / L ** 2, 2 / L],
+      [-12 / L ** 3, -6 / L ** 2, 12 / L ** 3, -6 / L ** 2],
+      [6 / L ** 2, 2 / L, -6 / L ** 2, 4 / L],
+    ].map((row) => row.map((v) => v * ei));
   const elementDofs = (e: number) => [2 * e, 2 * e + 1, 2 * e + 2, 2 * e + 3];
   for (let e = 0; e < n; e++) {
-    const k = stiffness(nodes[e + 1]! - nodes[e]!);
+    const k = stiffness(nodes[e + 1]! - nodes[e]!, relative(e));
     const d = elementDofs(e);
     const f = fixedEnd[e]!;
     const fe = [f.F1, f.M1, f.F2, f.M2];
@@ -80,7 +90,7 @@ export function supportReactions(model: BeamModel, loads: LoadSet): Reaction[] {
   // End forces on each element, summed at each node: what the node (its support) gives the member.
   const atNode = new Float64Array(dof);
   for (let e = 0; e < n; e++) {
-    const k = stiffness(nodes[e + 1]! - nodes[e]!);
+    const k = stiffness(nodes[e + 1]! - nodes[e]!, relative(e));
     const dofs = elementDofs(e);
     const f = fixedEnd[e]!;
     const fe = [f.F1, f.M1, f.F2, f.M2];

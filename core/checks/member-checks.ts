@@ -16,8 +16,23 @@ export interface MemberChecks {
 const BENDING = "σ = n·M·y/I (elastic bending of the transformed section)";
 const SHEAR = "τ = V·Q/(I·t) (elastic shear stress, averaged over the width at each level)";
 
-/** Bending and shear stress per material and deflection, for every combination. */
-export function memberChecks(job: JobDocument, section: SectionModel, beam: BeamAnalysis, profile: ProfilePoint[], stiffness: StiffnessFactor | null = null): MemberChecks {
+/**
+ * Bending and shear stress per material and deflection, for every combination. Where the section
+ * changes along the member, call once per stretch with its `range` (stresses only there) and ask for
+ * the deflection checks once.
+ */
+export function memberChecks(
+  job: JobDocument,
+  section: SectionModel,
+  beam: BeamAnalysis,
+  profile: ProfilePoint[],
+  stiffness: StiffnessFactor | null = null,
+  range: { from: number; to: number; label: string } | null = null,
+  withDeflection = true,
+): MemberChecks {
+  const a = range?.from ?? 0;
+  const b = range?.to ?? beam.length;
+  const where = range ? `, ${range.label}` : "";
   const checks: MemberCheck[] = [];
   const notChecked: string[] = [];
   const materials = [...new Map(section.parts.map((p) => [p.material.id, p.material])).values()];
@@ -31,7 +46,7 @@ export function memberChecks(job: JobDocument, section: SectionModel, beam: Beam
     else {
       let worst = { demand: 0, combination: "", at: 0 as number | null };
       for (const r of beam.results) {
-        const { max, min } = momentExtremes(r.actions);
+        const { max, min } = momentExtremes(r.actions, a, b);
         for (const p of parts) {
           const fibre = Math.max(...p.rects.flatMap((rect) => [Math.abs(rect.y1 - section.centroidY), Math.abs(rect.y0 - section.centroidY)]));
           for (const m of [max, min]) {
@@ -40,7 +55,7 @@ export function memberChecks(job: JobDocument, section: SectionModel, beam: Beam
           }
         }
       }
-      checks.push(stressCheck(`bending-${material.id}`, `Bending stress, ${material.name} (${names})`, worst, fb, BENDING));
+      checks.push(stressCheck(`bending-${material.id}`, `Bending stress, ${material.name} (${names})${where}`, worst, fb, BENDING));
     }
     const fv = material.strength.shear;
     if (fv === undefined) notChecked.push(`Shear stress in ${material.name} (${names}): no shear strength given.`);
@@ -48,16 +63,18 @@ export function memberChecks(job: JobDocument, section: SectionModel, beam: Beam
       const factor = Math.max(0, ...profile.filter((pt) => parts.some((p) => p.rects.some((r) => occupies(r, pt)))).map((pt) => pt.factor));
       let worst = { demand: 0, combination: "", at: 0 as number | null };
       for (const r of beam.results) {
-        const v = maxAbsShear(r.actions, 0, beam.length);
+        const v = maxAbsShear(r.actions, a, b);
         if (v.value * factor > worst.demand) worst = { demand: v.value * factor, combination: r.combination.id, at: v.x };
       }
-      checks.push(stressCheck(`shear-${material.id}`, `Shear stress, ${material.name} (${names})`, worst, fv, SHEAR));
+      checks.push(stressCheck(`shear-${material.id}`, `Shear stress, ${material.name} (${names})${where}`, worst, fv, SHEAR));
     }
   }
 
-  const deflection = deflectionChecks(beam, job.beam.deflectionLimits, (mm) => `${Number(fromCore(mm, "span", job.units).toPrecision(4))} ${unitLabel("span", job.units)}`, stiffness);
-  checks.push(...deflection.checks);
-  notChecked.push(...deflection.notChecked);
+  if (withDeflection) {
+    const deflection = deflectionChecks(beam, job.beam.deflectionLimits, (mm) => `${Number(fromCore(mm, "span", job.units).toPrecision(4))} ${unitLabel("span", job.units)}`, stiffness);
+    checks.push(...deflection.checks);
+    notChecked.push(...deflection.notChecked);
+  }
   notChecked.push(
     "Lateral-torsional stability and lateral bracing of the compression edge.",
     "Bearing at the supports and under point loads, and the supports' own connections.",

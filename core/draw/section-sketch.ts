@@ -9,15 +9,19 @@ export interface SectionSketchOptions {
 
 const LABEL = 8;
 
-/** Spreads wanted label heights apart by at least `gap`, kept within [lo, hi], order kept. */
-export function spreadApart(wanted: number[], gap: number, lo: number, hi: number): number[] {
-  const order = wanted.map((y, i) => ({ y, i })).sort((a, b) => a.y - b.y);
-  const ys = order.map((o) => Math.max(lo, o.y));
-  for (let k = 1; k < ys.length; k++) ys[k] = Math.max(ys[k]!, ys[k - 1]! + gap);
-  const over = ys.length > 0 ? ys[ys.length - 1]! - hi : 0;
-  if (over > 0) for (let k = ys.length - 1; k >= 0; k--) ys[k] = Math.max(lo, Math.min(ys[k]!, (k === ys.length - 1 ? hi : ys[k + 1]! - gap)));
+/**
+ * Spreads wanted label positions along one direction so each starts at least its extent plus `gap`
+ * after the one before (the extent is 0 for label heights, the width for labels side by side),
+ * kept within [lo, hi], order kept.
+ */
+export function spreadApart(wanted: number[], gap: number, lo: number, hi: number, extents: number[] = []): number[] {
+  const order = wanted.map((v, i) => ({ v, i })).sort((a, b) => a.v - b.v);
+  const size = (k: number) => extents[order[k]!.i] ?? 0;
+  const vs = order.map((o) => Math.max(lo, o.v));
+  for (let k = 1; k < vs.length; k++) vs[k] = Math.max(vs[k]!, vs[k - 1]! + size(k - 1) + gap);
+  for (let k = vs.length - 1; k >= 0; k--) vs[k] = Math.max(lo, Math.min(vs[k]!, k === vs.length - 1 ? hi - size(k) : vs[k + 1]! - size(k) - gap));
   const out = new Array<number>(wanted.length);
-  order.forEach((o, k) => (out[o.i] = ys[k]!));
+  order.forEach((o, k) => (out[o.i] = vs[k]!));
   return out;
 }
 
@@ -30,9 +34,16 @@ export function sectionSketch(result: Pick<DesignResult, "section" | "joints">, 
   const { x0, x1, y0, y1 } = section.bounds;
   const partLabels = section.parts.map((p) => p.id);
   const jointLabels = joints.map((j) => `joint ${j.id}`);
-  const leftRoom = Math.min(options.width * 0.3, Math.max(0, ...partLabels.map((t) => labelWidth(t, LABEL))) + 14);
+  const centres = section.parts.map((p) => {
+    const r = largestRect(p.rects);
+    return { x: (r.x0 + r.x1) / 2, y: (r.y0 + r.y1) / 2 };
+  });
+  const spread = (v: number[]) => Math.max(...v) - Math.min(...v);
+  // Parts side by side (plies) are named above the section; stacked parts (flanges and webs) on its left.
+  const above = section.parts.length > 1 && spread(centres.map((c) => c.x)) > spread(centres.map((c) => c.y));
+  const leftRoom = above ? 8 : Math.min(options.width * 0.3, Math.max(0, ...partLabels.map((t) => labelWidth(t, LABEL))) + 14);
   const rightRoom = Math.min(options.width * 0.4, Math.max(0, ...jointLabels.map((t) => labelWidth(t, LABEL, true))) + 16);
-  const margin = { left: leftRoom, right: rightRoom, top: 8, bottom: 8 };
+  const margin = { left: leftRoom, right: rightRoom, top: above ? 30 : 8, bottom: 8 };
   const scale = Math.min((options.width - margin.left - margin.right) / (x1 - x0 || 1), (options.height - margin.top - margin.bottom) / (y1 - y0 || 1));
   const ox = margin.left + (options.width - margin.left - margin.right - (x1 - x0) * scale) / 2;
   const oy = margin.top + (options.height - margin.top - margin.bottom + (y1 - y0) * scale) / 2;
@@ -46,18 +57,35 @@ export function sectionSketch(result: Pick<DesignResult, "section" | "joints">, 
     for (const r of part.rects) items.push({ type: "path", d: rectPath(X(r.x0), Y(r.y1), (r.x1 - r.x0) * scale, (r.y1 - r.y0) * scale), fill, stroke: palette.ink, strokeWidth: 0.8, role: `part ${part.id}` });
   }
 
-  // Part ids on the left, each led to a dot in its largest rectangle; parts further right take the lower labels at one height, so leaders do not cross.
-  const anchors = section.parts.map((p) => {
-    const r = p.rects.reduce((a, b) => ((b.x1 - b.x0) * (b.y1 - b.y0) > (a.x1 - a.x0) * (a.y1 - a.y0) ? b : a));
-    return { x: X((r.x0 + r.x1) / 2), y: Y((r.y0 + r.y1) / 2) };
-  });
-  const partYs = spreadApart(anchors.map((a) => a.y + a.x * 1e-3), LABEL + 2, margin.top + LABEL, options.height - 2);
-  section.parts.forEach((p, i) => {
-    const a = anchors[i]!;
-    items.push({ type: "path", d: `${moveTo(leftRoom - 4, partYs[i]! - 3)}${lineTo(a.x, a.y)}`, stroke: palette.faint, strokeWidth: 0.5 });
-    items.push({ type: "path", d: rectPath(a.x - 1.2, a.y - 1.2, 2.4, 2.4), fill: palette.ink });
-    items.push({ type: "text", x: leftRoom - 6, y: partYs[i]!, text: partLabels[i]!, size: LABEL, anchor: "end", fill: palette.ink, role: `part-label ${p.id}` });
-  });
+  // Each part id is led to a dot in its largest rectangle. On the left, parts further right take the lower labels at one height, so leaders do not cross.
+  const anchors = centres.map((c) => ({ x: X(c.x), y: Y(c.y) }));
+  if (above) {
+    // One row of labels over the section, spread sideways in the parts' order, each led down to its part.
+    const widths = partLabels.map((t) => labelWidth(t, LABEL));
+    const lefts = spreadApart(
+      anchors.map((a, i) => a.x - widths[i]! / 2),
+      6,
+      2,
+      options.width - rightRoom,
+      widths,
+    );
+    const y = margin.top - 10;
+    section.parts.forEach((p, i) => {
+      const a = anchors[i]!;
+      const centre = lefts[i]! + widths[i]! / 2;
+      items.push({ type: "path", d: `${moveTo(centre, y + 2)}${lineTo(a.x, Math.min(a.y, y + 8))}${lineTo(a.x, a.y)}`, stroke: palette.faint, strokeWidth: 0.5 });
+      items.push({ type: "path", d: rectPath(a.x - 1.2, a.y - 1.2, 2.4, 2.4), fill: palette.ink });
+      items.push({ type: "text", x: centre, y, text: partLabels[i]!, size: LABEL, anchor: "middle", fill: palette.ink, role: `part-label ${p.id}` });
+    });
+  } else {
+    const partYs = spreadApart(anchors.map((a) => a.y + a.x * 1e-3), LABEL + 2, margin.top + LABEL, options.height - 2);
+    section.parts.forEach((p, i) => {
+      const a = anchors[i]!;
+      items.push({ type: "path", d: `${moveTo(leftRoom - 4, partYs[i]! - 3)}${lineTo(a.x, a.y)}`, stroke: palette.faint, strokeWidth: 0.5 });
+      items.push({ type: "path", d: rectPath(a.x - 1.2, a.y - 1.2, 2.4, 2.4), fill: palette.ink });
+      items.push({ type: "text", x: leftRoom - 6, y: partYs[i]!, text: partLabels[i]!, size: LABEL, anchor: "end", fill: palette.ink, role: `part-label ${p.id}` });
+    });
+  }
 
   // Joint lines, each joint named on the right with a leader to every one of its lines.
   const right = options.width - rightRoom + 6;
@@ -81,3 +109,6 @@ export function sectionSketch(result: Pick<DesignResult, "section" | "joints">, 
   });
   return { width: options.width, height: options.height, items, title: `Cross-section naming ${joints.length} joint${joints.length === 1 ? "" : "s"}` };
 }
+
+type Rect = { x0: number; x1: number; y0: number; y1: number };
+const largestRect = (rects: Rect[]): Rect => rects.reduce((a, b) => ((b.x1 - b.x0) * (b.y1 - b.y0) > (a.x1 - a.x0) * (a.y1 - a.y0) ? b : a));

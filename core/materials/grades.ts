@@ -1,13 +1,10 @@
 import type { Material } from "../schema/job.js";
 
-/** Where a value comes from: [V] published and seen, [M] from memory, [CP] common practice. */
-type Flag = "[V]" | "[M]" | "[CP]";
-
 export interface Grade {
   id: string;
   name: string;
   family: Material["family"];
-  /** Source of the stiffness, density and strength values, with its flag. */
+  /** Source of the stiffness, density and strength values, with its flag: [V] published and seen, [M] from memory, [CP] common practice. */
   source: string;
   /** Core units: MPa, kg/m³. */
   E: number;

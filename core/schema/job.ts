@@ -60,6 +60,13 @@ export const SectionPart = z
     y: quantity("length").optional(),
     /** Instead of x and y: stack this part against another one. */
     place: Placement.optional(),
+    /** Where the part runs along the member (a cover plate over the middle half): the whole member when absent. */
+    extent: z
+      .strictObject({
+        from: nonNegative("span").optional(),
+        to: positive("span").optional(),
+      })
+      .optional(),
   })
   .superRefine((p, ctx) => {
     const hasXY = p.x !== undefined && p.y !== undefined;

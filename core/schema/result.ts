@@ -103,6 +103,10 @@ export const JointResult = z.object({
   rows: z.number().int(),
   /** shear-flow: q = V·Q/I · side-load: force passed across a ply interface per length (side-by-side plies). */
   demand: z.enum(["shear-flow", "side-load"]),
+  /** Where the joint runs along the member, when a part of it starts or stops (a cover plate); null: the whole member. */
+  extent: z.object({ from: q("span"), to: q("span") }).nullable(),
+  /** Q/I stretch by stretch, where the section changes along the member. */
+  stretches: z.array(z.object({ from: q("span"), to: q("span"), firstMoment: q("firstMoment"), flowFactor: q("perLength") })),
   sharing: z.string(),
 });
 export type JointResult = z.infer<typeof JointResult>;
@@ -429,6 +433,41 @@ export const DesignResult = z.object({
       reference: z.string(),
     })
     .nullable(),
+  /** The section stretch by stretch along the member, where parts start or stop; empty for a member of one section. */
+  stretches: z.array(
+    z.object({
+      from: q("span"),
+      to: q("span"),
+      parts: z.array(z.string()),
+      area: q("area"),
+      centroidY: q("length"),
+      secondMoment: q("secondMoment"),
+    }),
+  ),
+  /** Ends of parts that stop short of the member's ends (cover plates): the force to develop and the connectors that do it. */
+  terminations: z.array(
+    z.object({
+      joint: z.string(),
+      part: z.string(),
+      end: z.enum(["left", "right"]),
+      /** Where the part ends. */
+      at: q("span"),
+      /** The theoretical cut-off: where the section without the part carries the moment; null when it does everywhere along the part, or the strengths are missing. */
+      cutoff: q("span").nullable(),
+      /** The part's force at the cut-off, M·Q_p/I of the full section. */
+      force: q("force"),
+      /** Length beyond the cut-off over which the connectors develop the force: as provided, and the least the rule requires (welds). */
+      available: q("span"),
+      required: q("span").nullable(),
+      /** What the connectors within the available length carry. */
+      capacity: q("force"),
+      connectors: z.string(),
+      utilisation: z.number(),
+      passes: z.boolean(),
+      reference: z.string(),
+      note: z.string(),
+    }),
+  ),
   joints: z.array(JointResult),
   beam: BeamResult,
   schedules: z.array(Schedule),
