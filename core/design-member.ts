@@ -1,6 +1,7 @@
 import { analyseBeam, type BeamAnalysis } from "./beam/analyse-beam.js";
 import { beamAssumptions } from "./beam/beam-assumptions.js";
 import { beamResult } from "./beam/beam-result.js";
+import { memberActions } from "./beam/member-actions.js";
 import { combinationsOf } from "./beam/combinations.js";
 import { stationsFor } from "./beam/stations.js";
 import { memberChecks } from "./checks/member-checks.js";
@@ -100,7 +101,7 @@ export function designMember(job: JobDocument): DesignResult {
   });
 
   type Run = { schedule?: Schedule; bondLine?: BondLineResult; weld?: WeldResult; warnings: string[]; mirrored: boolean };
-  const run = ({ kind, input, extent }: (typeof prepared)[number], override: Partial<Pick<JointInput, "flowFactor" | "maxSpacingCap">> = {}): Run => {
+  const run = ({ kind, input, extent }: (typeof prepared)[number], override: Partial<Pick<JointInput, "flowFactor" | "maxSpacingCap" | "extraDemand">> = {}): Run => {
     const inputs = { ...input, ...override };
     const back = <T extends Schedule | WeldResult | BondLineResult>(r: T): T => (extent ? globalise(r, stations, extent) : r);
     if (kind.mechanism === "bond-line") return { bondLine: back(bondLineResult(inputs, kind)), warnings: [], mirrored: false };
@@ -115,6 +116,56 @@ export function designMember(job: JobDocument): DesignResult {
   const composite = compositeDesign({ job, section, beam, prepared, runs, rerun: (id, override) => run(prepared.find((p) => p.joint.id === id)!, override) });
   composite.assumptions.forEach((a) => assumptions.add(a));
 
+  if (plies) {
+    assumptions.add("Side-by-side plies of one depth deflect together, so each carries a share of the load in proportion to its E·I; connectors at each interface pass what arrives on one side beyond its share.");
+    assumptions.add("A load on top bears on each ply in proportion to its thickness (common practice); the self-weight of each ply is carried by that ply.");
+    assumptions.add("A concentrated load hung on a face is passed by the connectors within half the member depth each side of it (common practice).");
+  }
+  const { checks, notChecked } = stepped ? steppedChecks(job, stretches, beam, composite.stiffness) : memberChecks(job, section, beam, profile, composite.stiffness);
+  checks.push(...composite.checks);
+  const terminationsNow = () =>
+    partTerminations({
+      job,
+      beam,
+      stretches,
+      joints: joints.map((mj) => {
+        const r = runs.get(mj.joint.id)!;
+        const rowResistance = r.schedule ? Math.min(...r.schedule.resistance.map((x) => x.value)) * r.schedule.rows * r.schedule.lineCount : null;
+        const weldResistance = r.weld ? Math.min(...r.weld.resistance.map((x) => x.value)) * r.weld.fillets * r.weld.lineCount : null;
+        return { joint: mj, schedule: r.schedule, weld: r.weld, rowResistance, weldResistance };
+      }),
+    });
+  let { terminations, notChecked: terminationsNotChecked } = terminationsNow();
+  if (job.mode === "design") {
+    // Design the rows at a part's ends to develop its force: the force spread over the length from the part's
+    // end to its cut-off is one more demand on the rows there, raised in a few rounds until the whole rows
+    // that fall inside that length carry it.
+    const boost = new Map<string, number>();
+    for (let round = 0; round < 4; round++) {
+      const short = terminations.filter((t) => !t.passes && t.cutoff !== null && t.cutoff !== t.at && t.force > 0);
+      if (short.length === 0) break;
+      const byJoint = new Map<string, typeof short>();
+      for (const t of short) byJoint.set(t.joint, [...(byJoint.get(t.joint) ?? []), t]);
+      for (const t of short) boost.set(`${t.joint}|${t.end}`, (boost.get(`${t.joint}|${t.end}`) ?? 1) * Math.max(1.02, Math.min(t.utilisation, 3)));
+      for (const [id] of byJoint) {
+        const p = prepared.find((x) => x.joint.id === id)!;
+        const r = runs.get(id)!;
+        if (!r.schedule || !p.extent) continue;
+        const origin = p.extent.from;
+        const ends = terminations.filter((t) => t.joint === id && t.cutoff !== null && t.cutoff !== t.at && t.force > 0 && boost.has(`${t.joint}|${t.end}`));
+        const extraDemand = ends.map((t) => {
+          const [a, b] = [Math.min(t.at, t.cutoff!) - origin, Math.max(t.at, t.cutoff!) - origin];
+          const flow = (t.force * boost.get(`${t.joint}|${t.end}`)!) / (b - a);
+          const set = { points: [{ x: a, P: -flow }, { x: b, P: flow }], moments: [], lines: [] };
+          return { id: `develop ${t.part} at its ${t.end} end`, actions: memberActions(p.extent!.to - origin, set, []), resistance: Math.min(...r.schedule!.resistance.map((x) => x.value)) };
+        });
+        runs.set(id, run(p, { extraDemand }));
+      }
+      ({ terminations, notChecked: terminationsNotChecked } = terminationsNow());
+    }
+  }
+  notChecked.push(...terminationsNotChecked);
+
   const schedules: Schedule[] = [];
   const bondLines: BondLineResult[] = [];
   const welds: WeldResult[] = [];
@@ -127,24 +178,6 @@ export function designMember(job: JobDocument): DesignResult {
     if (r.mirrored) assumptions.add("Zones are mirrored about midspan where the connector demand is symmetric.");
   }
 
-  if (plies) {
-    assumptions.add("Side-by-side plies of one depth deflect together, so each carries a share of the load in proportion to its E·I; connectors at each interface pass what arrives on one side beyond its share.");
-    assumptions.add("A load on top bears on each ply in proportion to its thickness (common practice); the self-weight of each ply is carried by that ply.");
-    assumptions.add("A concentrated load hung on a face is passed by the connectors within half the member depth each side of it (common practice).");
-  }
-  const { checks, notChecked } = stepped ? steppedChecks(job, stretches, beam, composite.stiffness) : memberChecks(job, section, beam, profile, composite.stiffness);
-  checks.push(...composite.checks);
-  const terminations = partTerminations({
-    job,
-    beam,
-    stretches,
-    joints: joints.map((mj) => {
-      const r = runs.get(mj.joint.id)!;
-      const rowResistance = r.schedule ? Math.min(...r.schedule.resistance.map((x) => x.value)) * r.schedule.rows * r.schedule.lineCount : null;
-      const weldResistance = r.weld ? Math.min(...r.weld.resistance.map((x) => x.value)) * r.weld.fillets * r.weld.lineCount : null;
-      return { joint: mj, schedule: r.schedule, weld: r.weld, rowResistance, weldResistance };
-    }),
-  });
   if (terminations.length > 0) {
     assumptions.add("A part that stops short of the member's ends is developed at its theoretical cut-off: the point where the section without it first reaches its elastic bending strength under the largest moment of any combination; its force there is M·Q/I of the section with it (AISC 360-16 §F13.3 [M]).");
   }

@@ -32,6 +32,8 @@ export interface JointInput {
   demandActions?: MemberActions[];
   /** A largest spacing set from outside the connector's rules (the s_max ≤ 4·s_min rule of slip-aware design), mm. */
   maxSpacingCap?: number;
+  /** More demand the rows must meet besides the flow, as if further combinations (a part's force to develop at its end). */
+  extraDemand?: { id: string; actions: MemberActions; resistance: number }[];
 }
 
 const VERIFICATION_METHOD =
@@ -72,7 +74,7 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
   const actions = demandActionsOf(input);
   const problem = {
     length: beam.length,
-    combinations: beam.results.map((r, i) => ({ id: r.combination.id, actions: actions[i]!, resistance: resistances[i]!.value })),
+    combinations: [...beam.results.map((r, i) => ({ id: r.combination.id, actions: actions[i]!, resistance: resistances[i]!.value })), ...(input.extraDemand ?? [])],
     flowFactor,
     lines: lineCount,
     rows,

@@ -38,9 +38,10 @@ export function partTerminations(p: {
   beam: BeamAnalysis;
   stretches: SectionStretch[];
   joints: { joint: MemberJoint; schedule?: Schedule; weld?: WeldResult; rowResistance: number | null; weldResistance: number | null }[];
-}): Termination[] {
+}): { terminations: Termination[]; notChecked: string[] } {
   const L = p.beam.length;
   const out: Termination[] = [];
+  const notChecked: string[] = [];
   const span = (x: number) => inJobUnits(x, "span", p.job.units);
   for (const { joint, schedule, weld, rowResistance, weldResistance } of p.joints) {
     if (!joint.extent) continue;
@@ -58,8 +59,10 @@ export function partTerminations(p: {
       const mid = (at + far) / 2;
       let cutoff: number | null = null;
       let note = "";
+      let needed = true;
       if (capacity === null) {
-        note = `No bending strength is given for every material of the section without ${part}, so the theoretical cut-off is not found; the force is taken at the part's end.`;
+        notChecked.push(`The ${end} end of ${part} (joint ${joint.joint.id}, at ${span(at)}): with no bending strength given for every material of the section without it, its theoretical cut-off and the force to develop there are not found.`);
+        continue;
       } else if (momentEnvelope(p.beam, at) > capacity * (1 + 1e-9)) {
         cutoff = at;
         note = `The section without ${part} is over its bending strength at the part's end (${span(at)}): the part must run further toward the member's end.`;
@@ -76,7 +79,10 @@ export function partTerminations(p: {
           }
           lo = x;
         }
-        if (hi === null) note = `The section without ${part} carries the moment over the whole part: it is not needed for strength, and no force has to be developed at its ends.`;
+        if (hi === null) {
+          needed = false;
+          note = `The section without ${part} carries the moment over the whole part: it is not needed for strength, and no force has to be developed at its ends.`;
+        }
         else {
           let over: number = hi;
           for (let k = 0; k < 50; k++) {
@@ -106,7 +112,7 @@ export function partTerminations(p: {
         provided = weldResistance * reach * fraction;
         connectors = `${weld.fillets * weld.lineCount} fillet(s) over a′ = 2w = ${inJobUnits(required, "length", p.job.units)} from the end${fraction < 1 ? ` (${(fraction * 100).toFixed(0)} % welded)` : ""}`;
       }
-      const demand = weld ? momentEnvelope(p.beam, developedAt) * inside.flowFactor : force;
+      const demand = !needed ? 0 : weld ? momentEnvelope(p.beam, developedAt) * inside.flowFactor : force;
       const lengthOk = required === null || cutoff === null || available >= required - 1e-9;
       const utilisation = demand > 0 ? (provided > 0 ? demand / provided : Infinity) : 0;
       const overstressedEnd = cutoff !== null && cutoff === at && capacity !== null;
@@ -128,7 +134,7 @@ export function partTerminations(p: {
       });
     }
   }
-  return out;
+  return { terminations: out, notChecked };
 }
 
 /** Fraction of the joint length between a and b that is welded (continuous zones 1, intermittent segment/pitch). */

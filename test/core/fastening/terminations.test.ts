@@ -84,6 +84,8 @@ describe("parts that run over part of the member (cover plates)", () => {
     expectClose(left.capacity / 4.4482216152605, rows * 2 * 8000, { rel: 1e-9 }, "rows between the end and the cut-off × 2 bolts × 8 kip");
     expect(left.passes).toBe(left.force <= left.capacity);
     expect(result.terminations).toHaveLength(2);
+    // Design mode adds rows near the plate's ends until those between each end and its cut-off develop the force.
+    expect(result.terminations.every((t) => t.passes)).toBe(true);
   });
 
   test("a plate too short for the moment is reported at its end, in red", () => {
