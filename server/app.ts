@@ -1,10 +1,16 @@
+import { availableParallelism } from "node:os";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
 import fastifyStatic from "@fastify/static";
 import { build } from "esbuild";
 import Fastify, { type FastifyError, type FastifyInstance } from "fastify";
+import { DesignThreads } from "./design-threads.js";
 import { ApiError, errorBody, type ErrorCode } from "./errors.js";
 import { loadExamples } from "./examples.js";
+import { hostCheck, loopbackHosts } from "./host-check.js";
+import { boundedIssues, serviceLimits } from "./job-limits.js";
+import { ResultCache } from "./result-cache.js";
+import { securityHeaders } from "./security-headers.js";
 import { apiRoutes } from "./routes/api.js";
 import { storeRoutes } from "./routes/store.js";
 import type { StoreOptions } from "./store/job-store.js";
@@ -20,6 +26,16 @@ export interface AppOptions {
   dataDir?: string;
   /** The store's clock and test hooks. */
   store?: StoreOptions;
+  /** Threads that design and draw worksheets; one fewer than the cores (at least 1, at most 4) by default. */
+  designThreads?: number;
+  /** Time limits, ms: a design or a worksheet still running then is stopped (README "Performance and limits"). */
+  timeLimits?: { designMs?: number; worksheetMs?: number };
+  /** Host names the service answers to; loopback names by default, "any" when it listens on another address. */
+  allowedHosts?: readonly string[] | "any";
+  /** Memory for answers already computed, bytes; 0 turns the cache off. */
+  resultCacheBytes?: number;
+  /** Start the design threads with the app rather than on the first design (a second saved on the first answer). */
+  warmThreads?: boolean;
 }
 
 /** The page's script, bundled once from web/src when the app is built. */
@@ -39,24 +55,42 @@ async function bundlePage(): Promise<string> {
 
 /** Builds the HTTP app without listening: tests inject requests or listen on port 0. */
 export async function buildApp(options: AppOptions = {}): Promise<FastifyInstance> {
-  const app = Fastify({ logger: false, bodyLimit: options.bodyLimit ?? 1024 * 1024 });
+  const app = Fastify({ logger: false, bodyLimit: options.bodyLimit ?? serviceLimits.bodyBytes });
   const examples = loadExamples(options.examplesDir ?? join(projectRoot, "fixtures/examples"));
   const pageScript = await bundlePage();
 
-  app.setErrorHandler((error: FastifyError | ApiError, _request, reply) => {
-    if (error instanceof ApiError) return reply.status(errorBody(error.code).statusCode).send(errorBody(error.code, error.message, error.issues));
+  const limits = { designMs: options.timeLimits?.designMs ?? serviceLimits.designMs, worksheetMs: options.timeLimits?.worksheetMs ?? serviceLimits.worksheetMs };
+  const designs = new DesignThreads({
+    threads: options.designThreads ?? Math.max(1, Math.min(4, availableParallelism() - 1)),
+    timeLimitMs: (task) => (task.kind === "worksheet" ? limits.worksheetMs : limits.designMs),
+  });
+  app.addHook("onClose", () => designs.close());
+  if (options.warmThreads) designs.warm();
+  const cache = new ResultCache(options.resultCacheBytes ?? 32 * 1024 * 1024);
+
+  app.setErrorHandler((error: FastifyError | ApiError, request, reply) => {
+    if (error instanceof ApiError) return reply.status(errorBody(error.code).statusCode).send(errorBody(error.code, error.message, boundedIssues(error.issues)));
     const code = fastifyCode(error as FastifyError);
+    if (code === "ERR_BODY_TOO_LARGE") {
+      const limit = mebibytes(request.routeOptions.bodyLimit ?? serviceLimits.bodyBytes);
+      return reply.status(413).send(errorBody(code, `The request body is larger than the limit of ${limit}.`, [{ path: "(body)", message: `must be at most ${limit}` }]));
+    }
     if (code) return reply.status(errorBody(code).statusCode).send(errorBody(code));
     return reply.status(500).send(errorBody("ERR_INTERNAL"));
   });
   app.setNotFoundHandler((_request, reply) => reply.status(404).send(errorBody("ERR_NOT_FOUND")));
+  const allowedHosts = options.allowedHosts ?? loopbackHosts;
+  if (allowedHosts !== "any") hostCheck(app, allowedHosts);
+  await securityHeaders(app);
 
-  await app.register(apiRoutes, { examples });
-  if (options.dataDir) await app.register(storeRoutes, { dataDir: options.dataDir, store: options.store });
+  await app.register(apiRoutes, { examples, designs, cache });
+  if (options.dataDir) await app.register(storeRoutes, { dataDir: options.dataDir, store: options.store, designs });
   app.get("/app.js", (_request, reply) => reply.type("text/javascript; charset=utf-8").header("cache-control", "no-cache").send(pageScript));
   await app.register(fastifyStatic, { root: join(projectRoot, "web"), index: ["index.html"], allowedPath: (path) => !path.startsWith("/src/") });
   return app;
 }
+
+const mebibytes = (bytes: number) => (bytes % (1024 * 1024) === 0 ? `${bytes / (1024 * 1024)} MiB` : `${bytes} bytes`);
 
 function fastifyCode(error: FastifyError): ErrorCode | undefined {
   switch (error.code) {

@@ -1,6 +1,7 @@
 import { createHash } from "node:crypto";
 import { canonicalJson, designMember, DesignResult, JOB_VERSION, PROGRAM, prepareJob, toDisplayUnits, type JobDocument } from "../core/index.js";
 import { ApiError } from "./errors.js";
+import { jobLimitIssues } from "./job-limits.js";
 
 export interface DesignRun {
   /** The job as parsed, in its own units, defaults filled in. */
@@ -22,6 +23,8 @@ export function runDesign(input: unknown): DesignRun {
   }
   const prepared = prepareJob(input);
   if (!prepared.ok) throw new ApiError("ERR_INPUT_INVALID", undefined, prepared.issues);
+  const overLimit = jobLimitIssues(prepared.core, prepared.job.units);
+  if (overLimit.length > 0) throw new ApiError("ERR_INPUT_INVALID", undefined, overLimit);
   const core = designMember(prepared.core);
   const result = toDisplayUnits(DesignResult, core, prepared.job.units);
   return { job: prepared.job, result: { ...result, fingerprint: fingerprintOf(prepared.job) } };

@@ -7,6 +7,8 @@ export const errors = {
   ERR_BODY_EMPTY: { statusCode: 400, message: "The request body is empty; send a job document as JSON." },
   ERR_UNSUPPORTED_MEDIA_TYPE: { statusCode: 415, message: "Send the job document with Content-Type: application/json." },
   ERR_BODY_TOO_LARGE: { statusCode: 413, message: "The request body is larger than the limit." },
+  ERR_DESIGN_TIME_LIMIT: { statusCode: 422, message: "The design took longer than the time limit and was stopped; nothing was stored or changed." },
+  ERR_HOST_NOT_ALLOWED: { statusCode: 403, message: "This service answers only requests addressed to this machine by a loopback name." },
   ERR_NOT_FOUND: { statusCode: 404, message: "There is nothing at this address." },
   ERR_EXAMPLE_NOT_FOUND: { statusCode: 404, message: "There is no example with this id." },
   ERR_PROJECT_NOT_FOUND: { statusCode: 404, message: "There is no project with this id in the job store." },
@@ -23,10 +25,12 @@ export type ErrorCode = keyof typeof errors;
 
 const reasons: Record<number, string> = {
   400: "Bad Request",
+  403: "Forbidden",
   404: "Not Found",
   409: "Conflict",
   413: "Payload Too Large",
   415: "Unsupported Media Type",
+  422: "Unprocessable Content",
   500: "Internal Server Error",
   503: "Service Unavailable",
 };

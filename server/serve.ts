@@ -1,5 +1,6 @@
 import { join, resolve } from "node:path";
 import { buildApp, projectRoot } from "./app.js";
+import { loopbackHosts } from "./host-check.js";
 import { StoreOpenError } from "./store/open-database.js";
 
 export interface ServeOptions {
@@ -21,13 +22,15 @@ export async function serve(options: ServeOptions): Promise<number | undefined> 
     console.error(`--port must be a whole number from 0 to 65535, not "${options.port}"`);
     return 2;
   }
-  if (options.host !== "127.0.0.1" && options.host !== "localhost" && options.host !== "::1") {
+  const loopback = options.host === "127.0.0.1" || options.host === "localhost" || options.host === "::1";
+  if (!loopback) {
     console.warn(`Warning: listening on ${options.host} makes the service reachable from other machines. It has no login; use only on a trusted network.`);
   }
   const dataDir = dataFolder(options.data);
   let app;
   try {
-    app = await buildApp({ dataDir });
+    // Reached under other names than the loopback ones, the Host header cannot be checked against a list.
+    app = await buildApp({ dataDir, warmThreads: true, allowedHosts: loopback ? loopbackHosts : "any" });
   } catch (error) {
     if (error instanceof StoreOpenError) {
       console.error(error.message);

@@ -1,13 +1,14 @@
 import type { FastifyInstance } from "fastify";
 import { z } from "zod";
 import { convertJob, grades, JobDocument, Material, materialFromGrade, prepareJob, PROGRAM, quantityOf, toDisplayUnits } from "../../core/index.js";
-import { runDesign } from "../design-service.js";
+import type { DesignThreads } from "../design-threads.js";
 import { ApiError } from "../errors.js";
 import type { Example } from "../examples.js";
-import { renderWorksheet, worksheetFileName } from "../pdf/worksheet.js";
+import { ResultCache } from "../result-cache.js";
 
 /** The JSON API: every route parses, calls core through the design service, and returns. */
-export async function apiRoutes(app: FastifyInstance, options: { examples: Example[] }) {
+export async function apiRoutes(app: FastifyInstance, options: { examples: Example[]; designs: DesignThreads; cache: ResultCache }) {
+  const { designs, cache } = options;
   // Each number carries its quantity kind ("length", "span", "force" …) so a client can label and convert it.
   const jobSchema = z.toJSONSchema(JobDocument, { io: "input", unrepresentable: "any", metadata: quantityOf });
 
@@ -31,7 +32,15 @@ export async function apiRoutes(app: FastifyInstance, options: { examples: Examp
     return grades.map((g) => ({ grade: g.id, name: g.name, family: g.family, material: toDisplayUnits(Material, materialFromGrade(g, basis), units) }));
   });
 
-  app.post("/api/designs", async (request) => runDesign(request.body).result);
+  app.post("/api/designs", async (request, reply) => {
+    const key = ResultCache.key("design", request.body);
+    let json = cache.get(key);
+    if (json === undefined) {
+      json = await designs.run({ kind: "result-json", input: request.body });
+      cache.set(key, json);
+    }
+    return reply.type("application/json; charset=utf-8").send(json);
+  });
 
   app.post<{ Querystring: { to?: string } }>("/api/conversions", async (request) => {
     const to = request.query.to;
@@ -42,11 +51,10 @@ export async function apiRoutes(app: FastifyInstance, options: { examples: Examp
   });
 
   app.post("/api/worksheets", async (request, reply) => {
-    const run = runDesign(request.body);
-    const pdf = await renderWorksheet(run.job, run.result);
+    const sheet = await designs.run({ kind: "worksheet", input: request.body });
     return reply
       .type("application/pdf")
-      .header("content-disposition", `attachment; filename="${worksheetFileName(run.job)}"`)
-      .send(pdf);
+      .header("content-disposition", `attachment; filename="${sheet.fileName}"`)
+      .send(Buffer.from(sheet.pdf.buffer, sheet.pdf.byteOffset, sheet.pdf.byteLength));
   });
 }

@@ -1,9 +1,10 @@
 import type { FastifyInstance } from "fastify";
 import type { z } from "zod";
 import { issuesFromZod, JobDocument, toDisplayUnits, type UnitSystem } from "../../core/index.js";
-import { designInUnits } from "../design-in-units.js";
+import type { DesignTask, TaskAnswer } from "../design-tasks.js";
+import type { DesignThreads } from "../design-threads.js";
 import { ApiError } from "../errors.js";
-import { renderWorksheet, today, worksheetFileName } from "../pdf/worksheet.js";
+import { today } from "../pdf/worksheet.js";
 import { inputChanges, resultChanges } from "../store/compare-revisions.js";
 import { JobStore, prefixIssues, type StoreOptions } from "../store/job-store.js";
 import { CompareQuery, NewMember, NewProject, SaveRevision } from "../store/store-schemas.js";
@@ -12,6 +13,8 @@ export interface StoreRoutesOptions {
   /** Folder holding the store's database (created if needed). */
   dataDir: string;
   store?: StoreOptions;
+  /** Where designs and worksheets run. */
+  designs: DesignThreads;
 }
 
 /** A project file may be far larger than one job. */
@@ -48,9 +51,9 @@ function unitsQuery(value: string | undefined): UnitSystem | undefined {
 }
 
 /** A stored job that no longer validates (a later program changed the schema) is reported with its revision in the path. */
-function designStored(job: unknown, at: string, units?: UnitSystem) {
+async function designStored<T extends DesignTask>(designs: DesignThreads, task: T, at: string): Promise<TaskAnswer<T>> {
   try {
-    return designInUnits(job, units);
+    return await designs.run(task);
   } catch (error) {
     if (error instanceof ApiError && error.code === "ERR_INPUT_INVALID") {
       throw new ApiError("ERR_INPUT_INVALID", "This stored revision does not validate with this version of the program; open it, correct the fields listed and save a new revision.", prefixIssues(error.issues, at));
@@ -69,6 +72,7 @@ type R = { Params: { project: string; member: string; revision: string } };
  */
 export async function storeRoutes(app: FastifyInstance, options: StoreRoutesOptions) {
   const store = JobStore.open(options.dataDir, options.store);
+  const { designs } = options;
   app.addHook("onClose", async () => store.close());
 
   app.get("/api/store", async () => store.info());
@@ -102,9 +106,10 @@ export async function storeRoutes(app: FastifyInstance, options: StoreRoutesOpti
     store.revision(projectId(request.params.project), memberId(request.params.member), revisionNumber(request.params.revision)),
   );
 
-  app.get<R & { Querystring: { units?: string } }>("/api/projects/:project/members/:member/revisions/:revision/result", async (request) => {
+  app.get<R & { Querystring: { units?: string } }>("/api/projects/:project/members/:member/revisions/:revision/result", async (request, reply) => {
     const stored = store.revision(projectId(request.params.project), memberId(request.params.member), revisionNumber(request.params.revision));
-    return designStored(stored.job, "job", unitsQuery(request.query.units)).shown;
+    const json = await designStored(designs, { kind: "result-json", input: stored.job, units: unitsQuery(request.query.units) }, "job");
+    return reply.type("application/json; charset=utf-8").send(json);
   });
 
   app.get<M & { Querystring: Record<string, string> }>("/api/projects/:project/members/:member/compare", async (request) => {
@@ -113,8 +118,10 @@ export async function storeRoutes(app: FastifyInstance, options: StoreRoutesOpti
     const from = store.revision(p, m, query.from);
     const to = store.revision(p, m, query.to);
     const units = query.units ?? to.job.units;
-    const a = designStored(from.job, "from.job", units);
-    const b = designStored(to.job, "to.job", units);
+    const [a, b] = await Promise.all([
+      designStored(designs, { kind: "result", input: from.job, units }, "from.job"),
+      designStored(designs, { kind: "result", input: to.job, units }, "to.job"),
+    ]);
     // Same units: the documents as saved. Otherwise both in the shown units, so a converted number is not a change.
     const inputs =
       from.job.units === units && to.job.units === units
@@ -137,10 +144,10 @@ export async function storeRoutes(app: FastifyInstance, options: StoreRoutesOpti
   app.post<R>("/api/projects/:project/members/:member/revisions/:revision/worksheets", async (request, reply) => {
     const [p, m, n] = [projectId(request.params.project), memberId(request.params.member), revisionNumber(request.params.revision)];
     const stored = store.revision(p, m, n);
-    const run = designStored(stored.job, "job");
-    const pdf = await renderWorksheet(run.job, run.result, { printDate: today() });
-    const fileName = worksheetFileName(run.job);
-    const { issue, warnings } = store.recordWorksheet(p, m, stored.revision, { fingerprint: run.result.fingerprint!, fileName, pdf, titleRevision: run.job.member.revision });
+    const sheet = await designStored(designs, { kind: "worksheet", input: stored.job, printDate: today() }, "job");
+    const pdf = Buffer.from(sheet.pdf.buffer, sheet.pdf.byteOffset, sheet.pdf.byteLength);
+    const fileName = sheet.fileName;
+    const { issue, warnings } = store.recordWorksheet(p, m, stored.revision, { fingerprint: sheet.fingerprint, fileName, pdf, titleRevision: sheet.titleRevision });
     if (warnings.length > 0) reply.header("x-stitchplan-warning", encodeURIComponent(warnings.join(" ")));
     return reply
       .status(201)

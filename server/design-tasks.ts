@@ -1,0 +1,60 @@
+import type { DesignResult, JobDocument, JobIssue, UnitSystem } from "../core/index.js";
+import { designInUnits } from "./design-in-units.js";
+import { ApiError, type ErrorCode } from "./errors.js";
+import { renderWorksheet, worksheetFileName } from "./pdf/worksheet.js";
+
+/** Work the design threads do: everything that may take long runs there, never on the thread that answers HTTP. */
+export type DesignTask =
+  /** The result as JSON text, in `units` or the job's own. */
+  | { kind: "result-json"; input: unknown; units?: UnitSystem | undefined }
+  /** The job, the job in core units and the result in the job's and in `units`, as objects. */
+  | { kind: "result"; input: unknown; units?: UnitSystem | undefined }
+  /** The PDF worksheet, with what its headers need. */
+  | { kind: "worksheet"; input: unknown; printDate?: string | undefined };
+
+export interface ResultRun {
+  job: JobDocument;
+  core: JobDocument;
+  result: DesignResult;
+  shown: DesignResult;
+}
+
+export interface WorksheetRun {
+  pdf: Uint8Array;
+  fileName: string;
+  fingerprint: string;
+  titleRevision: string;
+}
+
+export type TaskAnswer<T extends DesignTask> = T extends { kind: "result-json" } ? string : T extends { kind: "result" } ? ResultRun : WorksheetRun;
+
+/** An error as it crosses between threads. */
+export interface WireError {
+  code: ErrorCode;
+  message: string;
+  issues: JobIssue[];
+}
+
+export async function performTask(task: DesignTask): Promise<string | ResultRun | WorksheetRun> {
+  switch (task.kind) {
+    case "result-json":
+      return JSON.stringify(designInUnits(task.input, task.units).shown);
+    case "result": {
+      const { job, core, result, shown } = designInUnits(task.input, task.units);
+      return { job, core, result, shown };
+    }
+    case "worksheet": {
+      const run = designInUnits(task.input);
+      const pdf = await renderWorksheet(run.job, run.result, task.printDate ? { printDate: task.printDate } : {});
+      // A copy owns its memory, so it can be moved to the other thread instead of copied again.
+      return { pdf: new Uint8Array(pdf), fileName: worksheetFileName(run.job), fingerprint: run.result.fingerprint!, titleRevision: run.job.member.revision };
+    }
+  }
+}
+
+export function toWire(error: unknown): WireError {
+  if (error instanceof ApiError) return { code: error.code, message: error.message, issues: error.issues };
+  return { code: "ERR_INTERNAL", message: `The server failed while computing (${error instanceof Error ? error.message : String(error)}); please report the job. Nothing was stored or changed.`, issues: [] };
+}
+
+export const fromWire = (wire: WireError) => new ApiError(wire.code, wire.message, wire.issues);
