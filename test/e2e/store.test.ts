@@ -78,6 +78,9 @@ describe("the job store on the page", () => {
     await expect(inputs.textContent()).resolves.toMatch(/beam\.spans\[0\]changed4\.8 m5\.4 m/);
     await expect(comparison.textContent()).resolves.toMatch(/Joint bottom: changed/);
     await page.screenshot({ path: join(shots, "store-1280.png"), fullPage: true });
+    await page.setViewportSize({ width: 800, height: 1000 });
+    await page.screenshot({ path: join(shots, "store-800.png"), fullPage: true });
+    await page.setViewportSize({ width: 1280, height: 900 });
   });
 
   test("issues a worksheet, records it, and finds it by the fingerprint printed on it", async () => {

@@ -1,4 +1,4 @@
-import { positionsCsv, scheduleCsv } from "../../core/export/schedule-csv.js";
+import { positionsCsv, scheduleCsv, weldsCsv } from "../../core/export/schedule-csv.js";
 import { requestWorksheet } from "./api.js";
 import type { DesignSession } from "./design-session.js";
 import { jobFileName, saveBlob } from "./file-transfer.js";
@@ -11,14 +11,19 @@ const stem = (job: Record<string, unknown>) => jobFileName(job).replace(/\.stitc
  * The schedule or the connector positions as CSV, from the result that matches the input now
  * entered; a failing member is exported with a warning in red, a stale result not at all.
  */
-export function downloadCsv(session: DesignSession, what: "schedule" | "positions", say: Say): void {
+export function downloadCsv(session: DesignSession, what: "schedule" | "positions" | "welds", say: Say): void {
   const result = session.result;
   if (!result || !session.resultsCurrent) return say(`No ${what} CSV: the results shown are not from the input now entered. Fix the fields marked in red (or wait for the update) and try again.`, "problem");
-  if (result.schedules.length === 0) return say(`No ${what} CSV: no joint of this member is fastened with discrete connectors (glue lines and welds have no rows to list).`, "problem");
-  const text = what === "schedule" ? scheduleCsv(result) : positionsCsv(result);
+  const text = what === "welds" ? weldsCsv(result) : result.schedules.length ? (what === "schedule" ? scheduleCsv(result) : positionsCsv(result)) : null;
+  if (text === null) {
+    return say(
+      what === "welds" ? "No welds CSV: no joint of this member is welded." : `No ${what} CSV: no joint of this member is fastened with discrete connectors (glue lines and welds have no rows to list${result.welds.length ? "; welds have their own CSV" : ""}).`,
+      "problem",
+    );
+  }
   const fileName = `${stem(session.state.job)}.${what}.csv`;
   saveBlob(new Blob([text], { type: "text/csv;charset=utf-8" }), fileName);
-  if (!result.status.passes) say(`Downloaded ${fileName}. This member does NOT pass every check: the schedule in it must not be built as it stands.`, "problem");
+  if (!result.status.passes) say(`Downloaded ${fileName}. This member does NOT pass every check: what it lists must not be built as it stands.`, "problem");
   else say(`Downloaded ${fileName} (units named in its header). For review by the engineer of record before use.`);
 }
 

@@ -63,6 +63,7 @@ async function boot(): Promise<void> {
   const showView = (view: "member" | "store") => {
     workspace.hidden = view === "store";
     storeRoot.hidden = view !== "store";
+    document.body.dataset.view = view;
     bar.setView(view);
     if (view === "store") {
       if (!storeView) {

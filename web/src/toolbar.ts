@@ -104,6 +104,7 @@ export function toolbar(options: ToolbarOptions): { element: HTMLElement; say: S
     menuItem("Worksheet (PDF)", () => void downloadWorksheet(session, say), { hint: "for the engineer of record" }),
     menuItem("Schedule (CSV)", () => downloadCsv(session, "schedule", say), { hint: "one row per zone per joint" }),
     menuItem("Connector positions (CSV)", () => downloadCsv(session, "positions", say), { hint: "joint, row, x" }),
+    menuItem("Welds (CSV)", () => downloadCsv(session, "welds", say), { hint: "zones of fillet weld per joint" }),
   ]);
 
   const viewButton = el("button", { className: "view-switch", text: "Projects and revisions", attrs: { type: "button", "aria-pressed": "false" } });

@@ -56,7 +56,7 @@ export function unitsSwitch(session: DesignSession, schema: JobSchema, say: Say)
     if (answer.kind === "unreachable") return say(`${answer.message} The units were not changed.`, "problem");
     // The service converts valid jobs only: convert the draft here, from the quantity kinds in the schema.
     if (!schema.known) return say("The units could not be changed: the job has problems and the service's schema is not available. Fix the marked fields first.", "problem");
-    session.replaceJob(convertDraft(previous, schema, to));
+    session.replaceJob(convertDraft(previous, schema, to), { keepResults: true });
     say(`Converted to ${names[to]} on this page (the job has problems, so the service could not convert it); numbers were converted from their kinds, and text in a number field is left as typed.`, "caution");
   }
 

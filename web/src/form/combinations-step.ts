@@ -23,7 +23,7 @@ export function combinationsStep(ctx: FormContext, number: number): HTMLElement 
     whenAbsent: "unfactored",
     onChosen: (value) => {
       state.set("combinations.set", value);
-      if (value === "custom" && state.list("combinations.custom").length === 0) state.set("combinations.custom", [{ id: "C1", name: "", factors: { dead: 1, live: 1 } }]);
+      if (value === "custom" && state.list("combinations.custom").length === 0) state.set("combinations.custom", startingCombinations(ctx));
       ctx.rerender("combinations.set");
     },
   });
@@ -99,4 +99,18 @@ function psiFields(ctx: FormContext): HTMLElement {
     el("h3", { text: "ψ0 by category (empty: the defaults stated with the results)" }),
     fieldGrid(variable.map((c) => field(ctx, `combinations.psi0.${c}`, `ψ0, ${c.replace("-", " ")}`, numberControl(ctx, `combinations.psi0.${c}`, `psi0 ${c}`, { placeholder: "default" })))),
   ]);
+}
+
+/** The combinations of the set the job had (from its last result), as own factor tables to edit; else dead + live. */
+function startingCombinations(ctx: FormContext): Record<string, unknown>[] {
+  // A live-load pattern is its combination placed span by span: one table for the combination.
+  const byBase = new Map<string, NonNullable<ReturnType<FormContext["result"]>>["beam"]["combinations"][number]>();
+  for (const c of ctx.result()?.beam.combinations ?? []) if (!byBase.has(c.base ?? c.id)) byBase.set(c.base ?? c.id, c);
+  if (byBase.size === 0) return [{ id: "C1", name: "", factors: { dead: 1, live: 1 } }];
+  return [...byBase].map(([id, c]) => ({
+    id: id.replace(/[^A-Za-z0-9_.-]/g, "-"),
+    name: c.name,
+    factors: Object.fromEntries(Object.entries(c.factors).filter(([, f]) => f !== 0)),
+    ...(durations.includes(c.duration) ? { duration: c.duration } : {}),
+  }));
 }

@@ -77,7 +77,11 @@ function connectorCard(ctx: FormContext, connector: Item, i: number, offered: st
     for (const f of fields ?? []) if (now[f.key] !== undefined && !connectorFieldApplies(kind, f.key, { ...now, [f.key]: undefined })) state.set(at(f.key), undefined);
     ctx.rerender(at(key));
   };
-  const rest = (fields ?? []).filter((f) => !shownFirst.has(f.key) && connectorFieldApplies(kind, f.key, connector));
+  // Flags and groups take a whole line: after the fields that sit side by side.
+  const wholeLine = (f: { kind: string }) => f.kind === "boolean" || f.kind === "group";
+  const rest = (fields ?? [])
+    .filter((f) => !shownFirst.has(f.key) && connectorFieldApplies(kind, f.key, connector))
+    .sort((a, b) => Number(wholeLine(a)) - Number(wholeLine(b)));
   const main = schemaFields(ctx, base, rest.filter((f) => !seldomFields.has(f.key)), { owner, scope: kind, onChanged: redraw });
   const seldom = schemaFields(ctx, base, rest.filter((f) => seldomFields.has(f.key)), { owner, scope: kind, onChanged: redraw });
   const given = rest.filter((f) => seldomFields.has(f.key) && connector[f.key] !== undefined).length;

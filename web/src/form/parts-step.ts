@@ -1,5 +1,8 @@
 import { el } from "../dom.js";
-import { addButton, recordTable, rowButton, selectControl, textControl, type FormContext } from "./controls.js";
+import { unitLabel } from "../../../core/units/quantity.js";
+import { formatNumber } from "../../../core/units/format.js";
+import { addButton, numberControl, recordTable, rowButton, selectControl, textControl, type FormContext } from "./controls.js";
+import { fold } from "./fold.js";
 import { placementCell, shapeCell } from "./part-shape.js";
 import { renameReferences, uniqueId } from "./references.js";
 import { shapeNames, shapePreset } from "./shape-presets.js";
@@ -66,6 +69,7 @@ export function partsStep(ctx: FormContext, number: number): HTMLElement {
         },
       },
     ],
+    extra: (i, notes) => (ctx.schema.has("parts[].extent") ? extentFold(ctx, i, name(i), notes) : null),
     actions: (i) => [
       rowButton("Copy", `Copy ${name(i)} (the copy sits on top of it)`, () => {
         const copy = structuredClone(state.list("parts")[i]) as Item;
@@ -139,4 +143,27 @@ function idControl(ctx: FormContext, i: number): HTMLInputElement {
     });
   });
   return input;
+}
+
+/** Where a part runs along the member (a cover plate over the middle): the whole member unless from or to is given. */
+function extentFold(ctx: FormContext, i: number, partName: string, notes: HTMLElement): HTMLElement {
+  const span = unitLabel("span", ctx.state.units);
+  const at = (key: string) => `parts[${i}].extent.${key}`;
+  const summary = () => {
+    const from = ctx.state.read(at("from"));
+    const to = ctx.state.read(at("to"));
+    const given = typeof from === "number" || typeof to === "number";
+    return given ? `Runs from ${typeof from === "number" ? formatNumber(from) : "the left end"} to ${typeof to === "number" ? formatNumber(to) : "the right end"} ${span}` : "Runs the whole length of the member";
+  };
+  const input = (key: "from" | "to", label: string, placeholder: string) => {
+    const control = numberControl(ctx, at(key), `${partName} runs ${key} (${span})`, { placeholder });
+    control.setAttribute("aria-label", `${partName} runs ${key} (${span})`);
+    ctx.registry.register({ path: at(key), label: `${partName} · runs ${key}`, control, marker: control, host: notes, prefix: `runs ${key}`, numeric: true });
+    return el("label", { className: "inline-field" }, [el("span", { text: `${label} (${span})` }), control]);
+  };
+  const body = el("div", { className: "inline-fields" }, [input("from", "from", "left end"), input("to", "to", "right end")]);
+  ctx.registry.register({ path: `parts[${i}].extent`, label: `${partName} · along the member`, marker: body, host: notes, prefix: "along the member" });
+  const folded = fold(`parts[${i}].extent`, summary(), [body]);
+  body.addEventListener("input", () => (folded.querySelector("summary")!.textContent = summary()));
+  return el("div", { className: "row-helpers" }, [folded]);
 }

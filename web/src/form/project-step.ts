@@ -16,8 +16,8 @@ export function projectStep(ctx: FormContext, number: number): HTMLElement {
   ]);
   ctx.registry.register({ path: "units", label: "Units", marker: unitsBox, host: unitsBox });
   const basis = selectControl(ctx, "basis", "Design basis", [
-    { value: "allowable", label: "allowable: service loads against allowable values" },
-    { value: "factored", label: "factored: factored loads against design values" },
+    { value: "allowable", label: "allowable (ASD)" },
+    { value: "factored", label: "factored (LRFD, limit states)" },
   ]);
   return step(number, "Project and member", null, [
     fieldGrid([
@@ -32,6 +32,6 @@ export function projectStep(ctx: FormContext, number: number): HTMLElement {
       field(ctx, "member.date", "Date", textControl(ctx, "member.date", "Date", { type: "date", removeWhenEmpty: true })),
       text("member.description", "Description", 200, true),
     ]),
-    fieldGrid([field(ctx, "basis", "Design basis", basis, { wide: true, hint: "Loads, resistances and strengths are all compared on this basis." }), unitsBox]),
+    fieldGrid([field(ctx, "basis", "Design basis", basis, { wide: true, hint: "Allowable: service loads against allowable values. Factored: factored loads against design values. Loads, resistances and strengths are all compared on this basis." }), unitsBox]),
   ]);
 }

@@ -8,6 +8,7 @@ import { notes } from "./notes-view.js";
 import { scheduleBlock } from "./schedule-view.js";
 import { SectionView } from "./section-view.js";
 import { statusBanner } from "./status-banner.js";
+import { terminationsBlock } from "./terminations-view.js";
 import { weldBlock } from "./welds-view.js";
 
 /** How the results shown relate to the input in the form. */
@@ -193,6 +194,7 @@ export class ResultsView {
       checked ? el("p", { className: "hint", text: "Check mode: the zones below are the ones entered in step 8, checked against the shear flow; nothing was laid out by stitchplan." }) : null,
       ...result.schedules.map((s) => scheduleBlock(result, s, width)),
       ...result.welds.map((w) => weldBlock(result, w, width)),
+      terminationsBlock(result),
       fastened ? null : el("p", { className: "hint", text: "No joint is fastened with discrete connectors or welds." }),
     ]);
     const bond = bondLines(result, width);

@@ -63,10 +63,13 @@ export function scheduleBlock(result: DesignResult, schedule: Schedule, width: n
       ...term("Connectors", `${schedule.count} in all (every line of the joint)`),
       ...term("Lower bound", `${formatNumber(e.lowerBound, 4)} (∫ of demand over resistance along the member: no schedule can use fewer)`),
       ...term("Count ÷ lower bound", e.countOverLowerBound === null ? "—" : formatRatio(e.countOverLowerBound)),
-      ...term(
-        "One uniform spacing",
-        e.uniformSpacing === null || e.uniformCount === null ? "none within the limits carries the load" : `${shown(result, e.uniformSpacing, "length")} throughout, ${e.uniformCount} connectors (${e.uniformOverCount === null ? "—" : formatRatio(e.uniformOverCount)} × this schedule)`,
-      ),
+      // How a single spacing would compare is a question for a schedule being designed, not one given.
+      ...(checked
+        ? []
+        : term(
+            "One uniform spacing",
+            e.uniformSpacing === null || e.uniformCount === null ? "none within the limits carries the load" : `${shown(result, e.uniformSpacing, "length")} throughout, ${e.uniformCount} connectors (${e.uniformOverCount === null ? "—" : formatRatio(e.uniformOverCount)} × this schedule)`,
+          )),
       ...term("Resistance per connector", resistance),
       ...term("Limits", limits.join(", ")),
     ]),

@@ -1,0 +1,58 @@
+import type { DesignResult } from "../../../core/schema/result.js";
+import { formatNumber } from "../../../core/units/format.js";
+import { el } from "../dom.js";
+import { header, table, utilisation } from "./quantities.js";
+
+/** The end of a part that stops short of the member's ends (a cover plate), as the service reports it. */
+interface Termination {
+  joint: string;
+  part: string;
+  end: "left" | "right";
+  at: number;
+  cutoff: number | null;
+  force: number;
+  available: number;
+  required: number | null;
+  capacity: number;
+  connectors: string;
+  utilisation: number;
+  passes: boolean;
+  reference: string;
+  note: string;
+}
+
+/** Read without assuming the service reports them: older services do not. */
+const terminationsOf = (result: DesignResult): Termination[] => (result as DesignResult & { terminations?: Termination[] }).terminations ?? [];
+
+/** Where a part stops short of the member's ends: the force it must take up by then, and what the connectors there develop. */
+export function terminationsBlock(result: DesignResult): HTMLElement | null {
+  const ends = terminationsOf(result);
+  if (ends.length === 0) return null;
+  const u = result.unitLabels;
+  return el("div", { className: "terminations" }, [
+    el("h3", { text: "Ends of parts that stop short of the member's ends" }),
+    table(
+      "Part ends",
+      ["Part end", header("At", u.span), header("Cut-off", u.span), header("Force", u.force), header("Length available / needed", u.span), header("Developed", u.force), "Utilisation"],
+      ends.map((t) => ({
+        className: t.passes ? "" : "fails",
+        cells: [
+          `${t.part}, ${t.end}`,
+          formatNumber(t.at),
+          t.cutoff === null ? "—" : formatNumber(t.cutoff),
+          formatNumber(t.force),
+          `${formatNumber(t.available)}${t.required === null ? "" : ` / ${formatNumber(t.required)}`}`,
+          formatNumber(t.capacity),
+          utilisation(t.utilisation, t.passes),
+        ],
+      })),
+      { numeric: [1, 2, 3, 4, 5], captionHidden: true },
+    ),
+    el(
+      "ul",
+      { className: "termination-notes" },
+      ends.map((t) => el("li", { className: t.passes ? "" : "fails-text", text: `${t.part}, ${t.end} end (joint ${t.joint}): ${t.connectors}. ${t.note ? `${t.note} ` : ""}(${t.reference})` })),
+    ),
+    el("p", { className: "hint", text: "The part's force at the cut-off is M·Q/I of the full section; the connectors between the cut-off and the part's end must develop it." }),
+  ]);
+}
