@@ -148,8 +148,7 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
     };
   }
 
-  const design = designSchedule({
-    ...problem,
+  const settings = {
     minSpacing,
     maxSpacing,
     module,
@@ -159,7 +158,8 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
     maxZones: job.spacing.maxZonesPerSpan * beam.spans.length,
     symmetric: job.spacing.symmetric,
     system: job.units,
-  });
+  };
+  const design = designedAlike(beam, actions, problem, settings, () => designSchedule({ ...problem, ...settings }));
   const worst = design.rowChecks.reduce((w, r) => (r.utilisation > w.utilisation ? r : w));
   const peakShear = Math.max(...actions.map((a) => maxAbsShear(a, 0, beam.length).value));
   const options = design.infeasible
@@ -188,6 +188,30 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
       requiredSpacing: requiredAt(stations, design.demand),
     },
   };
+}
+
+/**
+ * Joints that see the same actions, flow, resistances and limits (the top and bottom flanges of a
+ * symmetric I or box) get the same schedule: design it once per member analysis.
+ */
+const designs = new WeakMap<BeamAnalysis, Map<string, ReturnType<typeof designSchedule>>>();
+function designedAlike(
+  beam: BeamAnalysis,
+  actions: MemberActions[],
+  problem: { flowFactor: number; lines: number; rows: number; combinations: { id: string; resistance: number }[] },
+  settings: object,
+  design: () => ReturnType<typeof designSchedule>,
+): ReturnType<typeof designSchedule> {
+  // Only the member's own actions are shared between joints; a demand given in their place is not cached.
+  if (actions.some((a, i) => a !== beam.results[i]?.actions) || problem.combinations.length !== beam.results.length) return design();
+  const key = JSON.stringify([problem.flowFactor, problem.lines, problem.rows, problem.combinations.map((c) => c.resistance), settings]);
+  let cache = designs.get(beam);
+  if (!cache) designs.set(beam, (cache = new Map()));
+  const found = cache.get(key);
+  if (found) return found;
+  const made = design();
+  cache.set(key, made);
+  return made;
 }
 
 function requiredAt(stations: Station[], demand: ReturnType<typeof demandCurve>): (number | null)[] {

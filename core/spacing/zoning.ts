@@ -142,19 +142,30 @@ export function evaluateZone(p: ZoningProblem, a: number, b: number, first: bool
 function zoneSpacing(p: ZoningProblem, a: number, b: number, first: boolean, last: boolean): number | undefined {
   const L = p.length;
   const e = p.endDistance;
-  // Start from the largest spacing the zone's own demand allows; its rows' reach into the neighbours is checked below.
-  const peak = p.demand(a, b);
-  let s = peak > 0 ? largestAtMost(p.spacings, 1 / peak) : p.spacings[p.spacings.length - 1];
-  while (s !== undefined) {
+  const carries = (s: number) => {
     const reachLeft = first ? 0 : a - s / 2;
     const reachRight = last ? (p.mirrored ? b : L) : b + s / 2;
-    let ok = s * p.demand(reachLeft, reachRight) <= 1 + 1e-12;
-    if (ok && first && e > s / 2) ok = (e + s / 2) * p.demand(0, e + s / 2) <= 1 + 1e-12;
-    if (ok && last && !p.mirrored && e > s / 2) ok = (e + s / 2) * p.demand(L - e - s / 2, L) <= 1 + 1e-12;
-    if (ok) return s;
-    s = largestAtMost(p.spacings, s * (1 - 1e-9));
+    if (s * p.demand(reachLeft, reachRight) > 1 + 1e-12) return false;
+    if (first && e > s / 2 && (e + s / 2) * p.demand(0, e + s / 2) > 1 + 1e-12) return false;
+    if (last && !p.mirrored && e > s / 2 && (e + s / 2) * p.demand(L - e - s / 2, L) > 1 + 1e-12) return false;
+    return true;
+  };
+  // Start from the largest spacing the zone's own demand allows; the rows' reach into the neighbours only
+  // tightens as s grows, so the largest spacing that carries its demand is found by bisection.
+  const peak = p.demand(a, b);
+  const top = peak > 0 ? largestAtMost(p.spacings, 1 / peak) : p.spacings[p.spacings.length - 1];
+  if (top === undefined) return undefined;
+  let found = -1;
+  let left = 0;
+  let right = p.spacings.indexOf(top);
+  while (left <= right) {
+    const mid = (left + right) >> 1;
+    if (carries(p.spacings[mid]!)) {
+      found = mid;
+      left = mid + 1;
+    } else right = mid - 1;
   }
-  return undefined;
+  return found >= 0 ? p.spacings[found] : undefined;
 }
 
 /** Candidate zone boundaries: multiples of a round step from the left end, and the end itself. */

@@ -3,6 +3,7 @@ import { quantityOf } from "../schema/quantity.js";
 import { fromCore, toCore, type Quantity, type UnitSystem } from "./quantity.js";
 
 type Scale = (value: number, quantity: Quantity) => number;
+type Converter = (value: unknown, scale: Scale) => unknown;
 
 interface Def {
   type: string;
@@ -20,66 +21,115 @@ interface Def {
 const defOf = (schema: z.ZodType): Def => (schema as unknown as { _zod: { def: Def } })._zod.def;
 
 /**
- * Walks a parsed value alongside its schema and rescales every number whose schema
- * carries a quantity kind. Values are assumed valid for the schema (parse first).
+ * Walks a parsed value alongside its schema and rescales every number whose schema carries a
+ * quantity kind. Values are assumed valid for the schema (parse first). The walk is compiled once
+ * per schema into a converter, so converting a large result costs little more than copying it.
  */
 export function rescale<T>(schema: z.ZodType, value: T, scale: Scale): T {
-  return walk(schema, value, scale) as T;
+  return converterOf(schema)(value, scale) as T;
 }
 
-function walk(schema: z.ZodType, value: unknown, scale: Scale): unknown {
-  if (value === undefined || value === null) return value;
+const compiled = new WeakMap<z.ZodType, Converter>();
+const same: Converter = (v) => v;
+
+function converterOf(schema: z.ZodType): Converter {
+  let c = compiled.get(schema);
+  if (!c) {
+    // Set a forwarding entry first so recursive (lazy) schemas resolve to the finished converter.
+    let finished: Converter = same;
+    compiled.set(schema, (v, s) => finished(v, s));
+    finished = compile(schema);
+    compiled.set(schema, finished);
+    c = finished;
+  }
+  return c;
+}
+
+const absent = (v: unknown) => v === undefined || v === null;
+
+function compile(schema: z.ZodType): Converter {
   const meta = quantityOf.get(schema);
-  if (meta && typeof value === "number") return scale(value, meta.quantity);
+  if (meta) {
+    const q = meta.quantity;
+    return (v, s) => (typeof v === "number" ? s(v, q) : v);
+  }
   const def = defOf(schema);
   switch (def.type) {
     case "object": {
-      const out: Record<string, unknown> = {};
-      for (const [key, v] of Object.entries(value as Record<string, unknown>)) {
-        const field = def.shape?.[key];
-        out[key] = field ? walk(field, v, scale) : v;
-      }
-      return out;
+      const fields = Object.entries(def.shape ?? {})
+        .map(([key, field]) => [key, converterOf(field)] as const)
+        .filter(([, c]) => c !== same);
+      if (fields.length === 0) return same;
+      return (v, s) => {
+        if (absent(v)) return v;
+        const out: Record<string, unknown> = { ...(v as Record<string, unknown>) };
+        for (const [key, c] of fields) if (key in out) out[key] = c(out[key], s);
+        return out;
+      };
     }
-    case "array":
-      return (value as unknown[]).map((v) => walk(def.element!, v, scale));
-    case "tuple":
-      return (value as unknown[]).map((v, i) => (def.items?.[i] ? walk(def.items[i]!, v, scale) : v));
+    case "array": {
+      const element = def.element!;
+      const elementMeta = quantityOf.get(element);
+      if (elementMeta) {
+        const q = elementMeta.quantity;
+        return (v, s) => (absent(v) ? v : (v as unknown[]).map((x) => (typeof x === "number" ? s(x, q) : x)));
+      }
+      const c = converterOf(element);
+      if (c === same) return same;
+      return (v, s) => (absent(v) ? v : (v as unknown[]).map((x) => c(x, s)));
+    }
+    case "tuple": {
+      const items = (def.items ?? []).map(converterOf);
+      if (items.every((c) => c === same)) return same;
+      return (v, s) => (absent(v) ? v : (v as unknown[]).map((x, i) => (items[i] ? items[i]!(x, s) : x)));
+    }
     case "record": {
-      const out: Record<string, unknown> = {};
-      for (const [key, v] of Object.entries(value as Record<string, unknown>)) out[key] = walk(def.valueType!, v, scale);
-      return out;
+      const c = converterOf(def.valueType!);
+      if (c === same) return same;
+      return (v, s) => {
+        if (absent(v)) return v;
+        const out: Record<string, unknown> = {};
+        for (const [key, x] of Object.entries(v as Record<string, unknown>)) out[key] = c(x, s);
+        return out;
+      };
     }
     case "optional":
     case "nullable":
     case "default":
     case "prefault":
     case "readonly":
-    case "catch":
-      return walk(def.innerType!, value, scale);
+    case "catch": {
+      const c = converterOf(def.innerType!);
+      return c === same ? same : (v, s) => (absent(v) ? v : c(v, s));
+    }
     case "pipe":
-      return walk(def.in!, value, scale);
+      return converterOf(def.in!);
     case "lazy":
-      return walk(def.getter!(), value, scale);
+      return (v, s) => converterOf(def.getter!())(v, s);
     case "union": {
-      const option = pickOption(def, value);
-      return option ? walk(option, value, scale) : value;
+      const options = def.options ?? [];
+      const converters = options.map(converterOf);
+      if (converters.every((c) => c === same)) return same;
+      if (def.discriminator) {
+        const key = def.discriminator;
+        return (v, s) => {
+          if (absent(v) || typeof v !== "object") return v;
+          const tag = (v as Record<string, unknown>)[key];
+          const i = options.findIndex((o) => {
+            const field = defOf(o).shape?.[key];
+            return field !== undefined && field.safeParse(tag).success;
+          });
+          return i >= 0 ? converters[i]!(v, s) : v;
+        };
+      }
+      return (v, s) => {
+        const i = options.findIndex((o) => o.safeParse(v).success);
+        return i >= 0 ? converters[i]!(v, s) : v;
+      };
     }
     default:
-      return value;
+      return same;
   }
-}
-
-function pickOption(def: Def, value: unknown): z.ZodType | undefined {
-  const options = def.options ?? [];
-  if (def.discriminator && typeof value === "object") {
-    const tag = (value as Record<string, unknown>)[def.discriminator];
-    return options.find((o) => {
-      const field = defOf(o).shape?.[def.discriminator!];
-      return field !== undefined && (field as z.ZodType).safeParse(tag).success;
-    });
-  }
-  return options.find((o) => o.safeParse(value).success);
 }
 
 /** A document written in `system` → the same document in core units. */
@@ -89,8 +139,18 @@ export function toCoreUnits<T>(schema: z.ZodType, value: T, system: UnitSystem):
 
 /** A document in core units → the same document in `system`, rounded to 12 significant figures to drop conversion noise. */
 export function toDisplayUnits<T>(schema: z.ZodType, value: T, system: UnitSystem): T {
-  return rescale(schema, value, (v, q) => {
-    const out = fromCore(v, q, system);
-    return out === 0 || !Number.isFinite(out) ? out : Number(out.toPrecision(12));
-  });
+  return rescale(schema, value, (v, q) => roundSignificant(fromCore(v, q, system), 12));
+}
+
+const POWERS = Array.from({ length: 45 }, (_, i) => 10 ** (i - 22));
+
+/** x rounded to `digits` significant figures, without going through a string. */
+export function roundSignificant(x: number, digits: number): number {
+  if (x === 0 || !Number.isFinite(x)) return x;
+  const e = Math.floor(Math.log10(Math.abs(x)));
+  const k = digits - 1 - e;
+  // Beyond 10^22 powers of ten are not exact doubles: take the (slower) string route there.
+  if (k < -22 || k > 22) return Number(x.toPrecision(digits));
+  // Multiply and divide by exact powers of ten only, so the result is the double nearest the rounded decimal.
+  return k >= 0 ? Math.round(x * POWERS[k + 22]!) / POWERS[k + 22]! : Math.round(x / POWERS[22 - k]!) * POWERS[22 - k]!;
 }
