@@ -34,6 +34,10 @@ export async function startHarness(options: { store?: boolean; width?: number; h
   const page = await context.newPage();
   const errors: string[] = [];
   page.on("pageerror", (error) => errors.push(error.message));
+  // The server sends a strict Content Security Policy: anything the page does against it is an error.
+  page.on("console", (message) => {
+    if (message.type() === "error" && message.text().includes("Content Security Policy")) errors.push(message.text());
+  });
   return {
     app,
     browser,

@@ -1,4 +1,3 @@
-import { readFileSync } from "node:fs";
 import { join } from "node:path";
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
@@ -103,13 +102,6 @@ describe("the job page", () => {
     await page.goto(`${h.base}/`);
     await scheduleTable().waitFor();
     await expect(page.getByLabel("Span (m)").inputValue()).resolves.toBe("6");
-  });
-
-  test("the worksheet downloads as a PDF", async () => {
-    const [download] = await Promise.all([page.waitForEvent("download"), fromMenu(page, "Export", "Worksheet (PDF)")]);
-    expect(download.suggestedFilename()).toMatch(/\.pdf$/);
-    const bytes = readFileSync((await download.path())!);
-    expect(bytes.subarray(0, 4).toString("latin1")).toBe("%PDF");
   });
 
   test("on a tablet the results stack under the form", async () => {

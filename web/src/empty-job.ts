@@ -13,6 +13,6 @@ export const emptyJob = (units: UnitSystem = "si"): JobDraft => ({
   materials: [],
   parts: [],
   connectors: [],
-  fastening: { default: { connector: "", rows: 1 } },
+  fastening: { default: { rows: 1 } },
   beam: { spans: [], loads: [] },
 });

@@ -45,7 +45,7 @@ export function jointsStep(ctx: FormContext, number: number): HTMLElement {
   const box = step(number, "Joints", "Every face where parts touch is a joint plane; each joint holds the smaller side. Give the connector used at every joint, then any joint its own.", [
     el("h3", { text: "At every joint" }),
     fieldGrid([
-      field(ctx, "fastening.default.connector", "Connector", selectControl(ctx, "fastening.default.connector", "connector", connectorChoices(ctx)), { wide: true }),
+      field(ctx, "fastening.default.connector", "Connector used at every joint", selectControl(ctx, "fastening.default.connector", "connector", connectorChoices(ctx)), { wide: true }),
       field(ctx, "fastening.default.rows", "Side by side in a row", numberControl(ctx, "fastening.default.rows", "rows", { integer: true, placeholder: "1" }), { unit: "per row", hint: "On each contact line; fillets per line for a weld." }),
       field(ctx, "fastening.default.headSide", "Driven from", selectControl(ctx, "fastening.default.headSide", "driven from", headSides, { whenAbsent: "auto" }), {
         wide: true,

@@ -120,6 +120,7 @@ export class ResultsView {
       this.#notice.replaceChildren();
       return;
     }
+    if (!this.#result) this.#body.replaceChildren(el("p", { className: "hint", text: "Results appear here as soon as the input is complete and valid." }));
     const count = notice.issues.length;
     const headline =
       notice.freshness === "unreachable"
