@@ -41,7 +41,10 @@ export function scheduleSection(c: WorksheetContext, group: Schedule[]): void {
     .filter(Boolean)
     .join(" ");
   const check = s.mode === "check";
-  const flowCaption = `Shear flow q per joint line, ${name} (envelope of the combinations)`;
+  const sideLoad = result.joints.find((j) => j.id === s.joint)?.demand === "side-load";
+  const flowCaption = sideLoad
+    ? `Force passed across the interface per unit length and joint line, ${name} (envelope of the combinations)`
+    : `Shear flow q per joint line, ${name} (envelope of the combinations)`;
   const spacingCaption = `Spacing along ${name}: required by q, and the zones ${check ? "given" : "provided"}`;
   const given = check ? "This is the schedule given in the job, checked row by row here; it was not designed by this worksheet." : "";
   // The heading, the verdict and both diagrams read as one block: start a page rather than split them.

@@ -70,7 +70,9 @@ export function sectionPropertiesSection(c: WorksheetContext): void {
       { header: "Connector", weight: 1.4 },
     ],
     result.joints.map((j) => [
-      j.found ? { text: j.id, bold: true } : { text: j.id, bold: true, note: "not found in the section", colour: ink.fail },
+      j.found
+        ? { text: j.id, bold: true, note: j.extent ? `runs ${text.range(j.extent.from, j.extent.to)}` : undefined }
+        : { text: j.id, bold: true, note: "not found in the section", colour: ink.fail },
       partNames(result, j.held),
       j.lines.map((l) => `${l.between.join(" / ")}: ${l.orientation}, ${text.of(l.length, "length")}`).join("\n"),
       text.of(j.contactWidth, "length"),
@@ -79,6 +81,66 @@ export function sectionPropertiesSection(c: WorksheetContext): void {
       text.of(j.stressFactor, "perArea"),
       { text: j.connectorLabel, note: j.mechanism === "bond-line" ? "bond line" : `${j.rows} per row` },
     ]),
+  );
+  pliesTable(c);
+  stretchesTable(c);
+}
+
+/** A member whose section changes along it (a part that starts or stops): the section stretch by stretch. */
+function stretchesTable(c: WorksheetContext): void {
+  const { sheet, result, text } = c;
+  const stretches = result.stretches ?? [];
+  if (stretches.length === 0) return;
+  sheet.heading("Section along the member", 2, 60);
+  sheet.paragraph(
+    "Parts start or stop along this member, so the section changes: the stiffness analysis, the shear flow and the member checks use each stretch's own section. The properties above are those of the full section.",
+    { size: 8, colour: ink.faint },
+    3,
+  );
+  table(
+    sheet,
+    [
+      { header: "From – to", weight: 1.2 },
+      { header: "Parts present", weight: 2 },
+      { header: "Area", weight: 0.9, align: "right" },
+      { header: "Centroid ȳ above the lowest fibre", weight: 1.2, align: "right" },
+      { header: "I (transformed)", weight: 1, align: "right" },
+    ],
+    stretches.map((s) => [text.range(s.from, s.to), partNames(result, s.parts), text.of(s.area, "area"), text.of(s.centroidY - result.section.bounds.y0, "length"), text.of(s.secondMoment, "secondMoment")]),
+  );
+}
+
+/** Side-by-side plies: each ply's share of a load by E·I, and the share of a unit load each interface passes, by where the load arrives. */
+function pliesTable(c: WorksheetContext): void {
+  const { sheet, result } = c;
+  const m = result.multiPly;
+  if (!m) return;
+  sheet.heading("Side-by-side plies: load shares and what each interface passes", 2, 60);
+  sheet.paragraph(
+    "Plies of one depth deflect together, so each carries its E·I share of every load. A load that arrives on one face (or on top of plies of unequal stiffness) must be passed across the interfaces to the other plies: the fraction of a unit load each interface passes is below (positive from the left towards the right).",
+    { size: 8, colour: ink.faint },
+    3,
+  );
+  const share = (v: number) => numberText(Math.abs(v) < 1e-9 ? 0 : v, 3);
+  table(
+    sheet,
+    [
+      { header: "Ply", weight: 1.4 },
+      { header: "Share of each load (E·I)", weight: 1.2, align: "right" },
+    ],
+    m.plies.map((p) => [partNames(result, [p.part]), share(p.share)]),
+    { width: sheet.width * 0.5 },
+  );
+  table(
+    sheet,
+    [
+      { header: "Interface between", weight: 1.6 },
+      { header: "Joint", weight: 0.8 },
+      { header: "Load on the left face", weight: 1, align: "right" },
+      { header: "Load on the right face", weight: 1, align: "right" },
+      { header: "Load on top", weight: 0.9, align: "right" },
+    ],
+    m.interfaces.map((i) => [partNames(result, [...i.between]), i.joint ?? "—", share(i.fromLeftFace), share(i.fromRightFace), share(i.fromTop)]),
   );
 }
 
