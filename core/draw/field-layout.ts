@@ -33,8 +33,10 @@ export interface FieldJoint {
   zones: FieldZone[];
   /** Rows (connectors) or segment centres (intermittent weld) from END A, span units; empty when continuous. */
   positions: number[];
-  /** Distance of the first and last row from END A and END B, length units; null when there are no rows. */
+  /** Distance of the first and last row from the ends of the joint's run, length units; null when there are no rows. */
   endDistance: { start: number; end: number } | null;
+  /** Where the joint runs when a part it holds starts or stops along the member (a cover plate), span units; null: the whole member. */
+  run: { from: number; to: number; part: string } | null;
   /** Intermittent segments on the two sides of a web: opposite each other or alternating. */
   arrangement: "chain" | "staggered" | null;
   /** Least distances across the line, length units, where the connector has them: between the connectors of a row, and to an edge. */
@@ -58,19 +60,24 @@ type Source = { kind: "schedule"; item: Schedule } | { kind: "weld"; item: WeldR
  * whose layout is the same in every number (the top and bottom joints of a symmetric box beam)
  * gathered into one entry so the sheet shows them once.
  */
-export function fieldLayout(result: Pick<DesignResult, "joints" | "schedules" | "welds" | "bondLines" | "beam" | "units">, options: FieldLayoutOptions): FieldJoint[] {
-  const sources: Source[] = [];
+export function fieldLayout(
+  result: Pick<DesignResult, "joints" | "schedules" | "welds" | "bondLines" | "beam" | "units">,
+  options: FieldLayoutOptions,
+): FieldJoint[] {
+  const sources: { source: Source; run: FieldJoint["run"] }[] = [];
   for (const j of result.joints) {
     const schedule = result.schedules.find((s) => s.joint === j.id);
     const weld = (result.welds ?? []).find((w) => w.joint === j.id);
     const bond = result.bondLines.find((b) => b.joint === j.id);
-    if (schedule) sources.push({ kind: "schedule", item: schedule });
-    else if (weld) sources.push({ kind: "weld", item: weld });
-    else if (bond) sources.push({ kind: "bond-line", item: bond });
+    // Named by part id, as the section sketch names the parts.
+    const run = j.extent ? { ...j.extent, part: j.held.join(", ") } : null;
+    if (schedule) sources.push({ source: { kind: "schedule", item: schedule }, run });
+    else if (weld) sources.push({ source: { kind: "weld", item: weld }, run });
+    else if (bond) sources.push({ source: { kind: "bond-line", item: bond }, run });
   }
   const groups = new Map<string, FieldJoint>();
-  for (const source of sources) {
-    const joint = fieldJointOf(result, source, options);
+  for (const { source, run } of sources) {
+    const joint = fieldJointOf(result, source, run, options);
     const key = JSON.stringify({ ...joint, joints: [] }, (_k, v: unknown) => (typeof v === "number" ? Number(v.toPrecision(9)) : v));
     const same = groups.get(key);
     if (same) same.joints.push(...joint.joints);
@@ -79,11 +86,13 @@ export function fieldLayout(result: Pick<DesignResult, "joints" | "schedules" | 
   return [...groups.values()];
 }
 
-function fieldJointOf(result: Pick<DesignResult, "beam" | "units">, source: Source, options: FieldLayoutOptions): FieldJoint {
-  const length = result.beam.length;
+function fieldJointOf(result: Pick<DesignResult, "beam" | "units">, source: Source, run: FieldJoint["run"], options: FieldLayoutOptions): FieldJoint {
+  const start = run?.from ?? 0;
+  const end = run?.to ?? result.beam.length;
+  const length = end - start;
   const k = builderDimensions(result.units).spanToLength;
   const ends = (positions: number[]) =>
-    positions.length > 0 ? { start: positions[0]! * k, end: (length - positions[positions.length - 1]!) * k } : null;
+    positions.length > 0 ? { start: (positions[0]! - start) * k, end: (end - positions[positions.length - 1]!) * k } : null;
 
   if (source.kind === "schedule") {
     const s = source.item;
@@ -106,6 +115,7 @@ function fieldJointOf(result: Pick<DesignResult, "beam" | "units">, source: Sour
       })),
       positions: s.positions,
       endDistance: ends(s.positions),
+      run,
       arrangement: null,
       acrossLine: { spacing: s.rows > 1 ? (s.limits.rowSpacing ?? null) : null, edge: s.limits.edgeDistance ?? null },
       bondWidth: null,
@@ -117,15 +127,15 @@ function fieldJointOf(result: Pick<DesignResult, "beam" | "units">, source: Sour
     const w = source.item;
     const segment = w.zones.find((z) => z.segmentLength !== null)?.segmentLength ?? w.segmentLength;
     const intermittent = w.zones.some((z) => z.pattern === "intermittent") && segment !== null;
-    const mirrored = w.mode === "design" && options.mirrorSymmetricWelds && isMirrorSymmetric(w.zones, length);
-    // The segments are placed as the weld was designed: a segment at each end of the member, then each zone's pitch from its start.
+    const mirrored = w.mode === "design" && options.mirrorSymmetricWelds && isMirrorSymmetric(w.zones, start, end);
+    // The segments are placed as the weld was designed: a segment at each end of its run, then each zone's pitch from its start.
     const positions = intermittent
       ? placeRows(
-          w.zones.map((z) => ({ from: z.from * k, to: z.to * k, spacing: z.pitch ?? segment!, feasible: true })),
+          w.zones.map((z) => ({ from: (z.from - start) * k, to: (z.to - start) * k, spacing: z.pitch ?? segment!, feasible: true })),
           length * k,
           segment! / 2,
           mirrored,
-        ).map((x) => x / k)
+        ).map((x) => start + x / k)
       : [];
     return {
       joints: [w.joint],
@@ -146,6 +156,7 @@ function fieldJointOf(result: Pick<DesignResult, "beam" | "units">, source: Sour
       })),
       positions,
       endDistance: intermittent ? { start: 0, end: 0 } : null,
+      run,
       arrangement: intermittent ? w.arrangement : null,
       acrossLine: { spacing: null, edge: null },
       bondWidth: null,
@@ -161,9 +172,10 @@ function fieldJointOf(result: Pick<DesignResult, "beam" | "units">, source: Sour
     connectorLabel: b.connectorLabel,
     across: 1,
     lineCount: 1,
-    zones: [{ from: 0, to: length, spacing: null, segment: null, rows: 0, connectors: null, passes: b.passes, failingCombinations: b.passes ? [] : [b.combination] }],
+    zones: [{ from: start, to: end, spacing: null, segment: null, rows: 0, connectors: null, passes: b.passes, failingCombinations: b.passes ? [] : [b.combination] }],
     positions: [],
     endDistance: null,
+    run,
     arrangement: null,
     acrossLine: { spacing: null, edge: null },
     bondWidth: b.width,
@@ -180,10 +192,11 @@ function weldName(w: WeldResult, units: DesignResult["units"], electrode: string
 /** Whether x falls in a zone: from its start up to (not including) its end, the last zone including the member end. */
 const inZone = (z: { from: number; to: number }, last: boolean) => (x: number) => x >= z.from - 1e-9 && (last ? x <= z.to + 1e-9 : x < z.to - 1e-9);
 
-function isMirrorSymmetric(zones: { from: number; to: number; pitch: number | null; pattern: string }[], length: number): boolean {
-  const tol = 1e-6 * Math.max(1, length);
+function isMirrorSymmetric(zones: { from: number; to: number; pitch: number | null; pattern: string }[], start: number, end: number): boolean {
+  const tol = 1e-6 * Math.max(1, end - start);
+  const mirror = (x: number) => start + end - x;
   return zones.every((z, i) => {
     const m = zones[zones.length - 1 - i]!;
-    return Math.abs(z.from - (length - m.to)) < tol && Math.abs(z.to - (length - m.from)) < tol && z.pattern === m.pattern && z.pitch === m.pitch;
+    return Math.abs(z.from - mirror(m.to)) < tol && Math.abs(z.to - mirror(m.from)) < tol && z.pattern === m.pattern && z.pitch === m.pitch;
   });
 }

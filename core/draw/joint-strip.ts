@@ -25,7 +25,8 @@ export function zoneCallOut(j: FieldJoint, z: FieldZone, dims: BuilderDimensions
 
 /** One line on how the joint is made across the member, for the strip and the sheet. */
 export function jointMakeUp(j: FieldJoint, dims: BuilderDimensions): string {
-  const lines = `${j.lineCount === 1 ? "on its 1 joint line" : `on each of its ${j.lineCount} joint lines`}`;
+  const along = j.run ? ` from ${dims.position(j.run.from)} to ${dims.position(j.run.to)}` : "";
+  const lines = `${j.lineCount === 1 ? "on its 1 joint line" : `on each of its ${j.lineCount} joint lines`}${along}`;
   if (j.kind === "bond-line") return "bond line over the whole contact width and length";
   if (j.kind === "weld") {
     const sides = j.across === 2 ? "2 fillets per line, one each side" : `${j.across} fillet${j.across === 1 ? "" : "s"} per line`;
@@ -96,11 +97,14 @@ export function jointStrip(
   });
   items.push({ type: "path", d: `${moveTo(along.left, lanesTop)}${lineTo(along.right, lanesTop)}`, stroke: palette.grid, strokeWidth: 0.6 });
 
+  if (j.run) items.push(...outsideRun(j.run, along, stripTop, stripBottom));
   items.push(...laneMarks(j, dims, along, lanesTop, laneHeight, lanes));
 
   // Zone boundaries through the strip and down to the dimension line.
   const dimY = stripBottom + 16;
-  const boundaries = [...new Set(j.zones.flatMap((z) => [z.from, z.to]))].sort((a, b) => a - b);
+  const boundaries = [0, ...j.zones.flatMap((z) => [z.from, z.to]), along.length]
+    .sort((a, b) => a - b)
+    .filter((b, i, all) => i === 0 || b - all[i - 1]! > 1e-9 * along.length);
   const inner = boundaries.filter((b) => b > 1e-9 && b < along.length - 1e-9);
   if (inner.length > 0) items.push({ type: "path", d: inner.map((b) => `${moveTo(X(b), stripTop)}${lineTo(X(b), dimY)}`).join(""), stroke: palette.ink, strokeWidth: 0.7, dash: [2, 1.5], role: "zone-boundary" });
   items.push({ type: "path", d: rectPath(along.left, stripTop, along.right - along.left, stripBottom - stripTop), stroke: palette.ink, strokeWidth: 1.1 });
@@ -135,6 +139,8 @@ export function jointStrip(
     const first = j.positions[0]!;
     const last = j.positions[j.positions.length - 1]!;
     items.push({ type: "text", x: along.left, y, text: ends.start, size: 8, anchor: "start", bold: true, fill: palette.joint, role: "end-distance start" });
+    // Two call-outs too long to share a line go one under the other.
+    if (labelWidth(ends.start, 8, true) + labelWidth(ends.end, 8, true) + 16 > along.right - along.left) y += 11;
     items.push({ type: "text", x: along.right, y, text: ends.end, size: 8, anchor: "end", bold: true, fill: palette.joint, role: "end-distance end" });
     items.push({ type: "path", d: `${moveTo(X(first), stripBottom)}${lineTo(X(first), lanesTop)}${moveTo(X(last), stripBottom)}${lineTo(X(last), lanesTop)}`, stroke: palette.held, strokeWidth: 2.2, role: "end-rows" });
     y += 4;
@@ -142,14 +148,42 @@ export function jointStrip(
   return { items, height: y - top };
 }
 
+/** Where the joint's part is absent: hatched grey, with a heavy mark at each end of the part. */
+function outsideRun(run: NonNullable<FieldJoint["run"]>, along: AlongMember, top: number, bottom: number): DrawItem[] {
+  const items: DrawItem[] = [];
+  const X = (x: number) => xOf(along, x);
+  const gaps = [
+    [0, run.from],
+    [run.to, along.length],
+  ].filter(([a, b]) => b! - a! > 1e-9 * along.length) as [number, number][];
+  for (const [a, b] of gaps) {
+    const x0 = X(a);
+    const x1 = X(b);
+    items.push({ type: "path", d: rectPath(x0, top, x1 - x0, bottom - top), fill: palette.grid, role: "outside-run" });
+    let d = "";
+    for (let x = x0 - (bottom - top); x < x1; x += 6) {
+      const a0 = Math.max(x0, x);
+      const a1 = Math.min(x1, x + (bottom - top));
+      d += `${moveTo(a0, bottom - (a0 - x))}${lineTo(a1, bottom - (a1 - x))}`;
+    }
+    items.push({ type: "path", d, stroke: palette.faint, strokeWidth: 0.5 });
+    if (x1 - x0 > 70) items.push({ type: "text", x: (x0 + x1) / 2, y: (top + bottom) / 2 + 3, text: "no connectors here", size: 7.5, anchor: "middle", fill: palette.ink, role: "outside-run-label" });
+  }
+  const marks = [run.from, run.to].filter((x) => x > 1e-9 && x < along.length - 1e-9);
+  if (marks.length > 0) items.push({ type: "path", d: marks.map((x) => `${moveTo(X(x), top - 4)}${lineTo(X(x), bottom + 4)}`).join(""), stroke: palette.ink, strokeWidth: 2, role: "run-end" });
+  return items;
+}
+
 /** What the builder starts and finishes with at each end; none for a continuous weld or a bond line. */
 function endCallOuts(j: FieldJoint, dims: BuilderDimensions): { start: string; end: string } | null {
   if (!j.endDistance || j.positions.length === 0) return null;
-  if (j.kind === "weld") return { start: "▸ a segment starts at END A", end: "a segment ends at END B ◂" };
+  // A joint that runs along part of the member (a cover plate) starts and stops at that part's ends.
+  const from = (side: "start" | "end") => (j.run ? `the end of ${j.run.part} at ${dims.position(side === "start" ? j.run.from : j.run.to)}` : side === "start" ? "END A" : "END B");
+  if (j.kind === "weld") return { start: `▸ a segment starts at ${from("start")}`, end: `a segment ends at ${from("end")} ◂` };
   const one = j.positions.length === 1;
   return {
-    start: `▸ ${one ? "the only row" : "1st row"} ${dims.length(j.endDistance.start, "up")} from END A`,
-    end: `last row ${dims.length(j.endDistance.end, "up")} from END B ◂`,
+    start: `▸ ${one ? "the only row" : "1st row"} ${dims.length(j.endDistance.start, "up")} from ${from("start")}`,
+    end: `last row ${dims.length(j.endDistance.end, "up")} from ${from("end")} ◂`,
   };
 }
 

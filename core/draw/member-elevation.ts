@@ -19,6 +19,8 @@ export interface MemberElevationInput {
   supports: { x: number; type: "pinned" | "roller" | "fixed" }[];
   /** Point loads by position, each with what it is ("column above"). */
   pointLoads: { at: number; label: string }[];
+  /** Parts that start or stop along the member (a cover plate), with the face of the member they are on. */
+  partRuns?: { label: string; from: number; to: number; side: "top" | "bottom" }[];
 }
 
 const LOAD_LABEL = 8;
@@ -75,6 +77,12 @@ export function memberElevation(input: MemberElevationInput, along: AlongMember,
     dimY += 16;
   }
   items.push(...dimensionChain([X(0), X(along.length)], [`${dims.run(along.length)} overall`], dimY));
+  // Parts that stop short, each as a bar over its run with where it starts and stops.
+  for (const run of input.partRuns ?? []) {
+    dimY += 24;
+    items.push({ type: "text", x: (X(run.from) + X(run.to)) / 2, y: dimY - 5, text: `${run.label}, on the ${run.side} face: ${dims.position(run.from)} to ${dims.position(run.to)} from END A`, size: 8, anchor: "middle", fill: palette.ink, role: "part-run-label" });
+    items.push({ type: "path", d: rectPath(X(run.from), dimY - 2, X(run.to) - X(run.from), 5), fill: palette.material[1], stroke: palette.ink, strokeWidth: 0.9, role: "part-run" });
+  }
   return { items, height: dimY + 6 - top };
 }
 

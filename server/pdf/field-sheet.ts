@@ -18,9 +18,10 @@ const ONE_COLUMN_ZONES = 6;
 /**
  * The builder's page: the member in elevation with every joint's zones, spacings, rows and end
  * distances, a section naming the joints, and the zones as a table. Starts a page of its own and
- * returns its index among the buffered pages, for the title block.
+ * returns the indices of its pages among the buffered pages (one, unless the member has many
+ * joints or zones), for the title block.
  */
-export function fieldSheet(c: WorksheetContext): number {
+export function fieldSheet(c: WorksheetContext): number[] {
   const { sheet, job, result } = c;
   if (!sheet.atTop) sheet.newPage();
   const page = sheet.doc.bufferedPageRange().count - 1;
@@ -42,6 +43,7 @@ export function fieldSheet(c: WorksheetContext): number {
       spans: result.beam.spans,
       supports: result.beam.supports,
       pointLoads: job.beam.loads.flatMap((l) => (l.type === "point" ? [{ at: l.at, label: l.label }] : [])),
+      partRuns: partRuns(c),
       joints,
     },
     { width: sheet.width },
@@ -51,7 +53,8 @@ export function fieldSheet(c: WorksheetContext): number {
   sheet.y += elevation.height + 8;
 
   zonesTable(c, joints, dims);
-  return page;
+  const last = sheet.doc.bufferedPageRange().count - 1;
+  return Array.from({ length: last - page + 1 }, (_, i) => page + i);
 }
 
 function band(c: WorksheetContext): void {
@@ -98,7 +101,11 @@ function introWithSketch(c: WorksheetContext, joints: FieldJoint[], dims: Builde
       "bold",
     ],
     [
-      `Measure every position from END A, the left end as drawn, and mark END A on the member before laying out. Positions are in ${dims.positionUnit === "mm" ? "millimetres" : "feet and inches"}${hasRows || hasSegments ? `, ${[hasRows ? "spacings" : "", hasSegments ? "segments and pitches" : ""].filter(Boolean).join(", ")} in ${dims.spacingUnit === "mm" ? "millimetres" : "inches"}` : ""}.`,
+      `Measure every position from END A, the left end as drawn, and mark END A on the member before laying out. ${
+        dims.system === "si"
+          ? "All dimensions are in millimetres."
+          : `Positions are in feet and inches${hasRows || hasSegments ? `, ${[hasRows ? "spacings" : "", hasSegments ? "segments and pitches" : ""].filter(Boolean).join(", ")} in inches` : ""}.`
+      }`,
       "body",
     ],
     ...(hasRows
@@ -138,6 +145,7 @@ function zonesTable(c: WorksheetContext, joints: FieldJoint[], dims: BuilderDime
   }
   const laidOut = joints.filter((k) => k.kind !== "bond-line");
   if (laidOut.length === 0) return;
+  // A failing zone is printed in red with FAILS after its spacing; the worksheet names the combinations.
   const fails = laidOut.some((j) => !j.passes);
   const welds = laidOut.some((j) => j.kind === "weld");
   const connectors = laidOut.some((j) => j.kind === "connectors");
@@ -151,26 +159,23 @@ function zonesTable(c: WorksheetContext, joints: FieldJoint[], dims: BuilderDime
         cell(String(i + 1)),
         cell(dims.position(z.from)),
         cell(dims.position(z.to)),
-        cell(zoneCallOut(j, z, dims), true),
+        cell(bad ? `${zoneCallOut(j, z, dims)} — FAILS` : zoneCallOut(j, z, dims), true),
         cell(j.kind === "weld" && z.spacing === null ? "—" : String(z.rows)),
         ...(connectors ? [cell(z.connectors === null ? "—" : String(z.connectors))] : []),
-        ...(fails ? [bad ? { text: "FAILS", bold: true, colour: ink.fail, note: z.failingCombinations.length ? `under ${z.failingCombinations.join(", ")}` : undefined } : { text: "carries it", colour: ink.pass }] : []),
       ];
     }),
   );
   const columns: Column[] = [
     ...(named ? [{ header: "Joint", weight: 1 }] : []),
-    { header: "Zone", weight: 0.55, align: "right" },
+    { header: "Zone", weight: 0.62, align: "right" },
     { header: "From END A", weight: 0.95, align: "right" },
     { header: "To", weight: 0.85, align: "right" },
-    { header: welds ? (connectors ? "Spacing, or segment @ pitch" : "Segment @ pitch") : "Spacing", weight: welds ? 1.5 : 1.1 },
+    { header: welds ? (connectors ? "Spacing, or segment @ pitch" : "Segment @ pitch") : "Spacing", weight: (welds ? 1.5 : 1.1) + (fails ? 0.6 : 0) },
     { header: welds ? (connectors ? "Rows or segments" : "Segments each side") : "Rows", weight: welds ? 0.9 : 0.6, align: "right" },
     ...(connectors ? [{ header: "Count", weight: 0.75, align: "right" as const }] : []),
-    ...(fails ? [{ header: "Result", weight: 1.1 }] : []),
   ];
-  const note = connectors ? "; count: connectors on all lines of the joint" : "";
-  sheet.heading(`Zones of ${named ? "every joint" : jointNames(laidOut[0]!.joints).toLowerCase()} (positions in ${dims.positionUnit}${note})`, 2, 60);
-  const twoColumns = rows.length > ONE_COLUMN_ZONES && !named && !fails;
+  sheet.heading(`Zones of ${named ? "every joint" : jointNames(laidOut[0]!.joints).toLowerCase()}: positions from END A in ${dims.positionUnit}${connectors ? ", counts on all lines" : ""}`, 2, 60);
+  const twoColumns = rows.length > ONE_COLUMN_ZONES && !named;
   if (!twoColumns) {
     table(sheet, columns, rows, { size: 8.5 });
     return;
@@ -178,8 +183,8 @@ function zonesTable(c: WorksheetContext, joints: FieldJoint[], dims: BuilderDime
   const half = Math.ceil(rows.length / 2);
   const gutter = 12;
   const width = (sheet.width - gutter) / 2;
-  // Room for the taller half first, so both columns start on this page.
-  sheet.ensure(30 + half * 15);
+  // Room for the taller half first, so both columns start on this page: a two-line header and rows of one line.
+  sheet.ensure(26 + half * 14);
   const top = sheet.y;
   const right = rows.slice(half);
   table(sheet, columns, rows.slice(0, half), { size: 8, width });
@@ -187,4 +192,17 @@ function zonesTable(c: WorksheetContext, joints: FieldJoint[], dims: BuilderDime
   sheet.y = top;
   table(sheet, columns, right, { size: 8, width, indent: width + gutter });
   sheet.y = Math.max(leftBottom, sheet.y);
+}
+
+/** Parts present over only some stretches of the member (a cover plate), with the face they are on. */
+function partRuns(c: WorksheetContext): { label: string; from: number; to: number; side: "top" | "bottom" }[] {
+  const { result } = c;
+  const stretches = result.stretches ?? [];
+  if (stretches.length === 0) return [];
+  return result.section.parts.flatMap((p) => {
+    const on = stretches.filter((s) => s.parts.includes(p.id));
+    if (on.length === stretches.length || on.length === 0) return [];
+    const middle = p.rects.reduce((sum, r) => sum + (r.y0 + r.y1) / 2, 0) / Math.max(1, p.rects.length);
+    return [{ label: p.name || p.id, from: Math.min(...on.map((s) => s.from)), to: Math.max(...on.map((s) => s.to)), side: middle < result.section.centroidY ? ("bottom" as const) : ("top" as const) }];
+  });
 }

@@ -3,6 +3,7 @@ import type { DesignResult, JobDocument } from "../../core/index.js";
 import { actionsSection } from "./actions-section.js";
 import { bondLineSection } from "./bond-line-section.js";
 import { closingSection } from "./closing-section.js";
+import { compositeSection } from "./composite-section.js";
 import { FIELD_SHEET_HEADING, fieldSheet } from "./field-sheet.js";
 import { inputsSection } from "./inputs-section.js";
 import { memberChecksSection } from "./member-checks-section.js";
@@ -13,6 +14,7 @@ import { sectionPropertiesSection } from "./section-properties-section.js";
 import { PAGE_SIZES, Sheet, pageFrame, registerFonts } from "./sheet.js";
 import { glanceSection, statusSection } from "./status-section.js";
 import { weldSection, weldsOf } from "./weld-section.js";
+import { terminationsSection } from "./terminations-section.js";
 import { stampPages } from "./title-block.js";
 import type { WorksheetContext } from "./worksheet-context.js";
 
@@ -30,8 +32,33 @@ export function worksheetFileName(job: JobDocument): string {
 /** Today as YYYY-MM-DD (UTC). */
 export const today = () => new Date().toISOString().slice(0, 10);
 
-/** The worksheet as a PDF: A4 for SI jobs, Letter for US jobs. */
+/** The worksheet as a PDF: A4 for SI jobs, Letter for US jobs; its last page is the field sheet for the builder. */
 export function renderWorksheet(job: JobDocument, result: DesignResult, options: WorksheetOptions = {}): Promise<Buffer> {
+  return renderPages(job, result, options, "connector spacing worksheet", (context) => {
+    reviewBox(context.sheet);
+    statusSection(context);
+    glanceSection(context);
+    inputsSection(context);
+    sectionPropertiesSection(context);
+    actionsSection(context);
+    compositeSection(context);
+    for (const group of identicalSchedules(result.schedules)) scheduleSection(context, group);
+    for (const bondLine of result.bondLines) bondLineSection(context, bondLine);
+    for (const weld of weldsOf(context)) weldSection(context, weld);
+    terminationsSection(context);
+    memberChecksSection(context);
+    closingSection(context);
+    return new Map(fieldSheet(context).map((page) => [page, FIELD_SHEET_HEADING]));
+  });
+}
+
+/** The field sheet alone, one page, with the same title block, notice and fingerprint as the worksheet it comes from. */
+export function renderFieldSheet(job: JobDocument, result: DesignResult, options: WorksheetOptions = {}): Promise<Buffer> {
+  return renderPages(job, result, options, "field sheet", (context) => new Map(fieldSheet(context).map((page) => [page, FIELD_SHEET_HEADING])));
+}
+
+/** A document of the job's page size; `body` sets the pages and names those with their own heading; every page is then stamped. */
+function renderPages(job: JobDocument, result: DesignResult, options: WorksheetOptions, title: string, body: (context: WorksheetContext) => Map<number, string>): Promise<Buffer> {
   const printed = options.printDate ?? today();
   const size = PAGE_SIZES[job.units];
   const frame = pageFrame(size);
@@ -40,7 +67,7 @@ export function renderWorksheet(job: JobDocument, result: DesignResult, options:
     margins: { top: frame.top, bottom: frame.height - frame.bottom, left: frame.left, right: frame.width - frame.right },
     bufferPages: true,
     info: {
-      Title: `${job.member.mark} — ${job.project.name}: connector spacing worksheet`,
+      Title: `${job.member.mark} — ${job.project.name}: ${title}`,
       Subject: `Input fingerprint ${result.fingerprint ?? ""}`,
       Creator: `${result.program.name} ${result.program.version}`,
       CreationDate: new Date(`${printed}T00:00:00Z`),
@@ -55,18 +82,7 @@ export function renderWorksheet(job: JobDocument, result: DesignResult, options:
   });
 
   const context: WorksheetContext = { sheet: new Sheet(doc, frame), job, result, text: quantityText(result.unitLabels) };
-  reviewBox(context.sheet);
-  statusSection(context);
-  glanceSection(context);
-  inputsSection(context);
-  sectionPropertiesSection(context);
-  actionsSection(context);
-  for (const group of identicalSchedules(result.schedules)) scheduleSection(context, group);
-  for (const bondLine of result.bondLines) bondLineSection(context, bondLine);
-  for (const weld of weldsOf(context)) weldSection(context, weld);
-  memberChecksSection(context);
-  closingSection(context);
-  const fieldPage = fieldSheet(context);
+  const pageHeadings = body(context);
 
   stampPages(doc, frame, {
     projectName: job.project.name,
@@ -80,7 +96,7 @@ export function renderWorksheet(job: JobDocument, result: DesignResult, options:
     program: `${result.program.name} ${result.program.version}`,
     fingerprint: result.fingerprint ?? "",
     heading: result.mode === "check" ? "BUILT-UP MEMBER · CONNECTOR SCHEDULE CHECK WORKSHEET" : "BUILT-UP MEMBER · CONNECTOR SPACING WORKSHEET",
-    pageHeadings: new Map([[fieldPage, FIELD_SHEET_HEADING]]),
+    pageHeadings,
   });
   doc.end();
   return done;

@@ -9,7 +9,7 @@ import { placeInTiers } from "../../core/draw/label-tiers.js";
 import { runDesign, type DesignRun } from "../../server/design-service.js";
 import { FIELD_SHEET_BAND, FIELD_SHEET_HEADING } from "../../server/pdf/field-sheet.js";
 import { REVIEW_NOTICE } from "../../server/pdf/title-block.js";
-import { renderWorksheet } from "../../server/pdf/worksheet.js";
+import { renderFieldSheet, renderWorksheet } from "../../server/pdf/worksheet.js";
 
 const EXAMPLES = join(import.meta.dirname, "../../fixtures/examples");
 const work = mkdtempSync(join(tmpdir(), "stitchplan-field-sheet-"));
@@ -29,9 +29,13 @@ interface FieldSheet {
   bandPages: number;
 }
 
+/**
+ * The field sheet on its own (renderFieldSheet), which is the worksheet's last page set alone: the
+ * worksheet tests check that it is the last page and only one, so these need not render the rest.
+ */
 async function fieldSheetOf(name: string, job: Job): Promise<FieldSheet> {
   const run = runDesign(job);
-  const pdf = await renderWorksheet(run.job, run.result, { printDate: "2025-03-14" });
+  const pdf = await renderFieldSheet(run.job, run.result, { printDate: "2025-03-14" });
   const file = join(work, `${name}.pdf`);
   writeFileSync(file, pdf);
   const pageTexts = execFileSync("pdftotext", ["-enc", "UTF-8", file, "-"], { encoding: "utf8" }).split("\f").map(flat).filter(Boolean);
@@ -160,6 +164,20 @@ describe("the field sheet at the end of the worksheet", () => {
     expect(segments * w.zones[0]!.segmentLength! * w.fillets * w.lineCount).toBeCloseTo(w.weldLength * 12, 6);
   });
 
+  test("a cover plate over part of the span is laid out from the plate's own ends, with no connectors drawn where there is no plate", async () => {
+    const { run, text } = await fieldSheetOf("cover-plate", example("cover-plate-retrofit.us"));
+    const dims = builderDimensions("us");
+    const joint = run.result.joints.find((j) => j.extent)!;
+    expect(joint).toBeDefined();
+    const s = run.result.schedules.find((k) => k.joint === joint.id)!;
+    const first = (s.positions[0]! - joint.extent!.from) * 12;
+    const last = (joint.extent!.to - s.positions[s.positions.length - 1]!) * 12;
+    expect(text).toContain(`1st row ${dims.length(first, "up")} from the end of ${joint.held.join(", ")} at ${dims.position(joint.extent!.from)}`);
+    expect(text).toContain(`last row ${dims.length(last, "up")} from the end of ${joint.held.join(", ")} at ${dims.position(joint.extent!.to)}`);
+    expect(text).toContain("no connectors here");
+    expect(text).toContain(`${dims.position(joint.extent!.from)} to ${dims.position(joint.extent!.to)} from END A`);
+  });
+
   test("the glued lintel shows its bond line over the whole length", async () => {
     const { text, bandPages } = await fieldSheetOf("lintel", example("glued-lintel.si"));
     expect(bandPages).toBe(1);
@@ -177,7 +195,20 @@ describe("the field sheet at the end of the worksheet", () => {
     expect(text).toContain("(given schedule, checked)");
     expect(text).toContain("DOES NOT PASS — DO NOT BUILD FROM THIS SHEET");
     for (const failure of run.result.status.failures) expect(text).toContain(flat(failure));
-    expect(text).toMatch(/FAILS under U/);
+    for (const z of run.result.schedules[0]!.zones.filter((k) => !k.passes)) expect(text).toContain(`@ ${z.spacing} mm — FAILS`);
     expect(inkOnPage(file, pages, "box-beam-check-red").red).toBeGreaterThan(200);
+  });
+
+  test("the field sheet alone is the worksheet's last page, word for word but for the page number", async () => {
+    const name = "mezzanine-edge-beam.si";
+    const { text, pages } = await fieldSheetOf("field-only", example(name));
+    expect(pages).toBe(1);
+    const run = runDesign(example(name));
+    const file = join(work, "whole.pdf");
+    writeFileSync(file, await renderWorksheet(run.job, run.result, { printDate: "2025-03-14" }));
+    const whole = execFileSync("pdftotext", ["-enc", "UTF-8", file, "-"], { encoding: "utf8" }).split("\f").map(flat).filter(Boolean);
+    const last = whole[whole.length - 1]!;
+    expect(last.replace(/Page \d+ of \d+/, "")).toBe(text.replace("Page 1 of 1", ""));
+    for (const t of [FIELD_SHEET_HEADING, FIELD_SHEET_BAND, flat(REVIEW_NOTICE), run.result.fingerprint!, "Page 1 of 1", run.job.member.mark]) expect(text).toContain(t);
   });
 });

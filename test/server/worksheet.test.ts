@@ -29,7 +29,7 @@ const example = (name: string) => structuredClone(examples.find((e) => e.name ==
  * page, so a count within two of this passes; a jump past that means something was lost or repeated.
  */
 const EXPECTED_PAGES: Record<string, number> = {
-  "cover-plate-retrofit.us": 10,
+  "cover-plate-retrofit.us": 11,
   "girder-intermittent-welds.us": 11,
   "glued-lintel.si": 7,
   "loft-beam-16d.us": 10,
@@ -158,6 +158,10 @@ describe("renderWorksheet(job, result) on every example", () => {
     for (const w of result.welds) expect(text).toContain(`Weld — joint ${w.joint}`);
     if (result.welds.length > 0) for (const heading of ["Weld zones", "Weld resistance per unit length, one fillet", "Weld limits used"]) expect(text).toContain(heading);
     for (const b of result.bondLines) expect(text).toContain(`Bond line — joint ${b.joint}`);
+    if (result.multiPly) expect(text).toContain("Side-by-side plies: load shares and what each interface passes");
+    if (result.composite) expect(text).toContain("Composite action —");
+    if (result.stretches.length > 0) expect(text).toContain("Section along the member");
+    if (result.terminations.length > 0) expect(text).toContain("Ends of parts that stop short");
     expect(result.schedules.length + result.bondLines.length + result.welds.length).toBeGreaterThan(0);
 
     expect(text).toContain(run.job.member.mark);
@@ -169,6 +173,9 @@ describe("renderWorksheet(job, result) on every example", () => {
     for (const b of result.bondLines) expect(text).toContain(`τ max = ${numberText(b.maxStress)} ${result.unitLabels.stress}`);
     for (const item of [...result.notChecked, ...result.standards, ...result.assumptions]) expect(text).toContain(flat(item));
 
+    // The field sheet is one page, the last.
+    expect(pageTexts.filter((page) => page.includes(FIELD_SHEET_BAND))).toHaveLength(1);
+    expect(pageTexts[pageTexts.length - 1]).toContain(FIELD_SHEET_BAND);
     pageTexts.forEach((page, i) => {
       expect(page, `page ${i + 1}`).toContain(`Page ${i + 1} of ${pageTexts.length}`);
       expect(page, `page ${i + 1}`).toContain(result.fingerprint!);
@@ -288,6 +295,42 @@ describe("renderWorksheet(job, result) in check mode", () => {
     expect(s.detailingProblems.length).toBeGreaterThan(0);
     expect(text).toContain("Detailing problems of the given schedule");
     for (const p of s.detailingProblems) expect(text).toContain(flat(p));
+  });
+});
+
+describe("renderWorksheet(job, result) with slip-aware composite action", () => {
+  test("a nailed I designed with the γ-method says so, with the stiffnesses, γ per flange joint and both connector counts", async () => {
+    // A nailed timber I (flanges 120 × 45, web 45 × 200, E = 11 000 MPa) over 5 m; the slip moduli are invented for the demo.
+    const job = {
+      format: "stitchplan-job",
+      version: 1,
+      units: "si",
+      basis: "factored",
+      project: { name: "γ-method demo" },
+      member: { mark: "I-1" },
+      materials: [{ id: "C24", name: "C24", family: "sawn-timber", E: 11_000, density: 420, strength: { bending: 14.77, shear: 2.46 } }],
+      parts: [
+        { id: "bottom", material: "C24", shape: { type: "rectangle", b: 120, h: 45 }, x: 0, y: 0 },
+        { id: "web", material: "C24", shape: { type: "rectangle", b: 45, h: 200 }, place: { on: "bottom", side: "top" } },
+        { id: "top", material: "C24", shape: { type: "rectangle", b: 120, h: 45 }, place: { on: "web", side: "top" } },
+      ],
+      connectors: [{ id: "N", kind: "rated", label: "3.1 mm nail", resistance: 2000, minSpacing: 31, maxSpacing: 300, slipModulus: 709.32, ultimateSlipModulus: 472.88 }],
+      fastening: { default: { connector: "N", rows: 1 } },
+      beam: { spans: [5], loads: [{ type: "uniform", w: 4 }] },
+      spacing: { module: 5, minZoneLength: 300 },
+      compositeAction: { model: "slip-aware" },
+    };
+    const { run, text } = await render("composite", job);
+    const k = run.result.composite!;
+    expect(k.model).toBe("slip-aware");
+    expect(text).toContain("Composite action — slip-aware (γ-method)");
+    expect(text).toContain("rest on the slip-aware model");
+    const q = quantityText(run.result.unitLabels);
+    expect(text).toContain(`(EI) rigid connection ${q.of(k.stiffness!.rigid, "flexuralRigidity")}`);
+    for (const j of k.joints) {
+      expect(text).toContain(`${formatRatio(j.gammaServiceability)} / ${formatRatio(j.gammaUltimate)}`);
+      expect(text).toContain(`${j.rigidCount} / ${j.slipAwareCount}`);
+    }
   });
 });
 
