@@ -6,6 +6,7 @@ const { values } = parseArgs({
     port: { type: "string", default: process.env.PORT ?? "4318" },
     host: { type: "string", default: "127.0.0.1" },
     data: { type: "string" },
+    threads: { type: "string" },
   },
 });
 const code = await serve(values);

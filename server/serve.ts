@@ -8,6 +8,8 @@ export interface ServeOptions {
   host: string;
   /** Data folder of the job store; STITCHPLAN_DATA or data/ beside the project when absent. */
   data?: string | undefined;
+  /** Design threads; one fewer than the cores (at least 1) when absent. */
+  threads?: string | undefined;
 }
 
 /** The job store's folder: `--data`, else STITCHPLAN_DATA, else `data/` beside the project. */
@@ -26,11 +28,16 @@ export async function serve(options: ServeOptions): Promise<number | undefined> 
   if (!loopback) {
     console.warn(`Warning: listening on ${options.host} makes the service reachable from other machines. It has no login; use only on a trusted network.`);
   }
+  const threads = options.threads === undefined ? undefined : Number(options.threads);
+  if (threads !== undefined && (!/^\d+$/.test(options.threads!) || threads < 1 || threads > 64)) {
+    console.error(`--threads must be a whole number from 1 to 64, not "${options.threads}"`);
+    return 2;
+  }
   const dataDir = dataFolder(options.data);
   let app;
   try {
     // Reached under other names than the loopback ones, the Host header cannot be checked against a list.
-    app = await buildApp({ dataDir, warmThreads: true, allowedHosts: loopback ? loopbackHosts : "any" });
+    app = await buildApp({ dataDir, warmThreads: true, allowedHosts: loopback ? loopbackHosts : "any", ...(threads ? { designThreads: threads } : {}) });
   } catch (error) {
     if (error instanceof StoreOpenError) {
       console.error(error.message);

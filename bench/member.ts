@@ -1,0 +1,66 @@
+// One member through the whole pipeline in process, step by step: the simple member (the page's
+// example) and a three-span member with every combination of a set and its live-load patterns.
+import { readFileSync } from "node:fs";
+import { designMember, DesignResult, prepareJob, toDisplayUnits } from "../core/index.js";
+import { fingerprintOf } from "../server/design-service.js";
+import { SIMPLE_MEMBER } from "./http.js";
+import { timeIt } from "./time-it.js";
+
+export interface MemberFigures {
+  simpleMedianMs: number;
+  threeSpanMedianMs: number;
+}
+
+/** The simple member's section on three continuous spans, 20 loads of every built-in category (invented, demo data). */
+function threeSpanJob(): Record<string, unknown> {
+  const job = JSON.parse(readFileSync(new URL(`../fixtures/examples/${SIMPLE_MEMBER}.json`, import.meta.url), "utf8"));
+  const categories = ["dead", "live", "roof-live", "snow", "wind"];
+  const loads: Record<string, unknown>[] = [];
+  for (let i = 0; i < 20; i++) {
+    const category = categories[i % categories.length]!;
+    const from = ((i * 617) % 11_000) / 1000;
+    if (i % 4 === 0) loads.push({ type: "uniform", category, w: 0.4 + 0.1 * (i % 3) });
+    else if (i % 4 === 1) loads.push({ type: "linear", category, wStart: 0.2, wEnd: 0.8, from, to: Math.min(12, from + 2.5) });
+    else if (i % 4 === 2) loads.push({ type: "point", category, P: 0.5 + 0.05 * i, at: from + 0.3 });
+    else loads.push({ type: "uniform", category, w: 0.5, from, to: Math.min(12, from + 1.8) });
+  }
+  job.member.mark = "B-3S";
+  job.beam = { spans: [4.2, 4.8, 3.0], loads, patternedCategories: ["live", "roof-live", "snow"] };
+  job.combinations = { set: "asce7-22-allowable" };
+  return job;
+}
+
+export function memberBench(say: (line: string) => void): MemberFigures {
+  say("");
+  say("## One member, in process, step by step (median and p95 of 200 runs, ms)");
+  say("");
+  say("| member | result combinations | stations | prepareJob | designMember | toDisplayUnits | fingerprint | JSON text | whole (median) | whole (p95) | result (kB) |");
+  say("|---|---|---|---|---|---|---|---|---|---|---|");
+  const figures: number[] = [];
+  for (const [name, input] of [
+    [`${SIMPLE_MEMBER} (simple span)`, JSON.parse(readFileSync(new URL(`../fixtures/examples/${SIMPLE_MEMBER}.json`, import.meta.url), "utf8"))],
+    ["three spans, 20 loads, asce7-22-allowable with live, roof-live and snow patterned", threeSpanJob()],
+  ] as const) {
+    const prepared = prepareJob(input);
+    if (!prepared.ok) throw new Error(`${name}: ${JSON.stringify(prepared.issues)}`);
+    const core = designMember(prepared.core);
+    const shown = toDisplayUnits(DesignResult, core, prepared.job.units);
+    const text = JSON.stringify(shown);
+    const prepare = timeIt(() => prepareJob(input), 200);
+    const design = timeIt(() => designMember(prepared.core), 200);
+    const display = timeIt(() => toDisplayUnits(DesignResult, core, prepared.job.units), 200);
+    const fingerprint = timeIt(() => fingerprintOf(prepared.job), 200);
+    const json = timeIt(() => JSON.stringify(shown), 200);
+    const whole = timeIt(() => {
+      const p = prepareJob(input);
+      if (p.ok) JSON.stringify({ ...toDisplayUnits(DesignResult, designMember(p.core), p.job.units), fingerprint: fingerprintOf(p.job) });
+    }, 200);
+    figures.push(whole.median);
+    say(
+      `| ${name} | ${core.beam.combinations.length} | ${core.beam.stations.length} | ${prepare.median.toFixed(2)} | ${design.median.toFixed(2)} | ${display.median.toFixed(2)} | ${fingerprint.median.toFixed(2)} | ${json.median.toFixed(2)} | ${whole.median.toFixed(2)} | ${whole.p95.toFixed(2)} | ${(text.length / 1024).toFixed(0)} |`,
+    );
+  }
+  say("");
+  say("\"whole\" is what one POST /api/designs computes: validation, design, conversion to the job's units, fingerprint and the JSON text. The beam-actions table below evaluates the three-span member's combinations at 2,000 stations.");
+  return { simpleMedianMs: figures[0]!, threeSpanMedianMs: figures[1]! };
+}
