@@ -29,6 +29,10 @@ describe("a member built from an empty form", () => {
     await page.getByLabel("Member mark").fill("B-7");
 
     await page.getByRole("button", { name: "Add material" }).click();
+    // Filled from the grade library, then edited like any other values.
+    await page.getByLabel("Material 1: fill from a common grade").selectOption("C24");
+    await expect(page.getByLabel("Material 1 E (MPa)").inputValue()).resolves.toBe("11000");
+    await expect(page.getByLabel("Material 1 source of values").inputValue()).resolves.toContain("EN 338");
     await page.getByLabel("Material 1 name").fill("Test softwood");
     await page.getByLabel("Material 1 E (MPa)").fill("10000");
     await page.getByLabel("Material 1 density (kg/m³)").fill("450");

@@ -33,16 +33,13 @@ export function materialsStep(ctx: FormContext, number: number): HTMLElement {
     columns: [
       { header: "Id", className: "col-id", cell: (i) => ({ path: at(i, "id"), name: "id", control: idControl(ctx, i) }) },
       {
-        header: "Name, family, source",
+        header: "Name, family",
         className: "col-name",
         cell: (i, notes) => {
           const nameInput = textControl(ctx, at(i, "name"), "name", { maxLength: 80, placeholder: "name" });
           const family = selectControl(ctx, at(i, "family"), `${name(i)} family`, families, { whenAbsent: "other" });
-          const source = textControl(ctx, at(i, "source"), `${name(i)} source of values`, { maxLength: 160, placeholder: "source of values" });
-          source.classList.add("source");
-          const stack = el("div", { className: "stack" }, [nameInput, el("div", { className: "pair" }, [family, source])]);
+          const stack = el("div", { className: "stack" }, [nameInput, family]);
           ctx.registry.register({ path: at(i, "family"), label: `${name(i)} · family`, control: family, marker: family, host: notes, prefix: "family" });
-          ctx.registry.register({ path: at(i, "source"), label: `${name(i)} · source`, control: source, marker: source, host: notes, prefix: "source" });
           return { path: at(i, "name"), name: "name", control: nameInput, content: stack };
         },
       },
@@ -61,7 +58,10 @@ export function materialsStep(ctx: FormContext, number: number): HTMLElement {
         cell: (i) => ({ path: at(i, "strength.shear"), name: "shear strength", control: numberControl(ctx, at(i, "strength.shear"), "shear strength", { placeholder: "none" }) }),
       },
     ],
-    extra: (i) => {
+    extra: (i, notes) => {
+      const source = textControl(ctx, at(i, "source"), `${name(i)} source of values`, { maxLength: 400, placeholder: "where these values come from" });
+      source.classList.add("source");
+      ctx.registry.register({ path: at(i, "source"), label: `${name(i)} · source`, control: source, marker: source, host: notes, prefix: "source" });
       const extras = [
         ...ctx.schema.fieldsAt("materials[].strength").filter((f) => f.key !== "bending" && f.key !== "shear").map((f) => ({ f, path: at(i, "strength") })),
         ...ctx.schema.fieldsAt("materials[]").filter((f) => !inRow.has(f.key)).map((f) => ({ f, path: `materials[${i}]` })),
@@ -70,6 +70,7 @@ export function materialsStep(ctx: FormContext, number: number): HTMLElement {
       const fields = extras.flatMap(({ f, path }) => schemaFields(ctx, path, [f], { owner: name(i), scope: "material" }));
       return el("div", { className: "row-helpers" }, [
         gradeChooser(ctx, i, name(i)),
+        el("label", { className: "source-field" }, [el("span", { text: "Source" }), source]),
         fields.length ? fold(`materials[${i}].more`, `More properties for connectors${given ? ` (${given} given)` : ""}: G, ρ_k, ρ_mean, F_y, F_u, rolling shear`, [fieldGrid(fields)]) : null,
       ]);
     },
