@@ -18,7 +18,7 @@ export function jointNames(joints: string[]): string {
 
 /** What one zone asks the builder for: "@ 55 mm", "2 in @ 5 in", "continuous". */
 export function zoneCallOut(j: FieldJoint, z: FieldZone, dims: BuilderDimensions): string {
-  if (j.kind === "bond-line") return "glued over the whole length";
+  if (j.kind === "bond-line") return j.run ? "glued over the part's whole run" : "glued over the whole length";
   if (j.kind === "weld") return z.spacing === null || z.segment === null ? "continuous" : `${dims.length(z.segment, "up")} @ ${dims.length(z.spacing, "down")}`;
   return z.spacing === null ? "—" : `@ ${dims.length(z.spacing, "down")}`;
 }

@@ -52,6 +52,13 @@ export function fieldSheet(c: WorksheetContext): number[] {
   paintDrawing(sheet.doc, elevation, sheet.left, sheet.y);
   sheet.y += elevation.height + 8;
 
+  const laidOut = new Set(joints.flatMap((j) => j.joints));
+  const missing = result.joints.filter((j) => !laidOut.has(j.id));
+  if (missing.length > 0)
+    sheet.paragraph(`No layout in the result for ${missing.map((j) => `joint ${j.id}`).join(", ")}: nothing is drawn for ${missing.length === 1 ? "it" : "them"}. Do not build ${missing.length === 1 ? "that joint" : "those joints"} from this sheet.`, {
+      font: "bold",
+      colour: ink.fail,
+    });
   zonesTable(c, joints, dims);
   const last = sheet.doc.bufferedPageRange().count - 1;
   return Array.from({ length: last - page + 1 }, (_, i) => page + i);
@@ -137,7 +144,7 @@ function zonesTable(c: WorksheetContext, joints: FieldJoint[], dims: BuilderDime
   const { sheet, result } = c;
   for (const j of joints.filter((k) => k.kind === "bond-line")) {
     sheet.heading(`Bond line — ${jointNames(j.joints)}`, 2, 20);
-    sheet.paragraph(`${j.connectorLabel}: glued over the whole contact width${j.bondWidth !== null ? ` of ${dims.length(j.bondWidth)}` : ""} and the whole length of ${dims.run(result.beam.length)}, with the adhesive and curing the engineer of record specifies.`, {
+    sheet.paragraph(`${j.connectorLabel}: glued over the whole contact width${j.bondWidth !== null ? ` of ${dims.length(j.bondWidth)}` : ""} and ${j.run ? `from ${dims.position(j.run.from)} to ${dims.position(j.run.to)} from END A` : `the whole length of ${dims.run(result.beam.length)}`}, with the adhesive and curing the engineer of record specifies.`, {
       size: 8.5,
       colour: j.passes ? ink.text : ink.fail,
       font: j.passes ? "body" : "bold",

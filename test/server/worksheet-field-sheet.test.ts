@@ -4,7 +4,10 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { afterAll, describe, expect, test } from "vitest";
 import { builderDimensions, feetInchesText, inchesText } from "../../core/draw/builder-dimensions.js";
+import { fieldElevation } from "../../core/draw/field-elevation.js";
 import { fieldLayout } from "../../core/draw/field-layout.js";
+import { renderSvg } from "../../core/draw/render-svg.js";
+import { sectionSketch } from "../../core/draw/section-sketch.js";
 import { placeInTiers } from "../../core/draw/label-tiers.js";
 import { runDesign, type DesignRun } from "../../server/design-service.js";
 import { FIELD_SHEET_BAND, FIELD_SHEET_HEADING } from "../../server/pdf/field-sheet.js";
@@ -99,6 +102,32 @@ describe("builderDimensions(system): dimensions as a builder reads them", () => 
     );
     expect(placed.map((p) => p.tier)).toEqual([0, 1, 1]);
     expect(placed[0]!.anchor).toBe("start");
+  });
+});
+
+describe("fieldElevation(input) and sectionSketch(result): plain drawings the page can show too", () => {
+  const names = readdirSync(EXAMPLES).filter((f) => f.endsWith(".json")).map((f) => f.replace(/\.json$/, ""));
+  test.each(names)("%s: finite geometry, one strip per joint layout, every joint named in the sketch", (name) => {
+    const run = runDesign(example(name));
+    const joints = fieldLayout(run.result, { mirrorSymmetricWelds: run.job.spacing.symmetric });
+    const drawing = fieldElevation(
+      {
+        dims: builderDimensions(run.result.units),
+        length: run.result.beam.length,
+        spans: run.result.beam.spans,
+        supports: run.result.beam.supports,
+        pointLoads: run.job.beam.loads.flatMap((l) => (l.type === "point" ? [{ at: l.at, label: l.label }] : [])),
+        joints,
+      },
+      { width: 515 },
+    );
+    const svg = renderSvg(drawing);
+    expect(svg).not.toMatch(/NaN|Infinity|undefined/);
+    expect(drawing.items.filter((i) => i.role === "joint-title")).toHaveLength(joints.length);
+    expect(joints.flatMap((j) => j.joints).sort()).toEqual(run.result.joints.map((j) => j.id).sort());
+    const sketch = renderSvg(sectionSketch(run.result, { width: 190, height: 112 }));
+    expect(sketch).not.toMatch(/NaN|Infinity|undefined/);
+    for (const j of run.result.joints) expect(sketch).toContain(`joint ${j.id}`);
   });
 });
 
