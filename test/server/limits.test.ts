@@ -1,0 +1,138 @@
+// Every size limit answers with a 413 or a 400 that names the limit and the field; past the time
+// limit a design is stopped with a 422, and the service goes on answering.
+import type { FastifyInstance } from "fastify";
+import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { buildApp } from "../../server/app.js";
+import { serviceLimits } from "../../server/job-limits.js";
+import { example } from "./store/store-fixtures.js";
+
+let app: FastifyInstance;
+beforeAll(async () => {
+  app = await buildApp();
+  await app.ready();
+});
+afterAll(() => app.close());
+
+const design = (body: unknown) => app.inject({ method: "POST", url: "/api/designs", payload: typeof body === "string" ? body : JSON.stringify(body), headers: { "content-type": "application/json" } });
+
+/** The one issue at `path`, failing with every issue when there is none. */
+async function refusedAt(body: unknown, path: string, status = 400) {
+  const res = await design(body);
+  expect(res.statusCode, res.body.slice(0, 500)).toBe(status);
+  const issue = res.json().issues.find((i: { path: string }) => i.path === path);
+  expect(issue, JSON.stringify(res.json().issues).slice(0, 500)).toBeDefined();
+  return issue.message as string;
+}
+
+describe("size limits", () => {
+  test("a body over 1 MiB is a 413 that names the limit", async () => {
+    const job = example("workshop-box-beam.si");
+    job.member.description = "x".repeat(serviceLimits.bodyBytes);
+    const res = await design(job);
+    expect(res.statusCode).toBe(413);
+    expect(res.json()).toMatchObject({ code: "ERR_BODY_TOO_LARGE", message: "The request body is larger than the limit of 1 MiB.", issues: [{ path: "(body)", message: "must be at most 1 MiB" }] });
+  });
+
+  test("a project import may be larger than a job (64 MiB), and its 413 says so", async () => {
+    const small = await buildApp({ bodyLimit: 1000 });
+    try {
+      const res = await small.inject({ method: "POST", url: "/api/designs", payload: JSON.stringify({ pad: "x".repeat(2000) }), headers: { "content-type": "application/json" } });
+      expect(res.json().message).toBe("The request body is larger than the limit of 1000 bytes.");
+    } finally {
+      await small.close();
+    }
+  });
+
+  test("more than 16 parts, 12 materials, 12 connectors, 12 spans or 200 loads: a 400 naming the limit at its field", async () => {
+    const job = example("workshop-box-beam.si");
+    expect(await refusedAt({ ...job, parts: Array.from({ length: 17 }, () => job.parts[0]) }, "parts")).toBe("at most 16 parts");
+    expect(await refusedAt({ ...job, materials: Array.from({ length: 13 }, () => job.materials[0]) }, "materials")).toBe("at most 12 materials");
+    expect(await refusedAt({ ...job, connectors: Array.from({ length: 13 }, () => job.connectors[0]) }, "connectors")).toBe("at most 12 connectors");
+    expect(await refusedAt({ ...job, beam: { ...job.beam, spans: Array(13).fill(1) } }, "beam.spans")).toBe("at most 12 spans");
+    expect(await refusedAt({ ...job, beam: { ...job.beam, loads: Array(201).fill(job.beam.loads[0]) } }, "beam.loads")).toBe("at most 200 loads");
+  });
+
+  test("a schedule to check with more than 5000 positions or 60 zones: a 400 naming the limit", async () => {
+    const job = example("workshop-box-beam.si");
+    const checking = (provided: unknown) => ({ ...job, mode: "check", fastening: { ...job.fastening, default: { ...job.fastening.default, provided } } });
+    const positions = Array.from({ length: 5001 }, (_, i) => i / 1000);
+    expect(await refusedAt(checking({ type: "positions", positions }), "fastening.default.provided.positions")).toBe("at most 5000 positions");
+    const zones = Array.from({ length: 61 }, (_, i) => ({ from: i * 0.05, to: (i + 1) * 0.05, spacing: 50 }));
+    expect(await refusedAt(checking({ type: "zones", zones }), "fastening.default.provided.zones")).toBe("at most 60 zones");
+  });
+
+  test("a member longer than the limit is refused at beam.spans with the limit, in the job's units (1e300 m used to stop the process)", async () => {
+    // The service takes members up to 1,000 m; core may refuse shorter ones with its own range.
+    const limit = /(up to|to) (500|1000) m\b/;
+    const si = example("workshop-box-beam.si");
+    si.beam.loads = [];
+    expect(await refusedAt({ ...si, beam: { ...si.beam, spans: [1e300] } }, "beam.spans")).toMatch(new RegExp(`^(the member is )?1e\\+300 m .*${limit.source}`));
+    expect(await refusedAt({ ...si, beam: { ...si.beam, spans: [600, 600] } }, "beam.spans")).toMatch(new RegExp(`^(the member is )?1200 m .*${limit.source}`));
+    const us = example("loft-beam-16d.us");
+    us.beam.loads = [];
+    expect(await refusedAt({ ...us, beam: { ...us.beam, spans: [4000] } }, "beam.spans")).toMatch(/^(the member is )?4000 ft .*(up to|to) (1640|3281) ft\b/);
+  });
+
+  test("text fields have a length limit that the message states", async () => {
+    const job = example("workshop-box-beam.si");
+    expect(await refusedAt({ ...job, project: { ...job.project, name: "n".repeat(10_000) } }, "project.name")).toMatch(/^must be at most \d+ characters$/);
+  });
+
+  test("stations stay bounded: 200 point loads on 12 spans give at most about 2 per load and support beyond the 100-division grid", async () => {
+    const job = example("workshop-box-beam.si");
+    const spans = Array(12).fill(4);
+    const loads = Array.from({ length: 200 }, (_, i) => ({ type: "point", category: "dead", P: 0.5, at: 0.1 + i * 0.2395 }));
+    const res = await design({ ...job, beam: { spans, loads, patternedCategories: [], selfWeight: false } });
+    expect(res.statusCode, res.body.slice(0, 400)).toBe(200);
+    expect(res.json().beam.stations.length).toBeLessThanOrEqual(2 * (loads.length + spans.length + 1) + 110);
+  });
+
+  test("at most 100 problems are listed; the rest are counted in one line", async () => {
+    const job = example("workshop-box-beam.si");
+    const res = await design({ ...job, beam: { ...job.beam, loads: Array(150).fill({ type: "point", category: "nonsense" }) } });
+    expect(res.statusCode).toBe(400);
+    const { issues } = res.json();
+    expect(issues).toHaveLength(101);
+    expect(issues[100]).toEqual({ path: "(document)", message: expect.stringMatching(/^and \d+ more problems not listed$/) });
+  });
+
+  test("a body nested 100,000 deep is a 400, not a crash", async () => {
+    const deepArray = "[".repeat(100_000) + "]".repeat(100_000);
+    expect((await design(deepArray)).statusCode).toBe(400);
+    const job = JSON.stringify(example("workshop-box-beam.si"));
+    const deepField = job.replace('"project":{', `"project":{"deep":${'{"a":'.repeat(100_000)}1${"}".repeat(100_000)},`);
+    const res = await design(deepField);
+    expect(res.statusCode).toBe(400);
+    expect(res.json().issues.length).toBeGreaterThan(0);
+  });
+});
+
+describe("the time limit", () => {
+  test("a design past the limit is stopped with a 422 naming the limit, and the next design is answered", { timeout: 120_000 }, async () => {
+    const limited = await buildApp({ timeLimits: { designMs: 300 } });
+    try {
+      const job = example("workshop-box-beam.si");
+      // A heavy but valid member: six spans, 60 loads, three patterned categories (about a second or more).
+      const categories = ["dead", "live", "snow", "wind"];
+      const heavy = {
+        ...job,
+        beam: {
+          spans: Array(6).fill(3.2),
+          loads: Array.from({ length: 60 }, (_, i) => ({ type: "point", category: categories[i % 4], P: 1, at: (i * 0.31) % 19 })),
+          patternedCategories: ["live", "snow", "wind"],
+        },
+        combinations: { set: "asce7-22-allowable" },
+      };
+      // The first design starts the thread (outside the limit); then the heavy one.
+      expect((await limited.inject({ method: "POST", url: "/api/designs", payload: job })).statusCode).toBe(200);
+      const res = await limited.inject({ method: "POST", url: "/api/designs", payload: heavy });
+      expect(res.statusCode, res.body.slice(0, 300)).toBe(422);
+      expect(res.json()).toMatchObject({ code: "ERR_DESIGN_TIME_LIMIT", message: "The design took longer than the limit of 0.3 s and was stopped; nothing was stored or changed." });
+      expect(res.json().issues[0].message).toMatch(/^takes longer than 0.3 s to design; fewer spans, loads/);
+      const after = await limited.inject({ method: "POST", url: "/api/designs", payload: { ...job, member: { ...job.member, mark: "after" } } });
+      expect(after.statusCode).toBe(200);
+    } finally {
+      await limited.close();
+    }
+  });
+});
