@@ -88,6 +88,8 @@ export function checkGeometry(job: JobDocument): JobIssue[] {
   const add = (path: string, message: string) => issues.push({ path, message });
   const text = (value: number, quantity: Parameters<typeof inJobUnits>[1]) => inJobUnits(value, quantity, job.units);
   const L = job.beam.spans.reduce((s, l) => s + l, 0);
+  issues.push(...physicalRanges(job, text));
+  if (issues.length > 0) return issues;
   job.parts.forEach((p, i) => {
     if (!p.extent) return;
     const { from, to } = partExtent(p, L);
@@ -180,5 +182,30 @@ function checkProvidedSchedules(joints: MemberJoint[], L: number, span: (x: numb
       });
     }
   }
+  return issues;
+}
+
+/**
+ * Ranges outside which a number cannot describe a built-up beam, core units: a modulus from 1 MPa
+ * (soft foams) to 1 000 000 MPa (above any metal), a density up to 25 000 kg/m³ (above any metal),
+ * part dimensions from 0.05 mm to 20 m, and a member up to 500 m long. Inside them the analysis is
+ * well conditioned; outside them the input is refused rather than computed.
+ */
+function physicalRanges(job: JobDocument, text: (value: number, quantity: Parameters<typeof inJobUnits>[1]) => string): JobIssue[] {
+  const issues: JobIssue[] = [];
+  const outside = (path: string, value: number, quantity: Parameters<typeof inJobUnits>[1], lo: number, hi: number, what: string) => {
+    if (value < lo || value > hi) issues.push({ path, message: `${text(value, quantity)} is outside the range of ${what} (${text(lo, quantity)} to ${text(hi, quantity)})` });
+  };
+  job.materials.forEach((m, i) => {
+    outside(`materials[${i}].E`, m.E, "modulus", 1, 1e6, "structural materials");
+    outside(`materials[${i}].density`, m.density, "density", 0, 25_000, "structural materials");
+  });
+  job.parts.forEach((part, i) => {
+    for (const [key, value] of Object.entries(part.shape)) {
+      if (typeof value === "number") outside(`parts[${i}].shape.${key}`, value, "length", 0.05, 20_000, "part dimensions");
+    }
+  });
+  const L = job.beam.spans.reduce((s, l) => s + l, 0);
+  outside("beam.spans", L, "span", 1, 500_000, "member lengths");
   return issues;
 }

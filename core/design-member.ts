@@ -146,7 +146,7 @@ export function designMember(job: JobDocument): DesignResult {
       if (short.length === 0) break;
       const byJoint = new Map<string, typeof short>();
       for (const t of short) byJoint.set(t.joint, [...(byJoint.get(t.joint) ?? []), t]);
-      for (const t of short) boost.set(`${t.joint}|${t.end}`, (boost.get(`${t.joint}|${t.end}`) ?? 1) * Math.max(1.02, Math.min(t.utilisation, 3)));
+      for (const t of short) boost.set(`${t.joint}|${t.end}`, (boost.get(`${t.joint}|${t.end}`) ?? 1) * Math.max(1.02, Math.min(t.utilisation ?? 3, 3)));
       for (const [id] of byJoint) {
         const p = prepared.find((x) => x.joint.id === id)!;
         const r = runs.get(id)!;
@@ -188,7 +188,7 @@ export function designMember(job: JobDocument): DesignResult {
     ...welds.filter((w) => !w.passes).map((w) => `Weld ${w.joint}: shear flow exceeds the weld's resistance (utilisation ${w.utilisation.toFixed(2)}).${w.sizeNote ? ` ${w.sizeNote}` : ""}`),
     ...checks.filter((c) => !c.passes).map((c) => `${c.title}: utilisation ${c.utilisation.toFixed(2)}.`),
     ...(composite.result && !composite.result.applies ? [`Slip-aware composite action was asked for but cannot be applied: ${composite.result.reason}`] : []),
-    ...terminations.filter((t) => !t.passes).map((t) => `End of ${t.part} (${t.end}, joint ${t.joint}): ${t.note || "the connectors there do not develop the part's force"} (utilisation ${Number.isFinite(t.utilisation) ? t.utilisation.toFixed(2) : "∞"}).`),
+    ...terminations.filter((t) => !t.passes).map((t) => `End of ${t.part} (${t.end}, joint ${t.joint}): ${t.note || "the connectors there do not develop the part's force"} (${t.utilisation === null ? "no connectors there to develop it" : `utilisation ${t.utilisation.toFixed(2)}`}).`),
   ];
 
   return {

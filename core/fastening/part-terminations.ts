@@ -114,7 +114,7 @@ export function partTerminations(p: {
       }
       const demand = !needed ? 0 : weld ? momentEnvelope(p.beam, developedAt) * inside.flowFactor : force;
       const lengthOk = required === null || cutoff === null || available >= required - 1e-9;
-      const utilisation = demand > 0 ? (provided > 0 ? demand / provided : Infinity) : 0;
+      const utilisation = demand > 0 ? (provided > 0 ? demand / provided : null) : 0;
       const overstressedEnd = cutoff !== null && cutoff === at && capacity !== null;
       out.push({
         joint: joint.joint.id,
@@ -128,7 +128,7 @@ export function partTerminations(p: {
         capacity: provided,
         connectors: connectors || "no connectors of a kind that can develop a force",
         utilisation,
-        passes: utilisation <= 1 + 1e-9 && lengthOk && !overstressedEnd,
+        passes: utilisation !== null && utilisation <= 1 + 1e-9 && lengthOk && !overstressedEnd,
         reference: weld ? "AISC 360-16 §F13.3, eq. (F13-6): a′ = 2w without a weld across the plate's end [M]" : "AISC 360-16 §F13.3: connectors between the theoretical cut-off and the plate's end develop the plate's force [M]",
         note: [note, !lengthOk ? `The part runs ${span(available)} past the cut-off; a′ = ${inJobUnits(required!, "length", p.job.units)} is needed.` : ""].filter(Boolean).join(" "),
       });

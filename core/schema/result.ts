@@ -462,7 +462,8 @@ export const DesignResult = z.object({
       /** What the connectors within the available length carry. */
       capacity: q("force"),
       connectors: z.string(),
-      utilisation: z.number(),
+      /** Force over what the connectors there carry; null when none are there to carry it. */
+      utilisation: z.number().nullable(),
       passes: z.boolean(),
       reference: z.string(),
       note: z.string(),

@@ -37,7 +37,7 @@ export function terminationsSection(c: WorksheetContext): void {
       text.of(e.force, "force"),
       `${text.of(e.available, "span")} / ${e.required === null ? "—" : text.of(e.required, "span")}`,
       { text: e.connectors, note: `carry ${text.of(e.capacity, "force")}${e.note ? `; ${e.note}` : ""}` },
-      formatRatio(e.utilisation),
+      e.utilisation === null ? "— (none there)" : formatRatio(e.utilisation),
       e.passes ? { text: "passes", colour: ink.pass } : { text: "FAILS", bold: true, colour: ink.fail },
     ]),
     { rowColour: (i) => (ends[i] && !ends[i]!.passes ? ink.fail : undefined) },

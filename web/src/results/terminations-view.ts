@@ -15,7 +15,7 @@ interface Termination {
   required: number | null;
   capacity: number;
   connectors: string;
-  utilisation: number;
+  utilisation: number | null;
   passes: boolean;
   reference: string;
   note: string;
@@ -43,7 +43,7 @@ export function terminationsBlock(result: DesignResult): HTMLElement | null {
           formatNumber(t.force),
           `${formatNumber(t.available)}${t.required === null ? "" : ` / ${formatNumber(t.required)}`}`,
           formatNumber(t.capacity),
-          utilisation(t.utilisation, t.passes),
+          utilisation(t.utilisation ?? Number.POSITIVE_INFINITY, t.passes),
         ],
       })),
       { numeric: [1, 2, 3, 4, 5], captionHidden: true },
