@@ -1,0 +1,207 @@
+// Security of the local service: where it listens, its headers, the Host check, what static serving
+// can reach, and names people type kept as text in the API, the PDF and its file name.
+import { execFileSync } from "node:child_process";
+import { writeFileSync } from "node:fs";
+import { connect } from "node:net";
+import { networkInterfaces } from "node:os";
+import { join } from "node:path";
+import type { FastifyInstance } from "fastify";
+import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { startServer } from "../../bench/loopback.js";
+import { buildApp } from "../../server/app.js";
+import { example, tempFolder } from "./store/store-fixtures.js";
+
+let app: FastifyInstance;
+let port = 0;
+beforeAll(async () => {
+  app = await buildApp();
+  await app.listen({ port: 0, host: "127.0.0.1" });
+  port = (app.server.address() as { port: number }).port;
+});
+afterAll(() => app.close());
+
+/** One request written byte for byte (no client tidies the path), the whole answer read back. */
+function rawGet(path: string, host = `127.0.0.1:${port}`): Promise<{ status: number; headers: string; body: string }> {
+  return new Promise((resolve, reject) => {
+    const socket = connect(port, "127.0.0.1", () => socket.write(`GET ${path} HTTP/1.1\r\nHost: ${host}\r\nConnection: close\r\n\r\n`));
+    let text = "";
+    socket.setEncoding("latin1");
+    socket.on("data", (chunk) => (text += chunk));
+    socket.on("end", () => {
+      const [head = "", ...rest] = text.split("\r\n\r\n");
+      resolve({ status: Number(head.split(" ")[1]), headers: head, body: rest.join("\r\n\r\n") });
+    });
+    socket.on("error", reject);
+  });
+}
+
+/** A non-loopback IPv4 address of this machine, if it has one. */
+const outsideAddress = () =>
+  Object.values(networkInterfaces())
+    .flat()
+    .find((a) => a && a.family === "IPv4" && !a.internal)?.address;
+
+function canConnect(host: string, to: number): Promise<boolean> {
+  return new Promise((resolve) => {
+    const socket = connect({ host, port: to, timeout: 3000 }, () => {
+      socket.destroy();
+      resolve(true);
+    });
+    socket.on("error", () => resolve(false));
+    socket.on("timeout", () => {
+      socket.destroy();
+      resolve(false);
+    });
+  });
+}
+
+describe("where the service listens", () => {
+  test("npm start listens on 127.0.0.1 only, without a warning; other addresses of the machine refuse the connection", { timeout: 120_000 }, async () => {
+    const server = await startServer();
+    try {
+      expect(server.url).toMatch(/^http:\/\/127\.0\.0\.1:\d+$/);
+      expect(server.output()).not.toMatch(/Warning/);
+      const serverPort = Number(new URL(server.url).port);
+      expect(await canConnect("127.0.0.1", serverPort)).toBe(true);
+      const outside = outsideAddress();
+      if (outside) expect(await canConnect(outside, serverPort)).toBe(false);
+    } finally {
+      await server.stop();
+    }
+  });
+
+  test("--host 0.0.0.0 must be asked for, prints a warning that the service has no login, and answers under any host name", { timeout: 120_000 }, async () => {
+    const server = await startServer(["--host", "0.0.0.0"]);
+    try {
+      expect(server.output()).toMatch(/Warning: listening on 0\.0\.0\.0 makes the service reachable from other machines/);
+      const res = await fetch(`http://127.0.0.1:${new URL(server.url).port}/api/health`, { headers: { host: "workshop-pc.local" } });
+      expect(res.status).toBe(200);
+    } finally {
+      await server.stop();
+    }
+  });
+});
+
+describe("headers", () => {
+  test("the page comes with a strict content security policy and the usual hardening headers", async () => {
+    const res = await rawGet("/");
+    expect(res.status).toBe(200);
+    const csp = /content-security-policy: (.*)/i.exec(res.headers)?.[1] ?? "";
+    for (const directive of ["default-src 'self'", "script-src 'self'", "script-src-attr 'none'", "style-src 'self'", "object-src 'none'", "base-uri 'none'", "frame-ancestors 'none'", "connect-src 'self'"]) {
+      expect(csp).toContain(directive);
+    }
+    expect(csp).not.toMatch(/unsafe-inline|unsafe-eval|\*/);
+    expect(res.headers).toMatch(/x-content-type-options: nosniff/i);
+    expect(res.headers).toMatch(/x-frame-options: SAMEORIGIN/i);
+    expect(res.headers).toMatch(/referrer-policy: no-referrer/i);
+    expect(res.headers).toMatch(/cross-origin-opener-policy: same-origin/i);
+    expect(res.headers).not.toMatch(/x-powered-by/i);
+    // Plain HTTP on this machine: HSTS would only confuse a browser.
+    expect(res.headers).not.toMatch(/strict-transport-security/i);
+  });
+
+  test("API answers and errors carry the same headers", async () => {
+    for (const path of ["/api/health", "/api/nothing"]) {
+      const res = await rawGet(path);
+      expect(res.headers, path).toMatch(/content-security-policy: default-src 'self'/i);
+      expect(res.headers, path).toMatch(/x-content-type-options: nosniff/i);
+    }
+  });
+});
+
+describe("the Host check (DNS rebinding)", () => {
+  test("a request addressed to another host name is refused with a 403 naming the header", async () => {
+    const res = await rawGet("/api/health", "attacker.example:4318");
+    expect(res.status).toBe(403);
+    expect(JSON.parse(res.body)).toMatchObject({ code: "ERR_HOST_NOT_ALLOWED", issues: [{ path: "(headers).host" }] });
+    expect((await rawGet("/", "attacker.example")).status).toBe(403);
+  });
+
+  test("the loopback names are answered, with any port", async () => {
+    for (const host of [`127.0.0.1:${port}`, "localhost:4318", "LOCALHOST", "[::1]:4318"]) expect((await rawGet("/api/health", host)).status, host).toBe(200);
+  });
+});
+
+describe("static files", () => {
+  const secrets = /"name": "stitchplan"|buildApp|root:x:0:0|from "\.\/|import \{/;
+
+  test("the page, its style sheet and icon are served", async () => {
+    for (const path of ["/", "/index.html", "/style.css", "/favicon.svg", "/app.js"]) expect((await rawGet(path)).status, path).toBe(200);
+  });
+
+  test.each([
+    "/../package.json",
+    "/..%2fpackage.json",
+    "/%2e%2e/package.json",
+    "/%2e%2e%2fpackage.json",
+    "/.%2e/package.json",
+    "/%252e%252e%252fpackage.json",
+    "/..%252f..%252fetc%252fpasswd",
+    "/%2e%2e/%2e%2e/%2e%2e/etc/passwd",
+    "/..%5cpackage.json",
+    "/index.html/../../package.json",
+    "/favicon.svg/..%2f..%2fpackage.json",
+    "/style.css%2f..%2f..%2fserver%2fapp.ts",
+    "/%00",
+    "/index.html%00.txt",
+  ])("%s does not reach outside web/", async (path) => {
+    const res = await rawGet(path);
+    expect([400, 403, 404]).toContain(res.status);
+    expect(res.body).not.toMatch(secrets);
+  });
+
+  test.each(["/src/main.ts", "/src/", "/src", "/src%2fmain.ts", "/src%2Fmain.ts", "/%73rc/main.ts", "/%2573rc/main.ts", "/./src/main.ts", "//src/main.ts", "/src/../src/main.ts", "/src/form/../main.ts", "/src;/main.ts", "/src%5cmain.ts", "/SRC/main.ts"])(
+    "%s: web/src is not served",
+    async (path) => {
+      const res = await rawGet(path);
+      expect([400, 403, 404]).toContain(res.status);
+      expect(res.body).not.toMatch(secrets);
+    },
+  );
+});
+
+describe("names people type", () => {
+  const hostile = {
+    project: `<script>alert("p")</script> O'Brien & "Sons" — Δοκός Балка`,
+    mark: `B-1 "</title><img src=x onerror=1>`,
+    description: "\u202eevil\u202c ≤ τ ≥ σ; \r\nSet-Cookie: x=1",
+    number: `../../etc/passwd\r\nX-Injected: 1`,
+  };
+
+  function hostileJob() {
+    const job = example("workshop-box-beam.si");
+    job.project.name = hostile.project;
+    job.project.number = hostile.number;
+    job.member.mark = hostile.mark;
+    job.member.description = hostile.description;
+    return job;
+  }
+
+  test("the API returns them as JSON strings, unchanged", async () => {
+    const res = await app.inject({ method: "POST", url: "/api/designs", payload: hostileJob() });
+    expect(res.statusCode).toBe(200);
+    expect(res.headers["content-type"]).toBe("application/json; charset=utf-8");
+    expect(res.json().project.name).toBe(hostile.project);
+    expect(res.json().member.mark).toBe(hostile.mark);
+  });
+
+  test("the worksheet prints them literally (pdftotext), and its file name header holds only safe characters", { timeout: 120_000 }, async () => {
+    const res = await app.inject({ method: "POST", url: "/api/worksheets", payload: hostileJob() });
+    expect(res.statusCode).toBe(200);
+    const disposition = String(res.headers["content-disposition"]);
+    expect(disposition).toMatch(/^attachment; filename="[A-Za-z0-9._-]+\.pdf"$/);
+    expect(Object.keys(res.headers)).not.toContain("x-injected");
+    expect(Object.keys(res.headers)).not.toContain("set-cookie");
+    const folder = tempFolder("security-pdf");
+    try {
+      const file = join(folder.dir, "sheet.pdf");
+      writeFileSync(file, res.rawPayload);
+      const text = execFileSync("pdftotext", ["-enc", "UTF-8", file, "-"], { encoding: "utf8" }).replace(/\s+/g, " ");
+      expect(text).toContain(`<script>alert("p")</script> O'Brien & "Sons" — Δοκός Балка`);
+      expect(text).toContain(`B-1 "</title><img src=x onerror=1>`);
+      expect(text).toContain("≤ τ ≥ σ");
+    } finally {
+      folder.remove();
+    }
+  });
+});
