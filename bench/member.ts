@@ -2,7 +2,7 @@
 // example) and a three-span member with every combination of a set and its live-load patterns.
 import { readFileSync } from "node:fs";
 import { designMember, DesignResult, prepareJob, toDisplayUnits } from "../core/index.js";
-import { fingerprintOf } from "../server/design-service.js";
+import { fingerprintOf } from "../server/fingerprint.js";
 import { SIMPLE_MEMBER } from "./http.js";
 import { timeIt } from "./time-it.js";
 

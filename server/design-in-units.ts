@@ -1,5 +1,5 @@
 import { designMember, DesignResult, prepareJob, toDisplayUnits, unitLabels, type JobDocument, type UnitSystem } from "../core/index.js";
-import { fingerprintOf } from "./design-service.js";
+import { fingerprintOf } from "./fingerprint.js";
 import { ApiError } from "./errors.js";
 import { jobLimitIssues } from "./job-limits.js";
 

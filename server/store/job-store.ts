@@ -1,7 +1,7 @@
 import { join } from "node:path";
 import Database from "better-sqlite3";
 import { canonicalJson, designMember, issuesFromZod, PROGRAM, prepareJob, type JobDocument, type JobIssue } from "../../core/index.js";
-import { fingerprintOf } from "../design-service.js";
+import { fingerprintOf } from "../fingerprint.js";
 import { ApiError } from "../errors.js";
 import { summariseResult, type ResultSummary } from "../result-summary.js";
 import { LATEST_SCHEMA_VERSION, schemaVersion } from "./migrations.js";
