@@ -8,6 +8,7 @@ import { dowelConditions, ec5StandardText, ndsStandardText, onSizeField, refineT
 import { ec5YieldMoment } from "./timber/ec5-embedment.js";
 import { knownScrewGauges, screwGauge } from "./timber/fastener-sizes.js";
 import { ndsNailBendingYield } from "./timber/nds-dowel-bearing.js";
+import { screwYieldDiameter } from "./timber/screw-yield-diameter.js";
 
 export const WoodScrew = z
   .strictObject({
@@ -57,16 +58,7 @@ function specOf(c: WoodScrew, context: ConnectorContext | undefined): DowelSpec 
   const threadsInPlane = c.threadLength === undefined || c.threadLength > penetration;
   const shankPenetration = penetration - (c.threadLength ?? penetration);
   const isNds = c.standard === "NDS-2018";
-  let yieldDiameter: number;
-  let note: string;
-  if (isNds) {
-    yieldDiameter = threadsInPlane ? root : d;
-    note = threadsInPlane ? "root diameter D_r: threads in the shear plane" : "shank diameter: the shank crosses the shear plane";
-  } else {
-    const shankOk = !threadsInPlane && shankPenetration >= 4 * d;
-    yieldDiameter = shankOk ? d : 1.1 * root;
-    note = shankOk ? "d_ef = smooth shank diameter (§8.7.1(2))" : "d_ef = 1.1 × root diameter (§8.7.1(3))";
-  }
+  const { yieldDiameter, note } = screwYieldDiameter({ nds: isNds, shank: d, root, threadsInPlane, shankPenetration });
   const conditions = dowelConditions(c, 1.0, "screws, at most 100 %");
   const fu = c.tensileStrength ?? 0;
   const My = ec5YieldMoment("round", fu, yieldDiameter);
