@@ -90,7 +90,8 @@ export function distinctBody(job: Record<string, unknown>): string {
 
 export interface Load {
   path: string;
-  body: string;
+  /** The body of every request, or bodies taken in turn. */
+  body: string | string[];
   connections: number;
   /** Every request a different job (`[<id>]` in the body replaced). */
   distinct: boolean;
@@ -125,21 +126,19 @@ export async function fire(url: string, load: Load, seconds: number, maxRequests
     duration: seconds,
     timeout: 60,
     idReplacement: load.distinct,
-    requests: [
-      {
-        method: "POST",
-        headers: { "content-type": "application/json" },
-        body: load.body,
-        onResponse: (status: number, body: string) => {
-          answered++;
-          if (!load.check(status, body)) {
-            bad++;
-            if (badSamples.length < 5) badSamples.push(`${status} ${body.slice(0, 300)}`);
-          }
-          if (answered >= maxRequests) instance?.stop();
-        },
+    requests: (Array.isArray(load.body) ? load.body : [load.body]).map((body) => ({
+      method: "POST" as const,
+      headers: { "content-type": "application/json" },
+      body,
+      onResponse: (status: number, answer: string) => {
+        answered++;
+        if (!load.check(status, answer)) {
+          bad++;
+          if (badSamples.length < 5) badSamples.push(`${status} ${answer.slice(0, 300)}`);
+        }
+        if (answered >= maxRequests) instance?.stop();
       },
-    ],
+    })),
   };
   const result = await new Promise<autocannon.Result>((resolve, reject) => {
     instance = autocannon(options, (error, figures) => (error ? reject(error) : resolve(figures)));
