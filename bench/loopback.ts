@@ -15,20 +15,33 @@ export interface RunningServer {
   pid: number;
   /** Everything the server printed, both streams. */
   output: () => string;
+  /** Resolves with the exit code (null when a signal ended it) once the process has ended. */
+  exited: Promise<number | null>;
+  /** Ends it at once, like a power cut or `kill -9`. */
+  kill: () => void;
   stop: () => Promise<void>;
 }
 
-/** `server/main.ts` on a free port with a fresh data folder, started with node and the tsx loader (so its pid is the server's). */
-export async function startServer(extraArgs: string[] = [], nodeArgs: string[] = []): Promise<RunningServer> {
-  const data = mkdtempSync(join(tmpdir(), "stitchplan-loopback-"));
+export interface ServerOptions {
+  /** More arguments for server/main.ts (`--host`, `--threads`). */
+  args?: string[];
+  /** Arguments for node itself (`--cpu-prof`). */
+  nodeArgs?: string[];
+  /** The job store's folder, kept afterwards; a fresh one removed on stop when absent. */
+  dataDir?: string;
+}
+
+/** `server/main.ts` on a free port, started with node and the tsx loader (so its pid is the server's). */
+export async function startServer(options: ServerOptions = {}): Promise<RunningServer> {
+  const data = options.dataDir ?? mkdtempSync(join(tmpdir(), "stitchplan-loopback-"));
   const loader = pathToFileURL(createRequire(import.meta.url).resolve("tsx")).href;
-  const child: ChildProcess = spawn(process.execPath, [...nodeArgs, "--import", loader, new URL("server/main.ts", root).pathname, "--port", "0", "--data", data, ...extraArgs], {
+  const child: ChildProcess = spawn(process.execPath, [...(options.nodeArgs ?? []), "--import", loader, new URL("server/main.ts", root).pathname, "--port", "0", "--data", data, ...(options.args ?? [])], {
     stdio: ["ignore", "pipe", "pipe"],
   });
   let text = "";
   child.stdout!.on("data", (d) => (text += d));
   child.stderr!.on("data", (d) => (text += d));
-  const exited = new Promise<void>((resolve) => child.once("exit", () => resolve()));
+  const exited = new Promise<number | null>((resolve) => child.once("exit", (code) => resolve(code)));
   const url = await new Promise<string>((resolve, reject) => {
     const timer = setTimeout(() => reject(new Error(`the server did not start within 60 s:\n${text}`)), 60_000);
     child.stdout!.on("data", () => {
@@ -40,16 +53,21 @@ export async function startServer(extraArgs: string[] = [], nodeArgs: string[] =
     });
     void exited.then(() => reject(new Error(`the server stopped before it was listening:\n${text}`)));
   });
+  const running = () => child.exitCode === null && child.signalCode === null;
   return {
     url,
     pid: child.pid!,
     output: () => text,
+    exited,
+    kill: () => {
+      if (running()) child.kill("SIGKILL");
+    },
     stop: async () => {
-      if (child.exitCode === null && child.signalCode === null) child.kill("SIGTERM");
+      if (running()) child.kill("SIGTERM");
       const killer = setTimeout(() => child.kill("SIGKILL"), 5000);
       await exited;
       clearTimeout(killer);
-      rmSync(data, { recursive: true, force: true });
+      if (!options.dataDir) rmSync(data, { recursive: true, force: true });
     },
   };
 }

@@ -26,7 +26,7 @@ const WORKER_ENTRY = new URL("./design-worker.ts", import.meta.url);
 /** A thread's heap: a result of tens of megabytes fits; a runaway stops that thread, not the service. */
 const HEAP_MB = 1536;
 
-const seconds = (ms: number) => `${Math.round(ms / 1000)} s`;
+const seconds = (ms: number) => `${Number((ms / 1000).toPrecision(2))} s`;
 
 /**
  * Designs and worksheets on worker threads, one task per thread at a time, so that the HTTP thread

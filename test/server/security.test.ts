@@ -71,7 +71,7 @@ describe("where the service listens", () => {
   });
 
   test("--host 0.0.0.0 must be asked for, prints a warning that the service has no login, and answers under any host name", { timeout: 120_000 }, async () => {
-    const server = await startServer(["--host", "0.0.0.0"]);
+    const server = await startServer({ args: ["--host", "0.0.0.0"] });
     try {
       expect(server.output()).toMatch(/Warning: listening on 0\.0\.0\.0 makes the service reachable from other machines/);
       const res = await fetch(`http://127.0.0.1:${new URL(server.url).port}/api/health`, { headers: { host: "workshop-pc.local" } });
