@@ -38,6 +38,18 @@ describe("required spacing s = n·R/q along the span", () => {
     }
   });
 
+  test("the same I on two continuous 4 m spans: s_req = 21.60 mm at the interior support (V = 5wL/8) and 36.00 mm at the ends (V = 3wL/8) (REFERENCES §3.5 [D])", () => {
+    const job = plankIJob();
+    job.beam = { spans: [4, 4], loads: [{ type: "uniform", category: "dead", w: 0.25 }], selfWeight: false };
+    const result = design(job);
+    const schedule = result.schedules.find((s) => s.joint === "top")!;
+    const at = (x: number) => result.beam.stations.map((st, i) => [st, i] as const).filter(([st]) => Math.abs(st - x) < 1e-6).map(([, i]) => schedule.requiredSpacing[i]!);
+    expectClose(Math.min(...at(4000)), 21.6, { rel: 1e-4 }, "s_req at the interior support");
+    expectClose(at(0)[0]!, 36.0, { rel: 1e-4 }, "s_req at the left end");
+    expectClose(at(8000)[0]!, 36.0, { rel: 1e-4 }, "s_req at the right end");
+    expect(schedule.verification.passes).toBe(true);
+  });
+
   test("the zones are symmetric about midspan and each zone's spacing is no larger than its smallest required spacing", () => {
     const schedule = design(plankIJob()).schedules[0]!;
     const zones = schedule.zones;
