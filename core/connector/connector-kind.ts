@@ -152,6 +152,8 @@ interface KindBase<C extends { kind: string }> {
    * property the method needs): the job is refused with these at their field paths.
    */
   problems?(connector: C, context: ConnectorContext): PlacementProblem[];
+  /** The same connector in the next larger trade sizes, smallest first, for a schedule no spacing can satisfy; none when the kind has no size family. */
+  largerSizes?(connector: C): C[];
 }
 
 /** Connectors placed one by one along a line: nails, screws, bolts, rated fasteners. */

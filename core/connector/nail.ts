@@ -6,7 +6,7 @@ import { MM_PER_IN, MPA_PER_PSI } from "./quantity-text.js";
 import { dowelDetailing, dowelProblems, dowelResistance, type DowelSpec } from "./timber/dowel-joint.js";
 import { dowelConditions, ec5StandardText, ndsStandardText, onSizeField, refineTimberStandard, timberAssumptions, timberDowelFields } from "./timber/dowel-schema.js";
 import { ec5YieldMoment } from "./timber/ec5-embedment.js";
-import { knownNailSizes, nailSize } from "./timber/fastener-sizes.js";
+import { knownNailSizes, largerNailSizes, nailSize } from "./timber/fastener-sizes.js";
 import { ndsNailBendingYield } from "./timber/nds-dowel-bearing.js";
 
 export const Nail = z
@@ -101,6 +101,7 @@ function describeNail(c: Nail): string {
 /** Nails by the NDS-2018 yield limit equations or the EN 1995-1-1 Johansen equations. */
 export const nailKind: DiscreteConnectorKind<Nail> = {
   kind: "nail",
+  largerSizes: (c) => (c.size !== undefined ? largerNailSizes(c.size).map((size) => ({ ...c, size, label: undefined })) : []),
   mechanism: "discrete",
   schema: Nail,
   describe: describeNail,

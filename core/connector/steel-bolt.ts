@@ -314,6 +314,12 @@ function describe(c: SteelBolt): string {
 /** Structural bolts joining steel plates: AISC 360-16 §J3 or EN 1993-1-8 Table 3.4. */
 export const steelBoltKind: DiscreteConnectorKind<SteelBolt> = {
   kind: "steel-bolt",
+  largerSizes: (c) => {
+    if (c.size === undefined) return [];
+    const sizes = c.standard === "AISC-360-16" ? knownInchSizes() : knownMetricSizes();
+    const at = sizes.indexOf(c.size.trim());
+    return at < 0 ? [] : sizes.slice(at + 1).map((size) => ({ ...c, size, label: undefined }));
+  },
   mechanism: "discrete",
   schema: SteelBolt,
   describe,

@@ -166,6 +166,7 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
     ? [
         `${design.infeasible.connectorsPerRowNeeded} connectors per row at the minimum spacing of ${len(design.spacings[0]!)}.`,
         `A connector with at least ${design.infeasible.resistanceFactorNeeded.toFixed(2)} × the resistance of ${label} at the same spacing.`,
+        ...largerSizeOption(kind, connector, contexts, resistances, design.infeasible.resistanceFactorNeeded, design.spacings[0]!, job.units),
         ...(limits.endDistance > design.spacings[0]! / 2 ? [`A shorter end distance than ${len(limits.endDistance)}, or an extra row near each end: the end row carries the flow from the member end to halfway to the next row.`] : []),
         `A glued joint: the bond-line stress would peak at ${inJobUnits(peakShear * stressFactor, "stress", job.units)} (τ = q/t over t = ${len(joint.contactWidth)}).`,
       ]
@@ -212,6 +213,33 @@ function designedAlike(
   const made = design();
   cache.set(key, made);
   return made;
+}
+
+/**
+ * The first larger trade size of the connector that carries the shortfall: no placement problem, and at
+ * its own smallest spacing a capacity per unit length (R/s) at least the factor needed times this one's
+ * at the smallest spacing allowed now, in every combination; or a sentence saying none of its sizes does.
+ */
+function largerSizeOption(
+  kind: DiscreteConnectorKind<Connector>,
+  connector: Connector,
+  contexts: ConnectorContext[][],
+  resistances: ConnectorResistance[],
+  factorNeeded: number,
+  smallestSpacing: number,
+  units: JobDocument["units"],
+): string[] {
+  const candidates = kind.largerSizes?.(connector) ?? [];
+  if (candidates.length === 0) return [];
+  for (const candidate of candidates) {
+    if (contexts[0]!.some((c) => (kind.problems?.(candidate, c) ?? []).length > 0)) continue;
+    const r = contexts.map((lines) => Math.min(...lines.map((c) => kind.resistance(candidate, c).value)));
+    const spacing = Math.max(governingLimits(contexts[0]!.map((c) => kind.detailing(candidate, c))).minSpacing, smallestSpacing);
+    if (r.every((value, i) => value / spacing >= (factorNeeded * resistances[i]!.value) / smallestSpacing * (1 - 1e-9))) {
+      return [`The next larger size that carries it: ${kind.describe(candidate)}, ${inJobUnits(Math.min(...r), "connectorForce", units)} per connector, at ${inJobUnits(spacing, "length", units)} or closer.`];
+    }
+  }
+  return [`No larger size of this connector, up to ${kind.describe(candidates[candidates.length - 1]!)}, carries it at its own smallest spacing.`];
 }
 
 function requiredAt(stations: Station[], demand: ReturnType<typeof demandCurve>): (number | null)[] {

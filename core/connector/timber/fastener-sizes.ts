@@ -25,6 +25,17 @@ export function nailSize(name: string): NailSize | null {
   return { name: `${Number(m[1])}d ${type}`, diameterIn: row[0], lengthIn: row[1] };
 }
 
+/** Nail sizes of the same type (common, box, sinker) with a larger diameter than this one, smallest first. */
+export function largerNailSizes(name: string): string[] {
+  const size = nailSize(name);
+  if (!size) return [];
+  const type = size.name.split(" ")[1] as keyof typeof nailTable;
+  return Object.entries(nailTable[type])
+    .filter(([, [d]]) => d > size.diameterIn + 1e-9)
+    .sort(([, [a]], [, [b]]) => a - b)
+    .map(([penny]) => `${penny}d ${type}`);
+}
+
 export const knownNailSizes = (): string[] =>
   Object.entries(nailTable).flatMap(([type, rows]) => Object.keys(rows).map((d) => `${d}d ${type}`));
 
