@@ -21,7 +21,7 @@ export class DesignSession {
   /** Issues shown at the fields now, and the part of them the service reported. */
   #issues: JobIssue[] = [];
   #serviceIssues: JobIssue[] = [];
-  /** The joints of the last result, as the form last listed them. */
+  /** The joints of the last result (and whether its section is side-by-side plies), as the form last listed them. */
   #jointsSeen = "";
   #keepResults = false;
   readonly #designedListeners: ((result: DesignResult) => void)[] = [];
@@ -95,7 +95,8 @@ export class DesignSession {
       this.registry.show([]);
       this.#results.showResult(answer.result);
       this.#results.showNotice({ freshness: "current", issues: [] });
-      const joints = JSON.stringify(answer.result.joints.map((j) => [j.id, j.connector, j.connectorLabel, j.rows, j.mechanism, j.contactWidth]));
+      // Whether the section is side-by-side plies decides whether the loads table offers the face a load arrives on.
+      const joints = JSON.stringify([answer.result.multiPly !== null, answer.result.joints.map((j) => [j.id, j.connector, j.connectorLabel, j.rows, j.mechanism, j.contactWidth])]);
       if (joints !== this.#jointsSeen) {
         this.#jointsSeen = joints;
         this.#form.refreshFromResult();

@@ -3,6 +3,7 @@ import type { JobSchema } from "../job-schema.js";
 import type { JobState } from "../job-state.js";
 import { checkStep } from "./check-step.js";
 import { combinationsStep } from "./combinations-step.js";
+import { compositeStep } from "./composite-step.js";
 import { connectorsStep } from "./connectors-step.js";
 import type { FormContext } from "./controls.js";
 import type { FieldRegistry } from "./field-registry.js";
@@ -14,9 +15,9 @@ import { projectStep } from "./project-step.js";
 import { spacingStep } from "./spacing-step.js";
 
 /** In the order a person thinks a member through. */
-const steps = [projectStep, materialsStep, partsStep, connectorsStep, jointsStep, loadsStep, combinationsStep, checkStep, spacingStep];
-/** Steps drawn from the last result (the joints it found), drawn again when those change. */
-const fromResult = new Set<(typeof steps)[number]>([jointsStep, checkStep]);
+const steps = [projectStep, materialsStep, partsStep, connectorsStep, jointsStep, loadsStep, combinationsStep, checkStep, spacingStep, compositeStep];
+/** Steps drawn from the last result (the joints it found; whether the section is side-by-side plies), drawn again when those change. */
+const fromResult = new Set<(typeof steps)[number]>([jointsStep, loadsStep, checkStep]);
 
 /** The job form: rebuilt whole when rows are added or removed, edited in place otherwise. */
 export class JobForm {
@@ -24,7 +25,8 @@ export class JobForm {
   readonly #root: HTMLElement;
   readonly #afterRender: () => void;
   #drawn: HTMLElement[] = [];
-  #pendingResultSteps = false;
+  /** Steps drawn from the result that wait while the user types in them. */
+  readonly #pendingResultSteps = new Set<number>();
 
   constructor(root: HTMLElement, state: JobState, registry: FieldRegistry, schema: JobSchema, result: () => DesignResult | null, afterRender: () => void) {
     this.#root = root;
@@ -32,7 +34,7 @@ export class JobForm {
     this.#ctx = { state, registry, schema, references: [], rerender: (focusPath) => this.render(focusPath), result };
     // Steps drawn from the result wait while the user is typing in them, and catch up when they leave.
     root.addEventListener("focusout", () => {
-      if (this.#pendingResultSteps) queueMicrotask(() => this.refreshFromResult());
+      if (this.#pendingResultSteps.size) queueMicrotask(() => this.#redraw([...this.#pendingResultSteps]));
     });
   }
 
@@ -43,27 +45,29 @@ export class JobForm {
     this.#ctx.references.length = 0;
     this.#drawn = steps.map((make, i) => make(this.#ctx, i + 1));
     this.#root.replaceChildren(...this.#drawn);
-    this.#pendingResultSteps = false;
+    this.#pendingResultSteps.clear();
     const target = focusPath ?? activePath;
     if (target) this.#root.querySelector<HTMLElement>(`[data-path="${CSS.escape(target)}"]`)?.focus();
     this.#afterRender();
   }
 
-  /** The joints found changed: draws the steps that list them again, unless the user is typing in one. */
+  /** The joints found changed: draws the steps that list them again, each unless the user is typing in it (that one catches up when they leave). */
   refreshFromResult(): void {
+    this.#redraw(steps.flatMap((make, i) => (fromResult.has(make) ? [i] : [])));
+  }
+
+  #redraw(indices: number[]): void {
     const active = document.activeElement;
-    const busy = this.#drawn.some((node, i) => fromResult.has(steps[i]!) && node.contains(active));
-    if (busy) {
-      this.#pendingResultSteps = true;
-      return;
-    }
-    this.#pendingResultSteps = false;
-    steps.forEach((make, i) => {
-      if (!fromResult.has(make)) return;
-      const next = make(this.#ctx, i + 1);
+    this.#pendingResultSteps.clear();
+    for (const i of indices) {
+      if (this.#drawn[i]?.contains(active)) {
+        this.#pendingResultSteps.add(i);
+        continue;
+      }
+      const next = steps[i]!(this.#ctx, i + 1);
       this.#drawn[i]?.replaceWith(next);
       this.#drawn[i] = next;
-    });
+    }
     this.#ctx.registry.forgetDetached();
     this.#afterRender();
   }

@@ -37,6 +37,8 @@ export function loadsStep(ctx: FormContext, number: number): HTMLElement {
   const offered = (schema.choices("beam.loads[].type") ?? ["uniform", "point"]).filter((k) => k in loadKinds);
   const kindChoices = offered.map((k) => ({ value: k, label: loadKinds[k]!.label }));
   const own = new Set(state.list("beam.categories").map((c) => String((c as Item)?.id ?? "")));
+  // The face a load arrives on is offered where the last result found side-by-side plies, or where a load already names one.
+  const faces = schema.known && !schema.has("beam.loads[].face") ? false : Boolean(ctx.result()?.multiPly) || loads.some((l) => l?.face !== undefined && l.face !== "top");
   const categoryChoices = () => categoryIds(ctx).map((c) => ({ value: c, label: own.has(c) ? `${c} (own)` : c.replace("-", " ") }));
 
   const magnitude = (i: number, notes: HTMLElement) => {
@@ -60,18 +62,18 @@ export function loadsStep(ctx: FormContext, number: number): HTMLElement {
     count: loads.length,
     columns: [
       {
-        header: "Kind",
+        header: faces ? "Kind, face" : "Kind",
         className: "col-kind",
-        cell: (i) => ({
-          path: at(i, "type"),
-          name: "kind",
-          control: selectControl(ctx, at(i, "type"), "kind", kindOf(i) ? kindChoices : [{ value: String(loads[i]?.type ?? ""), label: String(loads[i]?.type ?? "?") }, ...kindChoices], {
+        cell: (i, notes) => {
+          const control = selectControl(ctx, at(i, "type"), "kind", kindOf(i) ? kindChoices : [{ value: String(loads[i]?.type ?? ""), label: String(loads[i]?.type ?? "?") }, ...kindChoices], {
             onChosen: (kind) => {
               state.replaceItem(`beam.loads[${i}]`, asKind(loads[i] ?? {}, kind));
               ctx.rerender(at(i, "type"));
             },
-          }),
-        }),
+          });
+          const face = faceControl(ctx, i, name(i), notes, faces);
+          return { path: at(i, "type"), name: "kind", control, ...(face ? { content: el("div", { className: "stack" }, [control, face]) } : {}) };
+        },
       },
       { header: "Category", className: "col-choice", cell: (i) => ({ path: at(i, "category"), name: "category", control: selectControl(ctx, at(i, "category"), "category", categoryChoices, { whenAbsent: "dead" }) }) },
       { header: "Label", className: "col-name", cell: (i) => ({ path: at(i, "label"), name: "label", control: textControl(ctx, at(i, "label"), "label", { maxLength: 60 }) }) },
@@ -109,6 +111,7 @@ export function loadsStep(ctx: FormContext, number: number): HTMLElement {
     spansBlock(ctx),
     el("h3", { text: "Loads" }),
     table,
+    faces ? el("p", { className: "hint", text: "Side-by-side plies: a load on top is shared by the plies' E·I; a load hung on the left or right face (joists on hangers) is passed across the interfaces to the plies beyond, and their connectors are scheduled for it." }) : null,
     issues,
     el("div", { className: "button-row" }, offered.map((kind) => addButton(`Add ${loadKinds[kind]!.label} load`, () => addLoad(kind)))),
     fieldGrid([field(ctx, "beam.selfWeight", "Add the parts' self-weight as dead load", checkboxControl(ctx, "beam.selfWeight", "self-weight", true), { wide: true })]),
@@ -125,6 +128,31 @@ export function loadsStep(ctx: FormContext, number: number): HTMLElement {
   ctx.registry.register({ path: "beam.loads", label: "Loads", marker: box, host: issues });
   ctx.registry.register({ path: "beam", label: "Spans and loads", marker: box, host: issues });
   return box;
+}
+
+const faceChoices = [
+  { value: "top", label: "on top" },
+  { value: "left", label: "left face" },
+  { value: "right", label: "right face" },
+];
+
+/**
+ * Where a load arrives on side-by-side plies: on top, or hung on the left or right face (joists on
+ * hangers). Top is the default and is left out of the document. A moment has no face.
+ */
+function faceControl(ctx: FormContext, i: number, loadName: string, notes: HTMLElement, offered: boolean): HTMLSelectElement | null {
+  const path = `beam.loads[${i}].face`;
+  const load = ctx.state.read(`beam.loads[${i}]`) as Item | undefined;
+  const kind = String(load?.type ?? "");
+  const named = load?.face !== undefined && load.face !== "top";
+  if (!named && (!offered || kind === "moment")) return null;
+  const select = selectControl(ctx, path, `${loadName} face`, faceChoices, {
+    whenAbsent: "top",
+    onChosen: (value) => ctx.state.set(path, value === "top" ? undefined : value),
+  });
+  select.setAttribute("aria-label", `${loadName} arrives on`);
+  ctx.registry.register({ path, label: `${loadName} · face`, control: select, marker: select, host: notes, prefix: "face" });
+  return select;
 }
 
 /** The spans left to right and, where the service takes them, what holds each end. */

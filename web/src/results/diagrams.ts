@@ -4,6 +4,7 @@ import type { DesignResult, Schedule } from "../../../core/schema/result.js";
 import { formatNumber } from "../../../core/units/format.js";
 import { el } from "../dom.js";
 import { figure } from "./figure.js";
+import { demandName, demandSymbol, isSideLoad } from "./joint-demand.js";
 import { spacingPlot } from "./spacing-plot.js";
 
 const combinationLabel = (result: DesignResult, id: string) => result.beam.combinations.find((c) => c.id === id)?.name ?? id;
@@ -53,27 +54,43 @@ export function shearAndMoment(result: DesignResult, width: number, chosen?: str
   ];
 }
 
-/** Envelope of q along each discrete joint, per connector line. */
+/**
+ * Envelope of q along each discrete joint, per connector line. Between side-by-side plies the demand is
+ * the force a load on one face passes across the interface, and the diagram is captioned so.
+ */
 export function shearFlow(result: DesignResult, width: number): HTMLElement | null {
+  const joints = [...result.schedules.map((s) => s.joint), ...result.welds.map((w) => w.joint)];
+  const across = joints.filter((j) => isSideLoad(result, j));
+  // Marked one by one only where both kinds of demand share the diagram; otherwise the title says it.
+  const side = (joint: string) => (across.length < joints.length && isSideLoad(result, joint) ? " (interface)" : "");
   const lines = [
-    ...result.schedules.map((s) => ({ label: `joint ${s.joint}`, values: s.shearFlow })),
-    ...result.welds.map((w) => ({ label: `joint ${w.joint} (weld)`, values: w.shearFlow })),
+    ...result.schedules.map((s) => ({ label: `joint ${s.joint}${side(s.joint)}`, values: s.shearFlow })),
+    ...result.welds.map((w) => ({ label: `joint ${w.joint} (weld)${side(w.joint)}`, values: w.shearFlow })),
   ];
   if (lines.length === 0) return null;
   const u = result.unitLabels;
+  const title = across.length === joints.length ? "Force passed across each ply interface, per length" : across.length ? "Shear flow q, and force passed across ply interfaces, per line" : "Shear flow q per contact line";
+  const caption = [
+    across.length < joints.length ? "q = V·Q/I shared among the joint's contact lines, the largest over the load combinations at each point." : null,
+    across.length
+      ? `${across.length === 1 ? `Joint ${across[0]}` : `Joints ${across.join(", ")}`}: not shear flow (Q = 0 between plies of one depth) but the force per length that the connectors pass across the interface from a load on one face to the plies beyond, by each ply's E·I share; the largest over the load combinations.`
+      : null,
+  ]
+    .filter(Boolean)
+    .join(" ");
   return figure(
     lineDiagram({
-      title: "Shear flow q per contact line",
+      title,
       xUnit: u.span ?? "",
       yUnit: u.shearFlow ?? "",
       x: result.beam.stations,
       width,
       height: 190,
-      role: "shear-flow",
+      role: across.length === joints.length ? "interface-force" : "shear-flow",
       series: lines,
     }),
     "diagram",
-    "q = V·Q/I shared among the joint's contact lines, the largest over the load combinations at each point.",
+    caption,
   );
 }
 
@@ -98,7 +115,7 @@ export function spacingDiagram(result: DesignResult, schedule: Schedule, width: 
       ],
     }),
     "diagram",
-    `Required spacing n·R/q (drawn no higher than the largest allowed spacing, ${formatNumber(plot.cap)} ${u.length ?? ""}) against the zone spacing provided. Where the required line dips below the minimum, no spacing within the limits works.`,
+    `Required spacing n·R/${demandSymbol(result, schedule.joint)}, ${demandSymbol(result, schedule.joint)} the ${demandName(result, schedule.joint)} per line (drawn no higher than the largest allowed spacing, ${formatNumber(plot.cap)} ${u.length ?? ""}), against the zone spacing provided. Where the required line dips below the minimum, no spacing within the limits works.`,
   );
 }
 

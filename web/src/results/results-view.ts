@@ -1,10 +1,13 @@
 import type { DesignResult } from "../../../core/schema/result.js";
 import { el } from "../dom.js";
 import type { PlacedIssue } from "../form/field-registry.js";
+import { alongMemberPanel } from "./along-member-view.js";
 import { bondLines, memberChecks } from "./checks-view.js";
+import { compositePanel } from "./composite-view.js";
 import { combinations, shearAndMoment, shearFlow } from "./diagrams.js";
 import { drawingWidth } from "./figure.js";
 import { notes } from "./notes-view.js";
+import { pliesPanel } from "./plies-view.js";
 import { scheduleBlock } from "./schedule-view.js";
 import { SectionView } from "./section-view.js";
 import { statusBanner } from "./status-banner.js";
@@ -29,6 +32,7 @@ export class ResultsView {
   /** On narrow screens, where the results sit far below the form: the verdict kept in view while editing. */
   readonly #summary = el("div", { className: "results-summary", attrs: { "aria-hidden": "true" } });
   readonly #section = new SectionView();
+  readonly #nav = el("nav", { className: "results-nav", attrs: { "aria-label": "Results sections" } });
   #result: DesignResult | null = null;
   #freshness: Freshness = "updating";
   #drawnWidth = 0;
@@ -43,20 +47,12 @@ export class ResultsView {
       el("div", { className: "results-head" }, [
         el("h2", { text: "Results" }),
         this.#state,
-        el("nav", { className: "results-nav", attrs: { "aria-label": "Results sections" } }, [
-          ...[
-            ["#status", "Status"],
-            ["#section", "Section"],
-            ["#diagrams", "Diagrams"],
-            ["#schedules", "Schedule"],
-            ["#checks", "Checks"],
-            ["#basis", "Basis"],
-          ].map(([href, text]) => el("a", { text, attrs: { href } })),
-        ]),
+        this.#nav,
       ]),
       this.#notice,
       this.#body,
     );
+    this.#renderNav(null);
     this.#body.append(el("p", { className: "hint", text: "Computing the example…" }));
     document.body.append(this.#summary);
     let timer: number | undefined;
@@ -100,6 +96,7 @@ export class ResultsView {
   /** A different job was opened: results of the one before must not be shown as if they were its own. */
   clear(): void {
     this.#result = null;
+    this.#renderNav(null);
     this.#body.classList.remove("stale");
     this.#body.replaceChildren(el("p", { className: "hint", text: "Computing the job just opened…" }));
   }
@@ -183,9 +180,26 @@ export class ResultsView {
     return box;
   }
 
+  /** Links to the panels the result has: plies, the section along the member and composite action only where they apply. */
+  #renderNav(result: DesignResult | null): void {
+    const links: [string, string, boolean][] = [
+      ["#status", "Status", true],
+      ["#section", "Section", true],
+      ["#plies", "Plies", Boolean(result?.multiPly)],
+      ["#along", "Along", Boolean(result?.stretches.length)],
+      ["#composite", "Composite", Boolean(result?.composite)],
+      ["#diagrams", "Diagrams", true],
+      ["#schedules", "Schedule", true],
+      ["#checks", "Checks", true],
+      ["#basis", "Basis", true],
+    ];
+    this.#nav.replaceChildren(...links.filter(([, , shown]) => shown).map(([href, text]) => el("a", { text, attrs: { href } })));
+  }
+
   #renderBody(): void {
     const result = this.#result;
     if (!result) return;
+    this.#renderNav(result);
     const width = drawingWidth(this.#body);
     this.#drawnWidth = width;
     const checked = result.mode === "check";
@@ -202,8 +216,11 @@ export class ResultsView {
     this.#body.replaceChildren(
       statusBanner(result),
       this.#section.render(result, this.#body),
+      pliesPanel(result) ?? "",
+      alongMemberPanel(result, width) ?? "",
+      compositePanel(result) ?? "",
       el("section", { className: "panel", attrs: { id: "diagrams", "aria-labelledby": "diagrams-title" } }, [
-        el("h2", { text: "Shear, moment and shear flow", attrs: { id: "diagrams-title" } }),
+        el("h2", { text: result.joints.length > 0 && result.joints.every((j) => j.demand === "side-load") ? "Shear, moment and force across the ply interfaces" : "Shear, moment and shear flow", attrs: { id: "diagrams-title" } }),
         combinations(result),
         this.#actions(result, width),
         shearFlow(result, width),

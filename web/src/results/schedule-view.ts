@@ -4,6 +4,7 @@ import { formatNumber, formatRatio } from "../../../core/units/format.js";
 import { el } from "../dom.js";
 import { spacingDiagram } from "./diagrams.js";
 import { figure } from "./figure.js";
+import { isSideLoad, partName } from "./joint-demand.js";
 import { header, range, shown, table, utilisation } from "./quantities.js";
 
 /** One joint's schedule: the zones a builder follows, how economical they are, and the row-by-row check. */
@@ -57,6 +58,7 @@ export function scheduleBlock(result: DesignResult, schedule: Schedule, width: n
     ]),
     fails ? el("p", { className: "fails-text", text: checked ? "This schedule does not carry the shear flow everywhere (or breaks a detailing limit): do not build it as given." : "This schedule does not pass: see the red rows and the options above. Do not build it as it stands." }) : null,
     schedule.detailingProblems.length ? el("ul", { className: "fails-text detailing" }, schedule.detailingProblems.map((d) => el("li", { text: d }))) : null,
+    demandNote(result, schedule),
     figure(scheduleElevation(result, schedule, { width, height: 92 }), "diagram elevation"),
     zones,
     el("dl", { className: "figures" }, [
@@ -84,6 +86,19 @@ export function scheduleBlock(result: DesignResult, schedule: Schedule, width: n
 }
 
 const term = (name: string, value: string) => [el("dt", { text: name }), el("dd", { text: value })];
+
+/** What the joint's connectors carry, where it is not the plain shear flow over the whole member. */
+function demandNote(result: DesignResult, schedule: Schedule): HTMLElement | null {
+  const joint = result.joints.find((j) => j.id === schedule.joint);
+  if (!joint) return null;
+  const notes: string[] = [];
+  if (isSideLoad(result, joint.id)) {
+    const between = joint.lines[0]?.between.map((id) => partName(result, id)).join(" and ");
+    notes.push(`Force passed across the interface${between ? ` between ${between}` : ""}, not shear flow: ${joint.sharing}`);
+  }
+  if (joint.extent) notes.push(`Rows only over the part's run, ${range(result, joint.extent.from, joint.extent.to)}.`);
+  return notes.length ? el("p", { className: "demand-note", text: notes.join(" ") }) : null;
+}
 
 /** The worst row under each combination, folded when there are many. */
 function perCombination(result: DesignResult, schedule: Schedule): HTMLElement | null {

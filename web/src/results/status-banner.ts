@@ -1,6 +1,7 @@
 import type { DesignResult } from "../../../core/schema/result.js";
 import { formatNumber } from "../../../core/units/format.js";
 import { el } from "../dom.js";
+import { demandName } from "./joint-demand.js";
 import { range, shown } from "./quantities.js";
 
 /** Passes or fails, in words, with every failure and every joint no spacing can fasten. */
@@ -14,7 +15,7 @@ export function statusBanner(result: DesignResult): HTMLElement {
     ...infeasible.map((s) => {
       const where = s.infeasible!.where.map((w) => range(result, w.from, w.to)).join(" and ");
       return el("div", { className: "infeasible" }, [
-        el("h3", { text: `Joint ${s.joint}: no spacing within the limits carries the shear flow` }),
+        el("h3", { text: `Joint ${s.joint}: no spacing within the limits carries the ${demandName(result, s.joint)}` }),
         el("p", {
           text: `Over ${where} the required spacing falls to ${shown(result, s.infeasible!.smallestRequired, "length")}, below the minimum spacing of ${shown(result, s.infeasible!.minSpacing, "length")}. The schedule below is placed at the minimum there and fails. Options:`,
         }),

@@ -3,30 +3,9 @@ import { formatNumber } from "../../../core/units/format.js";
 import { el } from "../dom.js";
 import { header, table, utilisation } from "./quantities.js";
 
-/** The end of a part that stops short of the member's ends (a cover plate), as the service reports it. */
-interface Termination {
-  joint: string;
-  part: string;
-  end: "left" | "right";
-  at: number;
-  cutoff: number | null;
-  force: number;
-  available: number;
-  required: number | null;
-  capacity: number;
-  connectors: string;
-  utilisation: number | null;
-  passes: boolean;
-  reference: string;
-  note: string;
-}
-
-/** Read without assuming the service reports them: older services do not. */
-const terminationsOf = (result: DesignResult): Termination[] => (result as DesignResult & { terminations?: Termination[] }).terminations ?? [];
-
 /** Where a part stops short of the member's ends: the force it must take up by then, and what the connectors there develop. */
 export function terminationsBlock(result: DesignResult): HTMLElement | null {
-  const ends = terminationsOf(result);
+  const ends = result.terminations;
   if (ends.length === 0) return null;
   const u = result.unitLabels;
   return el("div", { className: "terminations" }, [
@@ -43,7 +22,7 @@ export function terminationsBlock(result: DesignResult): HTMLElement | null {
           formatNumber(t.force),
           `${formatNumber(t.available)}${t.required === null ? "" : ` / ${formatNumber(t.required)}`}`,
           formatNumber(t.capacity),
-          utilisation(t.utilisation ?? Number.POSITIVE_INFINITY, t.passes),
+          t.utilisation === null ? el("span", { className: t.passes ? "" : "fails-text", text: "no connectors there" }) : utilisation(t.utilisation, t.passes),
         ],
       })),
       { numeric: [1, 2, 3, 4, 5], captionHidden: true },
