@@ -91,7 +91,12 @@ export function beamResult(beam: BeamAnalysis, stations: Station[]): BeamResult 
   const locate = (r: CombinationActions) => (at && at.breaks === r.actions.breaks ? at : (at = locateStations(r.actions, stations)));
   const values = beam.results.map((r) => valuesAtStations(r.actions, r.curve, stations, locate(r)));
   const perCombination = beam.results.map((r, i) => {
-    const { max, min } = momentExtremes(r.actions);
+    const extremes = momentExtremes(r.actions);
+    // A hogging moment of 10⁻¹² of the sagging one is rounding, not a moment: report it as none.
+    const scale = Math.max(Math.abs(extremes.max.value), Math.abs(extremes.min.value));
+    const clean = (e: typeof extremes.max) => (Math.abs(e.value) <= 1e-9 * scale ? { ...e, value: 0 } : e);
+    const max = clean(extremes.max);
+    const min = clean(extremes.min);
     const v = values[i]!;
     // Deflection under factored loads is for information: its largest value at the stations.
     let d = 0;
