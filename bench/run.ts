@@ -74,7 +74,7 @@ mkdirSync(new URL("bench/results/", root), { recursive: true });
 writeFileSync(new URL(`bench/results/${only ? `latest-${only.join("-")}` : "latest"}.md`, root), lines.join("\n") + "\n");
 const history = new URL("bench/results/history.tsv", root);
 if (!existsSync(history)) {
-  appendFileSync(history, ["date", "cores", "load1", "parts", "simple design median ms", "three-span design median ms", "worksheet median ms", "designs/s (distinct, 10 conn)", "worksheets/s", "peak MiB", "soak growth MiB"].join("\t") + "\n");
+  appendFileSync(history, ["date", "cores", "load1", "parts", "simple member request work median ms", "three-span request work median ms", "worksheet median ms", "designs/s (distinct, 10 conn)", "worksheets/s", "peak MiB", "soak growth MiB"].join("\t") + "\n");
 }
 const cell = (n: number | undefined, digits: number) => (n === undefined ? "" : n.toFixed(digits));
 appendFileSync(
