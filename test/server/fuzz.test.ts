@@ -1,7 +1,7 @@
 // Property-based fuzzing of every JSON endpoint: over 10,000 generated bodies in all. Every answer is
 // a 200 (or 201) whose body is what the route promises, or a 4xx in the API's error shape with field
 // paths; never a 5xx, never a hang; and the service answers normally afterwards.
-// FUZZ_SEED picks other bodies (the seed is fixed so that CI is repeatable); FUZZ_SCALE multiplies the counts.
+// FC_SEED picks other bodies (the seed is fixed so that CI is repeatable); FUZZ_SCALE multiplies the counts.
 import type { FastifyInstance } from "fastify";
 import fc from "fast-check";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
@@ -12,7 +12,7 @@ import { tempFolder } from "./store/store-fixtures.js";
 import { knownCoreProblem } from "./fuzz/known-core-problems.js";
 import { bodyText, examples, mutatedJob, renamedJob } from "./fuzz/payloads.js";
 
-const SEED = Number(process.env.FUZZ_SEED ?? 20_261_202);
+const SEED = Number(process.env.FC_SEED ?? 20_261_202);
 const SCALE = Number(process.env.FUZZ_SCALE ?? 1);
 const runs = (n: number) => Math.max(1, Math.round(n * SCALE));
 /** Longer than this for one answer counts as a hang (the design time limit is set below it). */
