@@ -188,7 +188,7 @@ function checkProvidedSchedules(joints: MemberJoint[], L: number, span: (x: numb
 /**
  * Ranges outside which a number cannot describe a built-up beam, core units: a modulus from 1 MPa
  * (soft foams) to 1 000 000 MPa (above any metal), a density up to 25 000 kg/m³ (above any metal),
- * part dimensions from 0.05 mm to 20 m, and a member up to 500 m long. Inside them the analysis is
+ * part dimensions, spacings and connector distances from 0.05 mm to 20 m, and a member up to 500 m long. Inside them the analysis is
  * well conditioned; outside them the input is refused rather than computed.
  */
 function physicalRanges(job: JobDocument, text: (value: number, quantity: Parameters<typeof inJobUnits>[1]) => string): JobIssue[] {
@@ -207,5 +207,17 @@ function physicalRanges(job: JobDocument, text: (value: number, quantity: Parame
   });
   const L = job.beam.spans.reduce((s, l) => s + l, 0);
   outside("beam.spans", L, "span", 1, 500_000, "member lengths");
+  const rules = job.spacing;
+  for (const key of ["module", "minimum", "maximum", "minZoneLength"] as const) {
+    const value = rules[key];
+    if (value !== undefined && value > 0) outside(`spacing.${key}`, value, "length", 0.05, 20_000, "spacings");
+  }
+  rules.preferred?.forEach((value, i) => outside(`spacing.preferred[${i}]`, value, "length", 0.05, 20_000, "spacings"));
+  job.connectors.forEach((c, i) => {
+    for (const key of ["minSpacing", "maxSpacing", "endDistance", "segmentLength", "pitch"] as const) {
+      const value = (c as Record<string, unknown>)[key];
+      if (typeof value === "number" && value > 0) outside(`connectors[${i}].${key}`, value, "length", 0.05, 20_000, "connector spacings and distances");
+    }
+  });
   return issues;
 }

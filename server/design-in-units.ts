@@ -1,7 +1,6 @@
 import { designMember, DesignResult, prepareJob, toDisplayUnits, unitLabels, type JobDocument, type UnitSystem } from "../core/index.js";
 import { fingerprintOf } from "./fingerprint.js";
 import { ApiError } from "./errors.js";
-import { jobLimitIssues } from "./job-limits.js";
 
 export interface UnitsRun {
   /** The job as parsed, in its own units, defaults filled in. */
@@ -21,8 +20,6 @@ export function designInUnits(input: unknown, units?: UnitSystem): UnitsRun {
   }
   const prepared = prepareJob(input);
   if (!prepared.ok) throw new ApiError("ERR_INPUT_INVALID", undefined, prepared.issues);
-  const overLimit = jobLimitIssues(prepared.core, prepared.job.units);
-  if (overLimit.length > 0) throw new ApiError("ERR_INPUT_INVALID", undefined, overLimit);
   const core = designMember(prepared.core);
   const fingerprint = fingerprintOf(prepared.job);
   const result = { ...toDisplayUnits(DesignResult, core, prepared.job.units), fingerprint };

@@ -1,4 +1,4 @@
-import { fromCore, unitLabel, withUnit, type JobDocument, type JobIssue } from "../core/index.js";
+import type { JobIssue } from "../core/index.js";
 
 /**
  * What the service takes beyond the job schema's own limits (16 parts, 12 spans, 200 loads …), so that
@@ -7,8 +7,6 @@ import { fromCore, unitLabel, withUnit, type JobDocument, type JobIssue } from "
 export const serviceLimits = {
   /** Largest request body, bytes (a project import has its own). */
   bodyBytes: 1024 * 1024,
-  /** Longest member, mm: connectors are placed row by row, so the rows grow with the length. */
-  memberLength: 1_000_000,
   /** Longest a design may take, ms, before it is stopped. */
   designMs: 30_000,
   /** Longest a worksheet (design and PDF) may take, ms. */
@@ -16,14 +14,6 @@ export const serviceLimits = {
   /** Most problems listed in one error answer; the rest are counted. */
   issues: 100,
 } as const;
-
-/** Problems with a valid job (core units) that the service will not take on: each names its field and the limit. */
-export function jobLimitIssues(core: JobDocument, units: JobDocument["units"]): JobIssue[] {
-  const length = core.beam.spans.reduce((sum, span) => sum + span, 0);
-  if (length <= serviceLimits.memberLength) return [];
-  const shown = (mm: number) => withUnit(fromCore(mm, "span", units), unitLabel("span", units));
-  return [{ path: "beam.spans", message: `the member is ${shown(length)} long; this service designs members up to ${shown(serviceLimits.memberLength)} long` }];
-}
 
 /** At most `serviceLimits.issues` problems, then one line that counts the rest. */
 export function boundedIssues(issues: JobIssue[]): JobIssue[] {

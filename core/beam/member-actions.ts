@@ -156,14 +156,25 @@ export function poly(c: readonly number[], u: number): number {
   return r;
 }
 
-function pieceAt(actions: MemberActions, x: number, side: Side): Piece {
+/** The piece holding x: from the left, the first whose end is at or past x; from the right, the last that starts at or before x (binary search). */
+export function pieceAt(actions: MemberActions, x: number, side: Side): Piece {
   const { pieces } = actions;
+  let lo = 0;
+  let hi = pieces.length - 1;
   if (side === "left") {
-    for (const p of pieces) if (x <= p.x1) return p;
-    return pieces[pieces.length - 1]!;
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (x <= pieces[mid]!.x1) hi = mid;
+      else lo = mid + 1;
+    }
+    return pieces[lo]!;
   }
-  for (let k = pieces.length - 1; k >= 0; k--) if (x >= pieces[k]!.x0) return pieces[k]!;
-  return pieces[0]!;
+  while (lo < hi) {
+    const mid = (lo + hi + 1) >> 1;
+    if (x >= pieces[mid]!.x0) lo = mid;
+    else hi = mid - 1;
+  }
+  return pieces[lo]!;
 }
 
 /** V at x; at a jump, the value just left or just right of x. Outside the member V is zero. */

@@ -12,6 +12,9 @@ import { governingLimits, type ConnectorContext } from "./connector-kind.js";
 import { inJobUnits } from "../units/format.js";
 import { kindOf } from "./registry.js";
 
+/** Most spacings a module may give between the smallest and the largest: beyond it a builder gains nothing and the zoning only slows. */
+const MAX_SPACINGS = 5000;
+
 /** Placement does not depend on the load combination; kinds are given a neutral one. */
 const PLACEMENT: Combination = { id: "placement", name: "placement check", factors: {}, duration: "unspecified", categories: [] };
 
@@ -59,6 +62,11 @@ export function checkConnectorPlacement(job: JobDocument): JobIssue[] {
     const len = (mm: number) => inJobUnits(mm, "length", job.units);
     if (min > max * (1 + 1e-9)) {
       add(rules.maximum !== undefined ? "spacing.maximum" : `connectors[${i}]`, `connector "${connector.id}" needs a spacing of at least ${len(min)} (${limits.sources[0] ?? "its minimum"}) but at most ${len(max)} is allowed at joint ${joint.id}`);
+    } else if (!rules.preferred && (max - min) / (rules.module ?? toCore(defaults.module, "length", job.units)) > MAX_SPACINGS) {
+      add(
+        rules.module !== undefined ? "spacing.module" : `connectors[${i}]`,
+        `a module of ${len(rules.module ?? toCore(defaults.module, "length", job.units))} gives more than ${MAX_SPACINGS} spacings between ${len(min)} and ${len(max)} for connector "${connector.id}"; choose a coarser module or a smaller maximum spacing`,
+      );
     } else if (
       allowedSpacings({ module: rules.preferred ? null : rules.module ?? toCore(defaults.module, "length", job.units), preferred: rules.preferred ?? null, min, max }).length === 0
     ) {

@@ -161,6 +161,7 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
   };
   const design = designedAlike(beam, actions, problem, settings, () => designSchedule({ ...problem, ...settings }));
   const worst = design.rowChecks.reduce((w, r) => (r.utilisation > w.utilisation ? r : w));
+  const tooShort = beam.length < 2 * limits.endDistance * (1 - 1e-9);
   const peakShear = Math.max(...actions.map((a) => maxAbsShear(a, 0, beam.length).value));
   const options = design.infeasible
     ? [
@@ -184,8 +185,17 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
       verification: { maxUtilisation: worst.utilisation, at: worst.x, combination: worst.combination, passes: worst.utilisation <= 1 + 1e-9, method: VERIFICATION_METHOD },
       perCombination: design.perCombination,
       detailingProblems: [],
-      passes: !design.infeasible && worst.utilisation <= 1 + 1e-9,
-      infeasible: design.infeasible ? { where: design.infeasible.where, smallestRequired: design.infeasible.smallestRequired, minSpacing: design.spacings[0]!, options } : null,
+      passes: !design.infeasible && !tooShort && worst.utilisation <= 1 + 1e-9,
+      infeasible: design.infeasible
+        ? { where: design.infeasible.where, smallestRequired: design.infeasible.smallestRequired, minSpacing: design.spacings[0]!, options }
+        : tooShort
+          ? {
+              where: [{ from: 0, to: beam.length }],
+              smallestRequired: design.spacings[0]!,
+              minSpacing: design.spacings[0]!,
+              options: [`The joint is ${len(beam.length)} long, shorter than twice the end distance of ${len(limits.endDistance)}: no row keeps its end distance from both ends. Use a connector with a smaller end distance, or glue the joint.`],
+            }
+          : null,
       requiredSpacing: requiredAt(stations, design.demand),
     },
   };

@@ -1,4 +1,4 @@
-import { maxAbsShear, shearAt, type MemberActions, type Side } from "../beam/member-actions.js";
+import { maxAbsShear, pieceAt, poly, shearAt, type MemberActions, type Side } from "../beam/member-actions.js";
 
 /** One load combination's share of a connector line's demand: d(x) = k·|V(x)|, rows per mm. */
 export interface DemandTerm {
@@ -54,24 +54,31 @@ export class DemandCurve {
    */
   integral(floor = 0): number {
     const breaks = [...new Set(this.terms.flatMap((t) => t.actions.breaks))].sort((a, b) => a - b);
+    const n = 64;
+    const values = new Float64Array(n + 1);
     let sum = 0;
     for (let i = 0; i < breaks.length - 1; i++) {
       const a = breaks[i]!;
       const b = breaks[i + 1]!;
       if (b - a <= 0) continue;
-      const n = 64;
       const h = (b - a) / n;
-      // Inside a piece each term is smooth; the max of terms has kinks, so use many panels.
-      const f = (x: number) => Math.max(floor, this.inside(x, a, b));
-      let s = f(a) + f(b);
-      for (let k = 1; k < n; k++) s += (k % 2 ? 4 : 2) * f(a + k * h);
+      values.fill(floor);
+      // Inside [a, b] every term is one polynomial: find its piece once, then evaluate it at the panel points.
+      const mid = (a + b) / 2;
+      for (const t of this.terms) {
+        if (mid < 0 || mid > t.actions.length) continue;
+        const piece = pieceAt(t.actions, mid, "right");
+        for (let k = 0; k <= n; k++) {
+          const v = t.k * Math.abs(poly(piece.v, a + k * h - piece.x0));
+          if (v > values[k]!) values[k] = v;
+        }
+      }
+      // The max of terms has kinks, so many panels (composite Simpson).
+      let s = values[0]! + values[n]!;
+      for (let k = 1; k < n; k++) s += (k % 2 ? 4 : 2) * values[k]!;
       sum += (s * h) / 3;
     }
     return sum;
-  }
-
-  private inside(x: number, a: number, b: number): number {
-    return this.at(x, x === a ? "right" : x === b ? "left" : "right").value;
   }
 
   /** True when d(x) = d(L − x) at a set of stations, within a relative tolerance. */

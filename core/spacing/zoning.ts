@@ -140,16 +140,6 @@ export function evaluateZone(p: ZoningProblem, a: number, b: number, first: bool
 }
 
 function zoneSpacing(p: ZoningProblem, a: number, b: number, first: boolean, last: boolean): number | undefined {
-  const L = p.length;
-  const e = p.endDistance;
-  const carries = (s: number) => {
-    const reachLeft = first ? 0 : a - s / 2;
-    const reachRight = last ? (p.mirrored ? b : L) : b + s / 2;
-    if (s * p.demand(reachLeft, reachRight) > 1 + 1e-12) return false;
-    if (first && e > s / 2 && (e + s / 2) * p.demand(0, e + s / 2) > 1 + 1e-12) return false;
-    if (last && !p.mirrored && e > s / 2 && (e + s / 2) * p.demand(L - e - s / 2, L) > 1 + 1e-12) return false;
-    return true;
-  };
   // Start from the largest spacing the zone's own demand allows; the rows' reach into the neighbours only
   // tightens as s grows, so the largest spacing that carries its demand is found by bisection.
   const peak = p.demand(a, b);
@@ -160,12 +150,24 @@ function zoneSpacing(p: ZoningProblem, a: number, b: number, first: boolean, las
   let right = p.spacings.indexOf(top);
   while (left <= right) {
     const mid = (left + right) >> 1;
-    if (carries(p.spacings[mid]!)) {
+    if (zoneCarries(p, a, b, first, last, p.spacings[mid]!)) {
       found = mid;
       left = mid + 1;
     } else right = mid - 1;
   }
   return found >= 0 ? p.spacings[found] : undefined;
+}
+
+/** Whether rows at spacing s over [a, b] carry the demand over their reach, the end rows' included. */
+function zoneCarries(p: ZoningProblem, a: number, b: number, first: boolean, last: boolean, s: number): boolean {
+  const L = p.length;
+  const e = p.endDistance;
+  const reachLeft = first ? 0 : a - s / 2;
+  const reachRight = last ? (p.mirrored ? b : L) : b + s / 2;
+  if (s * p.demand(reachLeft, reachRight) > 1 + 1e-12) return false;
+  if (first && e > s / 2 && (e + s / 2) * p.demand(0, e + s / 2) > 1 + 1e-12) return false;
+  if (last && !p.mirrored && e > s / 2 && (e + s / 2) * p.demand(L - e - s / 2, L) > 1 + 1e-12) return false;
+  return true;
 }
 
 /** Candidate zone boundaries: multiples of a round step from the left end, and the end itself. */

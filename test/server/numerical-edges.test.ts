@@ -95,7 +95,7 @@ describe("numerical edge cases", () => {
     }
   });
 
-  test.fails("a member 1 mm long says that its rows cannot keep the end distance (30 mm) or the minimum spacing; core places them silently and reports a 150 mm zone that passes", async () => {
+  test("a member 1 mm long says that its rows cannot keep the end distance (30 mm): the schedule is infeasible with the reason", async () => {
     const job = example("workshop-box-beam.si");
     job.beam.spans = [0.001];
     job.beam.loads = [{ type: "uniform", category: "dead", w: 1 }];
