@@ -18,13 +18,19 @@ const round = (x: number) => Math.round(x * 1e9) / 1e9;
 
 /** Largest allowed spacing not above s, or undefined when even the smallest is too large. */
 export function largestAtMost(spacings: number[], s: number): number | undefined {
+  const i = indexAtMost(spacings, s);
+  return i >= 0 ? spacings[i] : undefined;
+}
+
+/** Index of the largest allowed spacing not above s, or −1. */
+export function indexAtMost(spacings: number[], s: number): number {
   let lo = 0;
   let hi = spacings.length - 1;
-  let found: number | undefined;
+  let found = -1;
   while (lo <= hi) {
     const mid = (lo + hi) >> 1;
     if (spacings[mid]! <= s * (1 + 1e-12)) {
-      found = spacings[mid];
+      found = mid;
       lo = mid + 1;
     } else hi = mid - 1;
   }

@@ -1,4 +1,4 @@
-import { largestAtMost } from "./allowed-spacings.js";
+import { indexAtMost } from "./allowed-spacings.js";
 
 /**
  * Zoning of a connector line as an optimisation.
@@ -143,11 +143,13 @@ function zoneSpacing(p: ZoningProblem, a: number, b: number, first: boolean, las
   // Start from the largest spacing the zone's own demand allows; the rows' reach into the neighbours only
   // tightens as s grows, so the largest spacing that carries its demand is found by bisection.
   const peak = p.demand(a, b);
-  const top = peak > 0 ? largestAtMost(p.spacings, 1 / peak) : p.spacings[p.spacings.length - 1];
-  if (top === undefined) return undefined;
+  const topIndex = peak > 0 ? indexAtMost(p.spacings, 1 / peak) : p.spacings.length - 1;
+  if (topIndex < 0) return undefined;
+  // Usually the zone's own demand governs and the first candidate carries it.
+  if (zoneCarries(p, a, b, first, last, p.spacings[topIndex]!)) return p.spacings[topIndex];
   let found = -1;
   let left = 0;
-  let right = p.spacings.indexOf(top);
+  let right = topIndex - 1;
   while (left <= right) {
     const mid = (left + right) >> 1;
     if (zoneCarries(p, a, b, first, last, p.spacings[mid]!)) {
