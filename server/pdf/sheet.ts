@@ -1,4 +1,6 @@
+import { readFileSync } from "node:fs";
 import { createRequire } from "node:module";
+import { create as parseFont, type FontkitFont } from "fontkit";
 
 const require = createRequire(import.meta.url);
 const fontFile = (name: string) => require.resolve(`dejavu-fonts-ttf/ttf/${name}.ttf`);
@@ -24,12 +26,29 @@ export const type = {
 
 export type FontName = "body" | "bold" | "cond" | "cond-bold" | "mono";
 
+const FONT_FILES: Record<FontName, string> = {
+  body: "DejaVuSans",
+  bold: "DejaVuSans-Bold",
+  cond: "DejaVuSansCondensed",
+  "cond-bold": "DejaVuSansCondensed-Bold",
+  mono: "DejaVuSansMono",
+};
+
+/**
+ * The fonts, parsed once per process (thread) on first use and shared by every worksheet: parsing
+ * them again for each document took about a fifth of a worksheet's time. pdfkit makes its own
+ * subset of a shared font for each document, so documents do not affect each other.
+ */
+let parsedFonts: Map<FontName, FontkitFont> | undefined;
+
+function fonts(): Map<FontName, FontkitFont> {
+  parsedFonts ??= new Map(Object.entries(FONT_FILES).map(([name, file]) => [name as FontName, parseFont(readFileSync(fontFile(file)))]));
+  return parsedFonts;
+}
+
 export function registerFonts(doc: PDFKit.PDFDocument): void {
-  doc.registerFont("body", fontFile("DejaVuSans"));
-  doc.registerFont("bold", fontFile("DejaVuSans-Bold"));
-  doc.registerFont("cond", fontFile("DejaVuSansCondensed"));
-  doc.registerFont("cond-bold", fontFile("DejaVuSansCondensed-Bold"));
-  doc.registerFont("mono", fontFile("DejaVuSansMono"));
+  // pdfkit takes a parsed fontkit font where its types list only files and buffers.
+  for (const [name, font] of fonts()) doc.registerFont(name, font as unknown as Uint8Array);
 }
 
 /** Page size in points and the box the body flows in; the title block and footer sit outside it. */
