@@ -52,7 +52,7 @@ export function autoThreads(members: number, pdf: boolean, cores = availablePara
   return Math.min(spare, members);
 }
 
-/** Tasks kept in flight on one thread, so that one member's file writes overlap the next one's design. */
+/** Tasks kept in flight on one thread, so that one member's file read (and worksheet stream) overlaps another's design. */
 export const IN_FLIGHT = 3;
 
 async function runInThisThread(tasks: MemberTask[], onOutcome: (outcome: MemberOutcome) => void): Promise<MemberOutcome[]> {
