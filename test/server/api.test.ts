@@ -2,6 +2,7 @@ import type { FastifyInstance } from "fastify";
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { buildApp } from "../../server/app.js";
+import { OPENING_EXAMPLE } from "../../server/examples.js";
 import { clone, plankIJob } from "../job-builders.js";
 
 let app: FastifyInstance;
@@ -25,6 +26,8 @@ describe("GET routes", () => {
     expect(list.status).toBe(200);
     const units = new Set(list.body.map((e: { units: string }) => e.units));
     expect(units).toEqual(new Set(["si", "us"]));
+    // The page opens with the first: the plainest member, a nailed box beam on one span.
+    expect(list.body[0].id).toBe(OPENING_EXAMPLE);
     for (const { id } of list.body as { id: string }[]) {
       const job = await request(app.server).get(`/api/examples/${id}`);
       expect(job.status).toBe(200);
