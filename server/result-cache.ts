@@ -6,7 +6,7 @@ import { createHash } from "node:crypto";
  * changes): the page sends the same job again on every reload, undo and units switch.
  */
 export class ResultCache {
-  private readonly entries = new Map<string, string>();
+  private readonly entries = new Map<string, Uint8Array>();
   private bytes = 0;
 
   constructor(
@@ -23,7 +23,7 @@ export class ResultCache {
     }
   }
 
-  get(key: string | undefined): string | undefined {
+  get(key: string | undefined): Uint8Array | undefined {
     if (key === undefined) return undefined;
     const value = this.entries.get(key);
     if (value !== undefined) {
@@ -33,14 +33,14 @@ export class ResultCache {
     return value;
   }
 
-  set(key: string | undefined, value: string): void {
-    if (key === undefined || value.length > this.maxEntryBytes || this.entries.has(key)) return;
+  set(key: string | undefined, value: Uint8Array): void {
+    if (key === undefined || value.byteLength > this.maxEntryBytes || this.entries.has(key)) return;
     this.entries.set(key, value);
-    this.bytes += value.length;
+    this.bytes += value.byteLength;
     for (const [oldest, old] of this.entries) {
       if (this.bytes <= this.maxBytes) break;
       this.entries.delete(oldest);
-      this.bytes -= old.length;
+      this.bytes -= old.byteLength;
     }
   }
 
