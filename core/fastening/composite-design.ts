@@ -76,6 +76,10 @@ export function compositeDesign(p: {
     } else return none(`joint ${joint.id} is welded: the γ-method is for timber connectors that slip.`);
   }
 
+  // Glue lines do not slip (γ = 1): with every flange joint glued the two models are one and the same.
+  const allGlued = flanges.every((f) => f.slip === null);
+  if (allGlued && model === "rigid") return none("");
+
   const rigidCounts = new Map(flanges.map((f) => [f.joint, p.runs.get(f.joint)!.schedule?.count ?? null]));
   const longTerm = p.job.compositeAction.longTerm ?? null;
   let analysis: CompositeAnalysis = compositeAnalysis({ layered, beam: p.beam, flanges, longTerm });
@@ -174,6 +178,7 @@ export function compositeDesign(p: {
     model === "slip-aware"
       ? `Composite action with slip (γ-method): K_u for connector forces and stresses, K_ser for deflection; ${analysis.effectiveLength.rule}; a varying spacing enters γ as s_ef = 0.75·s_min + 0.25·s_max with s_max ≤ 4·s_min (Annex B [M]). ${converged ? `s_ef settled within 5 % after ${iterations} design round(s), on a round whose s_ef did not shrink (so its real flow is no larger than the flow it was designed for).` : keptRound ? `s_ef had not settled within 5 % after ${MAX_ITERATIONS} rounds; round ${keptRound}, the last whose s_ef did not shrink (so it is on the safe side), is shown.` : `s_ef had not settled and no round was on the safe side; the rigid design is shown.`}`
       : "Composite action taken as rigid (q = V·Q/I); the slip-aware figures (γ-method, EN 1995-1-1 Annex B) are shown beside for comparison only.",
+    ...(allGlued ? ["Every flange joint is glued: a glue line does not slip (γ = 1), so the slip-aware model gives the rigid section's stiffness and shear flow."] : []),
   ];
   const stiffness: StiffnessFactor | null =
     model === "slip-aware"

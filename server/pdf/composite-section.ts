@@ -62,13 +62,15 @@ export function compositeSection(c: WorksheetContext): void {
     k.joints.map((j) => [
       { text: j.joint, bold: true, note: `${j.flange} flange` },
       j.serviceabilitySlip === null || j.ultimateSlip === null
-        ? "—"
+        ? { text: "glue line", note: "no slip, γ = 1" }
         : { text: `K_ser ${text.of(j.serviceabilitySlip, "slipModulus")}`, note: `K_u ${text.of(j.ultimateSlip, "slipModulus")}` },
-      {
-        text: text.of(j.spacing, "length"),
-        note: `${text.of(j.minSpacing, "length")} – ${text.of(j.maxSpacing, "length")}${j.withinFourTimes ? "" : "; s_max > 4·s_min, outside (B.5)"}`,
-        colour: j.withinFourTimes ? undefined : ink.fail,
-      },
+      j.serviceabilitySlip === null
+        ? "—"
+        : {
+            text: text.of(j.spacing, "length"),
+            note: `${text.of(j.minSpacing, "length")} – ${text.of(j.maxSpacing, "length")}${j.withinFourTimes ? "" : "; s_max > 4·s_min, outside (B.5)"}`,
+            colour: j.withinFourTimes ? undefined : ink.fail,
+          },
       `${formatRatio(j.gammaServiceability)} / ${formatRatio(j.gammaUltimate)}`,
       { text: `rigid ${text.of(j.flowFactorRigid, "perLength")}`, note: `with slip ${text.of(j.flowFactorSlip, "perLength")}` },
       `${j.rigidCount ?? "—"} / ${j.slipAwareCount ?? "—"}`,

@@ -94,4 +94,31 @@ describe("composite action (EN 1995-1-1 Annex B)", () => {
     expect(p.ok).toBe(false);
     if (!p.ok) expect(p.issues[0]).toMatchObject({ path: "compositeAction.model" });
   });
+
+  // A glue line does not slip: γ = 1 reproduces VQ/I (REFERENCES §6.6, the rigid limit [D]).
+  const gluedI = (model: "rigid" | "slip-aware"): JobInput => ({
+    ...nailedI(model, "design"),
+    connectors: [{ id: "G", kind: "glue", label: "structural adhesive", shearStrength: 3 }],
+    fastening: { default: { connector: "G", rows: 1 } },
+  });
+
+  test("a member glued at every flange joint on the rigid model has nothing to compare: no composite block", () => {
+    const result = run(gluedI("rigid"));
+    expect(result.bondLines.length).toBe(2);
+    expect(result.composite).toBeNull();
+  });
+
+  test("asked for slip-aware, a member glued at every flange joint gets γ = 1 and the rigid stiffness, and says why", () => {
+    const result = run(gluedI("slip-aware"));
+    const c = result.composite!;
+    expect(c.applies).toBe(true);
+    expectClose(c.stiffness!.serviceability, 2.13279e12, { rel: 1e-6 });
+    expectClose(c.stiffness!.ultimate, c.stiffness!.rigid, { rel: 1e-12 });
+    for (const j of c.joints) {
+      expect(j.serviceabilitySlip).toBeNull();
+      expectClose(j.gammaUltimate, 1, { rel: 1e-12 });
+      expectClose(j.flowFactorSlip, j.flowFactorRigid, { rel: 1e-9 });
+    }
+    expect(result.assumptions.join(" ")).toContain("a glue line does not slip (γ = 1)");
+  });
 });

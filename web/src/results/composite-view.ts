@@ -108,6 +108,9 @@ function stiffnessBars(result: DesignResult, k: Composite): HTMLElement | null {
   );
 }
 
+/** A glued flange joint: no slip modulus and no spacing; γ = 1. */
+const glued = (j: Composite["joints"][number]) => j.serviceabilitySlip === null || j.ultimateSlip === null;
+
 /** Per flange joint: the slip moduli and the spacing γ rests on, red where s_max exceeds 4·s_min. */
 function flangeJoints(result: DesignResult, k: Composite): HTMLElement | null {
   if (k.joints.length === 0) return null;
@@ -119,9 +122,9 @@ function flangeJoints(result: DesignResult, k: Composite): HTMLElement | null {
       className: j.withinFourTimes ? "" : "fails",
       cells: [
         el("span", {}, [el("strong", { text: j.joint }), el("span", { className: "sub", text: `${j.flange} flange, ${j.shearPlanesPerRow} shear plane${j.shearPlanesPerRow === 1 ? "" : "s"} per row` })]),
-        j.serviceabilitySlip === null || j.ultimateSlip === null ? "—" : `${formatNumber(j.serviceabilitySlip)} / ${formatNumber(j.ultimateSlip)}`,
-        formatNumber(j.spacing),
-        el("span", {}, [`${formatNumber(j.minSpacing)} – ${formatNumber(j.maxSpacing)}`, j.withinFourTimes ? null : el("span", { className: "sub", text: "s_max > 4·s_min: outside EN 1995-1-1 (B.5); γ does not hold" })]),
+        glued(j) ? withNote("glue line", "no slip, γ = 1") : `${formatNumber(j.serviceabilitySlip!)} / ${formatNumber(j.ultimateSlip!)}`,
+        glued(j) ? "—" : formatNumber(j.spacing),
+        glued(j) ? "—" : el("span", {}, [`${formatNumber(j.minSpacing)} – ${formatNumber(j.maxSpacing)}`, j.withinFourTimes ? null : el("span", { className: "sub", text: "s_max > 4·s_min: outside EN 1995-1-1 (B.5); γ does not hold" })]),
         `${formatRatio(j.gammaServiceability)} / ${formatRatio(j.gammaUltimate)}`,
       ],
     })),
