@@ -1,6 +1,5 @@
 import { formatNumber } from "../../core/index.js";
-
-const SUPERSCRIPT: Record<string, string> = { "-": "⁻", "0": "⁰", "1": "¹", "2": "²", "3": "³", "4": "⁴", "5": "⁵", "6": "⁶", "7": "⁷", "8": "⁸", "9": "⁹" };
+import { superscript } from "../../core/units/format.js";
 
 /**
  * A number as printed on the worksheet, to `digits` significant figures: `formatNumber` for everyday
@@ -19,8 +18,7 @@ export function numberText(value: number, digits = 4): string {
     mantissa /= 10;
     exponent += 1;
   }
-  const power = String(exponent).replace(/./g, (c) => SUPERSCRIPT[c] ?? c);
-  return `${formatNumber(mantissa, digits)}×10${power}`;
+  return `${formatNumber(mantissa, digits)}×10${superscript(exponent)}`;
 }
 
 /** Unit labels of the result, keyed by quantity kind ("length" → "mm"). */
