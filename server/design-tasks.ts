@@ -5,7 +5,7 @@ import { renderWorksheet, worksheetFileName } from "./pdf/worksheet.js";
 
 /** Work the design threads do: everything that may take long runs there, never on the thread that answers HTTP. */
 export type DesignTask =
-  /** The result as JSON text in UTF-8 bytes (moved between threads, not copied), in `units` or the job's own. */
+  /** The result as JSON text, in `units` or the job's own. */
   | { kind: "result-json"; input: unknown; units?: UnitSystem | undefined }
   /** The job, the job in core units and the result in the job's and in `units`, as objects. */
   | { kind: "result"; input: unknown; units?: UnitSystem | undefined }
@@ -26,7 +26,7 @@ export interface WorksheetRun {
   titleRevision: string;
 }
 
-export type TaskAnswer<T extends DesignTask> = T extends { kind: "result-json" } ? Uint8Array : T extends { kind: "result" } ? ResultRun : WorksheetRun;
+export type TaskAnswer<T extends DesignTask> = T extends { kind: "result-json" } ? string : T extends { kind: "result" } ? ResultRun : WorksheetRun;
 
 /** An error as it crosses between threads. */
 export interface WireError {
@@ -35,10 +35,10 @@ export interface WireError {
   issues: JobIssue[];
 }
 
-export async function performTask(task: DesignTask): Promise<Uint8Array | ResultRun | WorksheetRun> {
+export async function performTask(task: DesignTask): Promise<string | ResultRun | WorksheetRun> {
   switch (task.kind) {
     case "result-json":
-      return new TextEncoder().encode(JSON.stringify(designInUnits(task.input, task.units).shown));
+      return JSON.stringify(designInUnits(task.input, task.units).shown);
     case "result": {
       const { job, core, result, shown } = designInUnits(task.input, task.units);
       return { job, core, result, shown };

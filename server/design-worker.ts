@@ -5,8 +5,7 @@ import { performTask, toWire, type DesignTask } from "./design-tasks.js";
 parentPort!.on("message", ({ id, task }: { id: number; task: DesignTask }) => {
   void performTask(task).then(
     (answer) => {
-      // Bytes are moved to the other thread rather than copied.
-      const transfer = answer instanceof Uint8Array ? [answer.buffer as ArrayBuffer] : "pdf" in answer ? [answer.pdf.buffer as ArrayBuffer] : [];
+      const transfer = answer instanceof Object && "pdf" in answer ? [answer.pdf.buffer as ArrayBuffer] : [];
       parentPort!.postMessage({ id, answer }, transfer);
     },
     (error: unknown) => parentPort!.postMessage({ id, error: toWire(error) }),

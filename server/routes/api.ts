@@ -36,7 +36,8 @@ export async function apiRoutes(app: FastifyInstance, options: { examples: Examp
     const key = ResultCache.key("design", request.body);
     let json = cache.get(key);
     if (json === undefined) {
-      json = await designs.run({ kind: "result-json", input: request.body });
+      // Encoded here, once, rather than on the design thread (the busier one) or at every send from the cache.
+      json = Buffer.from(await designs.run({ kind: "result-json", input: request.body }));
       cache.set(key, json);
     }
     return reply.type("application/json; charset=utf-8").send(Buffer.from(json.buffer, json.byteOffset, json.byteLength));

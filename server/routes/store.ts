@@ -109,7 +109,7 @@ export async function storeRoutes(app: FastifyInstance, options: StoreRoutesOpti
   app.get<R & { Querystring: { units?: string } }>("/api/projects/:project/members/:member/revisions/:revision/result", async (request, reply) => {
     const stored = store.revision(projectId(request.params.project), memberId(request.params.member), revisionNumber(request.params.revision));
     const json = await designStored(designs, { kind: "result-json", input: stored.job, units: unitsQuery(request.query.units) }, "job");
-    return reply.type("application/json; charset=utf-8").send(Buffer.from(json.buffer, json.byteOffset, json.byteLength));
+    return reply.type("application/json; charset=utf-8").send(json);
   });
 
   app.get<M & { Querystring: Record<string, string> }>("/api/projects/:project/members/:member/compare", async (request) => {
