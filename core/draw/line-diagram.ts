@@ -26,6 +26,8 @@ export interface LineDiagramOptions {
   /** Upper limit of the y axis, for curves that run to infinity (required spacing). */
   yMax?: number;
   role?: string;
+  /** Name the curves in a legend even when there is only one (always when there are more). */
+  legend?: boolean;
 }
 
 /** A diagram along the member: axes, zero line, one curve per series, labelled extremes and a legend. */
@@ -81,7 +83,7 @@ export function lineDiagram(o: LineDiagramOptions): Drawing {
     }
   });
 
-  if (o.series.length > 1) {
+  if (o.series.length > 1 || o.legend) {
     let lx = margin.left + w;
     for (let k = o.series.length - 1; k >= 0; k--) {
       const s = o.series[k]!;

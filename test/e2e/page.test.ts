@@ -37,6 +37,10 @@ describe("the job page", () => {
     await expect(profile.count()).resolves.toBe(1);
     await expect(profile.locator("[data-role='stress-peak']").textContent()).resolves.toMatch(/MPa$/);
     await expect(page.locator("#diagrams figcaption", { hasText: "Largest |V|" }).textContent()).resolves.toMatch(/kN at x = .* m/);
+    // The box beam's two flange joints carry the same q: one curve, named for both, and no joint missing.
+    const flow = page.locator("#diagrams svg", { has: page.locator("[data-role^='series shear-flow']") });
+    await expect(flow.locator("[data-role^='series shear-flow']").count()).resolves.toBe(1);
+    await expect(flow.textContent()).resolves.toContain("joint bottom = joint top");
   });
 
   test("a longer span changes the schedule", async () => {

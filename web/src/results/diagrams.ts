@@ -63,10 +63,10 @@ export function shearFlow(result: DesignResult, width: number): HTMLElement | nu
   const across = joints.filter((j) => isSideLoad(result, j));
   // Marked one by one only where both kinds of demand share the diagram; otherwise the title says it.
   const side = (joint: string) => (across.length < joints.length && isSideLoad(result, joint) ? " (interface)" : "");
-  const lines = [
+  const lines = coinciding([
     ...result.schedules.map((s) => ({ label: `joint ${s.joint}${side(s.joint)}`, values: s.shearFlow })),
     ...result.welds.map((w) => ({ label: `joint ${w.joint} (weld)${side(w.joint)}`, values: w.shearFlow })),
-  ];
+  ]);
   if (lines.length === 0) return null;
   const u = result.unitLabels;
   const title = across.length === joints.length ? "Force passed across each ply interface, per length" : across.length ? "Shear flow q, and force passed across ply interfaces, per line" : "Shear flow q per contact line";
@@ -88,10 +88,26 @@ export function shearFlow(result: DesignResult, width: number): HTMLElement | nu
       height: 190,
       role: across.length === joints.length ? "interface-force" : "shear-flow",
       series: lines,
+      legend: true,
     }),
     "diagram",
     caption,
   );
+}
+
+/**
+ * Curves that lie on each other (the two flange joints of a symmetric box or I) drawn once under both
+ * names, so that no joint seems to be missing from the diagram.
+ */
+export function coinciding(series: { label: string; values: number[] }[]): { label: string; values: number[] }[] {
+  const out: { label: string; values: number[] }[] = [];
+  for (const s of series) {
+    const scale = Math.max(1e-300, ...s.values.map(Math.abs));
+    const same = out.find((o) => o.values.length === s.values.length && o.values.every((v, i) => Math.abs(v - s.values[i]!) <= 1e-9 * scale));
+    if (same) same.label = `${same.label} = ${s.label}`;
+    else out.push({ ...s });
+  }
+  return out;
 }
 
 /** Required spacing against the zone spacing provided, with the minimum spacing as a floor. */
