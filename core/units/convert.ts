@@ -112,14 +112,23 @@ function compile(schema: z.ZodType): Converter {
       if (converters.every((c) => c === same)) return same;
       if (def.discriminator) {
         const key = def.discriminator;
+        // Tags given as literals or enums are looked up; any other discriminator is tried option by option.
+        const byTag = new Map<unknown, Converter>();
+        const tried: number[] = [];
+        options.forEach((o, i) => {
+          const field = defOf(o).shape?.[key];
+          const fieldDef = field ? (defOf(field) as Def & { values?: unknown[]; entries?: Record<string, unknown> }) : undefined;
+          const tags = fieldDef?.type === "literal" ? fieldDef.values : fieldDef?.type === "enum" ? Object.values(fieldDef.entries ?? {}) : undefined;
+          if (tags) for (const tag of tags) if (!byTag.has(tag)) byTag.set(tag, converters[i]!);
+          if (!tags) tried.push(i);
+        });
         return (v, s) => {
           if (absent(v) || typeof v !== "object") return v;
           const tag = (v as Record<string, unknown>)[key];
-          const i = options.findIndex((o) => {
-            const field = defOf(o).shape?.[key];
-            return field !== undefined && field.safeParse(tag).success;
-          });
-          return i >= 0 ? converters[i]!(v, s) : v;
+          const found = byTag.get(tag);
+          if (found) return found(v, s);
+          const i = tried.find((k) => defOf(options[k]!).shape?.[key]?.safeParse(tag).success);
+          return i === undefined ? v : converters[i]!(v, s);
         };
       }
       return (v, s) => {
