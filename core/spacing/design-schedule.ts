@@ -62,7 +62,8 @@ export function designSchedule(p: ScheduleProblem): ScheduleDesign {
   const mirrored = p.symmetric && demand.isSymmetric();
   const end = mirrored ? L / 2 : L;
   const grid = boundaryGrid(end, roundStep(end, p.system));
-  const cells = new CellMaxima(grid, grid.slice(0, -1).map((a, i) => demand.maxOver(a, grid[i + 1]!).value));
+  const cellMax = grid.slice(0, -1).map((a, i) => demand.maxOver(a, grid[i + 1]!).value);
+  const cells = new CellMaxima(grid, cellMax);
   const query = mirrored
     ? (a: number, b: number) => (b > end ? cells.over(Math.min(a, L - b), end) : cells.over(a, b))
     : (a: number, b: number) => cells.over(a, b);
@@ -80,7 +81,7 @@ export function designSchedule(p: ScheduleProblem): ScheduleDesign {
 
   const minSpacing = spacings[0]!;
   const failingRows = rowChecks.filter((r) => r.utilisation > 1 + 1e-9);
-  const shortCells = grid.slice(0, -1).map((a, i) => ({ from: a, to: grid[i + 1]! })).filter((c) => demand.maxOver(c.from, c.to).value * minSpacing > 1 + 1e-9);
+  const shortCells = grid.slice(0, -1).map((a, i) => ({ from: a, to: grid[i + 1]! })).filter((_c, i) => cellMax[i]! * minSpacing > 1 + 1e-9);
   const mirroredCells = mirrored ? [...shortCells, ...shortCells.map((c) => ({ from: L - c.to, to: L - c.from })).reverse()] : shortCells;
   const where = mergeIntervals(mirroredCells.length > 0 ? mirroredCells : failingRows.map((r) => ({ from: r.from, to: r.to })));
   const infeasible =

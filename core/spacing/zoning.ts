@@ -145,19 +145,27 @@ function zoneSpacing(p: ZoningProblem, a: number, b: number, first: boolean, las
   const peak = p.demand(a, b);
   const topIndex = peak > 0 ? indexAtMost(p.spacings, 1 / peak) : p.spacings.length - 1;
   if (topIndex < 0) return undefined;
-  // Usually the zone's own demand governs and the first candidate carries it.
-  if (zoneCarries(p, a, b, first, last, p.spacings[topIndex]!)) return p.spacings[topIndex];
-  let found = -1;
-  let left = 0;
-  let right = topIndex - 1;
-  while (left <= right) {
-    const mid = (left + right) >> 1;
-    if (zoneCarries(p, a, b, first, last, p.spacings[mid]!)) {
-      found = mid;
-      left = mid + 1;
-    } else right = mid - 1;
+  // Usually the zone's own demand governs and the first candidate carries it; otherwise the answer is
+  // mostly a step or two below: step down 1, 2, 4, … until a spacing carries, then bisect the bracket.
+  const carries = (i: number) => zoneCarries(p, a, b, first, last, p.spacings[i]!);
+  if (carries(topIndex)) return p.spacings[topIndex];
+  let failing = topIndex;
+  let carrying = -1;
+  for (let step = 1; ; step *= 2) {
+    const i = Math.max(0, topIndex - step);
+    if (carries(i)) {
+      carrying = i;
+      break;
+    }
+    failing = i;
+    if (i === 0) return undefined;
   }
-  return found >= 0 ? p.spacings[found] : undefined;
+  while (failing - carrying > 1) {
+    const mid = (failing + carrying) >> 1;
+    if (carries(mid)) carrying = mid;
+    else failing = mid;
+  }
+  return p.spacings[carrying];
 }
 
 /** Whether rows at spacing s over [a, b] carry the demand over their reach, the end rows' included. */
