@@ -1,5 +1,4 @@
 import type { BondLineResult, DesignResult, Schedule, WeldResult } from "../schema/result.js";
-import { placeRows } from "../spacing/place-rows.js";
 import { builderDimensions } from "./builder-dimensions.js";
 
 /** One zone of a joint as built: numbers in the result's units (positions in span units, spacings in length units). */
@@ -47,8 +46,6 @@ export interface FieldJoint {
 }
 
 export interface FieldLayoutOptions {
-  /** Whether a designed intermittent weld with zones symmetric about midspan was laid out mirrored (the job's spacing.symmetric). */
-  mirrorSymmetricWelds: boolean;
   /** A weld's electrode by connector id ("E70"), for its name on the sheet. */
   electrodeOf?: (connector: string) => string | undefined;
 }
@@ -89,7 +86,6 @@ export function fieldLayout(
 function fieldJointOf(result: Pick<DesignResult, "beam" | "units">, source: Source, run: FieldJoint["run"], options: FieldLayoutOptions): FieldJoint {
   const start = run?.from ?? 0;
   const end = run?.to ?? result.beam.length;
-  const length = end - start;
   const k = builderDimensions(result.units).spanToLength;
   const ends = (positions: number[]) =>
     positions.length > 0 ? { start: (positions[0]! - start) * k, end: (end - positions[positions.length - 1]!) * k } : null;
@@ -127,16 +123,8 @@ function fieldJointOf(result: Pick<DesignResult, "beam" | "units">, source: Sour
     const w = source.item;
     const segment = w.zones.find((z) => z.segmentLength !== null)?.segmentLength ?? w.segmentLength;
     const intermittent = w.zones.some((z) => z.pattern === "intermittent") && segment !== null;
-    const mirrored = w.mode === "design" && options.mirrorSymmetricWelds && isMirrorSymmetric(w.zones, start, end);
-    // The segments are placed as the weld was designed: a segment at each end of its run, then each zone's pitch from its start.
-    const positions = intermittent
-      ? placeRows(
-          w.zones.map((z) => ({ from: (z.from - start) * k, to: (z.to - start) * k, spacing: z.pitch ?? segment!, feasible: true })),
-          length * k,
-          segment! / 2,
-          mirrored,
-        ).map((x) => start + x / k)
-      : [];
+    // The segments where the weld was designed or checked: a segment at each end of its run, the rest at each zone's pitch.
+    const positions = intermittent ? w.positions : [];
     return {
       joints: [w.joint],
       kind: "weld",
@@ -191,12 +179,3 @@ function weldName(w: WeldResult, units: DesignResult["units"], electrode: string
 
 /** Whether x falls in a zone: from its start up to (not including) its end, the last zone including the member end. */
 const inZone = (z: { from: number; to: number }, last: boolean) => (x: number) => x >= z.from - 1e-9 && (last ? x <= z.to + 1e-9 : x < z.to - 1e-9);
-
-function isMirrorSymmetric(zones: { from: number; to: number; pitch: number | null; pattern: string }[], start: number, end: number): boolean {
-  const tol = 1e-6 * Math.max(1, end - start);
-  const mirror = (x: number) => start + end - x;
-  return zones.every((z, i) => {
-    const m = zones[zones.length - 1 - i]!;
-    return Math.abs(z.from - mirror(m.to)) < tol && Math.abs(z.to - mirror(m.from)) < tol && z.pattern === m.pattern && z.pitch === m.pitch;
-  });
-}

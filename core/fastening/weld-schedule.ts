@@ -68,6 +68,7 @@ export function weldSchedule(input: JointInput, kind: WeldKind<Connector>): { we
   let at = 0;
   let combination = beam.results[0]?.combination.id ?? "";
   let weldPerLine: number;
+  let positions: number[] = [];
   // A continuous weld is checked as one; an intermittent one is zoned (design) or checked as provided.
   if (layout.pattern === "continuous" && !(job.mode === "check" && fastening.provided)) {
     const worst = beam.results
@@ -89,6 +90,7 @@ export function weldSchedule(input: JointInput, kind: WeldKind<Connector>): { we
     at = worst.x;
     combination = worst.combination;
     zones = toZones(check.zones);
+    positions = check.positions;
     weldPerLine = Math.min(beam.length, check.positions.length * segment);
   } else {
     const design = designSchedule({
@@ -108,6 +110,7 @@ export function weldSchedule(input: JointInput, kind: WeldKind<Connector>): { we
     at = worst.x;
     combination = worst.combination;
     zones = toZones(design.zones);
+    positions = design.positions;
     weldPerLine = Math.min(beam.length, design.positions.length * segment);
   }
 
@@ -127,6 +130,8 @@ export function weldSchedule(input: JointInput, kind: WeldKind<Connector>): { we
       resistance: strengths.map((s, i) => ({ combination: beam.results[i]!.combination.id, value: s.value, governing: s.governing, reference: s.reference, steps: s.steps, modes: s.modes ?? [], warnings: s.warnings ?? [] })),
       limits,
       zones,
+      // Segments only where some zone is intermittent; zones all at pitch = segment make a continuous weld.
+      positions: zones.some((z) => z.pattern === "intermittent") ? positions : [],
       weldLength: weldPerLine * fillets * lineCount,
       sizeNeeded,
       sizeNote:

@@ -319,6 +319,11 @@ export const WeldResult = z.object({
       failingCombinations: z.array(z.string()),
     }),
   ),
+  /**
+   * Centres of the weld segments along the member, as designed or checked, on each fillet (a staggered
+   * weld's other side sits half the zone's pitch along); empty for a continuous weld.
+   */
+  positions: z.array(q("span")),
   /** Length of weld deposited, all fillets on all lines. */
   weldLength: q("span"),
   /** Where even a continuous weld of the given size fails: the leg size that would carry the flow. */

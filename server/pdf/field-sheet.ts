@@ -30,7 +30,7 @@ export function fieldSheet(c: WorksheetContext): number[] {
     const k = job.connectors.find((k) => k.id === id) as { kind: string; standard?: string; electrode?: string } | undefined;
     return k?.kind === "fillet-weld" && k.standard === "AISC-360-16" ? (k.electrode ?? "E70") : undefined;
   };
-  const joints = fieldLayout(result, { mirrorSymmetricWelds: job.spacing.symmetric, electrodeOf });
+  const joints = fieldLayout(result, { electrodeOf });
 
   band(c);
   if (!result.status.passes) failureBox(c);

@@ -109,7 +109,7 @@ describe("fieldElevation(input) and sectionSketch(result): plain drawings the pa
   const names = readdirSync(EXAMPLES).filter((f) => f.endsWith(".json")).map((f) => f.replace(/\.json$/, ""));
   test.each(names)("%s: finite geometry, one strip per joint layout, every joint named in the sketch", (name) => {
     const run = runDesign(example(name));
-    const joints = fieldLayout(run.result, { mirrorSymmetricWelds: run.job.spacing.symmetric });
+    const joints = fieldLayout(run.result, {});
     const drawing = fieldElevation(
       {
         dims: builderDimensions(run.result.units),
@@ -188,7 +188,7 @@ describe("the field sheet at the end of the worksheet", () => {
     expect(text).toContain(`column above (14'-0")`);
     // Segments each side per zone add up to the weld deposited: segments × length × fillets × lines.
     const w = run.result.welds[0]!;
-    const joint = fieldLayout(run.result, { mirrorSymmetricWelds: run.job.spacing.symmetric })[0]!;
+    const joint = fieldLayout(run.result, {})[0]!;
     const segments = joint.zones.reduce((n, z) => n + z.rows, 0);
     expect(segments * w.zones[0]!.segmentLength! * w.fillets * w.lineCount).toBeCloseTo(w.weldLength * 12, 6);
   });
