@@ -3,6 +3,7 @@ import { lineTo, moveTo, palette, rectPath, type DrawItem } from "./drawing.js";
 import type { FieldJoint, FieldZone } from "./field-layout.js";
 import { labelWidth, placeInTiers } from "./label-tiers.js";
 import { supportSymbol, xOf, type AlongMember } from "./member-elevation.js";
+import { staggeredSide } from "../spacing/place-rows.js";
 
 const ZONE_LABEL = 8.5;
 const POSITION_LABEL = 7.5;
@@ -30,7 +31,7 @@ export function jointMakeUp(j: FieldJoint, dims: BuilderDimensions): string {
   if (j.kind === "bond-line") return "bond line over the whole contact width and length";
   if (j.kind === "weld") {
     const sides = j.across === 2 ? "2 fillets per line, one each side" : `${j.across} fillet${j.across === 1 ? "" : "s"} per line`;
-    const arrangement = j.arrangement === "staggered" ? ", segments staggered side to side" : j.arrangement === "chain" ? ", segments opposite each other" : "";
+    const arrangement = j.arrangement === "staggered" ? ", segments staggered side to side, with one at each end on both sides" : j.arrangement === "chain" ? ", segments opposite each other" : "";
     return `${sides}${arrangement}, ${lines}`;
   }
   const count = j.zones.reduce((s, z) => s + (z.connectors ?? 0), 0);
@@ -214,16 +215,16 @@ function laneMarks(j: FieldJoint, dims: BuilderDimensions, along: AlongMember, l
       for (let l = 0; l < lanes; l++) items.push({ type: "path", d: rectPath(X(z.from), laneY(l) + 2, X(z.to) - X(z.from), laneHeight - 4), fill: colour(z.passes), role: "weld continuous" });
     });
     const passing = { true: "", false: "" } as Record<"true" | "false", string>;
-    for (const c of j.positions) {
-      const z = zoneOf(c);
-      if (!z || z.segment === null || z.spacing === null) continue;
-      const half = z.segment / dims.spanToLength / 2;
-      for (let l = 0; l < lanes; l++) {
-        // A staggered weld's far-side segments sit midway between the near-side ones.
-        const shift = j.arrangement === "staggered" && l % 2 === 1 ? z.spacing / dims.spanToLength / 2 : 0;
-        const a = Math.max(0, c + shift - half);
-        const b = Math.min(along.length, c + shift + half);
-        if (b <= a || (shift > 0 && c + shift > along.length - half)) continue;
+    // A staggered weld's far-side segments (every other lane) sit midway between the near-side ones, with one at each end too.
+    const far = j.arrangement === "staggered" ? staggeredSide(j.positions) : j.positions;
+    for (let l = 0; l < lanes; l++) {
+      for (const c of l % 2 === 1 ? far : j.positions) {
+        const z = zoneOf(c);
+        if (!z || z.segment === null || z.spacing === null) continue;
+        const half = z.segment / dims.spanToLength / 2;
+        const a = Math.max(0, c - half);
+        const b = Math.min(along.length, c + half);
+        if (b <= a) continue;
         passing[String(z.passes) as "true" | "false"] += rectPath(X(a), laneY(l) + 2, Math.max(0.8, X(b) - X(a)), laneHeight - 4);
       }
     }

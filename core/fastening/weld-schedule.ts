@@ -4,6 +4,8 @@ import type { Connector } from "../connector/registry.js";
 import type { WeldResult } from "../schema/result.js";
 import { allowedSpacings } from "../spacing/allowed-spacings.js";
 import { checkSchedule } from "../spacing/check-schedule.js";
+import { staggeredSide } from "../spacing/place-rows.js";
+import type { RowUtilisation } from "../spacing/verify-rows.js";
 import { demandCurve, designSchedule } from "../spacing/design-schedule.js";
 import { spacingDefaults } from "../spacing/spacing-defaults.js";
 import { inJobUnits } from "../units/format.js";
@@ -11,6 +13,8 @@ import { toCore } from "../units/quantity.js";
 import { demandActionsOf, lineFlow, type JointInput } from "./discrete-schedule.js";
 
 const leastOf = <T extends { value: number }>(values: T[]) => values.reduce((a, b) => (b.value < a.value ? b : a));
+
+type CheckedZone = { from: number; to: number; spacing: number; utilisation: number; passes: boolean; failingCombinations: string[] };
 
 /**
  * The weld of a joint. An intermittent weld is laid out like rows of connectors: each segment of
@@ -50,7 +54,7 @@ export function weldSchedule(input: JointInput, kind: WeldKind<Connector>): { we
     lines: lineCount,
     rows: fillets,
   };
-  const toZones = (zones: { from: number; to: number; spacing: number; utilisation: number; passes: boolean; failingCombinations: string[] }[]) =>
+  const toZones = (zones: CheckedZone[]) =>
     zones.map((z) => ({
       from: z.from,
       to: z.to,
@@ -61,6 +65,28 @@ export function weldSchedule(input: JointInput, kind: WeldKind<Connector>): { we
       passes: z.passes,
       failingCombinations: z.failingCombinations,
     }));
+
+  // A staggered weld has half its fillets at the near-side segments and half at the far side's
+  // (staggeredSide): each side is checked on its own segments, and the zones take the worse of the two.
+  const staggered = layout.arrangement === "staggered" && fillets >= 2 && fillets % 2 === 0;
+  const withOtherSide = (near: { positions: number[]; rowChecks: RowUtilisation[]; zones: CheckedZone[] }) => {
+    const nearWorst = near.rowChecks.reduce((w, r) => (r.utilisation > w.utilisation ? r : w));
+    const intermittent = near.zones.some((z) => z.spacing > segment * (1 + 1e-9));
+    if (!staggered || !intermittent) {
+      return { positions: near.positions, zones: near.zones, worst: { utilisation: nearWorst.utilisation, at: nearWorst.x, combination: nearWorst.combination }, perLine: Math.min(beam.length, near.positions.length * segment) };
+    }
+    const far = checkSchedule({ demand: demandCurve(problem), rows: fillets, lines: lineCount, endDistance: segment / 2, provided: { zones: near.zones, positions: staggeredSide(near.positions) } });
+    const farWorst = far.rowChecks.reduce((w, r) => (r.utilisation > w.utilisation ? r : w));
+    const worst = farWorst.utilisation > nearWorst.utilisation ? farWorst : nearWorst;
+    const zones = near.zones.map((z, i) => {
+      const f = far.zones[i]!;
+      const u = Math.max(z.utilisation, f.utilisation);
+      return { ...z, utilisation: u, passes: u <= 1 + 1e-9, failingCombinations: [...new Set([...z.failingCombinations, ...f.failingCombinations])] };
+    });
+    // Weld per line, as an average over the two sides' fillets.
+    const perLine = (Math.min(beam.length, near.positions.length * segment) + Math.min(beam.length, far.positions.length * segment)) / 2;
+    return { positions: near.positions, zones, worst: { utilisation: worst.utilisation, at: worst.x, combination: worst.combination }, perLine };
+  };
 
   const mode: WeldResult["mode"] = job.mode === "check" ? "check" : "design";
   let zones: WeldResult["zones"];
@@ -84,14 +110,11 @@ export function weldSchedule(input: JointInput, kind: WeldKind<Connector>): { we
     weldPerLine = beam.length;
   } else if (job.mode === "check") {
     const provided = fastening.provided?.type === "zones" ? fastening.provided.zones : [{ from: 0, to: beam.length, spacing: layout.pitch ?? segment }];
-    const check = checkSchedule({ demand: demandCurve(problem), rows: fillets, lines: lineCount, endDistance: segment / 2, provided: { zones: provided } });
-    const worst = check.rowChecks.reduce((w, r) => (r.utilisation > w.utilisation ? r : w));
-    utilisation = worst.utilisation;
-    at = worst.x;
-    combination = worst.combination;
+    const check = withOtherSide(checkSchedule({ demand: demandCurve(problem), rows: fillets, lines: lineCount, endDistance: segment / 2, provided: { zones: provided } }));
+    ({ utilisation, at, combination } = check.worst);
     zones = toZones(check.zones);
     positions = check.positions;
-    weldPerLine = Math.min(beam.length, check.positions.length * segment);
+    weldPerLine = check.perLine;
   } else {
     const design = designSchedule({
       ...problem,
@@ -105,13 +128,11 @@ export function weldSchedule(input: JointInput, kind: WeldKind<Connector>): { we
       symmetric: job.spacing.symmetric,
       system: job.units,
     });
-    const worst = design.rowChecks.reduce((w, r) => (r.utilisation > w.utilisation ? r : w));
-    utilisation = worst.utilisation;
-    at = worst.x;
-    combination = worst.combination;
-    zones = toZones(design.zones);
-    positions = design.positions;
-    weldPerLine = Math.min(beam.length, design.positions.length * segment);
+    const checked = withOtherSide(design);
+    ({ utilisation, at, combination } = checked.worst);
+    zones = toZones(checked.zones);
+    positions = checked.positions;
+    weldPerLine = checked.perLine;
   }
 
   return {

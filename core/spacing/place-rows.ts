@@ -29,3 +29,13 @@ export function placeRows(zones: PlannedZone[], length: number, endDistance: num
   const right = left.map((x) => length - x).reverse();
   return [...left, ...middle, ...right];
 }
+
+/**
+ * The far side of a staggered intermittent weld: a segment at each end, as on the near side, and one
+ * midway between each two near-side segments. (The ends get a segment on both sides, so the far side
+ * never reaches half a pitch further than the near side for the flow it carries.)
+ */
+export function staggeredSide(near: number[]): number[] {
+  if (near.length < 2) return [...near];
+  return [near[0]!, ...near.slice(1).map((x, i) => (near[i]! + x) / 2), near[near.length - 1]!];
+}

@@ -9,6 +9,7 @@ import { fieldLayout } from "../../core/draw/field-layout.js";
 import { renderSvg } from "../../core/draw/render-svg.js";
 import { sectionSketch } from "../../core/draw/section-sketch.js";
 import { placeInTiers } from "../../core/draw/label-tiers.js";
+import { staggeredSide } from "../../core/spacing/place-rows.js";
 import { runDesign, type DesignRun } from "../../server/design-service.js";
 import { FIELD_SHEET_BAND, FIELD_SHEET_HEADING } from "../../server/pdf/field-sheet.js";
 import { REVIEW_NOTICE } from "../../server/pdf/title-block.js";
@@ -186,11 +187,16 @@ describe("the field sheet at the end of the worksheet", () => {
     expect(text).toContain("a segment starts at END A");
     expect(text).toContain("a segment ends at END B");
     expect(text).toContain(`column above (14'-0")`);
-    // Segments each side per zone add up to the weld deposited: segments × length × fillets × lines.
+    // The segments add up to the weld deposited: the near side's (per zone) and the far side's, a staggered
+    // weld's far side having one at each end and one between each two near-side segments, each side
+    // with half the fillets: (near + far) × length × fillets/2 × lines.
     const w = run.result.welds[0]!;
     const joint = fieldLayout(run.result, {})[0]!;
-    const segments = joint.zones.reduce((n, z) => n + z.rows, 0);
-    expect(segments * w.zones[0]!.segmentLength! * w.fillets * w.lineCount).toBeCloseTo(w.weldLength * 12, 6);
+    const near = joint.zones.reduce((n, z) => n + z.rows, 0);
+    const far = staggeredSide(w.positions).length;
+    expect(w.positions.length).toBe(near);
+    expect(far).toBe(near + 1);
+    expect((near + far) * w.zones[0]!.segmentLength! * (w.fillets / 2) * w.lineCount).toBeCloseTo(w.weldLength * 12, 6);
   });
 
   test("a cover plate over part of the span is laid out from the plate's own ends, with no connectors drawn where there is no plate", async () => {
