@@ -100,6 +100,7 @@ function introWithSketch(c: WorksheetContext, joints: FieldJoint[], dims: Builde
   const { sheet, result } = c;
   const hasRows = joints.some((j) => j.kind === "connectors" && j.positions.length > 0);
   const hasSegments = joints.some((j) => j.kind === "weld" && j.positions.length > 0);
+  const hasStaggered = joints.some((j) => j.kind === "weld" && j.positions.length > 0 && j.arrangement === "staggered" && j.across > 1);
   const lines: [string, TextStyle["font"]][] = [
     [
       result.mode === "check"
@@ -119,7 +120,14 @@ function introWithSketch(c: WorksheetContext, joints: FieldJoint[], dims: Builde
       ? ([["Rows as drawn: the first and last at the end distance, each zone at its spacing or closer; where two zones meet the gap may be shorter than either spacing.", "body"]] as [string, "body"][])
       : []),
     ...(hasSegments
-      ? ([["Weld segments as drawn: one at each end of the member, the rest at each zone's pitch, centre to centre, or closer where two zones meet.", "body"]] as [string, "body"][])
+      ? ([
+          [
+            `Weld segments as drawn: one at each end of the member, the rest at each zone's pitch, centre to centre, or closer where two zones meet.${
+              hasStaggered ? " Staggered: the far side also has one at each end, and the rest midway between the near side's, one more segment than the near side in all." : ""
+            }`,
+            "body",
+          ],
+        ] as [string, "body"][])
       : []),
     ["Any change of connector, size, spacing, end or edge distance needs the engineer of record's approval.", "body"],
   ];
@@ -178,7 +186,7 @@ function zonesTable(c: WorksheetContext, joints: FieldJoint[], dims: BuilderDime
     { header: "From END A", weight: 0.95, align: "right" },
     { header: "To", weight: 0.85, align: "right" },
     { header: welds ? (connectors ? "Spacing, or segment @ pitch" : "Segment @ pitch") : "Spacing", weight: (welds ? 1.5 : 1.1) + (fails ? 0.6 : 0) },
-    { header: welds ? (connectors ? "Rows or segments" : "Segments each side") : "Rows", weight: welds ? 0.9 : 0.6, align: "right" },
+    { header: welds ? (connectors ? "Rows or segments" : laidOut.some((j) => j.kind === "weld" && j.arrangement === "staggered" && j.across > 1) ? "Segments, near side" : "Segments each side") : "Rows", weight: welds ? 0.9 : 0.6, align: "right" },
     ...(connectors ? [{ header: "Count", weight: 0.75, align: "right" as const }] : []),
   ];
   sheet.heading(`Zones of ${named ? "every joint" : jointNames(laidOut[0]!.joints).toLowerCase()}: positions from END A in ${dims.positionUnit}${connectors ? ", counts on all lines" : ""}`, 2, 60);

@@ -19,7 +19,7 @@ export function weldSection(c: WorksheetContext, w: WeldJoint): void {
   sheet.heading(check ? `Given weld, checked — joint ${w.joint}` : `Weld — joint ${w.joint}`, 1, 90 + figureHeight(sheet, caption));
   if (given) sheet.paragraph(given, { size: 9, font: "bold" });
   const sides = w.fillets === 2 ? "one fillet each side of the joint line" : `${w.fillets} fillet${w.fillets === 1 ? "" : "s"} per joint line`;
-  const arrangement = w.zones.some((z) => z.pattern === "intermittent") && w.fillets > 1 ? `; intermittent segments ${w.arrangement === "staggered" ? "staggered from one side to the other" : "opposite each other (chain)"}` : "";
+  const arrangement = w.zones.some((z) => z.pattern === "intermittent") && w.fillets > 1 ? `; intermittent segments ${w.arrangement === "staggered" ? "staggered from one side to the other, with one at each end on both sides" : "opposite each other (chain)"}` : "";
   sheet.paragraph(
     `${w.connectorLabel}: ${sides}, on ${w.lineCount === 1 ? "its 1 joint line" : `each of its ${w.lineCount} joint lines`}${arrangement}. ${
       w.pattern === "intermittent"

@@ -62,7 +62,7 @@ export function weldBlock(result: DesignResult, w: WeldResult, width: number): H
     zones,
     el("dl", { className: "figures" }, [
       ...term("Weld deposited", `${shown(result, w.weldLength, "span")} of fillet in all (every fillet on every line)`),
-      ...(w.pattern === "intermittent" ? term("Both sides of a web", w.arrangement === "chain" ? "chain: segments opposite each other" : "staggered: segments alternate") : []),
+      ...(w.pattern === "intermittent" ? term("Both sides of a web", w.arrangement === "chain" ? "chain: segments opposite each other" : "staggered: segments alternate, with one at each end on both sides") : []),
       ...term("Largest shear flow", `${shown(result, w.maxShearFlow, "shearFlow")} per line at x = ${shown(result, w.at, "span")} (${w.combination}), utilisation ${formatNumber(w.utilisation, 3)}`),
       ...term("Resistance", resistance),
       ...term("Limits", limits.join(", ")),
