@@ -198,6 +198,11 @@ export const filletWeldKind: WeldKind<FilletWeld> = {
   ],
   assumptions: (c) => [
     `${describe(c)}: the weld carries the shear flow along its axis (longitudinal loading, no directional increase); each of the joint's fillets per line carries an equal share; the base metal at the fusion faces is covered by the member's own shear check and is not checked separately.`,
+    ...(c.pattern === "intermittent" && c.arrangement === "staggered"
+      ? [
+          `${describe(c)}, staggered: the far side's segments are laid out one at each end of the joint and one midway between each two near-side segments, and each side's segments are checked on their own positions, each fillet carrying its equal share of the flow over its tributary length (the layout rule is this program's; a segment at each end on both sides is common practice).`,
+        ]
+      : []),
   ],
   problems,
   resistancePerLength,
