@@ -145,7 +145,8 @@ function fieldJointOf(result: Pick<DesignResult, "beam" | "units">, source: Sour
       positions,
       endDistance: intermittent ? { start: 0, end: 0 } : null,
       run,
-      arrangement: intermittent ? w.arrangement : null,
+      // Sides to stagger only with an even number of fillets (one each side of a web, or two pairs).
+      arrangement: intermittent && w.fillets % 2 === 0 ? w.arrangement : null,
       acrossLine: { spacing: null, edge: null },
       bondWidth: null,
       passes: w.passes,
