@@ -1,6 +1,7 @@
 import type { DesignResult } from "../schema/result.js";
 import { formatNumber } from "../units/format.js";
-import { lineTo, moveTo, palette, rectPath, type Drawing, type DrawItem } from "./drawing.js";
+import { lineTo, moveTo, palette, type Drawing, type DrawItem } from "./drawing.js";
+import { fitSection, partRectangles } from "./section-frame.js";
 
 export interface SectionDrawingOptions {
   width: number;
@@ -17,28 +18,16 @@ export function sectionDrawing(result: Pick<DesignResult, "section" | "joints" |
   const { section, joints } = result;
   const unit = result.unitLabels.length ?? "";
   const { x0, x1, y0, y1 } = section.bounds;
-  const margin = { left: 16, right: 92, top: 22, bottom: 30 };
-  const scale = Math.min((options.width - margin.left - margin.right) / (x1 - x0), (options.height - margin.top - margin.bottom) / (y1 - y0));
-  const ox = margin.left + (options.width - margin.left - margin.right - (x1 - x0) * scale) / 2;
-  const oy = margin.top + (options.height - margin.top - margin.bottom + (y1 - y0) * scale) / 2;
-  const X = (x: number) => ox + (x - x0) * scale;
-  const Y = (y: number) => oy - (y - y0) * scale;
-  const items: DrawItem[] = [];
-  const materials = [...new Set(section.parts.map((p) => p.material))];
-
-  for (const part of section.parts) {
-    const colour = palette.material[materials.indexOf(part.material) % palette.material.length];
-    for (const r of part.rects) {
-      items.push({ type: "path", d: rectPath(X(r.x0), Y(r.y1), (r.x1 - r.x0) * scale, (r.y1 - r.y0) * scale), fill: colour, stroke: palette.ink, strokeWidth: 1, role: `part ${part.id}` });
-    }
-  }
+  const frame = fitSection(section.bounds, options.width, options.height, { left: 16, right: 92, top: 22, bottom: 30 });
+  const { X, Y } = frame;
+  const items: DrawItem[] = partRectangles(section, frame, 1);
 
   const selected = joints.find((j) => j.id === options.joint) ?? joints[0];
   if (selected) {
     const held = new Set(selected.held);
     for (const part of section.parts.filter((p) => held.has(p.id))) {
       for (const r of part.rects) {
-        items.push({ type: "path", d: rectPath(X(r.x0), Y(r.y1), (r.x1 - r.x0) * scale, (r.y1 - r.y0) * scale), fill: palette.held, opacity: 0.55, role: `held-area ${selected.id}` });
+        items.push({ type: "path", d: frame.rect(r), fill: palette.held, opacity: 0.55, role: `held-area ${selected.id}` });
       }
     }
   }

@@ -1,6 +1,7 @@
 import type { DesignResult } from "../schema/result.js";
 import { lineTo, moveTo, palette, rectPath, type Drawing, type DrawItem } from "./drawing.js";
 import { labelWidth } from "./label-tiers.js";
+import { fitSection, partRectangles } from "./section-frame.js";
 
 export interface SectionSketchOptions {
   width: number;
@@ -31,7 +32,6 @@ export function spreadApart(wanted: number[], gap: number, lo: number, hi: numbe
  */
 export function sectionSketch(result: Pick<DesignResult, "section" | "joints">, options: SectionSketchOptions): Drawing {
   const { section, joints } = result;
-  const { x0, x1, y0, y1 } = section.bounds;
   const partLabels = section.parts.map((p) => p.id);
   const jointLabels = joints.map((j) => `joint ${j.id}`);
   const centres = section.parts.map((p) => {
@@ -44,18 +44,9 @@ export function sectionSketch(result: Pick<DesignResult, "section" | "joints">, 
   const leftRoom = above ? 8 : Math.min(options.width * 0.3, Math.max(0, ...partLabels.map((t) => labelWidth(t, LABEL))) + 14);
   const rightRoom = Math.min(options.width * 0.4, Math.max(0, ...jointLabels.map((t) => labelWidth(t, LABEL, true))) + 16);
   const margin = { left: leftRoom, right: rightRoom, top: above ? 30 : 8, bottom: 8 };
-  const scale = Math.min((options.width - margin.left - margin.right) / (x1 - x0 || 1), (options.height - margin.top - margin.bottom) / (y1 - y0 || 1));
-  const ox = margin.left + (options.width - margin.left - margin.right - (x1 - x0) * scale) / 2;
-  const oy = margin.top + (options.height - margin.top - margin.bottom + (y1 - y0) * scale) / 2;
-  const X = (x: number) => ox + (x - x0) * scale;
-  const Y = (y: number) => oy - (y - y0) * scale;
-  const items: DrawItem[] = [];
-  const materials = [...new Set(section.parts.map((p) => p.material))];
-
-  for (const part of section.parts) {
-    const fill = palette.material[materials.indexOf(part.material) % palette.material.length];
-    for (const r of part.rects) items.push({ type: "path", d: rectPath(X(r.x0), Y(r.y1), (r.x1 - r.x0) * scale, (r.y1 - r.y0) * scale), fill, stroke: palette.ink, strokeWidth: 0.8, role: `part ${part.id}` });
-  }
+  const frame = fitSection(section.bounds, options.width, options.height, margin);
+  const { X, Y } = frame;
+  const items: DrawItem[] = partRectangles(section, frame, 0.8);
 
   // Each part id is led to a dot in its largest rectangle. On the left, parts further right take the lower labels at one height, so leaders do not cross.
   const anchors = centres.map((c) => ({ x: X(c.x), y: Y(c.y) }));
