@@ -52,11 +52,7 @@ export function inputsSection(c: WorksheetContext): void {
   );
 
   sheet.heading("Parts", 2, 40);
-  sheet.paragraph(
-    "Shape as entered; b × h is the part's bounding box (b across the member, h deep) and x, y its lower left corner as placed in the section. n = E/E_ref transforms the part to the reference material.",
-    { size: 8, colour: ink.faint },
-    3,
-  );
+  sheet.note("Shape as entered; b × h is the part's bounding box (b across the member, h deep) and x, y its lower left corner as placed in the section. n = E/E_ref transforms the part to the reference material.");
   table(
     sheet,
     [
@@ -110,7 +106,7 @@ export function inputsSection(c: WorksheetContext): void {
   keyValueTable(sheet, beamRows, { keyWeight: 0.6 });
 
   sheet.heading("Loads", 2, 40);
-  sheet.paragraph("Downward positive; positions from the left end of the member. A line load without from and to covers the whole member.", { size: 8, colour: ink.faint }, 3);
+  sheet.note("Downward positive; positions from the left end of the member. A line load without from and to covers the whole member.");
   if (job.beam.loads.length === 0) sheet.paragraph("No applied loads.", { colour: ink.faint });
   else
     table(
@@ -126,7 +122,7 @@ export function inputsSection(c: WorksheetContext): void {
     );
 
   sheet.heading("Load combinations", 2, 40);
-  sheet.paragraph(`Combination set: ${job.combinations.set}. Each combination's factors multiply the loads of each category.`, { size: 8, colour: ink.faint }, 3);
+  sheet.note(`Combination set: ${job.combinations.set}. Each combination's factors multiply the loads of each category.`);
   table(
     sheet,
     [

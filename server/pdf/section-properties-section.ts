@@ -15,7 +15,7 @@ export function sectionPropertiesSection(c: WorksheetContext): void {
   const intro =
     "Each drawing shades the area held by one joint (the parts whose shear flow its connectors pass on) and marks the contact width t of its joint lines. The dashed line is the neutral axis.";
   sheet.heading("Cross-section and joint planes", 1, sheet.textHeight(intro, { size: 8 }) + CELL_HEIGHT + 40);
-  sheet.paragraph(intro, { size: 8, colour: ink.faint }, 4);
+  sheet.note(intro, 4);
 
   const properties: [string, string][] = [
     ["Reference modulus E_ref (parts transformed to it)", text.of(s.referenceModulus, "modulus")],
@@ -92,11 +92,7 @@ function stretchesTable(c: WorksheetContext): void {
   const stretches = result.stretches ?? [];
   if (stretches.length === 0) return;
   sheet.heading("Section along the member", 2, 60);
-  sheet.paragraph(
-    "Parts start or stop along this member, so the section changes: the stiffness analysis, the shear flow and the member checks use each stretch's own section. The properties above are those of the full section.",
-    { size: 8, colour: ink.faint },
-    3,
-  );
+  sheet.note("Parts start or stop along this member, so the section changes: the stiffness analysis, the shear flow and the member checks use each stretch's own section. The properties above are those of the full section.");
   table(
     sheet,
     [
@@ -116,11 +112,7 @@ function pliesTable(c: WorksheetContext): void {
   const m = result.multiPly;
   if (!m) return;
   sheet.heading("Side-by-side plies: load shares and what each interface passes", 2, 60);
-  sheet.paragraph(
-    "Plies of one depth deflect together, so each carries its E·I share of every load. A load that arrives on one face (or on top of plies of unequal stiffness) must be passed across the interfaces to the other plies: the fraction of a unit load each interface passes is below (positive from the left towards the right).",
-    { size: 8, colour: ink.faint },
-    3,
-  );
+  sheet.note("Plies of one depth deflect together, so each carries its E·I share of every load. A load that arrives on one face (or on top of plies of unequal stiffness) must be passed across the interfaces to the other plies: the fraction of a unit load each interface passes is below (positive from the left towards the right).");
   const share = (v: number) => numberText(Math.abs(v) < 1e-9 ? 0 : v, 3);
   table(
     sheet,

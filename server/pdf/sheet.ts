@@ -159,6 +159,11 @@ export class Sheet {
     this.y += height + after;
   }
 
+  /** A small faint note under a heading: how to read the block below it. */
+  note(text: string, after = 3): void {
+    this.paragraph(text, { size: 8, colour: ink.faint }, after);
+  }
+
   /**
    * A heading, set when the next block is placed so that it stays with that block; `keep` asks for
    * that much room below it as well (for a heading over several blocks that read as one).
