@@ -3,6 +3,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { nailedIJob } from "../job-builders.js";
 import { shots, startHarness, toolbarMessage, untilText, upToDate, type Harness } from "./page-harness.js";
 
 let h: Harness;
@@ -117,7 +118,7 @@ describe("composite action with slip (EN 1995-1-1 Annex B)", () => {
 
   test("a nailed I chosen slip-aware in the form shows both models side by side, with fewer connectors than rigid", async () => {
     // The symmetric nailed I of test/core/fastening/composite-action.test.ts, to be designed.
-    writeFileSync(jobFile, JSON.stringify(nailedI()));
+    writeFileSync(jobFile, JSON.stringify(nailedIJob("rigid", "design")));
     await page.locator("#job-file").setInputFiles(jobFile);
     await untilText(page, toolbarMessage(page), (t) => t.includes("Opened"), "the job file was not opened");
     await upToDate(page);
@@ -147,26 +148,3 @@ describe("composite action with slip (EN 1995-1-1 Annex B)", () => {
     expect(h.errors).toEqual([]);
   });
 });
-
-function nailedI(): Record<string, unknown> {
-  return {
-    format: "stitchplan-job",
-    version: 1,
-    units: "si",
-    basis: "factored",
-    mode: "design",
-    project: { name: "γ-method test" },
-    member: { mark: "I-1" },
-    materials: [{ id: "C24", name: "C24", E: 11_000, density: 0, strength: { bending: 14.77, shear: 2.46 } }],
-    parts: [
-      { id: "bottom", material: "C24", shape: { type: "rectangle", b: 120, h: 45 }, x: 0, y: 0 },
-      { id: "web", material: "C24", shape: { type: "rectangle", b: 45, h: 200 }, place: { on: "bottom", side: "top" } },
-      { id: "top", material: "C24", shape: { type: "rectangle", b: 120, h: 45 }, place: { on: "web", side: "top" } },
-    ],
-    connectors: [{ id: "N", kind: "rated", label: "3.1 mm nail", resistance: 2000, minSpacing: 31, maxSpacing: 300, slipModulus: 709.32, ultimateSlipModulus: 472.88 }],
-    fastening: { default: { connector: "N", rows: 1 } },
-    beam: { spans: [5], loads: [{ type: "uniform", w: 4 }], selfWeight: false },
-    spacing: { module: 1, minZoneLength: 300, maxZonesPerSpan: 5, symmetric: true },
-    compositeAction: { model: "rigid" },
-  };
-}

@@ -3,32 +3,9 @@ import { prepareJob } from "../../../core/check-job.js";
 import { designMember } from "../../../core/design-member.js";
 import type { JobInput } from "../../../core/schema/job.js";
 import { expectClose } from "../../expect-close.js";
+import { nailedIJob } from "../../job-builders.js";
 
-// REFERENCES §6.6 worked case (symmetric nailed I): flanges 120 × 45, web 45 × 200, all E = 11 000 MPa,
-// span 5000 mm, nails with K_ser = 709.32 N/mm (d = 3.1, ρ_m = 420, not predrilled; EN 1995-1-1 Table 7.1 [M]),
-// one nail per flange joint per row at s = 50 mm, w = 4 N/mm (V = 10 kN, M = 12.5 kN·m). Values [D].
-function nailedI(model: "rigid" | "slip-aware", mode: "design" | "check" = "check"): JobInput {
-  return {
-    format: "stitchplan-job",
-    version: 1,
-    units: "si",
-    basis: "factored",
-    mode,
-    project: { name: "γ-method test" },
-    member: { mark: "I-1" },
-    materials: [{ id: "C24", name: "C24", E: 11_000, density: 0, strength: { bending: 14.77, shear: 2.46 } }],
-    parts: [
-      { id: "bottom", material: "C24", shape: { type: "rectangle", b: 120, h: 45 }, x: 0, y: 0 },
-      { id: "web", material: "C24", shape: { type: "rectangle", b: 45, h: 200 }, place: { on: "bottom", side: "top" } },
-      { id: "top", material: "C24", shape: { type: "rectangle", b: 120, h: 45 }, place: { on: "web", side: "top" } },
-    ],
-    connectors: [{ id: "N", kind: "rated", label: "3.1 mm nail", resistance: 2000, minSpacing: 31, maxSpacing: 300, slipModulus: 709.32, ultimateSlipModulus: 472.88 }],
-    fastening: { default: { connector: "N", rows: 1, provided: { type: "zones", zones: [{ from: 0, to: 5, spacing: 50 }] } } },
-    beam: { spans: [5], loads: [{ type: "uniform", w: 4 }], selfWeight: false },
-    spacing: { module: 1, minZoneLength: 300, maxZonesPerSpan: 5, symmetric: true },
-    compositeAction: { model },
-  };
-}
+// The member: REFERENCES §6.6 worked case (symmetric nailed I), see nailedIJob.
 
 const run = (job: JobInput) => {
   const p = prepareJob(job);
@@ -38,7 +15,7 @@ const run = (job: JobInput) => {
 
 describe("composite action (EN 1995-1-1 Annex B)", () => {
   test("the rigid and no-connection limits of the worked case: (EI) = 2.132790e12 and 3.500475e11 N·mm² (REFERENCES §6.6 [D])", () => {
-    const c = run(nailedI("rigid")).composite!;
+    const c = run(nailedIJob("rigid")).composite!;
     expect(c.applies).toBe(true);
     expectClose(c.stiffness!.rigid, 2.13279e12, { rel: 1e-6 });
     expectClose(c.stiffness!.noConnection, 3.500475e11, { rel: 1e-6 });
@@ -47,7 +24,7 @@ describe("composite action (EN 1995-1-1 Annex B)", () => {
   });
 
   test("at s = 50 mm with K_ser: γ = 1/(1 + π²·E·A·s/(K·l²)) = 0.376931 and (EI)_ef = 1.022019e12 (Annex B (B.5), (B.1) [M]; numbers [D])", () => {
-    const c = run(nailedI("rigid")).composite!;
+    const c = run(nailedIJob("rigid")).composite!;
     const gamma = 1 / (1 + (Math.PI ** 2 * 11_000 * 120 * 45 * 50) / (709.32 * 5000 ** 2));
     expectClose(gamma, 0.376931, { rel: 1e-5 });
     for (const j of c.joints) expectClose(j.gammaServiceability, gamma, { rel: 1e-9 });
@@ -56,7 +33,7 @@ describe("composite action (EN 1995-1-1 Annex B)", () => {
   });
 
   test("slip-aware check mode: the nail force at s = 50 mm is γ·E·A·a·s·V/(EI)_ef with K_u, below the rigid 1705.86 N", () => {
-    const result = run(nailedI("slip-aware"));
+    const result = run(nailedIJob("slip-aware"));
     const c = result.composite!;
     const j = c.joints[0]!;
     // F₁ = (q/V)·s·V at the support, V = 10 kN.
@@ -71,7 +48,7 @@ describe("composite action (EN 1995-1-1 Annex B)", () => {
   });
 
   test("slip-aware design converges, needs no more connectors than the rigid design, and keeps s_max ≤ 4·s_min", () => {
-    const result = run(nailedI("slip-aware", "design"));
+    const result = run(nailedIJob("slip-aware", "design"));
     const c = result.composite!;
     expect(c.converged).toBe(true);
     expect(c.iterations).toBeGreaterThanOrEqual(1);
@@ -85,7 +62,7 @@ describe("composite action (EN 1995-1-1 Annex B)", () => {
   });
 
   test("slip-aware on a section the γ-method does not cover is refused, with the reason", () => {
-    const job = nailedI("slip-aware");
+    const job = nailedIJob("slip-aware");
     job.parts = [
       { id: "a", material: "C24", shape: { type: "rectangle", b: 45, h: 200 }, x: 0, y: 0 },
       { id: "b", material: "C24", shape: { type: "rectangle", b: 45, h: 200 }, place: { on: "a", side: "right" } },
@@ -97,7 +74,7 @@ describe("composite action (EN 1995-1-1 Annex B)", () => {
 
   // A glue line does not slip: γ = 1 reproduces VQ/I (REFERENCES §6.6, the rigid limit [D]).
   const gluedI = (model: "rigid" | "slip-aware"): JobInput => ({
-    ...nailedI(model, "design"),
+    ...nailedIJob(model, "design"),
     connectors: [{ id: "G", kind: "glue", label: "structural adhesive", shearStrength: 3 }],
     fastening: { default: { connector: "G", rows: 1 } },
   });
