@@ -14,6 +14,7 @@ import { globalise, jointDemand, localView, memberJoints } from "./fastening/mem
 import { partTerminations } from "./fastening/part-terminations.js";
 import { interfaceDemand, interfaceOf, multiPlyOf, type MultiPly } from "./fastening/side-load-transfer.js";
 import { weldSchedule } from "./fastening/weld-schedule.js";
+import { fastenerReach } from "./multi-ply/ply-detailing.js";
 import { interfaceTransfer, plyShares } from "./multi-ply/ply-shares.js";
 import type { JobDocument } from "./schema/job.js";
 import { RESULT_FORMAT, RESULT_VERSION, type BondLineResult, type DesignResult, type JointResult, type MemberCheck, type Schedule, type WeldResult } from "./schema/result.js";
@@ -97,7 +98,7 @@ export function designMember(job: JobDocument): DesignResult {
       const local = mj.extent ? { ...common, fastening: shiftProvided(fastening, -mj.extent.from) } : common;
       input = { ...local, ...view, flowFactor: 1, stressFactor: 1 / joint.contactWidth, demandActions: jointDemand(beam, mj) };
     }
-    return { joint, kind, input, extent: mj.extent };
+    return { joint, kind, input, extent: mj.extent, plyInterface };
   });
 
   type Run = { schedule?: Schedule; bondLine?: BondLineResult; weld?: WeldResult; warnings: string[]; mirrored: boolean };
@@ -120,6 +121,7 @@ export function designMember(job: JobDocument): DesignResult {
     assumptions.add("Side-by-side plies of one depth deflect together, so each carries a share of the load in proportion to its E·I; connectors at each interface pass what arrives on one side beyond its share.");
     assumptions.add("A load on top bears on each ply in proportion to its thickness (common practice); the self-weight of each ply is carried by that ply.");
     assumptions.add("A concentrated load hung on a face is passed by the connectors within half the member depth each side of it (common practice).");
+    assumptions.add("A nail or screw at an interface between plies is driven from an outer face: it must pass the plies on that side and still reach its least penetration into the next one; its resistance is taken between the two plies at the interface.");
   }
   const { checks, notChecked } = stepped ? steppedChecks(job, stretches, beam, composite.stiffness) : memberChecks(job, section, beam, profile, composite.stiffness);
   checks.push(...composite.checks);
@@ -171,6 +173,12 @@ export function designMember(job: JobDocument): DesignResult {
   const welds: WeldResult[] = [];
   for (const p of prepared) {
     const r = runs.get(p.joint.id)!;
+    // Single shear only: there the penetration provided is the length past the head-side ply.
+    const singleShear = (p.input.connector as { shear?: string }).shear !== "double";
+    if (r.schedule && plies && p.plyInterface !== null && singleShear) {
+      const problem = reachProblem(r.schedule, plies, p.plyInterface, p.input.contexts[0]![0]!.members[0].thickness, job.units);
+      if (problem) r.schedule = { ...r.schedule, detailingProblems: [...r.schedule.detailingProblems, problem], passes: false };
+    }
     if (r.schedule) schedules.push(r.schedule);
     if (r.bondLine) bondLines.push(r.bondLine);
     if (r.weld) welds.push(r.weld);
@@ -271,8 +279,27 @@ function steppedChecks(job: JobDocument, stretches: ReturnType<typeof sectionStr
   return { checks: [...worst.values()], notChecked: [...notChecked] };
 }
 
+/**
+ * A face-driven fastener (nail, screw) at interface k of side-by-side plies is driven from an outer
+ * face: it must pass every ply on that side and still reach the least penetration into the next. Its
+ * length is the penetration provided plus the side ply it was sized through. null when a face reaches it.
+ */
+function reachProblem(s: Schedule, plies: MultiPly, k: number, sidePly: number, units: JobDocument["units"]): string | null {
+  const penetration = s.limits.penetration;
+  if (!penetration) return null;
+  const length = penetration.provided + sidePly;
+  const thicknesses = plies.plies.map((p) => p.thickness);
+  const reach = fastenerReach({ thicknesses, length, minPenetration: penetration.required }).interfaces[k];
+  if (!reach || reach.fromLeft || reach.fromRight) return null;
+  const fromLeft = thicknesses.slice(0, k + 1).reduce((a, b) => a + b, 0);
+  const fromRight = thicknesses.slice(k + 1).reduce((a, b) => a + b, 0);
+  const len = (mm: number) => inJobUnits(mm, "length", units);
+  return `${s.connectorLabel}, ${len(length)} long, driven from either outer face does not reach interface ${k + 1} of the plies: it needs ${len(Math.min(fromLeft, fromRight) + penetration.required)} (${len(Math.min(fromLeft, fromRight))} of plies, then the least penetration of ${len(penetration.required)}). Use through-bolts or longer screws at this interface.`;
+}
+
 function scheduleFailure(s: Schedule): string {
   if (s.infeasible) return "no spacing within the limits carries the shear flow";
+  if (s.detailingProblems.length > 0 && s.verification.passes && s.mode === "design") return `the connectors cannot be placed as designed (${s.detailingProblems.join("; ")})`;
   if (s.detailingProblems.length > 0 && s.verification.passes) return `the given spacing is outside the detailing limits (${s.detailingProblems.join("; ")})`;
   return s.mode === "check" ? "a row of the given schedule is over-utilised" : "a row is over-utilised";
 }

@@ -88,6 +88,35 @@ describe("side-by-side plies loaded from one face", () => {
     expect(heavy.schedules.find((x) => x.joint === heavy.multiPly!.interfaces[0]!.joint)!.infeasible).not.toBeNull();
   });
 
+  // 16d common nail: L = 3.5 in, D = 0.162 in (REFERENCES §10, §5.3 [V]); least penetration 6D = 0.972 in
+  // (NDS, REFERENCES §10 [M]); 2x plies 1.5 in thick (PS 20 [V]). From an outer face a nail reaches interface k
+  // after k plies: interface 1 needs 1.5 + 0.972 = 2.472 in ≤ 3.5 in; the middle interface of four plies
+  // needs 3.0 + 0.972 = 3.972 in > 3.5 in from either face [D].
+  const nailed = (n: number): JobInput => {
+    const job = plies(n, [{ type: "uniform", w: 120, face: "left" }]);
+    job.materials[0] = { ...job.materials[0]!, family: "sawn-timber", specificGravity: 0.42 };
+    job.connectors = [{ id: "N", kind: "nail", standard: "NDS-2018", size: "16d common", sideAngleToGrainDeg: 90, mainAngleToGrainDeg: 90 }];
+    return job;
+  };
+
+  test("face-driven nails reach every interface of three plies from one face or the other", () => {
+    const result = run(nailed(3));
+    for (const s of result.schedules) expect(s.detailingProblems, s.joint).toEqual([]);
+  });
+
+  test("16d nails cannot reach the middle interface of four 2x plies from either face: that joint fails and says why [D]", () => {
+    const result = run(nailed(4));
+    const middle = result.multiPly!.interfaces[1]!.joint!;
+    const s = result.schedules.find((x) => x.joint === middle)!;
+    expect(s.passes).toBe(false);
+    expect(s.detailingProblems.join(" ")).toContain("does not reach interface 2");
+    // In the job's units: the nail's 3.5 in against the 3.972 in it would need.
+    expect(s.detailingProblems.join(" ")).toContain("3.5 in long");
+    expect(s.detailingProblems.join(" ")).toContain("needs 3.972 in");
+    expect(result.status.passes).toBe(false);
+    for (const k of [0, 2]) expect(result.schedules.find((x) => x.joint === result.multiPly!.interfaces[k]!.joint)!.detailingProblems).toEqual([]);
+  });
+
   test("a face load on a section that is not side-by-side plies is refused at the field", () => {
     const job = plies(3, [{ type: "uniform", w: 120, face: "left" }]);
     job.parts[2] = { id: "p3", material: "SPF", shape: { type: "lumber", nominal: "2x6", orientation: "flat" }, place: { on: "p2", side: "top" } };
