@@ -6,7 +6,7 @@ import { createHash } from "node:crypto";
  * changes): the page sends the same job again on every reload, undo and units switch.
  */
 export class ResultCache {
-  private readonly entries = new Map<string, Uint8Array>();
+  private readonly entries = new Map<string, Buffer>();
   private bytes = 0;
 
   constructor(
@@ -23,7 +23,7 @@ export class ResultCache {
     }
   }
 
-  get(key: string | undefined): Uint8Array | undefined {
+  get(key: string | undefined): Buffer | undefined {
     if (key === undefined) return undefined;
     const value = this.entries.get(key);
     if (value !== undefined) {
@@ -33,7 +33,7 @@ export class ResultCache {
     return value;
   }
 
-  set(key: string | undefined, value: Uint8Array): void {
+  set(key: string | undefined, value: Buffer): void {
     if (key === undefined || value.byteLength > this.maxEntryBytes || this.entries.has(key)) return;
     this.entries.set(key, value);
     this.bytes += value.byteLength;

@@ -78,7 +78,7 @@ export function compositeDesign(p: {
 
   // Glue lines do not slip (γ = 1): with every flange joint glued the two models are one and the same.
   const allGlued = flanges.every((f) => f.slip === null);
-  if (allGlued && model === "rigid") return none("");
+  if (allGlued && model === "rigid") return { result: null, stiffness: null, checks: [], assumptions: [] };
 
   const rigidCounts = new Map(flanges.map((f) => [f.joint, p.runs.get(f.joint)!.schedule?.count ?? null]));
   const longTerm = p.job.compositeAction.longTerm ?? null;

@@ -40,7 +40,7 @@ export async function apiRoutes(app: FastifyInstance, options: { examples: Examp
       json = Buffer.from(await designs.run({ kind: "result-json", input: request.body }));
       cache.set(key, json);
     }
-    return reply.type("application/json; charset=utf-8").send(Buffer.from(json.buffer, json.byteOffset, json.byteLength));
+    return reply.type("application/json; charset=utf-8").send(json);
   });
 
   app.post<{ Querystring: { to?: string } }>("/api/conversions", async (request) => {

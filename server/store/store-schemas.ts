@@ -76,4 +76,3 @@ export const ProjectFile = z.strictObject({
   members: z.array(ProjectFileMember).max(2000, "at most 2000 members"),
 });
 export type ProjectFile = z.infer<typeof ProjectFile>;
-export type ProjectFileInput = z.input<typeof ProjectFile>;
