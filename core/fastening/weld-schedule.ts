@@ -6,6 +6,7 @@ import { allowedSpacings } from "../spacing/allowed-spacings.js";
 import { checkSchedule } from "../spacing/check-schedule.js";
 import { staggeredSide } from "../spacing/place-rows.js";
 import type { RowUtilisation } from "../spacing/verify-rows.js";
+import type { DemandCurve } from "../spacing/demand.js";
 import { demandCurve, designSchedule } from "../spacing/design-schedule.js";
 import { spacingDefaults } from "../spacing/spacing-defaults.js";
 import { inJobUnits } from "../units/format.js";
@@ -69,13 +70,13 @@ export function weldSchedule(input: JointInput, kind: WeldKind<Connector>): { we
   // A staggered weld has half its fillets at the near-side segments and half at the far side's
   // (staggeredSide): each side is checked on its own segments, and the zones take the worse of the two.
   const staggered = layout.arrangement === "staggered" && fillets >= 2 && fillets % 2 === 0;
-  const withOtherSide = (near: { positions: number[]; rowChecks: RowUtilisation[]; zones: CheckedZone[] }) => {
+  const withOtherSide = (near: { positions: number[]; rowChecks: RowUtilisation[]; zones: CheckedZone[] }, demand: DemandCurve) => {
     const nearWorst = near.rowChecks.reduce((w, r) => (r.utilisation > w.utilisation ? r : w));
     const intermittent = near.zones.some((z) => z.spacing > segment * (1 + 1e-9));
     if (!staggered || !intermittent) {
       return { positions: near.positions, zones: near.zones, worst: { utilisation: nearWorst.utilisation, at: nearWorst.x, combination: nearWorst.combination }, perLine: Math.min(beam.length, near.positions.length * segment) };
     }
-    const far = checkSchedule({ demand: demandCurve(problem), rows: fillets, lines: lineCount, endDistance: segment / 2, provided: { zones: near.zones, positions: staggeredSide(near.positions) } });
+    const far = checkSchedule({ demand, rows: fillets, lines: lineCount, endDistance: segment / 2, provided: { zones: near.zones, positions: staggeredSide(near.positions) } });
     const farWorst = far.rowChecks.reduce((w, r) => (r.utilisation > w.utilisation ? r : w));
     const worst = farWorst.utilisation > nearWorst.utilisation ? farWorst : nearWorst;
     const zones = near.zones.map((z, i) => {
@@ -110,7 +111,8 @@ export function weldSchedule(input: JointInput, kind: WeldKind<Connector>): { we
     weldPerLine = beam.length;
   } else if (job.mode === "check") {
     const provided = fastening.provided?.type === "zones" ? fastening.provided.zones : [{ from: 0, to: beam.length, spacing: layout.pitch ?? segment }];
-    const check = withOtherSide(checkSchedule({ demand: demandCurve(problem), rows: fillets, lines: lineCount, endDistance: segment / 2, provided: { zones: provided } }));
+    const demand = demandCurve(problem);
+    const check = withOtherSide(checkSchedule({ demand, rows: fillets, lines: lineCount, endDistance: segment / 2, provided: { zones: provided } }), demand);
     ({ utilisation, at, combination } = check.worst);
     zones = toZones(check.zones);
     positions = check.positions;
@@ -128,7 +130,7 @@ export function weldSchedule(input: JointInput, kind: WeldKind<Connector>): { we
       symmetric: job.spacing.symmetric,
       system: job.units,
     });
-    const checked = withOtherSide(design);
+    const checked = withOtherSide(design, design.demand);
     ({ utilisation, at, combination } = checked.worst);
     zones = toZones(checked.zones);
     positions = checked.positions;
