@@ -47,7 +47,7 @@ export function checkConnectorPlacement(job: JobDocument): JobIssue[] {
     const contexts: ConnectorContext[] = joint.lines.map((line) => contextFor(PLACEMENT, job, joint, line, headSide, rows, section));
     for (const context of contexts) {
       for (const p of kind.problems?.(connector, context) ?? []) {
-        const where = `(joint ${joint.id}, between "${context.members[0].part}" and "${context.members[1].part}")`;
+        const where = p.on !== "material" && p.wholeJoint ? `(joint ${joint.id})` : `(joint ${joint.id}, between "${context.members[0].part}" and "${context.members[1].part}")`;
         if (p.on === "connector") add(`connectors[${i}].${p.field}`, `${p.message} ${where}`);
         else if (p.on === "fastening") add(`${fastening}.${p.field}`, `${p.message} ${where}`);
         else add(`materials[${materialIndex.get(materialOf(context, p.part) ?? context.members[p.member].material.id)!}].${p.field}`, `${p.message}, for connector "${connector.id}"`);

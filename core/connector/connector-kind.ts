@@ -170,8 +170,8 @@ export interface WeldLayout {
  * such as the far outer member of a double-shear joint).
  */
 export type PlacementProblem =
-  | { on: "connector"; field: string; message: string }
-  | { on: "fastening"; field: string; message: string }
+  | { on: "connector"; field: string; message: string; /** About the whole joint (a double-shear joint's parts), not one contact line. */ wholeJoint?: boolean }
+  | { on: "fastening"; field: string; message: string; wholeJoint?: boolean }
   | { on: "material"; member: 0 | 1; part?: string; field: string; message: string };
 
 interface KindBase<C extends { kind: string }> {

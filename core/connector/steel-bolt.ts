@@ -284,6 +284,12 @@ function detailing(c: SteelBolt, context?: ConnectorContext): DetailingLimits {
 }
 
 function problems(c: SteelBolt, context: ConnectorContext): PlacementProblem[] {
+  const found = lineProblems(c, context);
+  // A bolt in double shear: its problems concern the joint's three plies, the same from either contact line.
+  return c.shear === "double" ? found.map((p) => (p.on === "material" ? p : { ...p, wholeJoint: true })) : found;
+}
+
+function lineProblems(c: SteelBolt, context: ConnectorContext): PlacementProblem[] {
   const out: PlacementProblem[] = [];
   const len = (mm: number) => inJobUnits(mm, "length", context.units);
   const r = resolve(c);

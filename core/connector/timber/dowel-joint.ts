@@ -136,14 +136,16 @@ function doubleShearGeometry(spec: DowelSpec, context: ConnectorContext): DowelG
   // A joint refused for double shear is reported by dowelProblems; the hand-built reading keeps the numbers finite meanwhile.
   const roles = doubleShearMembers(context) ?? { central: context.members[1], outer: [context.members[0], context.members[0]] as [JoinedMember, JoinedMember] };
   const { central } = roles;
-  const outers = roles.outer[0].part === roles.outer[1].part ? [roles.outer[0]] : roles.outer;
+  // In the order of the parts' ids, so that both contact lines of the joint (and the stack turned over) report alike.
+  const byPart = [...roles.outer].sort((a, b) => a.part.localeCompare(b.part));
+  const outers = byPart[0]!.part === byPart[1]!.part ? [byPart[0]!] : byPart;
   const parts = [...outers.map((m) => ({ member: m, angle: spec.angles.side })), { member: central, angle: spec.angles.main }];
   const tc = central.thickness;
   if (spec.length === null) {
     const cases = outers.map((o) => ({ side: o, main: central, sideLength: o.thickness, mainLength: tc, sideNote: null }));
     return { cases, penetration: null, penetratedMember: roles.outer[1], headMember: roles.outer[0], through: null, parts, double: roles };
   }
-  const directions = (outers.length === 1 ? [[outers[0]!, outers[0]!]] : [roles.outer, [roles.outer[1], roles.outer[0]]]).map(([head, point]) => ({
+  const directions = (outers.length === 1 ? [[outers[0]!, outers[0]!]] : [byPart, [byPart[1]!, byPart[0]!]]).map(([head, point]) => ({
     head: head!,
     point: point!,
     penetration: spec.length! - head!.thickness - tc - spec.tipLength,
@@ -174,6 +176,12 @@ function doubleShearGeometry(spec: DowelSpec, context: ConnectorContext): DowelG
 }
 
 export function dowelProblems(spec: DowelSpec, context: ConnectorContext): PlacementProblem[] {
+  const problems = lineProblems(spec, context);
+  // A double-shear fastener's problems concern the joint's three parts, the same from either contact line.
+  return spec.shear === "double" ? problems.map((p) => (p.on === "material" ? p : { ...p, wholeJoint: true })) : problems;
+}
+
+function lineProblems(spec: DowelSpec, context: ConnectorContext): PlacementProblem[] {
   const out: PlacementProblem[] = [];
   const u = context.units;
   const len = (mm: number) => inJobUnits(mm, "length", u);
@@ -199,11 +207,11 @@ export function dowelProblems(spec: DowelSpec, context: ConnectorContext): Place
   if (g.double) {
     const { central, outer } = g.double;
     if (isSteel(central.material) && outer.some((m) => isSteel(m.material))) {
-      out.push({ on: "connector", field: "kind", message: `the central part "${central.part}" and an outer part (${outer.filter((m) => isSteel(m.material)).map((m) => `"${m.part}"`).join(", ")}) are both steel: a steel-to-steel shear plane is not a timber connection` });
+      out.push({ on: "connector", field: "kind", message: `the central part "${central.part}" and an outer part (${outer.filter((m) => isSteel(m.material)).map((m) => `"${m.part}"`).sort().join(", ")}) are both steel: a steel-to-steel shear plane is not a timber connection` });
       return out;
     }
     if (spec.standard === "EN1995-1-1" && isSteel(outer[0].material) !== isSteel(outer[1].material)) {
-      out.push({ on: "connector", field: "shear", message: `one outer part is steel and the other timber ("${outer[0].part}", "${outer[1].part}"): EN 1995-1-1 gives double-shear equations for two timber outer members (eq. 8.7), two steel outer plates (8.12, 8.13) or a steel central plate (8.11), not a mixture` });
+      out.push({ on: "connector", field: "shear", message: `one outer part is steel and the other timber (${outer.map((m) => `"${m.part}"`).sort().join(", ")}): EN 1995-1-1 gives double-shear equations for two timber outer members (eq. 8.7), two steel outer plates (8.12, 8.13) or a steel central plate (8.11), not a mixture` });
       return out;
     }
   }
