@@ -162,8 +162,10 @@ function doubleShearGeometry(spec: DowelSpec, context: ConnectorContext): DowelG
     });
   }
   const unique = cases.filter((c, i) => cases.findIndex((x) => x.side.part === c.side.part && Math.abs(x.sideLength - c.sideLength) <= 1e-9 * (1 + c.sideLength)) === i);
-  const least = directions.reduce((a, b) => (b.penetration < a.penetration ? b : a));
-  const most = directions.reduce((a, b) => (b.penetration - b.point.thickness > a.penetration - a.point.thickness ? b : a));
+  // Thicknesses come from coordinates: a difference within rounding is no difference.
+  const clearly = (x: number, y: number) => x < y - 1e-9 * (1 + Math.abs(y));
+  const least = directions.reduce((a, b) => (clearly(b.penetration, a.penetration) ? b : a));
+  const most = directions.reduce((a, b) => (clearly(a.penetration - a.point.thickness, b.penetration - b.point.thickness) ? b : a));
   return {
     cases: unique,
     penetration: least.penetration,
@@ -275,7 +277,7 @@ export function dowelResistance(spec: DowelSpec, context: ConnectorContext): Con
   const each = g.cases.map((b) => (spec.standard === "NDS-2018" ? ndsResistance(spec, context, g, b) : ec5Resistance(spec, context, g, b)));
   if (!g.double) return each[0]!;
   // Double shear: every outer member (and driving direction) is checked with the central member; the weaker governs.
-  const at = each.reduce((best, r, i) => (r.value < each[best]!.value ? i : best), 0);
+  const at = each.reduce((best, r, i) => (r.value < each[best]!.value * (1 - 1e-9) ? i : best), 0);
   const r = each[at]!;
   const { central, outer } = g.double;
   const label = (b: DowelBearing) => `outer "${b.side.part}"${b.sideNote ? ` (${b.sideNote})` : ""}`;
