@@ -360,6 +360,7 @@ export const steelBoltKind: DiscreteConnectorKind<SteelBolt> = {
   ],
   assumptions: (c) => [
     `${describe(c)}: every bolt of the line is checked as the weaker of an end bolt and an inner bolt at the least spacing, so the end distance and spacing used in bearing are on the safe side; the plates' own net-section and block shear are not checked.`,
+    ...(c.shear === "double" ? [`${describe(c)}: in double shear the central ply is the part between the joint's two contact lines and bears the whole bolt force; each outer ply bears half, checked at its own thickness and strength.`] : []),
   ],
   problems,
   resistance,
