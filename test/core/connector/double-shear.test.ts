@@ -41,6 +41,34 @@ describe("NDS-2018 bolt in double shear: the core between two outer plies is the
     }
   });
 
+  test("a grid of 72 double-shear joints (3 sizes, 3 cores, 2 core woods, equal and unequal outer plies) all agree with the double-shear modes, the weaker outer ply governing [D]", () => {
+    // The same modes for any D (R_d by Table 12.3.1B at θ = 0 [M]: 4 for I, 3.2 for III and IV, D ≥ 1/4 in).
+    const zOf = (d: number, lm: number, Gm: number, ls: number, Gs: number) => {
+      const Fem = 11_200 * Gm;
+      const Fes = 11_200 * Gs;
+      const Re = Fem / Fes;
+      const k3 = -1 + Math.sqrt((2 * (1 + Re)) / Re + (2 * Fyb * (2 + Re) * d * d) / (3 * Fem * ls * ls));
+      return Math.min((d * lm * Fem) / 4, (2 * d * ls * Fes) / 4, (2 * k3 * d * ls * Fem) / ((2 + Re) * 3.2), ((2 * d * d) / 3.2) * Math.sqrt((2 * Fem * Fyb) / (3 * (1 + Re))));
+    };
+    const plies = [[1.5, 0.42], [3.5, 0.55]] as const;
+    let joints = 0;
+    for (const [size, d] of [["1/2", 0.5], ["3/4", 0.75], ["1", 1]] as const) {
+      for (const tc of [1.5, 3.5, 5.5]) {
+        for (const Gc of [0.42, 0.55]) {
+          for (const bottom of plies) {
+            for (const top of plies) {
+              const r = designed(threeLayerJob({ units: "us", basis: "allowable", bottom: timberUs(bottom[1], bottom[0]), core: timberUs(Gc, tc), top: timberUs(top[1], top[0]), connector: { kind: "timber-bolt", standard: "NDS-2018", size, shear: "double" } }));
+              const expected = Math.min(zOf(d, tc, Gc, bottom[0], bottom[1]), zOf(d, tc, Gc, top[0], top[1])) / 2;
+              expectClose(perLine(r) / LBF, expected, { rel: 1e-6 }, `${size} in, core ${tc} in G ${Gc}, plies ${bottom.join(" in G ")} / ${top.join(" in G ")}`);
+              joints++;
+            }
+          }
+        }
+      }
+    }
+    expect(joints).toBe(72);
+  });
+
   test("the working names the central member and both outer members", () => {
     const steps = coreSchedule(designed(job("auto"))).resistance[0]!.steps;
     expect(steps[0]!.description).toContain('central member "core"');
