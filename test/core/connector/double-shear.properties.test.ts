@@ -10,7 +10,7 @@ import { coreSchedule, design, flipped, threeLayerJob, type Designed, type Layer
 // - a thicker layer (through-fasteners) or a denser one never lowers a connector's resistance.
 const RUNS = { numRuns: 40 };
 
-type Family = "nds-bolt" | "ec5-bolt" | "nds-nail" | "ec5-nail" | "aisc-bolt" | "en1993-bolt";
+type Family = "nds-bolt" | "ec5-bolt" | "nds-nail" | "ec5-nail" | "nds-screw" | "aisc-bolt" | "en1993-bolt";
 interface Stack {
   family: Family;
   units: "us" | "si";
@@ -34,6 +34,7 @@ const stacks: fc.Arbitrary<Stack> = fc.oneof(
   fc.record({ size: fc.constantFrom("M12", "M16", "M20"), grade: fc.constantFrom("4.6", "8.8"), layers: three(timberSi) }).map(({ size, grade, layers }): Stack => ({ family: "ec5-bolt", units: "si", basis: "factored", connector: { kind: "timber-bolt", standard: "EN1995-1-1", size, grade, shear: "double" }, layers, load: 3, span: 4 })),
   fc.record({ size: fc.constantFrom("40d common", "60d common"), layers: three(timberUs.map((l) => ({ ...l, thickness: Math.min(l.thickness, 2) }))) }).map(({ size, layers }): Stack => ({ family: "nds-nail", units: "us", basis: "allowable", connector: { kind: "nail", standard: "NDS-2018", size, shear: "double" }, layers, load: 100, span: 12 })),
   fc.record({ d: fc.constantFrom(3.1, 4, 5), length: fc.constantFrom(90, 120, 150), predrilled: fc.boolean(), layers: three(timberSi.map((l) => ({ ...l, thickness: Math.min(l.thickness, 50) }))) }).map(({ d, length, predrilled, layers }): Stack => ({ family: "ec5-nail", units: "si", basis: "factored", connector: { kind: "nail", standard: "EN1995-1-1", diameter: d, length, predrilled, shear: "double" }, layers, load: 2, span: 4 })),
+  fc.record({ gauge: fc.constantFrom("#10", "#12", "#14"), length: fc.constantFrom(3, 3.5, 4), layers: three(timberUs.map((l) => ({ ...l, thickness: Math.min(l.thickness, 1.5) }))) }).map(({ gauge, length, layers }): Stack => ({ family: "nds-screw", units: "us", basis: "allowable", connector: { kind: "wood-screw", standard: "NDS-2018", gauge, length, shear: "double" }, layers, load: 100, span: 12 })),
   fc.record({ size: fc.constantFrom("5/8", "3/4", "7/8"), grade: fc.constantFrom("A", "B"), layers: three(steelUs) }).map(({ size, grade, layers }): Stack => ({ family: "aisc-bolt", units: "us", basis: "factored", connector: { kind: "steel-bolt", standard: "AISC-360-16", size, grade, shear: "double" }, layers, load: 2000, span: 10 })),
   fc.record({ size: fc.constantFrom("M16", "M20", "M24"), grade: fc.constantFrom("8.8", "10.9"), layers: three(steelSi) }).map(({ size, grade, layers }): Stack => ({ family: "en1993-bolt", units: "si", basis: "factored", connector: { kind: "steel-bolt", standard: "EN1993-1-8", size, grade, shear: "double" }, layers, load: 30, span: 3 })),
 );

@@ -217,6 +217,25 @@ describe("a double-shear connector where the joint is not two contact lines on t
     if (!d.ok) expect(d.issues).toEqual([expect.objectContaining({ path: "connectors[0].shear", message: expect.stringContaining("not on opposite faces") })]);
   });
 
+  test("a two-part member (one contact line) is refused for a bolt in double shear, at the connector's shear field", () => {
+    const job = threeLayerJob({ units: "si", basis: "factored", bottom: timberSi(350, 45), core: timberSi(350, 45), top: timberSi(350, 45), connector: { kind: "timber-bolt", standard: "EN1995-1-1", size: "M12", grade: "4.6", shear: "double" } });
+    const j = job as unknown as { parts: unknown[]; materials: unknown[]; fastening: { joints: unknown[] } };
+    j.parts = j.parts.slice(0, 2);
+    j.fastening.joints = [];
+    const d = design(job);
+    expect(d.ok).toBe(false);
+    if (!d.ok) expect(d.issues).toEqual([expect.objectContaining({ path: "connectors[0].shear", message: expect.stringContaining("has 1") })]);
+  });
+
+  test("holding the two outer parts instead of the core gives the same central member and the same resistance", () => {
+    const job = threeLayerJob({ units: "us", basis: "allowable", bottom: timberUs(0.55, 3.5), core: timberUs(0.42, 1.5), top: timberUs(0.55, 3.5), connector: { kind: "timber-bolt", standard: "NDS-2018", size: "3/4", shear: "double" } });
+    const outers = structuredClone(job) as unknown as { fastening: { joints: { held: string[] }[] } };
+    outers.fastening.joints[0]!.held = ["bottom", "top"];
+    const r = designed(outers as unknown as typeof job).schedules.find((s) => s.joint === "bottom+top")!;
+    expect(r.resistance[0]!.value).toBe(perLine(designed(job)));
+    expect(r.resistance[0]!.steps[0]!.description).toContain('central member "core"');
+  });
+
   test("the outer parts swapped (the stack upside down) give the same resistance", () => {
     const job = threeLayerJob({ units: "us", basis: "allowable", bottom: timberUs(0.42, 1.5), core: timberUs(0.55, 3.5), top: timberUs(0.5, 2.5), connector: { kind: "timber-bolt", standard: "NDS-2018", size: "5/8", shear: "double" } });
     expect(perLine(designed(flipped(job)))).toBe(perLine(designed(job)));
