@@ -203,7 +203,7 @@ function lineProblems(spec: DowelSpec, context: ConnectorContext): PlacementProb
     return i >= 0 ? { member: i as 0 | 1 } : { member: 0 as const, part: m.part };
   };
   if (members.every((m) => isSteel(m.material))) {
-    out.push({ on: "connector", field: "kind", message: `every part at this joint (${members.map((m) => `"${m.part}"`).join(", ")}) is steel: use a steel-bolt (AISC 360 or EN 1993-1-8) or a fillet-weld` });
+    out.push({ on: "connector", field: "kind", message: `${members.length === 2 ? "both parts" : "every part"} at this joint (${members.map((m) => `"${m.part}"`).join(", ")}) ${members.length === 2 ? "are" : "is"} steel: use a steel-bolt (AISC 360 or EN 1993-1-8) or a fillet-weld` });
     return out;
   }
   if (g.double) {
