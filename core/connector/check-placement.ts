@@ -47,10 +47,10 @@ export function checkConnectorPlacement(job: JobDocument): JobIssue[] {
     const contexts: ConnectorContext[] = joint.lines.map((line) => contextFor(PLACEMENT, job, joint, line, headSide, rows, section));
     for (const context of contexts) {
       for (const p of kind.problems?.(connector, context) ?? []) {
-        const where = `(joint ${joint.id}, between "${context.members[0].part}" and "${context.members[1].part}")`;
+        const where = p.on !== "material" && p.wholeJoint ? `(joint ${joint.id})` : `(joint ${joint.id}, between "${context.members[0].part}" and "${context.members[1].part}")`;
         if (p.on === "connector") add(`connectors[${i}].${p.field}`, `${p.message} ${where}`);
         else if (p.on === "fastening") add(`${fastening}.${p.field}`, `${p.message} ${where}`);
-        else add(`materials[${materialIndex.get(context.members[p.member].material.id)!}].${p.field}`, `${p.message}, for connector "${connector.id}"`);
+        else add(`materials[${materialIndex.get(materialOf(context, p.part) ?? context.members[p.member].material.id)!}].${p.field}`, `${p.message}, for connector "${connector.id}"`);
       }
     }
     if (issues.length > 0 || kind.mechanism !== "discrete") return;
@@ -74,4 +74,12 @@ export function checkConnectorPlacement(job: JobDocument): JobIssue[] {
     }
   });
   return issues;
+}
+
+/** The material id of a part named by a placement problem: one of the context's members or a member of its double-shear joint. */
+function materialOf(context: ConnectorContext, part: string | undefined): string | undefined {
+  if (part === undefined) return undefined;
+  const d = context.double;
+  const all = [...context.members, ...(d && "central" in d ? [d.central, ...d.outer] : [])];
+  return all.find((m) => m.part === part)?.material.id;
 }

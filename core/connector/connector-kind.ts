@@ -22,6 +22,18 @@ export interface JoinedMember {
   width: number;
 }
 
+/**
+ * The roles in a double-shear joint, fixed by the geometry: the central (main) member is the part
+ * both contact lines of the joint touch, the one the connector crosses between the two others; the
+ * outer (side) members lie one beyond each line. Neither thicknesses nor the head side enter.
+ */
+export interface DoubleShearMembers {
+  /** Thickness is the distance the connector crosses in it, between the two contact lines. */
+  central: JoinedMember;
+  /** The outer member at this context's contact line first, then the one beyond the central member. */
+  outer: [JoinedMember, JoinedMember];
+}
+
 /** What a connector kind is told about the place it is used. */
 export interface ConnectorContext {
   /** Duration class of the load combination: that of its shortest-duration load (EN 1995-1-1 §3.1.3(2)). */
@@ -30,14 +42,37 @@ export interface ConnectorContext {
   categories: string[];
   combinationName: string;
   basis: "allowable" | "factored";
-  /** The two parts at the contact line: head (side) member first, then the main member. */
+  /** The two parts at the contact line: head (side) member first, then the main member. In double shear read `double` instead. */
   members: [JoinedMember, JoinedMember];
+  /**
+   * Double shear by the joint's geometry (see `doubleShearMembers`): the roles when the joint is two
+   * parallel contact lines on either face of one part, or why it is not. Set by the pipeline; absent in
+   * a context built by hand for two members.
+   */
+  double?: DoubleShearMembers | { refused: string };
   /** Shear strengths of the materials the joint connects, where the job gives them, MPa. */
   adherends: { material: string; shearStrength: number | undefined; rollingShear: number | undefined }[];
   /** Connectors per row across the contact line (fillets per line for a weld). */
   rows: number;
   /** The job's unit system, for messages a person reads (numbers in the context are in core units). */
   units: UnitSystem;
+}
+
+/**
+ * The members of a double-shear joint at this context: the pipeline's roles; for a context built by hand
+ * (no `double`), `members[1]` is the central member and `members[0]` stands for both outer members;
+ * null when the joint is not a double-shear joint (`doubleShearRefusal` says why).
+ */
+export function doubleShearMembers(context: ConnectorContext): DoubleShearMembers | null {
+  const d = context.double;
+  if (d === undefined) return { central: context.members[1], outer: [context.members[0], context.members[0]] };
+  return "refused" in d ? null : d;
+}
+
+/** Why the joint at this context cannot take a connector in double shear; null when it can. */
+export function doubleShearRefusal(context: ConnectorContext): string | null {
+  const d = context.double;
+  return d !== undefined && "refused" in d ? d.refused : null;
 }
 
 export const durationClasses = ["permanent", "long", "medium", "short", "instantaneous", "unspecified"] as const;
@@ -131,12 +166,13 @@ export interface WeldLayout {
 /**
  * Something wrong with a connector where it is used, found before designing. `on` says which field
  * the message belongs to: the connector's own field, the fastening's (rows), or a field of one of the
- * joined members' materials (index into `context.members`).
+ * joined members' materials (index into `context.members`, or `part`: the id of any part of the joint,
+ * such as the far outer member of a double-shear joint).
  */
 export type PlacementProblem =
-  | { on: "connector"; field: string; message: string }
-  | { on: "fastening"; field: string; message: string }
-  | { on: "material"; member: 0 | 1; field: string; message: string };
+  | { on: "connector"; field: string; message: string; /** About the whole joint (a double-shear joint's parts), not one contact line. */ wholeJoint?: boolean }
+  | { on: "fastening"; field: string; message: string; wholeJoint?: boolean }
+  | { on: "material"; member: 0 | 1; part?: string; field: string; message: string };
 
 interface KindBase<C extends { kind: string }> {
   kind: C["kind"];

@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { Id, positive, Text } from "../schema/quantity.js";
 import { formatNumber, inJobUnits } from "../units/format.js";
-import type { ConnectorContext, ConnectorResistance, DetailingLimits, DiscreteConnectorKind, JoinedMember, PlacementProblem, WorkingStep } from "./connector-kind.js";
+import { doubleShearMembers, doubleShearRefusal, type ConnectorContext, type ConnectorResistance, type DetailingLimits, type DiscreteConnectorKind, type JoinedMember, type PlacementProblem, type WorkingStep } from "./connector-kind.js";
 import { MM_PER_IN, MPA_PER_KSI, N_PER_KIP } from "./quantity-text.js";
 import { aiscBolt, holeTypes, type AiscPly } from "./steel/aisc-bolt.js";
 import { aiscBoltGroup, inchBolt, knownAiscGrades, knownInchSizes, knownMetricSizes, metricBoltSize, propertyClasses, standardHoleIn, type InchBolt, type MetricBolt } from "./steel/bolt-sizes.js";
@@ -131,25 +131,45 @@ function geometry(c: SteelBolt, r: NonNullable<Resolved>): Geometry {
 
 const isSteel = (m: JoinedMember) => m.material.family === "steel";
 
-function plies(c: SteelBolt, context: ConnectorContext): { head: JoinedMember; point: JoinedMember; shares: [number, number] } {
-  const [head, point] = context.members;
-  return { head, point, shares: c.shear === "double" ? [0.5, 1] : [1, 1] };
+interface Ply {
+  name: string;
+  member: JoinedMember;
+  /** Share of the bolt force the ply bears: 1, or 1/2 for each outer ply in double shear. */
+  share: number;
+}
+
+/**
+ * The plies the bolt bears on. In double shear the central ply is the part between the two contact
+ * lines of the joint (its geometry, not thicknesses or the head side) and bears the whole bolt force;
+ * each outer ply, at its own thickness and strength, bears half.
+ */
+function plies(c: SteelBolt, context: ConnectorContext): Ply[] {
+  if (c.shear !== "double") return context.members.map((m) => ({ name: `"${m.part}"`, member: m, share: 1 }));
+  // A joint refused for double shear is reported by problems(); the hand-built reading keeps the numbers finite meanwhile.
+  const { central, outer } = doubleShearMembers(context) ?? { central: context.members[1], outer: [context.members[0], context.members[0]] };
+  const outers = outer[0].part === outer[1].part ? [{ name: `outer ply "${outer[0].part}" (each outer ply; the other outer ply is taken to be the same)`, member: outer[0], share: 0.5 }] : outer.map((m) => ({ name: `outer ply "${m.part}"`, member: m, share: 0.5 }));
+  return [...outers, { name: `central ply "${central.part}"`, member: central, share: 1 }];
+}
+
+/** Every part the bolt crosses, once each. */
+function crossed(c: SteelBolt, context: ConnectorContext): JoinedMember[] {
+  return plies(c, context).map((p) => p.member);
 }
 
 function resistance(c: SteelBolt, context: ConnectorContext): ConnectorResistance {
   const r = resolve(c)!;
   const g = geometry(c, r);
-  const { head, point, shares } = plies(c, context);
+  const bearingPlies = plies(c, context);
   const n = c.shear === "double" ? 2 : 1;
   const perLine = 1 / n;
   const steps: WorkingStep[] = [{ symbol: "d", description: "bolt diameter", value: r.d, quantity: "length" }];
-  const outerNote = c.shear === "double" ? " (each outer ply; the other outer ply is taken to be the same)" : "";
+  if (n === 2) {
+    const central = bearingPlies[bearingPlies.length - 1]!.member;
+    steps.push({ symbol: "t_c", description: `double shear: central ply "${central.part}" (the part between the two contact lines) bears the whole bolt force; each outer ply (${bearingPlies.slice(0, -1).map((p) => `"${p.member.part}"`).join(", ")}) half, each checked at its own thickness`, value: central.thickness, quantity: "length" });
+  }
   if (r.aisc) {
     const group = aiscBoltGroup(c.grade)!;
-    const plyList: AiscPly[] = [
-      { name: `"${head.part}"${outerNote}`, thicknessIn: head.thickness / MM_PER_IN, tensileStrengthKsi: head.material.tensileStrength! / MPA_PER_KSI, share: shares[0] },
-      { name: `"${point.part}"`, thicknessIn: point.thickness / MM_PER_IN, tensileStrengthKsi: point.material.tensileStrength! / MPA_PER_KSI, share: shares[1] },
-    ];
+    const plyList: AiscPly[] = bearingPlies.map((p) => ({ name: p.name, thicknessIn: p.member.thickness / MM_PER_IN, tensileStrengthKsi: p.member.material.tensileStrength! / MPA_PER_KSI, share: p.share }));
     const slip = c.slipCritical === "no" ? null : { surface: c.slipCritical === "class-A" ? ("A" as const) : ("B" as const), pretensionKips: group === "B" ? r.bolt.pretensionKips.B : r.bolt.pretensionKips.A, fillers: c.fillers };
     const out = aiscBolt({
       diameterIn: r.bolt.diameterIn,
@@ -188,10 +208,7 @@ function resistance(c: SteelBolt, context: ConnectorContext): ConnectorResistanc
     };
   }
   const grade = propertyClasses[c.grade.trim()]!;
-  const plyList: En1993Ply[] = [
-    { name: `"${head.part}"${outerNote}`, thickness: head.thickness, tensileStrength: head.material.tensileStrength!, share: shares[0] },
-    { name: `"${point.part}"`, thickness: point.thickness, tensileStrength: point.material.tensileStrength!, share: shares[1] },
-  ];
+  const plyList: En1993Ply[] = bearingPlies.map((p) => ({ name: p.name, thickness: p.member.thickness, tensileStrength: p.member.material.tensileStrength!, share: p.share }));
   const out = en1993Bolt({
     d: r.d,
     d0: r.bolt.d0,
@@ -235,15 +252,15 @@ function steelWarnings(c: SteelBolt, context: ConnectorContext, g: Geometry): st
   return out;
 }
 
-function thinner(context: ConnectorContext): number {
-  return Math.min(...context.members.map((m) => m.thickness));
+function thinner(c: SteelBolt, context: ConnectorContext): number {
+  return Math.min(...crossed(c, context).map((m) => m.thickness));
 }
 
 function detailing(c: SteelBolt, context?: ConnectorContext): DetailingLimits {
   const r = resolve(c);
   if (!r || !context) return { minSpacing: 0, maxSpacing: null, endDistance: 0, sources: [] };
   const g = geometry(c, r);
-  const t = thinner(context);
+  const t = thinner(c, context);
   let maxSpacing: number;
   let maxSource: string;
   if (r.aisc) {
@@ -267,6 +284,12 @@ function detailing(c: SteelBolt, context?: ConnectorContext): DetailingLimits {
 }
 
 function problems(c: SteelBolt, context: ConnectorContext): PlacementProblem[] {
+  const found = lineProblems(c, context);
+  // A bolt in double shear: its problems concern the joint's three plies, the same from either contact line.
+  return c.shear === "double" ? found.map((p) => (p.on === "material" ? p : { ...p, wholeJoint: true })) : found;
+}
+
+function lineProblems(c: SteelBolt, context: ConnectorContext): PlacementProblem[] {
   const out: PlacementProblem[] = [];
   const len = (mm: number) => inJobUnits(mm, "length", context.units);
   const r = resolve(c);
@@ -275,15 +298,22 @@ function problems(c: SteelBolt, context: ConnectorContext): PlacementProblem[] {
     return out;
   }
   if (c.standard === "EN1993-1-8" && context.basis === "allowable") out.push({ on: "connector", field: "standard", message: `EN 1993-1-8 gives design values for factored loads, but the job's basis is "allowable": set basis to "factored" or use AISC-360-16` });
-  context.members.forEach((m, i) => {
+  const refused = c.shear === "double" ? doubleShearRefusal(context) : null;
+  if (refused) {
+    out.push({ on: "connector", field: "shear", message: `${refused}: use single shear at this joint, or name the central part as the held group of a joint of its own` });
+    return out;
+  }
+  for (const m of crossed(c, context)) {
+    const i = context.members.findIndex((x) => x.part === m.part);
+    const at = i >= 0 ? { member: i as 0 | 1 } : { member: 0 as const, part: m.part };
     if (!isSteel(m)) out.push({ on: "connector", field: "kind", message: `part "${m.part}" is not steel (family "${m.material.family}"): a bolt through timber is a timber-bolt (NDS-2018 or EN 1995-1-1)` });
-    else if (m.material.tensileStrength === undefined) out.push({ on: "material", member: i as 0 | 1, field: "tensileStrength", message: `is needed for bearing at the bolt holes of part "${m.part}" (${c.standard === "AISC-360-16" ? "AISC 360-16 §J3.10" : "EN 1993-1-8 Table 3.4"})` });
-  });
+    else if (m.material.tensileStrength === undefined) out.push({ on: "material", ...at, field: "tensileStrength", message: `is needed for bearing at the bolt holes of part "${m.part}" (${c.standard === "AISC-360-16" ? "AISC 360-16 §J3.10" : "EN 1993-1-8 Table 3.4"})` });
+  }
   const g = geometry(c, r);
   if (c.minSpacing !== undefined && c.minSpacing < g.minSpacing - 1e-9) out.push({ on: "connector", field: "minSpacing", message: `${len(c.minSpacing)} is below the least spacing ${len(g.minSpacing)} (${c.standard === "AISC-360-16" ? "AISC 360-16 §J3.3, 2-2/3 d" : "EN 1993-1-8 Table 3.3, 2.2d₀"})` });
   if (c.endDistance !== undefined && c.endDistance < g.minEnd - 1e-9) out.push({ on: "connector", field: "endDistance", message: `${len(c.endDistance)} is below the least end distance ${len(g.minEnd)} (${c.standard === "AISC-360-16" ? "AISC 360-16 Table J3.4" : "EN 1993-1-8 Table 3.3"})` });
   if (c.edgeDistance !== undefined && c.edgeDistance < g.minEdge - 1e-9) out.push({ on: "connector", field: "edgeDistance", message: `${len(c.edgeDistance)} is below the least edge distance ${len(g.minEdge)} (${c.standard === "AISC-360-16" ? "AISC 360-16 Table J3.4" : "EN 1993-1-8 Table 3.3"})` });
-  for (const m of context.members) {
+  for (const m of crossed(c, context)) {
     if (g.hole >= m.width - 1e-9) {
       out.push({ on: "connector", field: c.size !== undefined ? "size" : "diameter", message: `a ${len(r.d)} bolt in a ${len(g.hole)} hole is larger than part "${m.part}" (${len(m.width)} wide across the contact line)` });
       continue;
@@ -330,6 +360,7 @@ export const steelBoltKind: DiscreteConnectorKind<SteelBolt> = {
   ],
   assumptions: (c) => [
     `${describe(c)}: every bolt of the line is checked as the weaker of an end bolt and an inner bolt at the least spacing, so the end distance and spacing used in bearing are on the safe side; the plates' own net-section and block shear are not checked.`,
+    ...(c.shear === "double" ? [`${describe(c)}: in double shear the central ply is the part between the joint's two contact lines and bears the whole bolt force; each outer ply bears half, checked at its own thickness and strength.`] : []),
   ],
   problems,
   resistance,

@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { Id, positive, Text } from "../schema/quantity.js";
 import { formatNumber } from "../units/format.js";
-import type { ConnectorContext, DiscreteConnectorKind } from "./connector-kind.js";
+import { doubleShearMembers, type ConnectorContext, type DiscreteConnectorKind } from "./connector-kind.js";
 import { MM_PER_IN, MPA_PER_PSI } from "./quantity-text.js";
 import { dowelDetailing, dowelProblems, dowelResistance, type DowelSpec } from "./timber/dowel-joint.js";
 import { dowelConditions, ec5StandardText, ndsStandardText, onSizeField, refineTimberStandard, timberAssumptions, timberDowelFields } from "./timber/dowel-schema.js";
@@ -52,7 +52,9 @@ function diameters(c: WoodScrew): { d: number; root: number; gauge: string | nul
 
 function specOf(c: WoodScrew, context: ConnectorContext | undefined): DowelSpec {
   const { d, root } = diameters(c);
-  const sideThickness = context?.members[0].thickness ?? 0;
+  // Depth of the shear plane nearest the point: in double shear past the thicker outer member (either face may take the head) and the central one.
+  const roles = context && c.shear === "double" ? doubleShearMembers(context) : null;
+  const sideThickness = roles ? Math.max(...roles.outer.map((m) => m.thickness)) + roles.central.thickness : context?.members[0].thickness ?? 0;
   const penetration = c.length - sideThickness;
   // Threads cross the shear plane unless the threaded length from the tip stays inside the point-side member.
   const threadsInPlane = c.threadLength === undefined || c.threadLength > penetration;

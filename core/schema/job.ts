@@ -83,7 +83,8 @@ export const Fastening = z.strictObject({
   rows: z.number().int("must be a whole number").min(1).max(8).default(1),
   /**
    * Which part the connector is driven from (its head or side member): the held group, the other
-   * side, or "auto" — the part that is thinner in the driving direction.
+   * side, or "auto" — the part that is thinner in the driving direction. A connector in double shear
+   * does not use it: its central member is the part between the joint's two contact lines.
    */
   headSide: z.enum(["auto", "held", "other"]).default("auto"),
   /** Check mode: the schedule that exists or is proposed, to be checked instead of designed. */

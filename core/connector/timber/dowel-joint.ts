@@ -1,5 +1,5 @@
 import type { Material } from "../../schema/job.js";
-import type { ConnectorContext, ConnectorResistance, DetailingLimits, JoinedMember, ModeValue, PlacementProblem, SlipModuli, WorkingStep } from "../connector-kind.js";
+import { doubleShearMembers, doubleShearRefusal, type ConnectorContext, type ConnectorResistance, type DetailingLimits, type DoubleShearMembers, type JoinedMember, type ModeValue, type PlacementProblem, type SlipModuli, type WorkingStep } from "../connector-kind.js";
 import { MM_PER_IN, MPA_PER_PSI, N_PER_LBF } from "../quantity-text.js";
 import { inJobUnits } from "../../units/format.js";
 import { ec5DurationOf, ec5Kmod, ec5SlipModulus, EC5_GAMMA_M_CONNECTIONS, jointMeanDensity, type Ec5Product, type ServiceClass } from "./ec5-factors.js";
@@ -65,59 +65,183 @@ export interface DowelSpec {
 const isSteel = (m: Material) => m.family === "steel";
 const isPanel = (m: Material) => m.family === "panel";
 
-/** Bearing lengths of the fastener in the two members at the contact line, mm. */
-export function dowelGeometry(spec: DowelSpec, context: ConnectorContext) {
+/** One evaluation of the yield model: a side member and a main member with the fastener's bearing length in each, mm. */
+export interface DowelBearing {
+  /** Head-side member in single shear; in double shear one of the outer members, the two taken alike. */
+  side: JoinedMember;
+  /** Point-side member in single shear; the central member in double shear. */
+  main: JoinedMember;
+  sideLength: number;
+  mainLength: number;
+  /** How the side bearing length was found, for the working; null when it is the member's thickness. */
+  sideNote: string | null;
+}
+
+/** A part the fastener crosses, with its angle between load and grain, degrees. */
+interface CrossedPart {
+  member: JoinedMember;
+  angle: number;
+}
+
+export interface DowelGeometry {
+  /**
+   * The evaluations the resistance is the least of: one in single shear; in double shear one per outer
+   * member (each with the central member), and for a driven fastener one per driving direction, since
+   * either outer face may take the head.
+   */
+  cases: DowelBearing[];
+  /** Penetration into the point-side member (in double shear the far outer member, the lesser of the two driving directions); null for through-fasteners. */
+  penetration: number | null;
+  /** The member that penetration is into, and the one the head bears on. */
+  penetratedMember: JoinedMember;
+  headMember: JoinedMember;
+  /** The point passes through the penetrated member (in either driving direction). */
+  through: { member: JoinedMember; penetration: number } | null;
+  /** Every part the fastener crosses, once each. */
+  parts: CrossedPart[];
+  /** The roles in double shear; null in single shear. */
+  double: DoubleShearMembers | null;
+}
+
+/** Bearing lengths of the fastener in the members it crosses, mm. */
+export function dowelGeometry(spec: DowelSpec, context: ConnectorContext): DowelGeometry {
+  if (spec.shear === "double") return doubleShearGeometry(spec, context);
   const [head, point] = context.members;
+  const parts = [{ member: head, angle: spec.angles.side }, { member: point, angle: spec.angles.main }];
   const ts = head.thickness;
   const tm = point.thickness;
   if (spec.length === null) {
-    return { sideLength: ts, mainLength: tm, penetration: null as number | null, through: false, penetratedMember: point };
+    return { cases: [{ side: head, main: point, sideLength: ts, mainLength: tm, sideNote: null }], penetration: null, penetratedMember: point, headMember: head, through: null, parts, double: null };
   }
-  if (spec.shear === "single") {
-    const penetration = spec.length - ts - spec.tipLength;
-    return { sideLength: ts, mainLength: Math.min(Math.max(penetration, 0), tm), penetration, through: penetration > tm, penetratedMember: point };
+  const penetration = spec.length - ts - spec.tipLength;
+  return {
+    cases: [{ side: head, main: point, sideLength: ts, mainLength: Math.min(Math.max(penetration, 0), tm), sideNote: null }],
+    penetration,
+    penetratedMember: point,
+    headMember: head,
+    through: penetration > tm ? { member: point, penetration } : null,
+    parts,
+    double: null,
+  };
+}
+
+/**
+ * Double shear: the central member is fixed by the joint's geometry (`context.double`). Each outer
+ * member is checked with the central member, both outer members taken like it (the double-shear
+ * equations assume them alike), and the weaker governs. A driven fastener passes the head-side outer
+ * member and the central member and bears in the far outer member over its penetration, at most that
+ * member's thickness; the drawing does not say which face takes the head, so both directions are checked.
+ */
+function doubleShearGeometry(spec: DowelSpec, context: ConnectorContext): DowelGeometry {
+  // A joint refused for double shear is reported by dowelProblems; the hand-built reading keeps the numbers finite meanwhile.
+  const roles = doubleShearMembers(context) ?? { central: context.members[1], outer: [context.members[0], context.members[0]] as [JoinedMember, JoinedMember] };
+  const { central } = roles;
+  // In the order of the parts' ids, so that both contact lines of the joint (and the stack turned over) report alike.
+  const byPart = [...roles.outer].sort((a, b) => a.part.localeCompare(b.part));
+  const outers = byPart[0]!.part === byPart[1]!.part ? [byPart[0]!] : byPart;
+  const parts = [...outers.map((m) => ({ member: m, angle: spec.angles.side })), { member: central, angle: spec.angles.main }];
+  const tc = central.thickness;
+  if (spec.length === null) {
+    const cases = outers.map((o) => ({ side: o, main: central, sideLength: o.thickness, mainLength: tc, sideNote: null }));
+    return { cases, penetration: null, penetratedMember: roles.outer[1], headMember: roles.outer[0], through: null, parts, double: roles };
   }
-  // Double shear with a driven fastener: through the head member and the main member into a far side member of the head member's thickness.
-  const penetration = spec.length - ts - tm - spec.tipLength;
-  return { sideLength: Math.min(ts, Math.max(penetration, 0)), mainLength: tm, penetration, through: penetration > ts, penetratedMember: head };
+  const directions = (outers.length === 1 ? [[outers[0]!, outers[0]!]] : [byPart, [byPart[1]!, byPart[0]!]]).map(([head, point]) => ({
+    head: head!,
+    point: point!,
+    penetration: spec.length! - head!.thickness - tc - spec.tipLength,
+  }));
+  const cases: DowelBearing[] = [];
+  for (const d of directions) {
+    cases.push({ side: d.head, main: central, sideLength: d.head.thickness, mainLength: tc, sideNote: null });
+    cases.push({
+      side: d.point,
+      main: central,
+      sideLength: Math.min(d.point.thickness, Math.max(d.penetration, 0)),
+      mainLength: tc,
+      sideNote: `point side, driven from "${d.head.part}": penetration ${d.penetration > d.point.thickness ? "beyond the member, its thickness counted" : "into it"}`,
+    });
+  }
+  const unique = cases.filter((c, i) => cases.findIndex((x) => x.side.part === c.side.part && Math.abs(x.sideLength - c.sideLength) <= 1e-9 * (1 + c.sideLength)) === i);
+  // Thicknesses come from coordinates: a difference within rounding is no difference.
+  const clearly = (x: number, y: number) => x < y - 1e-9 * (1 + Math.abs(y));
+  const least = directions.reduce((a, b) => (clearly(b.penetration, a.penetration) ? b : a));
+  const most = directions.reduce((a, b) => (clearly(a.penetration - a.point.thickness, b.penetration - b.point.thickness) ? b : a));
+  return {
+    cases: unique,
+    penetration: least.penetration,
+    penetratedMember: least.point,
+    headMember: least.head,
+    through: most.penetration > most.point.thickness ? { member: most.point, penetration: most.penetration } : null,
+    parts,
+    double: roles,
+  };
 }
 
 export function dowelProblems(spec: DowelSpec, context: ConnectorContext): PlacementProblem[] {
+  const problems = lineProblems(spec, context);
+  // A double-shear fastener's problems concern the joint's three parts, the same from either contact line.
+  return spec.shear === "double" ? problems.map((p) => (p.on === "material" ? p : { ...p, wholeJoint: true })) : problems;
+}
+
+function lineProblems(spec: DowelSpec, context: ConnectorContext): PlacementProblem[] {
   const out: PlacementProblem[] = [];
   const u = context.units;
   const len = (mm: number) => inJobUnits(mm, "length", u);
-  const members = context.members;
   if (spec.standard === "EN1995-1-1" && context.basis === "allowable") {
     out.push({ on: "connector", field: "standard", message: `EN 1995-1-1 gives design values for factored loads, but the job's basis is "allowable": set basis to "factored" or use the NDS-2018` });
   }
-  if (members.every((m) => isSteel(m.material))) {
-    out.push({ on: "connector", field: "kind", message: `both parts at this joint (${members.map((m) => `"${m.part}"`).join(", ")}) are steel: use a steel-bolt (AISC 360 or EN 1993-1-8) or a fillet-weld` });
+  const refused = spec.shear === "double" ? doubleShearRefusal(context) : null;
+  if (refused) {
+    out.push({ on: "connector", field: "shear", message: `${refused}: use single shear at this joint, or name the central part as the held group of a joint of its own` });
     return out;
   }
-  members.forEach((m, i) => {
-    const member = i as 0 | 1;
+  const g = dowelGeometry(spec, context);
+  const members = g.parts.map((p) => p.member);
+  // A material problem names the part's index in `members` where it has one, or the part itself (the far outer member of a double-shear joint).
+  const materialOf = (m: JoinedMember) => {
+    const i = context.members.findIndex((x) => x.part === m.part);
+    return i >= 0 ? { member: i as 0 | 1 } : { member: 0 as const, part: m.part };
+  };
+  if (members.every((m) => isSteel(m.material))) {
+    out.push({ on: "connector", field: "kind", message: `${members.length === 2 ? "both parts" : "every part"} at this joint (${members.map((m) => `"${m.part}"`).join(", ")}) ${members.length === 2 ? "are" : "is"} steel: use a steel-bolt (AISC 360 or EN 1993-1-8) or a fillet-weld` });
+    return out;
+  }
+  if (g.double) {
+    const { central, outer } = g.double;
+    if (isSteel(central.material) && outer.some((m) => isSteel(m.material))) {
+      out.push({ on: "connector", field: "kind", message: `the central part "${central.part}" and an outer part (${outer.filter((m) => isSteel(m.material)).map((m) => `"${m.part}"`).sort().join(", ")}) are both steel: a steel-to-steel shear plane is not a timber connection` });
+      return out;
+    }
+    if (spec.standard === "EN1995-1-1" && isSteel(outer[0].material) !== isSteel(outer[1].material)) {
+      out.push({ on: "connector", field: "shear", message: `one outer part is steel and the other timber (${outer.map((m) => `"${m.part}"`).sort().join(", ")}): EN 1995-1-1 gives double-shear equations for two timber outer members (eq. 8.7), two steel outer plates (8.12, 8.13) or a steel central plate (8.11), not a mixture` });
+      return out;
+    }
+  }
+  for (const m of members) {
+    const at = materialOf(m);
     if (isSteel(m.material)) {
-      if (spec.standard === "NDS-2018" && m.material.tensileStrength === undefined) out.push({ on: "material", member, field: "tensileStrength", message: `is needed for the dowel bearing strength of steel part "${m.part}" (NDS-2018 §12.3.3: F_e = 1.5 F_u or 1.375 F_u)` });
-      return;
+      if (spec.standard === "NDS-2018" && m.material.tensileStrength === undefined) out.push({ on: "material", ...at, field: "tensileStrength", message: `is needed for the dowel bearing strength of steel part "${m.part}" (NDS-2018 §12.3.3: F_e = 1.5 F_u or 1.375 F_u)` });
+      continue;
     }
-    if (spec.standard === "NDS-2018" && m.material.specificGravity === undefined) out.push({ on: "material", member, field: "specificGravity", message: `is needed for the dowel bearing strength of part "${m.part}" under the NDS-2018 (§12.3.3, from the specific gravity G)` });
+    if (spec.standard === "NDS-2018" && m.material.specificGravity === undefined) out.push({ on: "material", ...at, field: "specificGravity", message: `is needed for the dowel bearing strength of part "${m.part}" under the NDS-2018 (§12.3.3, from the specific gravity G)` });
     if (spec.standard === "EN1995-1-1" && m.material.characteristicDensity === undefined && !(isPanel(m.material) && spec.ec5.panel !== "plywood")) {
-      out.push({ on: "material", member, field: "characteristicDensity", message: `is needed for the embedment strength of part "${m.part}" under EN 1995-1-1 (§8.3.1, §8.5.1: from ρ_k)` });
+      out.push({ on: "material", ...at, field: "characteristicDensity", message: `is needed for the embedment strength of part "${m.part}" under EN 1995-1-1 (§8.3.1, §8.5.1: from ρ_k)` });
     }
-  });
+  }
   if (spec.standard === "NDS-2018" && spec.yieldDiameter > MM_PER_IN + 1e-9) {
     out.push({ on: "connector", field: "diameter", message: `${len(spec.diameter)} is beyond the NDS-2018 yield limit equations, which cover diameters up to 1 in (§12.3.3)` });
   }
-  const geometry = dowelGeometry(spec, context);
-  if (geometry.penetration !== null) {
-    const where = spec.shear === "single" ? `part "${members[1].part}"` : `the far side member (taken as thick as "${members[0].part}")`;
-    if (geometry.penetration <= 0) {
-      out.push({ on: "connector", field: "length", message: `a ${len(spec.length!)} ${spec.noun} does not reach ${where}: it must be longer than ${len(spec.length! - geometry.penetration)}` });
-    } else if (spec.minPenetration && geometry.penetration < spec.minPenetration.multiple * spec.diameter - 1e-9) {
+  if (g.penetration !== null) {
+    const where = g.double
+      ? `the far outer part "${g.penetratedMember.part}" (driven from "${g.headMember.part}" through the central part "${g.double.central.part}"${g.double.outer[0].part !== g.double.outer[1].part ? "; either outer face may take the head, and this is the shorter reach" : ""})`
+      : `part "${g.penetratedMember.part}"`;
+    if (g.penetration <= 0) {
+      out.push({ on: "connector", field: "length", message: `a ${len(spec.length!)} ${spec.noun} does not reach ${where}: it must be longer than ${len(spec.length! - g.penetration)}` });
+    } else if (spec.minPenetration && g.penetration < spec.minPenetration.multiple * spec.diameter - 1e-9) {
       out.push({
         on: "connector",
         field: "length",
-        message: `penetration ${len(geometry.penetration)} into ${where} is below the minimum ${spec.minPenetration.multiple}d = ${len(spec.minPenetration.multiple * spec.diameter)} (${spec.minPenetration.source}); use a ${spec.noun} at least ${len(spec.length! - geometry.penetration + spec.minPenetration.multiple * spec.diameter)} long`,
+        message: `penetration ${len(g.penetration)} into ${where} is below the minimum ${spec.minPenetration.multiple}d = ${len(spec.minPenetration.multiple * spec.diameter)} (${spec.minPenetration.source}); use a ${spec.noun} at least ${len(spec.length! - g.penetration + spec.minPenetration.multiple * spec.diameter)} long`,
       });
     }
   }
@@ -133,8 +257,8 @@ export function dowelProblems(spec: DowelSpec, context: ConnectorContext): Place
       if (rho !== undefined) {
         const d = spec.diameter;
         const tMin = Math.max(7 * d, ((13 * d - 30) * rho) / 400);
-        const thickness = m === members[0] ? geometry.sideLength : m.thickness;
-        if (thickness < tMin - 1e-9) out.push({ on: "connector", field: "predrilled", message: `part "${m.part}" is ${len(thickness)} thick; without predrilling EN 1995-1-1 eq. (8.18) needs at least ${len(tMin)}: predrill or use a thicker part` });
+        // Eq. (8.18) limits the timber member's thickness (splitting), not the fastener's bearing length in it.
+        if (m.thickness < tMin - 1e-9) out.push({ on: "connector", field: "predrilled", message: `part "${m.part}" is ${len(m.thickness)} thick; without predrilling EN 1995-1-1 eq. (8.18) needs at least ${len(tMin)}: predrill or use a thicker part` });
       }
     }
   }
@@ -149,23 +273,45 @@ export function dowelProblems(spec: DowelSpec, context: ConnectorContext): Place
 }
 
 export function dowelResistance(spec: DowelSpec, context: ConnectorContext): ConnectorResistance {
-  return spec.standard === "NDS-2018" ? ndsResistance(spec, context) : ec5Resistance(spec, context);
+  const g = dowelGeometry(spec, context);
+  const each = g.cases.map((b) => (spec.standard === "NDS-2018" ? ndsResistance(spec, context, g, b) : ec5Resistance(spec, context, g, b)));
+  if (!g.double) return each[0]!;
+  // Double shear: every outer member (and driving direction) is checked with the central member; the weaker governs.
+  const at = each.reduce((best, r, i) => (r.value < each[best]!.value * (1 - 1e-9) ? i : best), 0);
+  const r = each[at]!;
+  const { central, outer } = g.double;
+  const label = (b: DowelBearing) => `outer "${b.side.part}"${b.sideNote ? ` (${b.sideNote})` : ""}`;
+  const roles: WorkingStep = {
+    symbol: "t_c",
+    description: `double shear: central member "${central.part}" (the part between the two contact lines, crossed over this length), outer members "${outer[0].part}" and "${outer[1].part}"`,
+    value: central.thickness,
+    quantity: "length",
+  };
+  const weaker: WorkingStep[] = each.length > 1
+    ? [{ symbol: "R", description: `each outer member checked with the central member, both outer members taken like it: ${g.cases.map((b, i) => `${label(b)} ${inJobUnits(each[i]!.value, "connectorForce", context.units)}`).join("; ")}; the weaker governs: ${label(g.cases[at]!)}`, value: r.value, quantity: "connectorForce" }]
+    : [];
+  return {
+    ...r,
+    governing: each.length > 1 ? `${r.governing}, outer member "${g.cases[at]!.side.part}"` : r.governing,
+    steps: [roles, ...r.steps, ...weaker],
+    modes: each.length > 1 ? each.flatMap((x, i) => (x.modes ?? []).map((m) => ({ ...m, mode: `${m.mode} (outer "${g.cases[i]!.side.part}", ℓ = ${round(g.cases[i]!.sideLength)} mm)` }))) : r.modes,
+  };
 }
 
-function ndsResistance(spec: DowelSpec, context: ConnectorContext): ConnectorResistance {
-  const [head, point] = context.members;
-  const g = dowelGeometry(spec, context);
+function ndsResistance(spec: DowelSpec, context: ConnectorContext, g: DowelGeometry, b: DowelBearing): ConnectorResistance {
+  const head = b.side;
+  const point = b.main;
   const D = spec.yieldDiameter / MM_PER_IN;
   const bearing = (m: JoinedMember, angle: number): NdsBearing =>
     isSteel(m.material) ? ndsSteelBearing(m.material.tensileStrength! / MPA_PER_PSI, m.thickness / MM_PER_IN) : ndsWoodBearing(m.material.specificGravity!, D, angle);
   const Fes = bearing(head, spec.angles.side);
   const Fem = bearing(point, spec.angles.main);
-  const maxAngle = Math.max(isSteel(head.material) ? 0 : foldAngle(spec.angles.side), isSteel(point.material) ? 0 : foldAngle(spec.angles.main));
+  const maxAngle = Math.max(...g.parts.map((p) => (isSteel(p.member.material) ? 0 : foldAngle(p.angle))));
   const yieldLimit = ndsYieldLimit({
     diameterIn: D,
     bendingYieldPsi: spec.bendingYield.value / MPA_PER_PSI,
-    sideLengthIn: g.sideLength / MM_PER_IN,
-    mainLengthIn: g.mainLength / MM_PER_IN,
+    sideLengthIn: b.sideLength / MM_PER_IN,
+    mainLengthIn: b.mainLength / MM_PER_IN,
     sideBearingPsi: Fes.value,
     mainBearingPsi: Fem.value,
     shear: spec.shear,
@@ -176,10 +322,10 @@ function ndsResistance(spec: DowelSpec, context: ConnectorContext): ConnectorRes
   const table = spec.shear === "single" ? "NDS-2018 Table 12.3.1A (single shear)" : "NDS-2018 Table 12.3.1A (double shear)";
   const steps: WorkingStep[] = [
     { symbol: "D", description: `diameter in the yield model${spec.yieldDiameterNote ? ` (${spec.yieldDiameterNote})` : ""}`, value: spec.yieldDiameter, quantity: "length" },
-    { symbol: "ℓ_s", description: `dowel bearing length in the side member "${head.part}"`, value: g.sideLength, quantity: "length" },
-    { symbol: "ℓ_m", description: `dowel bearing length in the main member "${point.part}"${g.penetration !== null && spec.shear === "single" ? " (penetration, at most the member's thickness)" : ""}`, value: g.mainLength, quantity: "length" },
-    { symbol: "F_es", description: `dowel bearing strength, side member: ${Fes.formula}`, value: psi(Fes.value), quantity: "stress", reference: "NDS-2018 §12.3.3" },
-    { symbol: "F_em", description: `dowel bearing strength, main member: ${Fem.formula}`, value: psi(Fem.value), quantity: "stress", reference: "NDS-2018 §12.3.3" },
+    { symbol: "ℓ_s", description: g.double ? `dowel bearing length in the outer (side) member "${head.part}"${b.sideNote ? ` (${b.sideNote}, at most its thickness)` : ""}, each side member taken alike` : `dowel bearing length in the side member "${head.part}"`, value: b.sideLength, quantity: "length" },
+    { symbol: "ℓ_m", description: g.double ? `dowel bearing length in the central (main) member "${point.part}"` : `dowel bearing length in the main member "${point.part}"${g.penetration !== null ? " (penetration, at most the member's thickness)" : ""}`, value: b.mainLength, quantity: "length" },
+    { symbol: "F_es", description: `dowel bearing strength, ${g.double ? "outer" : "side"} member: ${Fes.formula}`, value: psi(Fes.value), quantity: "stress", reference: "NDS-2018 §12.3.3" },
+    { symbol: "F_em", description: `dowel bearing strength, ${g.double ? "central" : "main"} member: ${Fem.formula}`, value: psi(Fem.value), quantity: "stress", reference: "NDS-2018 §12.3.3" },
     { symbol: "F_yb", description: `dowel bending yield strength (${spec.bendingYield.source})`, value: spec.bendingYield.value, quantity: "stress" },
     { symbol: "R_e", description: "F_em/F_es", value: yieldLimit.Re, quantity: "ratio" },
     { symbol: "R_t", description: "ℓ_m/ℓ_s", value: yieldLimit.Rt, quantity: "ratio" },
@@ -261,15 +407,15 @@ function ec5Embedment(spec: DowelSpec, m: JoinedMember, angle: number): Embedmen
     : ec5BoltEmbedment({ wood, characteristicDensity: rho, diameter: d, angleDeg: foldAngle(angle), thickness: m.thickness });
 }
 
-function ec5Resistance(spec: DowelSpec, context: ConnectorContext): ConnectorResistance {
-  const [head, point] = context.members;
-  const g = dowelGeometry(spec, context);
+function ec5Resistance(spec: DowelSpec, context: ConnectorContext, g: DowelGeometry, b: DowelBearing): ConnectorResistance {
+  const head = b.side;
+  const point = b.main;
   const d = spec.yieldDiameter;
   const My = spec.ec5.yieldMoment.value;
   const steps: WorkingStep[] = [
     { symbol: "d", description: `diameter in the yield model${spec.yieldDiameterNote ? ` (${spec.yieldDiameterNote})` : ""}`, value: d, quantity: "length" },
-    { symbol: "t₁", description: `head-side thickness, "${head.part}"${spec.shear === "double" && g.penetration !== null ? " (or the point-side penetration if less)" : ""}`, value: g.sideLength, quantity: "length" },
-    { symbol: "t₂", description: `${spec.shear === "single" ? "point-side penetration or thickness" : "central member thickness"}, "${point.part}"`, value: g.mainLength, quantity: "length" },
+    { symbol: "t₁", description: g.double ? `outer member thickness, "${head.part}"${b.sideNote ? ` (${b.sideNote}, at most its thickness)` : ""}, both outer members taken alike` : `head-side thickness, "${head.part}"`, value: b.sideLength, quantity: "length" },
+    { symbol: "t₂", description: `${g.double ? "central member thickness" : "point-side penetration or thickness"}, "${point.part}"`, value: b.mainLength, quantity: "length" },
     { symbol: "M_y,Rk", description: `yield moment, N·mm (${spec.ec5.yieldMoment.source})`, value: My, quantity: "ratio", reference: "EN 1995-1-1 eq. (8.14), (8.30)" },
   ];
   let johansen: JohansenResult;
@@ -282,7 +428,7 @@ function ec5Resistance(spec: DowelSpec, context: ConnectorContext): ConnectorRes
     const fh = ec5Embedment(spec, timber, steelHead ? spec.angles.main : spec.angles.side);
     steps.push({ symbol: "f_h,k", description: `embedment strength of "${timber.part}": ${fh.formula}`, value: fh.value, quantity: "stress", reference: fh.reference });
     steps.push({ symbol: "t_plate", description: `steel plate "${plate.part}" (thin ≤ 0.5d, thick ≥ d)`, value: plate.thickness, quantity: "length" });
-    const t = steelHead ? g.mainLength : g.sideLength;
+    const t = steelHead ? b.mainLength : b.sideLength;
     const input = { fh: fh.value, t, d, My, rope: spec.ec5.rope, plateThickness: plate.thickness };
     if (spec.shear === "single") {
       johansen = johansenSteelSingle(input);
@@ -300,7 +446,7 @@ function ec5Resistance(spec: DowelSpec, context: ConnectorContext): ConnectorRes
     steps.push({ symbol: "f_h,1,k", description: `embedment strength of "${head.part}": ${fh1.formula}`, value: fh1.value, quantity: "stress", reference: fh1.reference });
     steps.push({ symbol: "f_h,2,k", description: `embedment strength of "${point.part}": ${fh2.formula}`, value: fh2.value, quantity: "stress", reference: fh2.reference });
     steps.push({ symbol: "β", description: "f_h,2,k/f_h,1,k", value: fh2.value / fh1.value, quantity: "ratio" });
-    const input = { fh1: fh1.value, fh2: fh2.value, t1: g.sideLength, t2: g.mainLength, d, My, rope: spec.ec5.rope };
+    const input = { fh1: fh1.value, fh2: fh2.value, t1: b.sideLength, t2: b.mainLength, d, My, rope: spec.ec5.rope };
     if (spec.shear === "single") {
       johansen = johansenTimberSingle(input);
       reference = "EN 1995-1-1 eq. (8.6)";
@@ -317,7 +463,7 @@ function ec5Resistance(spec: DowelSpec, context: ConnectorContext): ConnectorRes
   steps.push({ symbol: "F_v,Rk", description: `characteristic resistance per shear plane (mode ${johansen.governing.mode} governs)`, value: johansen.value, quantity: "connectorForce", reference });
 
   const duration = ec5DurationOf(context.duration, context.categories);
-  const woodMembers = context.members.filter((m) => !isSteel(m.material));
+  const woodMembers = [head, point].filter((m) => !isSteel(m.material));
   const kmods = woodMembers.map((m) => ec5Kmod(productOf(m.material, spec), spec.ec5.serviceClass, duration.duration) ?? NaN);
   const kmod = kmods.length === 2 ? Math.sqrt(kmods[0]! * kmods[1]!) : kmods[0]!;
   steps.push({ symbol: "k_mod", description: `service class ${spec.ec5.serviceClass}, ${duration.why}${kmods.length === 2 && kmods[0] !== kmods[1] ? "; √(k_mod,1 k_mod,2) for members of different products" : ""}`, value: kmod, quantity: "ratio", reference: kmods.length === 2 && kmods[0] !== kmods[1] ? "EN 1995-1-1 Table 3.1, eq. (2.6)" : "EN 1995-1-1 Table 3.1" });
@@ -330,7 +476,7 @@ function ec5Resistance(spec: DowelSpec, context: ConnectorContext): ConnectorRes
   }
   const value = johansen.value * factor;
   steps.push({ symbol: "F_v,Rd", description: `design resistance per shear plane: k_mod F_v,Rk/γ_M${spec.groupAction ? " × n_ef/n" : ""}${spec.shear === "double" ? " (the fastener in double shear serves the two contact lines of the joint, one plane each)" : ""}`, value, quantity: "connectorForce", reference: "EN 1995-1-1 §2.4.3, eq. (2.17)" });
-  const slip = ec5Slip(spec, context);
+  const slip = ec5Slip(spec, g.double ? [g.double.outer[0], g.double.central] : context.members);
   if (slip) {
     steps.push({ symbol: "K_ser", description: `slip modulus per shear plane: ${slip.formula}`, value: slip.serviceability, quantity: "slipModulus", reference: "EN 1995-1-1 Table 7.1" });
     steps.push({ symbol: "K_u", description: "ultimate slip modulus, 2/3 K_ser", value: slip.ultimate, quantity: "slipModulus", reference: "EN 1995-1-1 eq. (2.1)" });
@@ -348,8 +494,9 @@ function ec5Resistance(spec: DowelSpec, context: ConnectorContext): ConnectorRes
   };
 }
 
-function ec5Slip(spec: DowelSpec, context: ConnectorContext): (SlipModuli & { formula: string }) | null {
-  const wood = context.members.filter((m) => !isSteel(m.material));
+/** Slip of the shear plane between two members (in double shear, that of this context's contact line). */
+function ec5Slip(spec: DowelSpec, plane: readonly JoinedMember[]): (SlipModuli & { formula: string }) | null {
+  const wood = plane.filter((m) => !isSteel(m.material));
   const densities = wood.map((m) => m.material.meanDensity);
   if (densities.some((r) => r === undefined)) return null;
   const rho = densities.length === 2 ? jointMeanDensity(densities[0]!, densities[1]!) : densities[0]!;
@@ -381,10 +528,10 @@ function dowelWarnings(spec: DowelSpec, context: ConnectorContext): string[] {
   const g = dowelGeometry(spec, context);
   const u = context.units;
   if (g.through) {
-    out.push(`The ${spec.noun} point passes through part "${g.penetratedMember.part}" (penetration ${inJobUnits(g.penetration!, "length", u)}); only the part's thickness is counted and the protruding point is not credited.`);
+    out.push(`The ${spec.noun} point passes through part "${g.through.member.part}" (penetration ${inJobUnits(g.through.penetration, "length", u)}); only the part's thickness is counted and the protruding point is not credited.`);
   }
   const limits = dowelDetailing(spec, context);
-  for (const m of context.members) {
+  for (const { member: m } of g.parts) {
     const need = 2 * (limits.edgeDistance ?? 0) + (context.rows - 1) * (limits.rowSpacing ?? 0);
     if (!isSteel(m.material) && need > m.width + 1e-9) {
       out.push(`${context.rows} ${spec.noun}${context.rows > 1 ? "s" : ""} per row need ${inJobUnits(need, "length", u)} across part "${m.part}" (edge distances${context.rows > 1 ? " and row spacing" : ""}), which is only ${inJobUnits(m.width, "length", u)} wide: stagger or reduce the rows, or check splitting.`);
@@ -397,15 +544,15 @@ export function dowelDetailing(spec: DowelSpec, context?: ConnectorContext): Det
   if (!context) return { minSpacing: 0, maxSpacing: null, endDistance: 0, sources: [] };
   const g = dowelGeometry(spec, context);
   const per: MemberSpacing[] = [];
-  context.members.forEach((m, i) => {
+  const steelToTimber = g.parts.some((x) => isSteel(x.member.material));
+  g.parts.forEach(({ member: m, angle }) => {
     if (isSteel(m.material)) return;
-    const angle = i === 0 ? spec.angles.side : spec.angles.main;
     if (spec.standard === "NDS-2018") {
-      const bearing = Math.min(g.sideLength, g.mainLength);
+      const bearing = Math.min(...g.cases.map((b) => Math.min(b.sideLength, b.mainLength)));
       per.push(ndsSpacing({ family: spec.family, diameterIn: spec.diameter / MM_PER_IN, angleDeg: angle, prebored: spec.predrilled || spec.family === "screw", slenderness: bearing / spec.diameter }));
     } else {
       const placement = isPanel(m.material) ? (spec.ec5.panel === "plywood" ? "plywood" : "osb") : "timber";
-      per.push(ec5Spacing({ family: spec.family, d: spec.diameter, angleDeg: angle, characteristicDensity: m.material.characteristicDensity ?? 0, predrilled: spec.predrilled, placement, steelToTimber: context.members.some((x) => isSteel(x.material)) }));
+      per.push(ec5Spacing({ family: spec.family, d: spec.diameter, angleDeg: angle, characteristicDensity: m.material.characteristicDensity ?? 0, predrilled: spec.predrilled, placement, steelToTimber }));
     }
   });
   const max = (pick: (s: MemberSpacing) => number) => Math.max(0, ...per.map(pick));

@@ -18,9 +18,9 @@ export const timberDowelFields = {
   standard: z.enum(timberStandards),
   /** Single shear (two members) or double shear (the fastener crosses two contact lines of the joint). */
   shear: z.enum(["single", "double"]).default("single"),
-  /** Angle between the load (along the member) and the grain of the head-side member, degrees. */
+  /** Angle between the load (along the member) and the grain of the head-side member (both outer members in double shear), degrees. */
   sideAngleToGrainDeg: z.number().min(0).max(180).default(0),
-  /** Angle between the load and the grain of the point-side (main) member, degrees. */
+  /** Angle between the load and the grain of the point-side (main) member (the central member in double shear), degrees. */
   mainAngleToGrainDeg: z.number().min(0).max(180).default(0),
   /** NDS-2018 wet service (Table 11.3.3): dry; wet in service (MC over 19 %); fabricated wet, used dry. */
   moisture: z.enum(ndsMoistureConditions).optional(),
@@ -89,6 +89,9 @@ export function dowelConditions(c: Conditions, ropeCap: number, ropeName: string
 /** Assumptions common to the timber dowel kinds, for the worksheet. */
 export function timberAssumptions(name: string, c: Conditions): string[] {
   const out = [`${name}: loaded laterally along the member by the shear flow; one row's connectors each carry an equal share.`];
+  if (c.shear === "double") {
+    out.push(`${name}: in double shear the central (main) member is the part between the joint's two contact lines; each outer member is checked with it, both outer members taken alike as the double-shear equations assume, and the weaker governs${c.standard === "NDS-2018" ? " (NDS-2018 Table 12.3.1A, double shear)" : " (EN 1995-1-1 eq. 8.7, 8.11–8.13)"}; a fastener driven from one face may be driven from either, so the shorter penetration into the far outer member is used.`);
+  }
   if (c.standard === "NDS-2018") {
     out.push(`${name}: C_D of each combination from its shortest-duration load (dead 0.9, live 1.0, snow 1.15, roof live 1.25, wind 1.6; at most 1.6 for connections) under ASD; λ by the combination's loads under LRFD (NDS-2018 §2.3.2, §11.3.2, Table N3).`);
     out.push(`${name}: spacings and distances for full design value (C_Δ = 1.0); ${c.groupAction ? "group action C_g from the row given" : "no group action reduction (C_g = 1.0): each row carries its own tributary shear flow"}.`);
