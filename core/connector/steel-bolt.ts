@@ -30,6 +30,13 @@ export const SteelBolt = z
     holeType: z.enum(holeTypes).default("standard"),
     /** AISC: a slip-critical joint with a Class A or Class B faying surface (§J3.8). */
     slipCritical: z.enum(["no", "class-A", "class-B"]).default("no"),
+    /**
+     * EN 1993-1-8 §3.4.1: category A (bearing type), B (slip-resistant at serviceability) or C
+     * (slip-resistant at the ultimate limit state); B and C are preloaded 8.8 or 10.9 bolts (§3.1.2(2)).
+     */
+    category: z.enum(["A", "B", "C"]).default("A"),
+    /** EN 1993-1-8 Table 3.7: class of friction surface A, B, C or D (μ 0.5, 0.4, 0.3, 0.2), for categories B and C. */
+    frictionSurface: z.enum(["A", "B", "C", "D"]).optional(),
     /** AISC: fillers between the plies (h_f of §J3.8). */
     fillers: z.number().int("must be a whole number").min(0).max(4).default(0),
     /** AISC: deformation at the bolt hole at service load is a design consideration (§J3.10). */
@@ -55,7 +62,14 @@ export const SteelBolt = z
     if (!aisc) {
       for (const key of ["slipCritical", "fillers", "deformationConsidered", "holeType"] as const) {
         const fallback = { slipCritical: "no", fillers: 0, deformationConsidered: true, holeType: "standard" }[key];
-        if (c[key] !== fallback) ctx.addIssue({ code: "custom", path: [key], message: "applies to AISC 360-16 bolts only; EN 1993-1-8 bolts here are bearing type in normal round holes" });
+        if (c[key] !== fallback) ctx.addIssue({ code: "custom", path: [key], message: "applies to AISC 360-16 bolts only; EN 1993-1-8 bolts here are in normal round holes (a slip-resistant EN bolt takes category and frictionSurface)" });
+      }
+      if (c.category !== "A" && c.frictionSurface === undefined) ctx.addIssue({ code: "custom", path: ["frictionSurface"], message: `is required for a slip-resistant bolt of category ${c.category} (EN 1993-1-8 Table 3.7: class A, B, C or D)` });
+      if (c.category === "A" && c.frictionSurface !== undefined) ctx.addIssue({ code: "custom", path: ["frictionSurface"], message: 'applies to slip-resistant bolts only: set category to "B" or "C"' });
+      if (c.category !== "A" && propertyClasses[c.grade.trim()] && !["8.8", "10.9"].includes(c.grade.trim())) ctx.addIssue({ code: "custom", path: ["grade"], message: `a slip-resistant bolt (category ${c.category}) is preloaded, and only classes 8.8 and 10.9 may be preloaded (EN 1993-1-8 §3.1.2(2))` });
+    } else {
+      for (const key of ["category", "frictionSurface"] as const) {
+        if (c[key] !== (key === "category" ? "A" : undefined)) ctx.addIssue({ code: "custom", path: [key], message: "applies to EN 1993-1-8 bolts only; an AISC 360-16 bolt is made slip-critical by slipCritical" });
       }
     }
     if (aisc && c.slipCritical !== "no" && aiscBoltGroup(c.grade) === "A307") ctx.addIssue({ code: "custom", path: ["slipCritical"], message: "A307 bolts are not pretensioned and cannot be slip-critical" });
@@ -205,6 +219,7 @@ function resistance(c: SteelBolt, context: ConnectorContext): ConnectorResistanc
     p1: g.spacing,
     e2: g.edgeDistance,
     p2: context.rows > 1 ? g.rowSpacing : null,
+    slip: c.category === "A" ? null : { category: c.category, surface: c.frictionSurface!, ks: 1.0 },
   });
   steps.push({ symbol: "A_s", description: "tensile stress area", value: r.bolt.As, quantity: "area" });
   steps.push({ symbol: "f_ub", description: `ultimate tensile strength, property class ${c.grade.trim()}`, value: grade.fub, quantity: "stress", reference: "EN 1993-1-8 Table 3.1" });
@@ -214,16 +229,16 @@ function resistance(c: SteelBolt, context: ConnectorContext): ConnectorResistanc
   steps.push({ symbol: "e₂", description: "edge distance", value: g.edgeDistance, quantity: "length" });
   steps.push({ symbol: "γ_M2", description: "partial factor for bolts (recommended value)", value: EN1993_GAMMA_M2, quantity: "ratio", reference: "EN 1993-1-8 §2.2, Table 2.1" });
   for (const s of out.resistances) {
-    steps.push({ symbol: s.name === "bolt shear" ? "F_v,Rd" : "F_b,Rd", description: `${s.name}: ${s.equation}; ${Object.entries(s.factors).map(([k, v]) => `${k} = ${formatNumber(v)}`).join(", ")}`, value: s.value, quantity: "connectorForce", reference: "EN 1993-1-8 Table 3.4" });
+    steps.push({ symbol: s.symbol, description: `${s.name}: ${s.equation}; ${Object.entries(s.factors).map(([k, v]) => `${k} = ${formatNumber(v)}`).join(", ")}`, value: s.value, quantity: "connectorForce", reference: s.reference });
   }
   const value = out.governing.value * perLine;
   if (n === 2) steps.push({ symbol: "F_Rd/2", description: "per contact line: the bolt in double shear serves the two contact lines of the joint", value, quantity: "connectorForce" });
   return {
     value,
     governing: out.governing.name,
-    reference: "EN 1993-1-8 Table 3.4 (category A, bearing type)",
+    reference: c.category === "A" ? "EN 1993-1-8 Table 3.4 (category A, bearing type)" : `EN 1993-1-8 Table 3.2 category ${c.category}: §3.9.1 slip, Table 3.4 shear and bearing`,
     steps,
-    modes: out.resistances.map((s) => ({ mode: s.name, value: s.value * perLine, reference: "EN 1993-1-8 Table 3.4" })),
+    modes: out.resistances.map((s) => ({ mode: s.name, value: s.value * perLine, reference: s.reference })),
     slip: null,
     warnings: steelWarnings(c, context, g),
   };
@@ -231,6 +246,7 @@ function resistance(c: SteelBolt, context: ConnectorContext): ConnectorResistanc
 
 function steelWarnings(c: SteelBolt, context: ConnectorContext, g: Geometry): string[] {
   const out: string[] = [];
+  if (c.standard === "EN1993-1-8" && c.category === "B") out.push(`${describe(c)}: category B is slip-resistant at serviceability; its slip resistance F_s,Rd,ser (γ_M3,ser) is checked here against the factored flow, which is not less than the serviceability flow when every load factor is at least 1 (on the safe side).`);
   if (c.endDistance === undefined) out.push(`${describe(c)}: the end bolts' resistance uses the least end distance ${inJobUnits(g.endDistance, "length", context.units)}; give endDistance if the plates run further past the last bolt.`);
   return out;
 }
@@ -308,7 +324,7 @@ function describe(c: SteelBolt): string {
     const named = g === "A307" ? "A307" : `Group ${g}${/^(group[- ]?)?[ab]$/i.test(c.grade.trim()) ? "" : ` (${c.grade.trim()})`}`;
     return `${r.bolt.name} in ${named} bolt, threads ${c.threads === "included" ? "included" : "excluded"}${c.slipCritical !== "no" ? `, slip-critical ${c.slipCritical}` : ""}, ${aisc ? "AISC 360-16" : c.standard}${c.shear === "double" ? ", double shear" : ""}`;
   }
-  return `${r.bolt.name} ${c.grade.trim()} bolt, shear plane through the ${c.threads === "included" ? "thread" : "shank"}, EN 1993-1-8${c.shear === "double" ? ", double shear" : ""}`;
+  return `${r.bolt.name} ${c.grade.trim()} bolt, shear plane through the ${c.threads === "included" ? "thread" : "shank"}${c.category !== "A" ? `, preloaded, slip-resistant category ${c.category}, friction surface class ${c.frictionSurface}` : ""}, EN 1993-1-8${c.shear === "double" ? ", double shear" : ""}`;
 }
 
 /** Structural bolts joining steel plates: AISC 360-16 §J3 or EN 1993-1-8 Table 3.4. */
@@ -326,7 +342,7 @@ export const steelBoltKind: DiscreteConnectorKind<SteelBolt> = {
   standards: (c) => [
     c.standard === "AISC-360-16"
       ? "ANSI/AISC 360-16 Specification for Structural Steel Buildings: §J3 bolts (Table J3.2 shear, §J3.10 bearing and tear-out, §J3.8 slip-critical, §J3.3–J3.5 spacing and edge distances)"
-      : "EN 1993-1-8:2005 Eurocode 3 Design of joints: Table 3.4 shear and bearing resistance of bolts, Table 3.3 spacing and distances, γ_M2 = 1.25 (recommended value)",
+      : `EN 1993-1-8:2005 Eurocode 3 Design of joints: Table 3.4 shear and bearing resistance of bolts, Table 3.3 spacing and distances, γ_M2 = 1.25 (recommended value)${c.category !== "A" ? `; §3.9.1 slip resistance of preloaded bolts, category ${c.category} (Table 3.2), μ by Table 3.7, ${c.category === "C" ? "γ_M3 = 1.25" : "γ_M3,ser = 1.1"} (recommended value)` : ""}`,
   ],
   assumptions: (c) => [
     `${describe(c)}: every bolt of the line is checked as the weaker of an end bolt and an inner bolt at the least spacing, so the end distance and spacing used in bearing are on the safe side; the plates' own net-section and block shear are not checked.`,
@@ -334,4 +350,13 @@ export const steelBoltKind: DiscreteConnectorKind<SteelBolt> = {
   problems,
   resistance,
   detailing,
+  plateEndAttachment: (c) => {
+    const slipResistant = c.standard === "AISC-360-16" ? c.slipCritical !== "no" : c.category !== "A";
+    return slipResistant
+      ? { allowed: true, reason: `${describe(c)} is slip-resistant` }
+      : {
+          allowed: false,
+          reason: `AISC 360-16 §F13.3 [M]: the extension of a partial-length cover plate past its cut-off must be attached by slip-critical bolts or fillet welds; ${describe(c)} is a bearing-type bolt (${c.standard === "AISC-360-16" ? 'set slipCritical to "class-A" or "class-B"' : 'set category to "B" or "C" with a frictionSurface (EN 1993-1-8 §3.9; the rule is applied to EN 1993 bolts by the same reading)'}).`,
+        };
+  },
 };
