@@ -116,17 +116,21 @@ function geometry(c: SteelBolt, r: NonNullable<Resolved>): Geometry {
       "long-slot-transverse": standardHole,
       "long-slot-parallel": 2.5 * dIn,
     };
-    const minEdge = r.bolt.minEdgeIn * MM_PER_IN;
+    // The load runs along the line: the member's end is crossed by a slot along the load, its sides by a slot across it.
+    const c2 = edgeIncrementIn(dIn, c.holeType);
+    const minEnd = (r.bolt.minEdgeIn + c2.end) * MM_PER_IN;
+    const minEdge = (r.bolt.minEdgeIn + c2.edge) * MM_PER_IN;
+    const increments = c2.end > 0 || c2.edge > 0 ? ` plus C₂ of Table J3.5 [M] for ${c.holeType} holes (${formatNumber(c2.end)} in at the ends, ${formatNumber(c2.edge)} in at the edges)` : "";
     return {
       hole: along[c.holeType] * MM_PER_IN,
-      endDistance: c.endDistance ?? minEdge,
+      endDistance: c.endDistance ?? minEnd,
       edgeDistance: c.edgeDistance ?? minEdge,
       spacing: c.minSpacing ?? 3 * r.d,
       rowSpacing: 3 * r.d,
       minSpacing: (8 / 3) * r.d,
       minEdge,
-      minEnd: minEdge,
-      source: `AISC 360-16 §J3.3: spacing at least 2-2/3 d (${c.minSpacing === undefined ? "3d preferred, used" : "as given"}); Table J3.4 minimum edge distance ${formatNumber(r.bolt.minEdgeIn)} in${c.endDistance === undefined ? " used at the ends" : ""}`,
+      minEnd,
+      source: `AISC 360-16 §J3.3: spacing at least 2-2/3 d (${c.minSpacing === undefined ? "3d preferred, used" : "as given"}); Table J3.4 minimum edge distance ${formatNumber(r.bolt.minEdgeIn)} in${increments}${c.endDistance === undefined ? "; the least end distance is used at the ends" : ""}`,
     };
   }
   const d0 = r.bolt.d0;
@@ -141,6 +145,32 @@ function geometry(c: SteelBolt, r: NonNullable<Resolved>): Geometry {
     minEnd: 1.2 * d0,
     source: `EN 1993-1-8 Table 3.3: e₁, e₂ ≥ 1.2d₀, p₁ ≥ 2.2d₀, p₂ ≥ 2.4d₀ (d₀ = ${d0} mm, normal round hole)${c.endDistance === undefined ? "; the minima are used in the bearing resistance" : ""}`,
   };
+}
+
+/**
+ * Edge distance increment C₂, in, of AISC 360-16 Table J3.5 [M] (called from §J3.4) at the member's
+ * ends (across the load) and at the sides (along it): oversized holes 1/16 in up to 7/8 in bolts, 1/8 in
+ * from 1 in; short slots with the long axis perpendicular to the edge 1/8 in up to 1 in, 3/16 in from
+ * 1-1/8 in; long slots perpendicular to the edge 3/4 d; slots parallel to the edge 0. Slots at their
+ * largest length (Table J3.3), so note [a]'s reduction is not taken.
+ */
+export function edgeIncrementIn(dIn: number, hole: (typeof holeTypes)[number]): { end: number; edge: number } {
+  const oversized = dIn <= 0.875 + 1e-9 ? 1 / 16 : 1 / 8;
+  const shortSlot = dIn <= 1 + 1e-9 ? 1 / 8 : 3 / 16;
+  switch (hole) {
+    case "standard":
+      return { end: 0, edge: 0 };
+    case "oversized":
+      return { end: oversized, edge: oversized };
+    case "short-slot-parallel":
+      return { end: shortSlot, edge: 0 };
+    case "short-slot-transverse":
+      return { end: 0, edge: shortSlot };
+    case "long-slot-parallel":
+      return { end: 0.75 * dIn, edge: 0 };
+    case "long-slot-transverse":
+      return { end: 0, edge: 0.75 * dIn };
+  }
 }
 
 const isSteel = (m: JoinedMember) => m.material.family === "steel";
@@ -183,8 +213,10 @@ function resistance(c: SteelBolt, context: ConnectorContext): ConnectorResistanc
     steps.push({ symbol: "A_b", description: "nominal bolt area πd²/4", value: out.areaIn2 * MM_PER_IN ** 2, quantity: "area" });
     steps.push({ symbol: "F_nv", description: `nominal shear stress, Group ${group === "A307" ? "A307" : group}, threads ${c.threads === "included" ? "included (N)" : "excluded (X)"}`, value: out.Fnv * MPA_PER_KSI, quantity: "stress", reference: "AISC 360-16 Table J3.2" });
     steps.push({ symbol: "d_h", description: `hole dimension along the load (${c.holeType})`, value: g.hole, quantity: "length", reference: "AISC 360-16 Table J3.3" });
-    steps.push({ symbol: "L_e", description: "end distance of the end bolt", value: g.endDistance, quantity: "length" });
+    steps.push({ symbol: "L_e", description: `end distance of the end bolt${c.endDistance === undefined ? " (the least allowed)" : ""}`, value: g.endDistance, quantity: "length", reference: c.holeType !== "standard" ? "AISC 360-16 Tables J3.4, J3.5" : "AISC 360-16 Table J3.4" });
+    steps.push({ symbol: "l_c,end", description: "clear end distance L_e − d_h/2, d_h along the load", value: g.endDistance - g.hole / 2, quantity: "length", reference: "AISC 360-16 §J3.10" });
     steps.push({ symbol: "s", description: "spacing along the line used for tear-out between bolts (the least allowed)", value: g.spacing, quantity: "length" });
+    steps.push({ symbol: "l_c,s", description: "clear spacing s − d_h between holes along the load", value: g.spacing - g.hole, quantity: "length", reference: "AISC 360-16 §J3.10" });
     for (const s of out.limitStates) {
       steps.push({ symbol: `R_n`, description: `${s.name}: ${s.equation}`, value: s.nominal * N_PER_KIP, quantity: "connectorForce", reference: "AISC 360-16 §J3" });
       steps.push({ symbol: lrfd ? "φR_n" : "R_n/Ω", description: `${s.name}, ${lrfd ? `φ = ${s.phi}` : `Ω = ${s.omega}`}`, value: s.available * N_PER_KIP, quantity: "connectorForce" });
@@ -297,8 +329,9 @@ function problems(c: SteelBolt, context: ConnectorContext): PlacementProblem[] {
   });
   const g = geometry(c, r);
   if (c.minSpacing !== undefined && c.minSpacing < g.minSpacing - 1e-9) out.push({ on: "connector", field: "minSpacing", message: `${len(c.minSpacing)} is below the least spacing ${len(g.minSpacing)} (${c.standard === "AISC-360-16" ? "AISC 360-16 §J3.3, 2-2/3 d" : "EN 1993-1-8 Table 3.3, 2.2d₀"})` });
-  if (c.endDistance !== undefined && c.endDistance < g.minEnd - 1e-9) out.push({ on: "connector", field: "endDistance", message: `${len(c.endDistance)} is below the least end distance ${len(g.minEnd)} (${c.standard === "AISC-360-16" ? "AISC 360-16 Table J3.4" : "EN 1993-1-8 Table 3.3"})` });
-  if (c.edgeDistance !== undefined && c.edgeDistance < g.minEdge - 1e-9) out.push({ on: "connector", field: "edgeDistance", message: `${len(c.edgeDistance)} is below the least edge distance ${len(g.minEdge)} (${c.standard === "AISC-360-16" ? "AISC 360-16 Table J3.4" : "EN 1993-1-8 Table 3.3"})` });
+  const aiscEdge = c.standard === "AISC-360-16" ? `AISC 360-16 Table J3.4${c.holeType !== "standard" ? ` with C₂ of Table J3.5 for ${c.holeType} holes` : ""}` : "EN 1993-1-8 Table 3.3";
+  if (c.endDistance !== undefined && c.endDistance < g.minEnd - 1e-9) out.push({ on: "connector", field: "endDistance", message: `${len(c.endDistance)} is below the least end distance ${len(g.minEnd)} (${aiscEdge})` });
+  if (c.edgeDistance !== undefined && c.edgeDistance < g.minEdge - 1e-9) out.push({ on: "connector", field: "edgeDistance", message: `${len(c.edgeDistance)} is below the least edge distance ${len(g.minEdge)} (${aiscEdge})` });
   for (const m of context.members) {
     if (g.hole >= m.width - 1e-9) {
       out.push({ on: "connector", field: c.size !== undefined ? "size" : "diameter", message: `a ${len(r.d)} bolt in a ${len(g.hole)} hole is larger than part "${m.part}" (${len(m.width)} wide across the contact line)` });
