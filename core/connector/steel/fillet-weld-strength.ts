@@ -38,9 +38,6 @@ export function aiscFusionFaceStrength(p: { legIn: number; tensileStrengthKsi: n
   return { nominal, available: p.basis === "factored" ? phi * nominal : nominal / omega, phi, omega };
 }
 
-/** Directional strength increase (1.0 + 0.50 sin^1.5 θ) for a linear weld group loaded in plane, θ from the weld axis (AISC 360-16 eq. J2-5). */
-export const aiscDirectionalFactor = (thetaDeg: number) => 1 + 0.5 * Math.sin((thetaDeg * Math.PI) / 180) ** 1.5;
-
 /** Least fillet size by the thinner part joined, in (AISC 360-16 Table J2.4). */
 export function aiscMinimumFilletIn(thinnerIn: number): number {
   if (thinnerIn <= 0.25 + 1e-9) return 1 / 8;
