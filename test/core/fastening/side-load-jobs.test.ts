@@ -120,3 +120,31 @@ describe("a concentrated load hung on a face of the plies (moved from the stand-
     expect(i1!.s.infeasible).not.toBeNull();
   });
 });
+
+describe("rows of bolts across the depth of the plies (moved from the stand-alone rowsAcrossDepth onto whole members)", () => {
+  // M12 bolts, EN 1995-1-1 Table 8.4 [V] at α = 90°: a₄,t = max((2 + 2 sin α)d; 3d) = 48 mm, a₂ = 4d = 48 mm,
+  // a₃,t = max(7d; 80 mm) = 84 mm [D]. Across the depth the bolt kind takes its edge distance as the larger of
+  // a₃,t and a₄ (84 mm, on the safe side of a₄,t = 48 mm) and a₁ = (4 + |cos α|)d = 48 mm between rows, so
+  // n rows need 2 × 84 + (n − 1) × 48 mm: 216 mm for two [D].
+  function bolted(depth: number, rows: number): JobInput {
+    const job = plies(3, [{ type: "uniform", w: 1, face: "left" }], {}, rows);
+    job.basis = "factored";
+    job.materials = [{ id: "T", name: "C24", family: "sawn-timber", E: 11_000, density: 0, characteristicDensity: 350, meanDensity: 420 } as JobInput["materials"][number]];
+    job.parts = job.parts.map((p) => ({ ...p, shape: { type: "rectangle" as const, b: 38, h: depth } }));
+    job.connectors = [{ id: "N", kind: "timber-bolt", standard: "EN1995-1-1", size: "M12", grade: "4.6", sideAngleToGrainDeg: 90, mainAngleToGrainDeg: 90 } as JobInput["connectors"][number]];
+    return job;
+  }
+  const acrossWarnings = (r: ReturnType<typeof designMember>) => r.warnings.filter((w) => /per row need .* across part/.test(w));
+  test("two rows of M12 in a 2x12 ply (286 mm): 216 mm needed, they fit, with the 48 mm row spacing of the standard", () => {
+    const r = run(bolted(286, 2));
+    expect(acrossWarnings(r)).toEqual([]);
+    for (const s of r.schedules) {
+      expectClose(s.limits.rowSpacing!, 48, { rel: 1e-9 });
+      expectClose(s.limits.edgeDistance!, 84, { rel: 1e-9 });
+    }
+  });
+  test("rows that do not fit the depth are reported with the reason: 2 rows need 216 mm and 3 rows 264 mm across an 89 mm ply [D]", () => {
+    expect(acrossWarnings(run(bolted(89, 2))).join(" ")).toContain("2 bolts per row need 216 mm");
+    expect(acrossWarnings(run(bolted(89, 3))).join(" ")).toContain("3 bolts per row need 264 mm");
+  });
+});
