@@ -144,7 +144,8 @@ export function designMember(job: JobDocument): DesignResult {
     // that fall inside that length carry it.
     const boost = new Map<string, number>();
     for (let round = 0; round < 4; round++) {
-      const short = terminations.filter((t) => !t.passes && t.cutoff !== null && t.cutoff !== t.at && t.force > 0);
+      // More rows help only where the connectors there are too few, not where their kind is refused (§F13.3).
+      const short = terminations.filter((t) => !t.passes && t.cutoff !== null && t.cutoff !== t.at && t.force > 0 && (t.utilisation ?? Infinity) > 1 + 1e-9);
       if (short.length === 0) break;
       const byJoint = new Map<string, typeof short>();
       for (const t of short) byJoint.set(t.joint, [...(byJoint.get(t.joint) ?? []), t]);

@@ -202,6 +202,12 @@ export interface DiscreteConnectorKind<C extends { kind: string }> extends KindB
    * zero minima and no maximum then.
    */
   detailing(connector: C, context?: ConnectorContext): DetailingLimits;
+  /**
+   * Whether the connector may attach the extension of a partial-length steel cover plate past its
+   * theoretical cut-off (AISC 360-16 §F13.3: slip-critical bolts or fillet welds [M]), with the reason.
+   * Absent where the rule does not concern the kind.
+   */
+  plateEndAttachment?(connector: C): { allowed: boolean; reason: string };
 }
 
 /** A continuous bond line checked by its shear stress. */

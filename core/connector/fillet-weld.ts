@@ -6,6 +6,7 @@ import { MM_PER_IN, N_PER_KIP, MPA_PER_KSI } from "./quantity-text.js";
 import { EN1993_GAMMA_M2 } from "./steel/en1993-bolt.js";
 import {
   aiscFilletStrength,
+  aiscFusionFaceStrength,
   aiscMaximumEdgeFilletIn,
   aiscMinimumFilletIn,
   aiscMinimumSegmentIn,
@@ -109,6 +110,7 @@ function problems(c: FilletWeld, context: ConnectorContext): PlacementProblem[] 
   if (c.standard === "EN1993-1-8" && context.basis === "allowable") out.push({ on: "connector", field: "standard", message: `EN 1993-1-8 gives design values for factored loads, but the job's basis is "allowable": set basis to "factored" or use AISC-360-16` });
   context.members.forEach((m, i) => {
     if (m.material.family !== "steel") out.push({ on: "connector", field: "kind", message: `part "${m.part}" is not steel (family "${m.material.family}"): a fillet weld joins steel parts` });
+    else if (c.standard === "AISC-360-16" && m.material.tensileStrength === undefined) out.push({ on: "material", member: i as 0 | 1, field: "tensileStrength", message: `is needed for the base metal at the weld's fusion face (AISC 360-16 §J2.4, §J4.2: shear rupture 0.60 F_u)` });
     else if (c.standard === "EN1993-1-8" && m.material.tensileStrength === undefined) out.push({ on: "material", member: i as 0 | 1, field: "tensileStrength", message: `is needed for the weld strength (EN 1993-1-8 §4.5.3.3: f_u of the weaker part)` });
     else if (c.standard === "EN1993-1-8" && m.material.yieldStrength === undefined) out.push({ on: "material", member: i as 0 | 1, field: "yieldStrength", message: `is needed for the correlation factor β_w (EN 1993-1-8 Table 4.1: by steel grade)` });
   });
@@ -139,13 +141,24 @@ function resistancePerLength(c: FilletWeld, context: ConnectorContext): WeldResi
     const perLength = (kipPerIn: number) => (kipPerIn * N_PER_KIP) / MM_PER_IN;
     steps.push({ symbol: "F_nw", description: `0.60 F_EXX, ${electrode}`, value: s.Fnw * MPA_PER_KSI, quantity: "stress", reference: "AISC 360-16 Table J2.5" });
     steps.push({ symbol: "R_n", description: "F_nw × throat per unit length (load along the weld axis: no directional increase)", value: perLength(s.nominal), quantity: "shearFlow", reference: "AISC 360-16 eq. J2-3" });
-    steps.push({ symbol: lrfd ? "φR_n" : "R_n/Ω", description: lrfd ? "φ = 0.75" : "Ω = 2.00", value: perLength(s.available), quantity: "shearFlow", reference: "AISC 360-16 §J2.4" });
+    steps.push({ symbol: lrfd ? "φR_n" : "R_n/Ω", description: `weld metal, ${lrfd ? "φ = 0.75" : "Ω = 2.00"}`, value: perLength(s.available), quantity: "shearFlow", reference: "AISC 360-16 §J2.4" });
+    const modes = [{ mode: "weld metal", value: perLength(s.available), reference: "AISC 360-16 §J2.4(b), eq. J2-3" }];
+    const governingText: Record<string, string> = { "weld metal": "weld metal shear on the effective throat" };
+    for (const m of context.members) {
+      const fuKsi = m.material.tensileStrength! / MPA_PER_KSI;
+      const b = aiscFusionFaceStrength({ legIn: w / MM_PER_IN, tensileStrengthKsi: fuKsi, basis: context.basis });
+      const mode = `base metal of "${m.part}" at the fusion face`;
+      steps.push({ symbol: lrfd ? "φR_n,BM" : "R_n,BM/Ω", description: `${mode}: shear rupture 0.60 F_u × w per unit length (F_u = ${formatNumber(fuKsi)} ksi), ${lrfd ? "φ = 0.75" : "Ω = 2.00"}`, value: perLength(b.available), quantity: "shearFlow", reference: "AISC 360-16 §J2.4(a) eq. J2-2, §J4.2(b) [M]" });
+      modes.push({ mode, value: perLength(b.available), reference: "AISC 360-16 §J2.4(a), Table J2.5, §J4.2(b) [M]" });
+      governingText[mode] = `${mode} (shear rupture)`;
+    }
+    const least = modes.reduce((a, b) => (b.value < a.value ? b : a));
     return {
-      value: perLength(s.available),
-      governing: "weld metal shear on the effective throat",
+      value: least.value,
+      governing: governingText[least.mode]!,
       reference: `AISC 360-16 §J2.4, ${lrfd ? "LRFD φR_n" : "ASD R_n/Ω"}`,
       steps,
-      modes: [{ mode: "weld metal", value: perLength(s.available), reference: "AISC 360-16 §J2.4" }],
+      modes,
       warnings: [],
     };
   }
@@ -197,7 +210,11 @@ export const filletWeldKind: WeldKind<FilletWeld> = {
       : "EN 1993-1-8:2005: §4.5.3.3 simplified method for fillet welds, Table 4.1 β_w, §4.5.1–4.5.2 and §4.3.2.2 detailing",
   ],
   assumptions: (c) => [
-    `${describe(c)}: the weld carries the shear flow along its axis (longitudinal loading, no directional increase); each of the joint's fillets per line carries an equal share; the base metal at the fusion faces is covered by the member's own shear check and is not checked separately.`,
+    `${describe(c)}: the weld carries the shear flow along its axis (longitudinal loading, no directional increase); each of the joint's fillets per line carries an equal share; ${
+      c.standard === "AISC-360-16"
+        ? "the base metal at each fusion face is checked in shear rupture, 0.60 F_u on the leg w per unit length (§J2.4(a), Table J2.5, §J4.2(b)), so an electrode stronger than matching cannot pass on the weld metal alone; shear yielding of each part along the weld is its own shear check"
+        : "EN 1993-1-8 §4.5.3.3 takes f_u of the weaker part with matching electrodes (§4.2(2)), so the base metal is within the weld formula and has no separate fusion-face check"
+    }.`,
     ...(c.pattern === "intermittent" && c.arrangement === "staggered"
       ? [
           `${describe(c)}, staggered: the far side's segments are laid out one at each end of the joint and one midway between each two near-side segments, and each side's segments are checked on their own positions, each fillet carrying its equal share of the flow over its tributary length (the layout rule is this program's; a segment at each end on both sides is common practice).`,

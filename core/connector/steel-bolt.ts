@@ -30,6 +30,13 @@ export const SteelBolt = z
     holeType: z.enum(holeTypes).default("standard"),
     /** AISC: a slip-critical joint with a Class A or Class B faying surface (§J3.8). */
     slipCritical: z.enum(["no", "class-A", "class-B"]).default("no"),
+    /**
+     * EN 1993-1-8 §3.4.1: category A (bearing type), B (slip-resistant at serviceability) or C
+     * (slip-resistant at the ultimate limit state); B and C are preloaded 8.8 or 10.9 bolts (§3.1.2(2)).
+     */
+    category: z.enum(["A", "B", "C"]).default("A"),
+    /** EN 1993-1-8 Table 3.7: class of friction surface A, B, C or D (μ 0.5, 0.4, 0.3, 0.2), for categories B and C. */
+    frictionSurface: z.enum(["A", "B", "C", "D"]).optional(),
     /** AISC: fillers between the plies (h_f of §J3.8). */
     fillers: z.number().int("must be a whole number").min(0).max(4).default(0),
     /** AISC: deformation at the bolt hole at service load is a design consideration (§J3.10). */
@@ -55,7 +62,14 @@ export const SteelBolt = z
     if (!aisc) {
       for (const key of ["slipCritical", "fillers", "deformationConsidered", "holeType"] as const) {
         const fallback = { slipCritical: "no", fillers: 0, deformationConsidered: true, holeType: "standard" }[key];
-        if (c[key] !== fallback) ctx.addIssue({ code: "custom", path: [key], message: "applies to AISC 360-16 bolts only; EN 1993-1-8 bolts here are bearing type in normal round holes" });
+        if (c[key] !== fallback) ctx.addIssue({ code: "custom", path: [key], message: "applies to AISC 360-16 bolts only; EN 1993-1-8 bolts here are in normal round holes (a slip-resistant EN bolt takes category and frictionSurface)" });
+      }
+      if (c.category !== "A" && c.frictionSurface === undefined) ctx.addIssue({ code: "custom", path: ["frictionSurface"], message: `is required for a slip-resistant bolt of category ${c.category} (EN 1993-1-8 Table 3.7: class A, B, C or D)` });
+      if (c.category === "A" && c.frictionSurface !== undefined) ctx.addIssue({ code: "custom", path: ["frictionSurface"], message: 'applies to slip-resistant bolts only: set category to "B" or "C"' });
+      if (c.category !== "A" && propertyClasses[c.grade.trim()] && !["8.8", "10.9"].includes(c.grade.trim())) ctx.addIssue({ code: "custom", path: ["grade"], message: `a slip-resistant bolt (category ${c.category}) is preloaded, and only classes 8.8 and 10.9 may be preloaded (EN 1993-1-8 §3.1.2(2))` });
+    } else {
+      for (const key of ["category", "frictionSurface"] as const) {
+        if (c[key] !== (key === "category" ? "A" : undefined)) ctx.addIssue({ code: "custom", path: [key], message: "applies to EN 1993-1-8 bolts only; an AISC 360-16 bolt is made slip-critical by slipCritical" });
       }
     }
     if (aisc && c.slipCritical !== "no" && aiscBoltGroup(c.grade) === "A307") ctx.addIssue({ code: "custom", path: ["slipCritical"], message: "A307 bolts are not pretensioned and cannot be slip-critical" });
@@ -102,17 +116,21 @@ function geometry(c: SteelBolt, r: NonNullable<Resolved>): Geometry {
       "long-slot-transverse": standardHole,
       "long-slot-parallel": 2.5 * dIn,
     };
-    const minEdge = r.bolt.minEdgeIn * MM_PER_IN;
+    // The load runs along the line: the member's end is crossed by a slot along the load, its sides by a slot across it.
+    const c2 = edgeIncrementIn(dIn, c.holeType);
+    const minEnd = (r.bolt.minEdgeIn + c2.end) * MM_PER_IN;
+    const minEdge = (r.bolt.minEdgeIn + c2.edge) * MM_PER_IN;
+    const increments = c2.end > 0 || c2.edge > 0 ? ` plus C₂ of Table J3.5 [M] for ${c.holeType} holes (${formatNumber(c2.end)} in at the ends, ${formatNumber(c2.edge)} in at the edges)` : "";
     return {
       hole: along[c.holeType] * MM_PER_IN,
-      endDistance: c.endDistance ?? minEdge,
+      endDistance: c.endDistance ?? minEnd,
       edgeDistance: c.edgeDistance ?? minEdge,
       spacing: c.minSpacing ?? 3 * r.d,
       rowSpacing: 3 * r.d,
       minSpacing: (8 / 3) * r.d,
       minEdge,
-      minEnd: minEdge,
-      source: `AISC 360-16 §J3.3: spacing at least 2-2/3 d (${c.minSpacing === undefined ? "3d preferred, used" : "as given"}); Table J3.4 minimum edge distance ${formatNumber(r.bolt.minEdgeIn)} in${c.endDistance === undefined ? " used at the ends" : ""}`,
+      minEnd,
+      source: `AISC 360-16 §J3.3: spacing at least 2-2/3 d (${c.minSpacing === undefined ? "3d preferred, used" : "as given"}); Table J3.4 minimum edge distance ${formatNumber(r.bolt.minEdgeIn)} in${increments}${c.endDistance === undefined ? "; the least end distance is used at the ends" : ""}`,
     };
   }
   const d0 = r.bolt.d0;
@@ -127,6 +145,32 @@ function geometry(c: SteelBolt, r: NonNullable<Resolved>): Geometry {
     minEnd: 1.2 * d0,
     source: `EN 1993-1-8 Table 3.3: e₁, e₂ ≥ 1.2d₀, p₁ ≥ 2.2d₀, p₂ ≥ 2.4d₀ (d₀ = ${d0} mm, normal round hole)${c.endDistance === undefined ? "; the minima are used in the bearing resistance" : ""}`,
   };
+}
+
+/**
+ * Edge distance increment C₂, in, of AISC 360-16 Table J3.5 [M] (called from §J3.4) at the member's
+ * ends (across the load) and at the sides (along it): oversized holes 1/16 in up to 7/8 in bolts, 1/8 in
+ * from 1 in; short slots with the long axis perpendicular to the edge 1/8 in up to 1 in, 3/16 in from
+ * 1-1/8 in; long slots perpendicular to the edge 3/4 d; slots parallel to the edge 0. Slots at their
+ * largest length (Table J3.3), so note [a]'s reduction is not taken.
+ */
+export function edgeIncrementIn(dIn: number, hole: (typeof holeTypes)[number]): { end: number; edge: number } {
+  const oversized = dIn <= 0.875 + 1e-9 ? 1 / 16 : 1 / 8;
+  const shortSlot = dIn <= 1 + 1e-9 ? 1 / 8 : 3 / 16;
+  switch (hole) {
+    case "standard":
+      return { end: 0, edge: 0 };
+    case "oversized":
+      return { end: oversized, edge: oversized };
+    case "short-slot-parallel":
+      return { end: shortSlot, edge: 0 };
+    case "short-slot-transverse":
+      return { end: 0, edge: shortSlot };
+    case "long-slot-parallel":
+      return { end: 0.75 * dIn, edge: 0 };
+    case "long-slot-transverse":
+      return { end: 0, edge: 0.75 * dIn };
+  }
 }
 
 const isSteel = (m: JoinedMember) => m.material.family === "steel";
@@ -189,8 +233,10 @@ function resistance(c: SteelBolt, context: ConnectorContext): ConnectorResistanc
     steps.push({ symbol: "A_b", description: "nominal bolt area πd²/4", value: out.areaIn2 * MM_PER_IN ** 2, quantity: "area" });
     steps.push({ symbol: "F_nv", description: `nominal shear stress, Group ${group === "A307" ? "A307" : group}, threads ${c.threads === "included" ? "included (N)" : "excluded (X)"}`, value: out.Fnv * MPA_PER_KSI, quantity: "stress", reference: "AISC 360-16 Table J3.2" });
     steps.push({ symbol: "d_h", description: `hole dimension along the load (${c.holeType})`, value: g.hole, quantity: "length", reference: "AISC 360-16 Table J3.3" });
-    steps.push({ symbol: "L_e", description: "end distance of the end bolt", value: g.endDistance, quantity: "length" });
+    steps.push({ symbol: "L_e", description: `end distance of the end bolt${c.endDistance === undefined ? " (the least allowed)" : ""}`, value: g.endDistance, quantity: "length", reference: c.holeType !== "standard" ? "AISC 360-16 Tables J3.4, J3.5" : "AISC 360-16 Table J3.4" });
+    steps.push({ symbol: "l_c,end", description: "clear end distance L_e − d_h/2, d_h along the load", value: g.endDistance - g.hole / 2, quantity: "length", reference: "AISC 360-16 §J3.10" });
     steps.push({ symbol: "s", description: "spacing along the line used for tear-out between bolts (the least allowed)", value: g.spacing, quantity: "length" });
+    steps.push({ symbol: "l_c,s", description: "clear spacing s − d_h between holes along the load", value: g.spacing - g.hole, quantity: "length", reference: "AISC 360-16 §J3.10" });
     for (const s of out.limitStates) {
       steps.push({ symbol: `R_n`, description: `${s.name}: ${s.equation}`, value: s.nominal * N_PER_KIP, quantity: "connectorForce", reference: "AISC 360-16 §J3" });
       steps.push({ symbol: lrfd ? "φR_n" : "R_n/Ω", description: `${s.name}, ${lrfd ? `φ = ${s.phi}` : `Ω = ${s.omega}`}`, value: s.available * N_PER_KIP, quantity: "connectorForce" });
@@ -222,6 +268,7 @@ function resistance(c: SteelBolt, context: ConnectorContext): ConnectorResistanc
     p1: g.spacing,
     e2: g.edgeDistance,
     p2: context.rows > 1 ? g.rowSpacing : null,
+    slip: c.category === "A" ? null : { category: c.category, surface: c.frictionSurface!, ks: 1.0 },
   });
   steps.push({ symbol: "A_s", description: "tensile stress area", value: r.bolt.As, quantity: "area" });
   steps.push({ symbol: "f_ub", description: `ultimate tensile strength, property class ${c.grade.trim()}`, value: grade.fub, quantity: "stress", reference: "EN 1993-1-8 Table 3.1" });
@@ -231,16 +278,16 @@ function resistance(c: SteelBolt, context: ConnectorContext): ConnectorResistanc
   steps.push({ symbol: "e₂", description: "edge distance", value: g.edgeDistance, quantity: "length" });
   steps.push({ symbol: "γ_M2", description: "partial factor for bolts (recommended value)", value: EN1993_GAMMA_M2, quantity: "ratio", reference: "EN 1993-1-8 §2.2, Table 2.1" });
   for (const s of out.resistances) {
-    steps.push({ symbol: s.name === "bolt shear" ? "F_v,Rd" : "F_b,Rd", description: `${s.name}: ${s.equation}; ${Object.entries(s.factors).map(([k, v]) => `${k} = ${formatNumber(v)}`).join(", ")}`, value: s.value, quantity: "connectorForce", reference: "EN 1993-1-8 Table 3.4" });
+    steps.push({ symbol: s.symbol, description: `${s.name}: ${s.equation}; ${Object.entries(s.factors).map(([k, v]) => `${k} = ${formatNumber(v)}`).join(", ")}`, value: s.value, quantity: "connectorForce", reference: s.reference });
   }
   const value = out.governing.value * perLine;
   if (n === 2) steps.push({ symbol: "F_Rd/2", description: "per contact line: the bolt in double shear serves the two contact lines of the joint", value, quantity: "connectorForce" });
   return {
     value,
     governing: out.governing.name,
-    reference: "EN 1993-1-8 Table 3.4 (category A, bearing type)",
+    reference: c.category === "A" ? "EN 1993-1-8 Table 3.4 (category A, bearing type)" : `EN 1993-1-8 Table 3.2 category ${c.category}: §3.9.1 slip, Table 3.4 shear and bearing`,
     steps,
-    modes: out.resistances.map((s) => ({ mode: s.name, value: s.value * perLine, reference: "EN 1993-1-8 Table 3.4" })),
+    modes: out.resistances.map((s) => ({ mode: s.name, value: s.value * perLine, reference: s.reference })),
     slip: null,
     warnings: steelWarnings(c, context, g),
   };
@@ -248,6 +295,7 @@ function resistance(c: SteelBolt, context: ConnectorContext): ConnectorResistanc
 
 function steelWarnings(c: SteelBolt, context: ConnectorContext, g: Geometry): string[] {
   const out: string[] = [];
+  if (c.standard === "EN1993-1-8" && c.category === "B") out.push(`${describe(c)}: category B is slip-resistant at serviceability; its slip resistance F_s,Rd,ser (γ_M3,ser) is checked here against the factored flow, which is not less than the serviceability flow when every load factor is at least 1 (on the safe side).`);
   if (c.endDistance === undefined) out.push(`${describe(c)}: the end bolts' resistance uses the least end distance ${inJobUnits(g.endDistance, "length", context.units)}; give endDistance if the plates run further past the last bolt.`);
   return out;
 }
@@ -311,8 +359,9 @@ function lineProblems(c: SteelBolt, context: ConnectorContext): PlacementProblem
   }
   const g = geometry(c, r);
   if (c.minSpacing !== undefined && c.minSpacing < g.minSpacing - 1e-9) out.push({ on: "connector", field: "minSpacing", message: `${len(c.minSpacing)} is below the least spacing ${len(g.minSpacing)} (${c.standard === "AISC-360-16" ? "AISC 360-16 §J3.3, 2-2/3 d" : "EN 1993-1-8 Table 3.3, 2.2d₀"})` });
-  if (c.endDistance !== undefined && c.endDistance < g.minEnd - 1e-9) out.push({ on: "connector", field: "endDistance", message: `${len(c.endDistance)} is below the least end distance ${len(g.minEnd)} (${c.standard === "AISC-360-16" ? "AISC 360-16 Table J3.4" : "EN 1993-1-8 Table 3.3"})` });
-  if (c.edgeDistance !== undefined && c.edgeDistance < g.minEdge - 1e-9) out.push({ on: "connector", field: "edgeDistance", message: `${len(c.edgeDistance)} is below the least edge distance ${len(g.minEdge)} (${c.standard === "AISC-360-16" ? "AISC 360-16 Table J3.4" : "EN 1993-1-8 Table 3.3"})` });
+  const aiscEdge = c.standard === "AISC-360-16" ? `AISC 360-16 Table J3.4${c.holeType !== "standard" ? ` with C₂ of Table J3.5 for ${c.holeType} holes` : ""}` : "EN 1993-1-8 Table 3.3";
+  if (c.endDistance !== undefined && c.endDistance < g.minEnd - 1e-9) out.push({ on: "connector", field: "endDistance", message: `${len(c.endDistance)} is below the least end distance ${len(g.minEnd)} (${aiscEdge})` });
+  if (c.edgeDistance !== undefined && c.edgeDistance < g.minEdge - 1e-9) out.push({ on: "connector", field: "edgeDistance", message: `${len(c.edgeDistance)} is below the least edge distance ${len(g.minEdge)} (${aiscEdge})` });
   for (const m of crossed(c, context)) {
     if (g.hole >= m.width - 1e-9) {
       out.push({ on: "connector", field: c.size !== undefined ? "size" : "diameter", message: `a ${len(r.d)} bolt in a ${len(g.hole)} hole is larger than part "${m.part}" (${len(m.width)} wide across the contact line)` });
@@ -338,7 +387,7 @@ function describe(c: SteelBolt): string {
     const named = g === "A307" ? "A307" : `Group ${g}${/^(group[- ]?)?[ab]$/i.test(c.grade.trim()) ? "" : ` (${c.grade.trim()})`}`;
     return `${r.bolt.name} in ${named} bolt, threads ${c.threads === "included" ? "included" : "excluded"}${c.slipCritical !== "no" ? `, slip-critical ${c.slipCritical}` : ""}, ${aisc ? "AISC 360-16" : c.standard}${c.shear === "double" ? ", double shear" : ""}`;
   }
-  return `${r.bolt.name} ${c.grade.trim()} bolt, shear plane through the ${c.threads === "included" ? "thread" : "shank"}, EN 1993-1-8${c.shear === "double" ? ", double shear" : ""}`;
+  return `${r.bolt.name} ${c.grade.trim()} bolt, shear plane through the ${c.threads === "included" ? "thread" : "shank"}${c.category !== "A" ? `, preloaded, slip-resistant category ${c.category}, friction surface class ${c.frictionSurface}` : ""}, EN 1993-1-8${c.shear === "double" ? ", double shear" : ""}`;
 }
 
 /** Structural bolts joining steel plates: AISC 360-16 §J3 or EN 1993-1-8 Table 3.4. */
@@ -356,7 +405,7 @@ export const steelBoltKind: DiscreteConnectorKind<SteelBolt> = {
   standards: (c) => [
     c.standard === "AISC-360-16"
       ? "ANSI/AISC 360-16 Specification for Structural Steel Buildings: §J3 bolts (Table J3.2 shear, §J3.10 bearing and tear-out, §J3.8 slip-critical, §J3.3–J3.5 spacing and edge distances)"
-      : "EN 1993-1-8:2005 Eurocode 3 Design of joints: Table 3.4 shear and bearing resistance of bolts, Table 3.3 spacing and distances, γ_M2 = 1.25 (recommended value)",
+      : `EN 1993-1-8:2005 Eurocode 3 Design of joints: Table 3.4 shear and bearing resistance of bolts, Table 3.3 spacing and distances, γ_M2 = 1.25 (recommended value)${c.category !== "A" ? `; §3.9.1 slip resistance of preloaded bolts, category ${c.category} (Table 3.2), μ by Table 3.7, ${c.category === "C" ? "γ_M3 = 1.25" : "γ_M3,ser = 1.1"} (recommended value)` : ""}`,
   ],
   assumptions: (c) => [
     `${describe(c)}: every bolt of the line is checked as the weaker of an end bolt and an inner bolt at the least spacing, so the end distance and spacing used in bearing are on the safe side; the plates' own net-section and block shear are not checked.`,
@@ -365,4 +414,13 @@ export const steelBoltKind: DiscreteConnectorKind<SteelBolt> = {
   problems,
   resistance,
   detailing,
+  plateEndAttachment: (c) => {
+    const slipResistant = c.standard === "AISC-360-16" ? c.slipCritical !== "no" : c.category !== "A";
+    return slipResistant
+      ? { allowed: true, reason: `${describe(c)} is slip-resistant` }
+      : {
+          allowed: false,
+          reason: `AISC 360-16 §F13.3 [M]: the extension of a partial-length cover plate past its cut-off must be attached by slip-critical bolts or fillet welds; ${describe(c)} is a bearing-type bolt (${c.standard === "AISC-360-16" ? 'set slipCritical to "class-A" or "class-B"' : 'set category to "B" or "C" with a frictionSurface (EN 1993-1-8 §3.9; the rule is applied to EN 1993 bolts by the same reading)'}).`,
+        };
+  },
 };

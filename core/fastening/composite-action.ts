@@ -1,5 +1,5 @@
 import type { BeamAnalysis } from "../beam/analyse-beam.js";
-import { effectiveLength, type EffectiveLength } from "../composite/effective-length.js";
+import { effectiveLength, spanKindOf, type EffectiveLength } from "../composite/effective-length.js";
 import { gammaMethod, type GammaMethodResult } from "../composite/gamma-method.js";
 import type { FlangeName, JointSet, JointSpacing } from "../composite/jointed-section.js";
 import type { LayeredSection } from "../composite/layers-from-section.js";
@@ -50,11 +50,9 @@ export function flangeJointsOf(layered: Extract<LayeredSection, { covered: true 
 
 /** The effective length l of Annex B from how the member is supported: the longest span region decides. */
 export function effectiveLengthOf(beam: BeamAnalysis): EffectiveLength {
-  const spans = beam.regions.filter((r) => r.kind === "span");
-  const overhangs = beam.regions.filter((r) => r.kind === "overhang");
-  if (spans.length === 0) return effectiveLength(Math.max(...overhangs.map((r) => r.x1 - r.x0)), "cantilever");
-  const longest = Math.max(...spans.map((r) => r.x1 - r.x0));
-  return spans.length === 1 && overhangs.length === 0 ? effectiveLength(longest, "simple") : effectiveLength(longest, "continuous");
+  const lengths = (kind: "span" | "overhang") => beam.regions.filter((r) => r.kind === kind).map((r) => r.x1 - r.x0);
+  const { kind, length } = spanKindOf(lengths("span"), lengths("overhang"), beam.ends);
+  return effectiveLength(length, kind);
 }
 
 /** The spacing that enters γ: constant, or s_min and s_max of a schedule that varies (s_ef rule). */

@@ -8,6 +8,7 @@ import type { JobDocument } from "../schema/job.js";
 import type { BondLineResult, DesignResult, MemberCheck, Schedule, WeldResult } from "../schema/result.js";
 import type { JointPlane } from "../section/joints.js";
 import type { SectionModel } from "../section/section-model.js";
+import { inJobUnits } from "../units/format.js";
 import { compositeAnalysis, flangeJointsOf, jointSpacingOf, largestSpacingForEffectiveRule, type CompositeAnalysis, type FlangeJoint } from "./composite-action.js";
 import type { JointInput } from "./discrete-schedule.js";
 
@@ -176,7 +177,7 @@ export function compositeDesign(p: {
   };
   const assumptions = [
     model === "slip-aware"
-      ? `Composite action with slip (γ-method): K_u for connector forces and stresses, K_ser for deflection; ${analysis.effectiveLength.rule}; a varying spacing enters γ as s_ef = 0.75·s_min + 0.25·s_max with s_max ≤ 4·s_min (Annex B [M]). ${converged ? `s_ef settled within 5 % after ${iterations} design round(s), on a round whose s_ef did not shrink (so its real flow is no larger than the flow it was designed for).` : keptRound ? `s_ef had not settled within 5 % after ${MAX_ITERATIONS} rounds; round ${keptRound}, the last whose s_ef did not shrink (so it is on the safe side), is shown.` : `s_ef had not settled and no round was on the safe side; the rigid design is shown.`}`
+      ? `Composite action with slip (γ-method): K_u for connector forces and stresses, K_ser for deflection; ${analysis.effectiveLength.rule}, l = ${inJobUnits(analysis.effectiveLength.effectiveLength, "span", p.job.units)} used in γ; a varying spacing enters γ as s_ef = 0.75·s_min + 0.25·s_max with s_max ≤ 4·s_min (Annex B [M]). ${converged ? `s_ef settled within 5 % after ${iterations} design round(s), on a round whose s_ef did not shrink (so its real flow is no larger than the flow it was designed for).` : keptRound ? `s_ef had not settled within 5 % after ${MAX_ITERATIONS} rounds; round ${keptRound}, the last whose s_ef did not shrink (so it is on the safe side), is shown.` : `s_ef had not settled and no round was on the safe side; the rigid design is shown.`}`
       : "Composite action taken as rigid (q = V·Q/I); the slip-aware figures (γ-method, EN 1995-1-1 Annex B) are shown beside for comparison only.",
     ...(allGlued ? ["Every flange joint is glued: a glue line does not slip (γ = 1), so the slip-aware model gives the rigid section's stiffness and shear flow."] : []),
   ];

@@ -2,6 +2,7 @@ import type { BeamAnalysis, SectionStretch } from "../beam/analyse-beam.js";
 import { momentAt } from "../beam/member-actions.js";
 import type { JobDocument } from "../schema/job.js";
 import type { DesignResult, Schedule, WeldResult } from "../schema/result.js";
+import { kindOf } from "../connector/registry.js";
 import { inJobUnits } from "../units/format.js";
 import type { MemberJoint } from "./member-joints.js";
 
@@ -100,7 +101,10 @@ export function partTerminations(p: {
       let connectors = "";
       let required: number | null = null;
       let developedAt = forceAt;
+      let attachment: { allowed: boolean; reason: string } | undefined;
       if (schedule && rowResistance !== null) {
+        const kind = kindOf(joint.connector);
+        attachment = kind.mechanism === "discrete" ? kind.plateEndAttachment?.(joint.connector) : undefined;
         const rows = schedule.positions.filter((x) => (x - at) * inward >= -1e-9 && (forceAt - x) * inward >= -1e-9).length;
         provided = rows * rowResistance;
         connectors = `${rows} row(s) × ${schedule.rows * schedule.lineCount} × ${inJobUnits(rowResistance / (schedule.rows * schedule.lineCount), "connectorForce", p.job.units)} between the end and the cut-off`;
@@ -116,6 +120,7 @@ export function partTerminations(p: {
       const lengthOk = required === null || cutoff === null || available >= required - 1e-9;
       const utilisation = demand > 0 ? (provided > 0 ? demand / provided : null) : 0;
       const overstressedEnd = cutoff !== null && cutoff === at && capacity !== null;
+      const attachmentRefused = needed && attachment !== undefined && !attachment.allowed;
       out.push({
         joint: joint.joint.id,
         part,
@@ -128,9 +133,11 @@ export function partTerminations(p: {
         capacity: provided,
         connectors: connectors || "no connectors of a kind that can develop a force",
         utilisation,
-        passes: utilisation !== null && utilisation <= 1 + 1e-9 && lengthOk && !overstressedEnd,
-        reference: weld ? "AISC 360-16 §F13.3, eq. (F13-6): a′ = 2w without a weld across the plate's end [M]" : "AISC 360-16 §F13.3: connectors between the theoretical cut-off and the plate's end develop the plate's force [M]",
-        note: [note, !lengthOk ? `The part runs ${span(available)} past the cut-off; a′ = ${inJobUnits(required!, "length", p.job.units)} is needed.` : ""].filter(Boolean).join(" "),
+        passes: utilisation !== null && utilisation <= 1 + 1e-9 && lengthOk && !overstressedEnd && !attachmentRefused,
+        reference: weld
+          ? "AISC 360-16 §F13.3, eq. (F13-6): a′ = 2w without a weld across the plate's end [M]"
+          : `AISC 360-16 §F13.3: connectors between the theoretical cut-off and the plate's end develop the plate's force${attachment ? "; the extension is attached by slip-critical bolts or welds" : ""} [M]`,
+        note: [note, !lengthOk ? `The part runs ${span(available)} past the cut-off; a′ = ${inJobUnits(required!, "length", p.job.units)} is needed.` : "", attachmentRefused ? attachment!.reason : ""].filter(Boolean).join(" "),
       });
     }
   }

@@ -26,8 +26,17 @@ export function aiscFilletStrength(p: { throatIn: number; electrode: Electrode; 
   return { nominal, available: p.basis === "factored" ? phi * nominal : nominal / omega, Fnw, phi, omega };
 }
 
-/** Directional strength increase (1.0 + 0.50 sin^1.5 θ) for a linear weld group loaded in plane, θ from the weld axis (AISC 360-16 eq. J2-5). */
-export const aiscDirectionalFactor = (thetaDeg: number) => 1 + 0.5 * Math.sin((thetaDeg * Math.PI) / 180) ** 1.5;
+/**
+ * Base metal at one fusion face of an equal-leg fillet, per unit length: shear rupture on A_BM = w per
+ * unit length, R_n = 0.60 F_u w (AISC 360-16 §J2.4(a) eq. J2-2, Table J2.5 "base metal governed by
+ * J4", §J4.2(b) eq. J4-4), φ = 0.75, Ω = 2.00 [M]. §J2.4 names the base metal's limit states as tensile
+ * and shear rupture; shear yielding of the part along the weld is its own shear check.
+ */
+export function aiscFusionFaceStrength(p: { legIn: number; tensileStrengthKsi: number; basis: "allowable" | "factored" }): { nominal: number; available: number; phi: number; omega: number } {
+  const nominal = 0.6 * p.tensileStrengthKsi * p.legIn;
+  const [phi, omega] = [0.75, 2.0];
+  return { nominal, available: p.basis === "factored" ? phi * nominal : nominal / omega, phi, omega };
+}
 
 /** Least fillet size by the thinner part joined, in (AISC 360-16 Table J2.4). */
 export function aiscMinimumFilletIn(thinnerIn: number): number {

@@ -1,6 +1,6 @@
 import { describe, expect, test } from "vitest";
 import { FilletWeld, filletWeldKind } from "../../../core/connector/fillet-weld.js";
-import { aiscDirectionalFactor, aiscMaximumEdgeFilletIn, aiscMinimumFilletIn, aiscMinimumSegmentIn } from "../../../core/connector/steel/fillet-weld-strength.js";
+import { aiscMaximumEdgeFilletIn, aiscMinimumFilletIn, aiscMinimumSegmentIn } from "../../../core/connector/steel/fillet-weld-strength.js";
 import { expectClose } from "../../expect-close.js";
 import { context, IN, KIP, member, steel } from "./contexts.js";
 
@@ -30,9 +30,9 @@ describe("AISC 360-16 §J2.4, E70 fillet per inch of weld (REFERENCES §7.2)", (
     expectClose(perInch(3 / 8, "factored"), 8.3527, { rel: 1e-4 });
     expectClose(perInch(1 / 2, "factored"), 11.137, { rel: 1e-4 });
   });
-  test("directional increase 1 + 0.5 sin^1.5 θ: 1.2973 at 45° [D], 1.5 across the weld giving 6.2646 kip/in for a 3/16 in fillet [D]", () => {
-    expectClose(aiscDirectionalFactor(45), 1.2973, { rel: 1e-4 });
-    expectClose(aiscDirectionalFactor(90) * perInch(3 / 16, "factored"), 6.2646, { rel: 1e-4 });
+  test("the shear flow runs along the weld (θ = 0): no directional increase 1 + 0.5 sin^1.5 θ (eq. J2-5), so a 3/16 in fillet stays at 4.1764 kip/in, not 1.5 × that = 6.2646 [D]", () => {
+    expectClose(perInch(3 / 16, "factored"), 4.1764, { rel: 1e-4 });
+    expect(filletWeldKind.resistancePerLength(aisc(3 / 16), tee("factored")).steps.find((s) => s.symbol === "R_n")!.description).toContain("no directional increase");
   });
 });
 

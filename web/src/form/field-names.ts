@@ -52,6 +52,8 @@ const names: Record<string, FieldName> = {
   holeType: { label: "Holes", values: { standard: "standard", oversized: "oversized", "short-slot-transverse": "short slot, across", "short-slot-parallel": "short slot, along", "long-slot-transverse": "long slot, across", "long-slot-parallel": "long slot, along" } },
   slipCritical: { label: "Slip-critical", values: { no: "no (bearing)", "class-A": "class A surface", "class-B": "class B surface" } },
   fillers: { label: "Fillers between plies" },
+  category: { label: "Category (EN 1993-1-8 §3.4.1)", values: { A: "A, bearing type", B: "B, slip-resistant at serviceability", C: "C, slip-resistant at ultimate" } },
+  frictionSurface: { label: "Class of friction surface", values: { A: "class A (μ 0.5)", B: "class B (μ 0.4)", C: "class C (μ 0.3)", D: "class D (μ 0.2)" } },
   deformationConsidered: { label: "Hole deformation at service load is a design consideration" },
   weathering: { label: "Unpainted weathering steel" },
   endDistance: { label: "End distance" },
@@ -119,6 +121,8 @@ export function connectorFieldApplies(kind: string, key: string, connector: Reco
     if (standard === "EN1995-1-1" && ndsOnly.includes(key)) return false;
   }
   if (kind === "steel-bolt" && standard === "EN1993-1-8" && ["holeType", "slipCritical", "fillers", "deformationConsidered"].includes(key)) return false;
+  if (kind === "steel-bolt" && standard !== "EN1993-1-8" && ["category", "frictionSurface"].includes(key)) return false;
+  if (kind === "steel-bolt" && key === "frictionSurface" && (connector.category ?? "A") === "A") return false;
   if (kind === "fillet-weld") {
     if (key === "electrode" && standard === "EN1993-1-8") return false;
     if (["segmentLength", "pitch", "arrangement"].includes(key) && connector.pattern !== "intermittent") return false;
@@ -128,7 +132,7 @@ export function connectorFieldApplies(kind: string, key: string, connector: Reco
 }
 
 /** Fields whose change decides which others apply: the card is drawn again after it. */
-export const controllingFields = ["standard", "pattern", "resistanceBasis"];
+export const controllingFields = ["standard", "pattern", "resistanceBasis", "category"];
 
 /** Fields a person rarely changes: kept in a fold under the main ones. */
 export const seldomFields = new Set([

@@ -1,0 +1,150 @@
+import { describe, expect, test } from "vitest";
+import { prepareJob } from "../../../core/check-job.js";
+import { designMember } from "../../../core/design-member.js";
+import type { JobInput } from "../../../core/schema/job.js";
+import { expectClose } from "../../expect-close.js";
+
+// Side loads passed across side-by-side plies, as whole members through designMember. Hand calculations [D]
+// on three and four 2x12 plies (38 × 286 mm, REFERENCES §10 [V]) of one E, so each ply carries 1/n of the
+// load (shares by E·I [D]); a load on the left face crosses interface k with (n − k)/n of it. The connector
+// resistance R⊥ = 600 N per nail is a rated value chosen as a round number; 2 nails per row: s = 2·600/|T|.
+function plies(n: number, loads: JobInput["beam"]["loads"], connector: Record<string, unknown> = {}, rows = 2): JobInput {
+  return {
+    format: "stitchplan-job",
+    version: 1,
+    units: "si",
+    basis: "allowable",
+    project: { name: "Side loads across plies" },
+    member: { mark: "H-2" },
+    materials: [{ id: "T", name: "timber", E: 11_000, density: 0 }],
+    parts: Array.from({ length: n }, (_, i) => ({ id: `p${i + 1}`, material: "T", shape: { type: "rectangle" as const, b: 38, h: 286 }, ...(i === 0 ? { x: 0, y: 0 } : { place: { on: `p${i}`, side: "right" as const } }) })),
+    connectors: [{ id: "N", kind: "rated", label: "nail rated 600 N", resistance: 600, minSpacing: 50, maxSpacing: 600, endDistance: 50, ...connector } as JobInput["connectors"][number]],
+    fastening: { default: { connector: "N", rows } },
+    beam: { spans: [4], loads, selfWeight: false },
+    spacing: { module: 25, minZoneLength: 250, maxZonesPerSpan: 5, symmetric: false },
+  };
+}
+
+const run = (job: JobInput) => {
+  const p = prepareJob(job);
+  if (!p.ok) throw new Error(JSON.stringify(p.issues));
+  return designMember(p.core);
+};
+
+/** The schedules at interfaces 1, 2, … of the plies, with the required spacing at a station. */
+function interfaces(result: ReturnType<typeof designMember>) {
+  return result.multiPly!.interfaces.map((i) => {
+    const s = result.schedules.find((x) => x.joint === i.joint)!;
+    const at = (x: number) => s.requiredSpacing[result.beam.stations.findIndex((y) => Math.abs(y - x) < 1e-6)] ?? null;
+    return { s, at, flow: (x: number) => s.shearFlow[result.beam.stations.findIndex((y) => Math.abs(y - x) < 1e-6)]! };
+  });
+}
+
+describe("uniform side loads across plies (moved from the stand-alone side-load module onto whole members)", () => {
+  test("3 plies, 6 N/mm on the left face, 2 nails of 600 N per row: T = 4 and 2 N/mm, s = 2·600/4 = 300 mm and 2·600/2 = 600 mm [D]", () => {
+    const result = run(plies(3, [{ type: "uniform", w: 6, face: "left" }]));
+    const [i1, i2] = interfaces(result);
+    expectClose(Math.max(...i1!.s.shearFlow), 4, { rel: 1e-9 });
+    expectClose(Math.max(...i2!.s.shearFlow), 2, { rel: 1e-9 });
+    expectClose(i1!.s.requiredSpacing.find((v) => v !== null)!, 300, { rel: 1e-9 });
+    expectClose(i2!.s.requiredSpacing.find((v) => v !== null)!, 600, { rel: 1e-9 });
+    expect(Math.max(...i1!.s.zones.map((z) => z.spacing))).toBeLessThanOrEqual(300);
+    expect(Math.max(...i2!.s.zones.map((z) => z.spacing))).toBeLessThanOrEqual(600);
+    expect(result.status.passes).toBe(true);
+  });
+
+  test("4 plies, 8 N/mm on the left face over the member and 8 N/mm on the right face over 2–4 m: T = 6, 4, 2 N/mm then 4, 0, −4 N/mm; s = 200, 300, 600 mm then 300, none, 300 mm [D]", () => {
+    const result = run(plies(4, [{ type: "uniform", w: 8, face: "left" }, { type: "uniform", w: 8, face: "right", from: 2, to: 4 }]));
+    const stations = result.beam.stations;
+    const [i1, i2, i3] = interfaces(result);
+    const x1 = stations.find((x) => x > 200 && x < 1800)!;
+    const x2 = stations.find((x) => x > 2200 && x < 3800)!;
+    expect([i1!.flow(x1), i2!.flow(x1), i3!.flow(x1)].map((v) => Number(v.toFixed(9)))).toEqual([6, 4, 2]);
+    expect([i1!.flow(x2), i2!.flow(x2), i3!.flow(x2)].map((v) => Number(Math.abs(v).toFixed(9)))).toEqual([4, 0, 4]);
+    expectClose(i1!.at(x1)!, 200, { rel: 1e-9 });
+    expectClose(i2!.at(x1)!, 300, { rel: 1e-9 });
+    expectClose(i3!.at(x1)!, 600, { rel: 1e-9 });
+    expectClose(i1!.at(x2)!, 300, { rel: 1e-9 });
+    expect(i2!.at(x2)).toBeNull();
+    expectClose(i3!.at(x2)!, 300, { rel: 1e-9 });
+    for (const { s } of [i1!, i2!, i3!]) expect(s.verification.maxUtilisation).toBeLessThanOrEqual(1 + 1e-9);
+  });
+
+  test("a side load the smallest spacing cannot pass is reported with where it is: 60 N/mm on the left face needs 2·600/40 = 30 mm < 50 mm", () => {
+    const result = run(plies(3, [{ type: "uniform", w: 60, face: "left" }]));
+    const [i1] = interfaces(result);
+    expect(i1!.s.passes).toBe(false);
+    expect(i1!.s.infeasible).not.toBeNull();
+    expectClose(i1!.s.infeasible!.smallestRequired, 30, { rel: 1e-9 });
+    expect(i1!.s.infeasible!.where.length).toBeGreaterThan(0);
+    expect(result.status.passes).toBe(false);
+  });
+});
+
+describe("a concentrated load hung on a face of the plies (moved from the stand-alone side-load module)", () => {
+  // P = 10 kN on the left face of 3 plies at midspan: T₁ = 2/3 P = 6667 N, T₂ = 1/3 P = 3333 N, passed within
+  // d/2 = 143 mm each side of the load [CP], i.e. 6667/286 = 23.31 N/mm over 286 mm [D].
+  const hung = () => run(plies(3, [{ type: "point", P: 10, at: 2, face: "left" }], { minSpacing: 40 }));
+  test("the flow at interface 1 is 2/3 P spread over the depth, 6667/286 = 23.31 N/mm, and 3333/286 = 11.66 N/mm at interface 2 [D]", () => {
+    const result = hung();
+    const [i1, i2] = interfaces(result);
+    expectClose(Math.max(...i1!.s.shearFlow), 20_000 / 3 / 286, { rel: 1e-9 });
+    expectClose(Math.max(...i2!.s.shearFlow), 10_000 / 3 / 286, { rel: 1e-9 });
+    expect(result.status.passes).toBe(true);
+  });
+  test("the rows whose tributary lengths reach into d/2 each side of the load carry at least T₁ = 6667 N, and T₂ = 3333 N [D]", () => {
+    const result = hung();
+    for (const [k, T] of [[0, 20_000 / 3], [1, 10_000 / 3]] as const) {
+      const s = interfaces(result)[k]!.s;
+      const reach = s.positions.filter((x, i) => {
+        const lo = i === 0 ? 0 : (x + s.positions[i - 1]!) / 2;
+        const hi = i === s.positions.length - 1 ? 4000 : (x + s.positions[i + 1]!) / 2;
+        return hi > 2000 - 143 && lo < 2000 + 143;
+      }).length;
+      expect(reach * 2 * 600).toBeGreaterThanOrEqual(T - 1e-6);
+    }
+  });
+  // Open finding for the plies' owner: the stand-alone module asked for ⌈6667/600⌉ = 12 nails strictly within d/2
+  // each side of the load (the [CP] rule the result's assumptions state); the product spreads the load uniformly
+  // over that band and credits rows just outside it by their tributary length, so at s = 50 mm only 5 rows
+  // (10 nails, 6000 N) stand inside the band. Recorded as failing until the band is counted that way.
+  test.fails("[open finding] the rows strictly within d/2 each side of the load carry T₁ = 6667 N: 12 nails of 600 N [D, rule CP]", () => {
+    const s = interfaces(hung())[0]!.s;
+    const within = s.positions.filter((x) => Math.abs(x - 2000) <= 143 + 1e-9).length;
+    expect(within * 2 * 600).toBeGreaterThanOrEqual(20_000 / 3 - 1e-6);
+  });
+  test("6 stations of 2 nails fit in 286 mm only at a spacing ≤ 57.2 mm: at a least spacing of 60 mm interface 1 cannot be scheduled [D]", () => {
+    const result = run(plies(3, [{ type: "point", P: 10, at: 2, face: "left" }], { minSpacing: 60 }));
+    const [i1] = interfaces(result);
+    expect(i1!.s.passes).toBe(false);
+    expect(i1!.s.infeasible).not.toBeNull();
+  });
+});
+
+describe("rows of bolts across the depth of the plies (moved from the stand-alone rowsAcrossDepth onto whole members)", () => {
+  // M12 bolts, EN 1995-1-1 Table 8.4 [V] at α = 90°: a₄,t = max((2 + 2 sin α)d; 3d) = 48 mm, a₂ = 4d = 48 mm,
+  // a₃,t = max(7d; 80 mm) = 84 mm [D]. Across the depth the bolt kind takes its edge distance as the larger of
+  // a₃,t and a₄ (84 mm, on the safe side of a₄,t = 48 mm) and a₁ = (4 + |cos α|)d = 48 mm between rows, so
+  // n rows need 2 × 84 + (n − 1) × 48 mm: 216 mm for two [D].
+  function bolted(depth: number, rows: number): JobInput {
+    const job = plies(3, [{ type: "uniform", w: 1, face: "left" }], {}, rows);
+    job.basis = "factored";
+    job.materials = [{ id: "T", name: "C24", family: "sawn-timber", E: 11_000, density: 0, characteristicDensity: 350, meanDensity: 420 } as JobInput["materials"][number]];
+    job.parts = job.parts.map((p) => ({ ...p, shape: { type: "rectangle" as const, b: 38, h: depth } }));
+    job.connectors = [{ id: "N", kind: "timber-bolt", standard: "EN1995-1-1", size: "M12", grade: "4.6", sideAngleToGrainDeg: 90, mainAngleToGrainDeg: 90 } as JobInput["connectors"][number]];
+    return job;
+  }
+  const acrossWarnings = (r: ReturnType<typeof designMember>) => r.warnings.filter((w) => /per row need .* across part/.test(w));
+  test("two rows of M12 in a 2x12 ply (286 mm): 216 mm needed, they fit, with the 48 mm row spacing of the standard", () => {
+    const r = run(bolted(286, 2));
+    expect(acrossWarnings(r)).toEqual([]);
+    for (const s of r.schedules) {
+      expectClose(s.limits.rowSpacing!, 48, { rel: 1e-9 });
+      expectClose(s.limits.edgeDistance!, 84, { rel: 1e-9 });
+    }
+  });
+  test("rows that do not fit the depth are reported with the reason: 2 rows need 216 mm and 3 rows 264 mm across an 89 mm ply [D]", () => {
+    expect(acrossWarnings(run(bolted(89, 2))).join(" ")).toContain("2 bolts per row need 216 mm");
+    expect(acrossWarnings(run(bolted(89, 3))).join(" ")).toContain("3 bolts per row need 264 mm");
+  });
+});
