@@ -111,6 +111,14 @@ describe("NDS-2018 §12.3.7 [M]: the shank diameter only where the threads bear 
   });
 });
 
+describe("§12.3.7 in double shear: the threads are held by the far outer member", () => {
+  test("#10 × 4.5 in through 1.5 + 1.5 in into a 1.5 in far member: 0.3 in of thread (≤ ¼ × 1.5 in) takes D = 0.19 in, 1 in takes D_r = 0.152 in", () => {
+    const screw = (threadLength: number) => WoodScrew.parse({ id: "s", kind: "wood-screw", standard: "NDS-2018", gauge: "#10", length: 4.5 * IN, threadLength: threadLength * IN, shear: "double" });
+    expectClose(step(woodScrewKind.resistance(screw(0.3), us(1.5, 1.5)), "D") / IN, 0.19, { rel: 1e-9 });
+    expectClose(step(woodScrewKind.resistance(screw(1), us(1.5, 1.5)), "D") / IN, 0.152, { rel: 1e-9 });
+  });
+});
+
 describe("NDS-2018 Table 12.3.1B footnote [M]: D ≥ 1/4 in with D_r < 1/4 in takes R_d = K_D K_θ", () => {
   test("a 1/4 × 4 in lag screw with the side member's grain at 90°: R_d = (10 × 0.173 + 0.5) × 1.25 = 2.7875 and Z = 111.7 lb, not 139.6 lb", () => {
     const r = lagScrewKind.resistance(lag({ size: "1/4", length: 4 * IN, sideAngleToGrainDeg: 90 }), us(1.5, 3.5));
