@@ -22,7 +22,7 @@ export const LagScrew = z
     /** Root diameter D_r; from ASME B18.2.1 for the standard inch sizes when absent. */
     rootDiameter: positive("length").optional(),
     length: positive("length"),
-    /** Threaded length from the tip; when absent the threads are taken to cross the shear plane. */
+    /** Threaded length from the point, tip included (T of NDS Appendix Table L2); when absent the threads are taken to cross the shear plane. */
     threadLength: positive("length").optional(),
     /** Length of the tapered tip E, not counted in the penetration; from NDS Appendix Table L2 for the standard inch sizes when absent. */
     tipLength: nonNegative("length").optional(),
