@@ -2,6 +2,7 @@ import type { JobDocument } from "../schema/job.js";
 import { fromCore, unitLabel } from "../units/quantity.js";
 import type { BeamAnalysis } from "./analyse-beam.js";
 import { combinationSet } from "./combinations.js";
+import { windDurationOf } from "./load-categories.js";
 
 /** What the result says about the member's supports, analysis, combinations and patterns (job in core units). */
 export function beamAssumptions(job: JobDocument, beam: BeamAnalysis): string[] {
@@ -19,7 +20,7 @@ export function beamAssumptions(job: JobDocument, beam: BeamAnalysis): string[] 
   out.push(...notes);
   if (omitted.length > 0) out.push(`Combinations left out because they cannot govern (their factors lie between those of two others, so their actions lie between theirs at every point, or are a fraction of another's, so their actions are never larger; and their load duration is no shorter): ${omitted.map((o) => `${o.id} ${o.name} (${o.reason})`).join("; ")}.`);
   out.push(
-    "Load-duration class of each combination: that of its shortest-duration load (EN 1995-1-1 §3.1.3(2)), with dead permanent, live medium-term, roof live short-term, snow short-term, wind instantaneous (EN 1995-1-1 Table 2.2 as commonly applied; national annexes may class snow differently), or as the job's own categories state.",
+    `Load-duration class of each combination: that of its shortest-duration load (EN 1995-1-1 §3.1.3(2)), with dead permanent, live medium-term, roof live short-term, snow short-term, wind ${windDurationOf(job.beam) === "short" ? "short-term" : "instantaneous"} (${job.beam.windDuration === undefined ? "the default; the job may choose instantaneous in beam.windDuration" : "as the job chooses in beam.windDuration"}) (EN 1995-1-1 Table 2.2 as commonly applied; national annexes may class snow and wind differently), or as the job's own categories state.`,
   );
   if (beam.patterned.length > 0) {
     out.push(

@@ -17,15 +17,19 @@ export interface CategoryInfo {
  * Load-duration class by category, EN 1995-1-1 §2.3.1.2 and Table 2.2 (from memory [M]): self-weight
  * permanent; imposed floor load medium-term; roof live load (maintenance, construction) short-term
  * [CP]; snow short-term (Table 2.2 allows medium-term where snow lies longer, a national choice [CP]);
- * wind instantaneous [CP] (Table 2.2 lists short-term or instantaneous).
+ * wind short-term unless the job's `beam.windDuration` says instantaneous (Table 2.2 lists both; national
+ * annexes differ, and short-term is the lower k_mod).
  */
 export const builtInDuration: Record<LoadCategory, CategoryInfo["duration"]> = {
   dead: "permanent",
   live: "medium",
   "roof-live": "short",
   snow: "short",
-  wind: "instantaneous",
+  wind: "short",
 };
+
+/** The load-duration class the job gives wind: `beam.windDuration`, short-term when absent. */
+export const windDurationOf = (beam: Pick<Beam, "windDuration">): CategoryInfo["duration"] => beam.windDuration ?? builtInDuration.wind;
 
 /**
  * ψ0 by category, EN 1990:2002 Table A1.1 recommended values (from memory [M]): imposed loads of
@@ -37,11 +41,12 @@ export const builtInPsi0: Record<LoadCategory, number> = { dead: 1, live: 0.7, "
 const symbols: Record<LoadCategory, string> = { dead: "D", live: "L", "roof-live": "Lr", snow: "S", wind: "W" };
 
 /** Every category the job may use: the built-in ones and its own, by id. */
-export function categoriesOf(beam: Pick<Beam, "categories">, psi0: Record<string, number> = {}): Map<string, CategoryInfo> {
+export function categoriesOf(beam: Pick<Beam, "categories" | "windDuration">, psi0: Record<string, number> = {}): Map<string, CategoryInfo> {
   const out = new Map<string, CategoryInfo>();
-  for (const c of loadCategories) out.set(c, { id: c, symbol: symbols[c], actsAs: c, duration: builtInDuration[c], psi0: psi0[c] ?? builtInPsi0[c] });
+  const durationOf = (c: LoadCategory) => (c === "wind" ? windDurationOf(beam) : builtInDuration[c]);
+  for (const c of loadCategories) out.set(c, { id: c, symbol: symbols[c], actsAs: c, duration: durationOf(c), psi0: psi0[c] ?? builtInPsi0[c] });
   for (const c of beam.categories) {
-    out.set(c.id, { id: c.id, symbol: c.id, actsAs: c.actsAs, duration: c.duration ?? builtInDuration[c.actsAs], psi0: psi0[c.id] ?? c.psi0 ?? builtInPsi0[c.actsAs] });
+    out.set(c.id, { id: c.id, symbol: c.id, actsAs: c.actsAs, duration: c.duration ?? durationOf(c.actsAs), psi0: psi0[c.id] ?? c.psi0 ?? builtInPsi0[c.actsAs] });
   }
   return out;
 }

@@ -6,9 +6,9 @@ import { MM_PER_IN, MPA_PER_PSI } from "./quantity-text.js";
 import { dowelDetailing, dowelProblems, dowelResistance, type DowelSpec } from "./timber/dowel-joint.js";
 import { dowelConditions, ec5StandardText, ndsStandardText, onSizeField, refineTimberStandard, timberAssumptions, timberDowelFields } from "./timber/dowel-schema.js";
 import { ec5YieldMoment } from "./timber/ec5-embedment.js";
-import { inchSize, lagScrewRoot } from "./timber/fastener-sizes.js";
+import { inchSize, lagScrewRoot, lagScrewTip } from "./timber/fastener-sizes.js";
 import { ndsLagScrewBendingYield } from "./timber/nds-dowel-bearing.js";
-import { screwYieldDiameter } from "./timber/screw-yield-diameter.js";
+import { screwYieldDiameter, threadBearing } from "./timber/screw-yield-diameter.js";
 
 export const LagScrew = z
   .strictObject({
@@ -22,10 +22,10 @@ export const LagScrew = z
     /** Root diameter D_r; from ASME B18.2.1 for the standard inch sizes when absent. */
     rootDiameter: positive("length").optional(),
     length: positive("length"),
-    /** Threaded length from the tip; when absent the threads are taken to cross the shear plane. */
+    /** Threaded length from the point, tip included (T of NDS Appendix Table L2); when absent the threads are taken to cross the shear plane. */
     threadLength: positive("length").optional(),
-    /** Length of the tapered tip, not counted in the penetration. */
-    tipLength: nonNegative("length").default(0),
+    /** Length of the tapered tip E, not counted in the penetration; from NDS Appendix Table L2 for the standard inch sizes when absent. */
+    tipLength: nonNegative("length").optional(),
     bendingYieldStrength: positive("stress").optional(),
     /** EN 1995-1-1: tensile strength f_u of the screw steel. */
     tensileStrength: positive("stress").optional(),
@@ -47,14 +47,26 @@ function rootOf(c: LagScrew): number | null {
   return r === null ? null : r * MM_PER_IN;
 }
 
+/** Tip length E: given, or by size from NDS Appendix Table L2 [M]; null when neither. */
+function tipOf(c: LagScrew): number | null {
+  if (c.tipLength !== undefined) return c.tipLength;
+  const e = lagScrewTip(shankOf(c) / MM_PER_IN);
+  return e === null ? null : e * MM_PER_IN;
+}
+
 function specOf(c: LagScrew, context: ConnectorContext | undefined): DowelSpec {
   const d = shankOf(c);
   const root = rootOf(c) ?? d;
-  const penetration = c.length - (context?.members[0].thickness ?? 0) - c.tipLength;
-  const threadsInPlane = c.threadLength === undefined || c.threadLength - c.tipLength > penetration;
-  const shankPenetration = penetration - ((c.threadLength ?? penetration + c.tipLength) - c.tipLength);
+  const tip = tipOf(c) ?? 0;
+  // Single shear: the threads are held by the point-side (main) member; the tip counts in neither the penetration nor ℓ_m.
+  const penetration = c.length - (context?.members[0].thickness ?? 0) - tip;
+  const mainThickness = context?.members[1].thickness ?? Infinity;
+  const threads = c.threadLength === undefined ? undefined : c.threadLength - tip;
+  const threadsInPlane = threads === undefined || threads > penetration;
+  const shankPenetration = penetration - (threads ?? penetration);
   const isNds = c.standard === "NDS-2018";
-  const { yieldDiameter, note } = screwYieldDiameter({ nds: isNds, shank: d, root, threadsInPlane, shankPenetration });
+  const bearingLength = Math.max(0, Math.min(penetration, mainThickness));
+  const { yieldDiameter, note } = screwYieldDiameter({ nds: isNds, shank: d, root, threadBearing: threadBearing({ penetration, bearingLength, threadLength: threads }), bearingLength, threadsInPlane, shankPenetration });
   const conditions = dowelConditions(c, 1.0, "screws, at most 100 %");
   const fu = c.tensileStrength ?? 0;
   const My = ec5YieldMoment("round", fu, yieldDiameter);
@@ -66,7 +78,7 @@ function specOf(c: LagScrew, context: ConnectorContext | undefined): DowelSpec {
     yieldDiameter,
     yieldDiameterNote: note,
     length: c.length,
-    tipLength: c.tipLength,
+    tipLength: tip,
     shear: "single",
     predrilled: true,
     minPenetration: isNds ? { multiple: 4, source: "NDS-2018 §12.1.4, least penetration 4D (tip excluded)" } : { multiple: 6, source: "common practice after EN 1995-1-1 §8.3.1.2 [CP]" },
@@ -95,11 +107,15 @@ export const lagScrewKind: DiscreteConnectorKind<LagScrew> = {
   schema: LagScrew,
   describe: describeLag,
   standards: (c) => [c.standard === "NDS-2018" ? ndsStandardText : ec5StandardText],
-  assumptions: (c) => [...timberAssumptions(describeLag(c), c), `${describeLag(c)}: installed in lead holes; ${c.threadLength === undefined ? "threads taken to cross the shear plane (no thread length given)" : "threads placed by the thread length given"}.`],
+  assumptions: (c) => [
+    ...timberAssumptions(describeLag(c), c),
+    `${describeLag(c)}: installed in lead holes; ${c.threadLength === undefined ? "threads taken to cross the shear plane (no thread length given)" : "threads placed by the thread length given (measured from the tip, tip included)"}; the tapered tip (${c.tipLength === undefined ? "by size, NDS Appendix Table L2" : "as given"}) is not counted in the penetration or the bearing length.`,
+  ],
   problems: (c, context) => {
     const out: PlacementProblem[] = [];
     if (c.shear === "double") out.push({ on: "connector", field: "shear", message: "lag screws are designed in single shear only" });
     if (rootOf(c) === null) out.push({ on: "connector", field: "rootDiameter", message: `is needed: ${formatNumber(shankOf(c) / MM_PER_IN)} in is not a standard lag screw size with a tabulated root diameter` });
+    if (tipOf(c) === null) out.push({ on: "connector", field: "tipLength", message: `is needed: ${formatNumber(shankOf(c) / MM_PER_IN)} in is not a standard lag screw size with a tabulated tip length (NDS Appendix Table L2)` });
     return [...out, ...onSizeField(dowelProblems(specOf(c, context), context), c.size !== undefined ? "size" : null, ["diameter"])];
   },
   resistance: (c, context) => dowelResistance(specOf(c, context), context),

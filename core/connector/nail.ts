@@ -1,13 +1,13 @@
 import { z } from "zod";
 import { Id, positive, Text } from "../schema/quantity.js";
 import { formatNumber } from "../units/format.js";
-import type { DiscreteConnectorKind } from "./connector-kind.js";
+import type { DiscreteConnectorKind, PlacementProblem } from "./connector-kind.js";
 import { MM_PER_IN, MPA_PER_PSI } from "./quantity-text.js";
 import { dowelDetailing, dowelProblems, dowelResistance, type DowelSpec } from "./timber/dowel-joint.js";
 import { dowelConditions, ec5StandardText, ndsStandardText, onSizeField, refineTimberStandard, timberAssumptions, timberDowelFields } from "./timber/dowel-schema.js";
 import { ec5YieldMoment } from "./timber/ec5-embedment.js";
 import { knownNailSizes, largerNailSizes, nailSize } from "./timber/fastener-sizes.js";
-import { ndsNailBendingYield } from "./timber/nds-dowel-bearing.js";
+import { NDS_NAIL_FYB_RANGE_IN, ndsNailBendingYield } from "./timber/nds-dowel-bearing.js";
 
 export const Nail = z
   .strictObject({
@@ -75,7 +75,7 @@ function specOf(c: Nail): DowelSpec {
     angles: conditions.angles,
     bendingYield: c.bendingYieldStrength !== undefined
       ? { value: c.bendingYieldStrength, source: "given" }
-      : { value: ndsNailBendingYield(diameter / MM_PER_IN) * MPA_PER_PSI, source: "NDS-2018 nail tables' footnotes, by diameter" },
+      : tabulatedBendingYield(diameter),
     nds: conditions.nds,
     ec5: {
       ...conditions.ec5Conditions,
@@ -84,6 +84,23 @@ function specOf(c: Nail): DowelSpec {
     },
     groupAction: conditions.groupAction,
   };
+}
+
+/** F_yb by the diameter bands of the NDS nail tables; NaN outside them (problems() then asks for it). */
+function tabulatedBendingYield(diameter: number): DowelSpec["bendingYield"] {
+  const psi = ndsNailBendingYield(diameter / MM_PER_IN);
+  return psi === null
+    ? { value: NaN, source: "not tabulated for this diameter: give bendingYieldStrength" }
+    : { value: psi * MPA_PER_PSI, source: "NDS-2018 nail tables' footnotes, by diameter [M]" };
+}
+
+/** NDS-2018: a nail outside the diameters of the F_yb footnotes needs its F_yb given, not assumed. */
+function bendingYieldProblems(c: Nail): PlacementProblem[] {
+  if (c.standard !== "NDS-2018" || c.bendingYieldStrength !== undefined) return [];
+  const d = dimensions(c).diameter / MM_PER_IN;
+  if (ndsNailBendingYield(d) !== null) return [];
+  const [lo, hi] = NDS_NAIL_FYB_RANGE_IN;
+  return [{ on: "connector", field: "bendingYieldStrength", message: `is needed: a ${formatNumber(d)} in nail is outside the diameters (${lo} to ${hi} in) for which the NDS nail tables give F_yb; give the nail's bending yield strength (ASTM F1575)` }];
 }
 
 /** Trade description: "16d common nail", "0.131 × 3 in nail", "3.1 × 75 mm nail", with the standard. */
@@ -107,7 +124,7 @@ export const nailKind: DiscreteConnectorKind<Nail> = {
   describe: describeNail,
   standards: (c) => [c.standard === "NDS-2018" ? ndsStandardText : ec5StandardText],
   assumptions: (c) => timberAssumptions(describeNail(c), c),
-  problems: (c, context) => onSizeField(dowelProblems(specOf(c), context), c.size !== undefined ? "size" : null),
+  problems: (c, context) => [...bendingYieldProblems(c), ...onSizeField(dowelProblems(specOf(c), context), c.size !== undefined ? "size" : null)],
   resistance: (c, context) => dowelResistance(specOf(c), context),
   detailing: (c, context) => dowelDetailing(specOf(c), context),
 };

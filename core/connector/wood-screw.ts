@@ -1,14 +1,14 @@
 import { z } from "zod";
 import { Id, positive, Text } from "../schema/quantity.js";
 import { formatNumber } from "../units/format.js";
-import { doubleShearMembers, type ConnectorContext, type DiscreteConnectorKind } from "./connector-kind.js";
+import { doubleShearMembers, type ConnectorContext, type DiscreteConnectorKind, type PlacementProblem } from "./connector-kind.js";
 import { MM_PER_IN, MPA_PER_PSI } from "./quantity-text.js";
 import { dowelDetailing, dowelProblems, dowelResistance, type DowelSpec } from "./timber/dowel-joint.js";
 import { dowelConditions, ec5StandardText, ndsStandardText, onSizeField, refineTimberStandard, timberAssumptions, timberDowelFields } from "./timber/dowel-schema.js";
 import { ec5YieldMoment } from "./timber/ec5-embedment.js";
 import { knownScrewGauges, screwGauge } from "./timber/fastener-sizes.js";
-import { ndsNailBendingYield } from "./timber/nds-dowel-bearing.js";
-import { screwYieldDiameter } from "./timber/screw-yield-diameter.js";
+import { NDS_NAIL_FYB_RANGE_IN, ndsNailBendingYield } from "./timber/nds-dowel-bearing.js";
+import { screwYieldDiameter, threadBearing } from "./timber/screw-yield-diameter.js";
 
 export const WoodScrew = z
   .strictObject({
@@ -60,7 +60,18 @@ function specOf(c: WoodScrew, context: ConnectorContext | undefined): DowelSpec 
   const threadsInPlane = c.threadLength === undefined || c.threadLength > penetration;
   const shankPenetration = penetration - (c.threadLength ?? penetration);
   const isNds = c.standard === "NDS-2018";
-  const { yieldDiameter, note } = screwYieldDiameter({ nds: isNds, shank: d, root, threadsInPlane, shankPenetration });
+  // The member holding the threads: the point-side member in single shear; in double shear the far outer
+  // member, past the central one: the thinner outer member when the roles are known (either face may take
+  // the head), else one taken as thick as the head-side member (as the hand-built context reads).
+  const mainThickness = context?.members[1].thickness ?? 0;
+  const holding = roles
+    ? { penetration, thickness: Math.min(...roles.outer.map((m) => m.thickness)) }
+    : c.shear === "double"
+      ? { penetration: penetration - mainThickness, thickness: sideThickness }
+      : { penetration, thickness: context?.members[1].thickness ?? Infinity };
+  const bearingLength = Math.max(0, Math.min(holding.penetration, holding.thickness));
+  const threads = threadBearing({ penetration: holding.penetration, bearingLength, threadLength: c.threadLength });
+  const { yieldDiameter, note } = screwYieldDiameter({ nds: isNds, shank: d, root, threadBearing: threads, bearingLength, threadsInPlane, shankPenetration });
   const conditions = dowelConditions(c, 1.0, "screws, at most 100 %");
   const fu = c.tensileStrength ?? 0;
   const My = ec5YieldMoment("round", fu, yieldDiameter);
@@ -79,11 +90,19 @@ function specOf(c: WoodScrew, context: ConnectorContext | undefined): DowelSpec 
     angles: conditions.angles,
     bendingYield: c.bendingYieldStrength !== undefined
       ? { value: c.bendingYieldStrength, source: "given" }
-      : { value: ndsNailBendingYield(yieldDiameter / MM_PER_IN) * MPA_PER_PSI, source: "diameter bands of the NDS nail and screw tables, at the diameter in the yield model [M]" },
+      : tabulatedBendingYield(yieldDiameter),
     nds: conditions.nds,
     ec5: { ...conditions.ec5Conditions, yieldMoment: { value: My.value, source: `${My.formula} at d_ef, f_u = ${formatNumber(fu)} MPa` }, nailEmbedment: d <= 6 },
     groupAction: conditions.groupAction,
   };
+}
+
+/** F_yb by the diameter bands of the NDS nail and screw tables at the diameter in the yield model; NaN outside them (problems() then asks for it). */
+function tabulatedBendingYield(yieldDiameter: number): DowelSpec["bendingYield"] {
+  const psi = ndsNailBendingYield(yieldDiameter / MM_PER_IN);
+  return psi === null
+    ? { value: NaN, source: "not tabulated for this diameter: give bendingYieldStrength" }
+    : { value: psi * MPA_PER_PSI, source: "diameter bands of the NDS nail and screw tables, at the diameter in the yield model [M]" };
 }
 
 function describeScrew(c: WoodScrew): string {
@@ -102,7 +121,13 @@ export const woodScrewKind: DiscreteConnectorKind<WoodScrew> = {
   describe: describeScrew,
   standards: (c) => [c.standard === "NDS-2018" ? ndsStandardText : ec5StandardText],
   assumptions: (c) => [...timberAssumptions(describeScrew(c), c), `${describeScrew(c)}: installed in lead holes; ${c.threadLength === undefined ? "threads taken to cross the shear plane (no thread length given)" : "threads placed by the thread length given"}.`],
-  problems: (c, context) => onSizeField(dowelProblems(specOf(c, context), context), c.gauge !== undefined ? "gauge" : null, ["diameter"]),
+  problems: (c, context) => {
+    const spec = specOf(c, context);
+    const fyb: PlacementProblem[] = c.standard === "NDS-2018" && Number.isNaN(spec.bendingYield.value)
+      ? [{ on: "connector", field: "bendingYieldStrength", message: `is needed: the ${formatNumber(spec.yieldDiameter / MM_PER_IN)} in diameter in the yield model is outside the diameters (${NDS_NAIL_FYB_RANGE_IN[0]} to ${NDS_NAIL_FYB_RANGE_IN[1]} in) for which the NDS tables give F_yb` }]
+      : [];
+    return [...fyb, ...onSizeField(dowelProblems(spec, context), c.gauge !== undefined ? "gauge" : null, ["diameter"])];
+  },
   resistance: (c, context) => dowelResistance(specOf(c, context), context),
   detailing: (c, context) => dowelDetailing(specOf(c, context), context),
 };

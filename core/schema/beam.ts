@@ -102,6 +102,12 @@ export const Beam = z.strictObject({
   /** Adds the parts' own weight as a dead load. */
   selfWeight: z.boolean().default(true),
   categories: z.array(UserLoadCategory).max(8, "at most 8 categories of your own").default([]),
+  /**
+   * EN 1995-1-1 load-duration class of wind (and of categories acting as wind without a duration of their
+   * own): short-term when absent. Table 2.2 [M] lists wind under short-term or instantaneous; the
+   * national annex decides.
+   */
+  windDuration: z.enum(["short", "instantaneous"]).optional(),
   /** Categories placed span by span in the patterns that give the largest actions, where there is more than one span. */
   patternedCategories: z.array(CategoryName).max(13).default(["live"]),
   deflectionLimits: DeflectionLimits.default({ total: 240, live: 360, liveCategories: ["live"] }),

@@ -11,6 +11,7 @@ import {
   NDS_PHI_CONNECTIONS,
   NDS_TOE_NAIL_FACTOR,
   ndsGroupActionFactor,
+  ndsGroupSideStiffness,
   ndsLoadDurationFactor,
   ndsTemperatureFactor,
   ndsTimeEffectFactor,
@@ -302,13 +303,16 @@ function ndsResistance(spec: DowelSpec, context: ConnectorContext, g: DowelGeome
   const head = b.side;
   const point = b.main;
   const D = spec.yieldDiameter / MM_PER_IN;
+  // Nominal (shank) diameter: F_e⊥, R_d's footnote for threaded fasteners, C_M and C_g.
+  const nominalD = spec.diameter / MM_PER_IN;
   const bearing = (m: JoinedMember, angle: number): NdsBearing =>
-    isSteel(m.material) ? ndsSteelBearing(m.material.tensileStrength! / MPA_PER_PSI, m.thickness / MM_PER_IN) : ndsWoodBearing(m.material.specificGravity!, D, angle);
+    isSteel(m.material) ? ndsSteelBearing(m.material.tensileStrength! / MPA_PER_PSI, m.thickness / MM_PER_IN) : ndsWoodBearing(m.material.specificGravity!, D, angle, nominalD);
   const Fes = bearing(head, spec.angles.side);
   const Fem = bearing(point, spec.angles.main);
   const maxAngle = Math.max(...g.parts.map((p) => (isSteel(p.member.material) ? 0 : foldAngle(p.angle))));
   const yieldLimit = ndsYieldLimit({
     diameterIn: D,
+    nominalDiameterIn: nominalD,
     bendingYieldPsi: spec.bendingYield.value / MPA_PER_PSI,
     sideLengthIn: b.sideLength / MM_PER_IN,
     mainLengthIn: b.mainLength / MM_PER_IN,
@@ -333,7 +337,8 @@ function ndsResistance(spec: DowelSpec, context: ConnectorContext, g: DowelGeome
   if (yieldLimit.k1 !== null) steps.push({ symbol: "k₁", description: "mode II coefficient", value: yieldLimit.k1, quantity: "ratio", reference: table });
   if (yieldLimit.k2 !== null) steps.push({ symbol: "k₂", description: "mode IIIm coefficient", value: yieldLimit.k2, quantity: "ratio", reference: table });
   steps.push({ symbol: "k₃", description: "mode IIIs coefficient", value: yieldLimit.k3, quantity: "ratio", reference: table });
-  for (const m of yieldLimit.modes) steps.push({ symbol: `Z_${m.mode}`, description: `mode ${m.mode}, R_d = ${round(m.rd)}`, value: lb(m.zLb), quantity: "connectorForce", reference: `${table}; R_d Table 12.3.1B` });
+  const rdNote = D < 0.25 && nominalD >= 0.25 ? " = K_D K_θ (threaded, D ≥ 1/4 in with D_r < 1/4 in: Table 12.3.1B footnote [M])" : "";
+  for (const m of yieldLimit.modes) steps.push({ symbol: `Z_${m.mode}`, description: `mode ${m.mode}, R_d = ${round(m.rd)}${rdNote}`, value: lb(m.zLb), quantity: "connectorForce", reference: `${table}; R_d Table 12.3.1B` });
   const Z = lb(yieldLimit.governing.zLb);
   steps.push({ symbol: "Z", description: `reference lateral design value (mode ${yieldLimit.governing.mode} governs)`, value: Z, quantity: "connectorForce", reference: table });
 
@@ -343,22 +348,28 @@ function ndsResistance(spec: DowelSpec, context: ConnectorContext, g: DowelGeome
     const CD = ndsLoadDurationFactor(context.categories, context.duration);
     factors.push({ symbol: "C_D", value: CD.value, description: `load duration factor (${CD.load}; at most 1.6 for connections)`, reference: "NDS-2018 §2.3.2, §11.3.2" });
   }
-  factors.push({ symbol: "C_M", value: ndsWetServiceFactor(spec.nds.moisture, D), description: `wet service factor (${spec.nds.moisture})`, reference: "NDS-2018 Table 11.3.3" });
+  const singleRowParallelToGrain = context.rows === 1 && context.members.every((m, i) => isSteel(m.material) || foldAngle(i === 0 ? spec.angles.side : spec.angles.main) === 0);
+  const CM = ndsWetServiceFactor(spec.nds.moisture, nominalD, { singleRowParallelToGrain });
+  factors.push({ symbol: "C_M", value: CM.value, description: `wet service factor (${CM.why})`, reference: "NDS-2018 Table 11.3.3 and footnotes [M]" });
   factors.push({ symbol: "C_t", value: ndsTemperatureFactor(spec.nds.temperature, spec.nds.moisture), description: `temperature factor (${spec.nds.temperature})`, reference: "NDS-2018 Table 11.3.4" });
-  if (spec.groupAction && D >= 0.25) {
+  if (spec.groupAction && nominalD >= 0.25) {
     const area = (m: JoinedMember) => (m.thickness * m.width) / MM_PER_IN ** 2;
     const E = (m: JoinedMember) => m.material.E / MPA_PER_PSI;
+    // Double shear: the outer members' E·A add up (NDS-2018 §11.3.6 [M]); a hand-built context without the
+    // roles has one outer member, and the far one is taken as its twin, as the yield model takes it.
+    const outer = g.double ? [...g.double.outer] : spec.shear === "double" ? [head, head] : [head];
+    const main = g.double ? g.double.central : point;
     const cg = ndsGroupActionFactor({
       fasteners: spec.groupAction.fasteners,
       spacingIn: spec.groupAction.spacing / MM_PER_IN,
-      diameterIn: D,
-      mainStiffnessLb: E(point) * area(point),
-      sideStiffnessLb: E(head) * area(head),
+      diameterIn: nominalD,
+      mainStiffnessLb: E(main) * area(main),
+      sideStiffnessLb: ndsGroupSideStiffness(outer.map((m) => ({ E: E(m), area: area(m) }))),
       woodToMetal: isSteel(head.material) || isSteel(point.material),
     });
     factors.push({ symbol: "C_g", value: cg.value, description: `group action factor, ${spec.groupAction.fasteners} in a row (γ = ${round(cg.gamma)} lb/in, u = ${round(cg.u)}, m = ${round(cg.m)}, R_EA = ${round(cg.REA)})`, reference: "NDS-2018 §11.3.6 eq. (11.3-1)" });
   } else {
-    factors.push({ symbol: "C_g", value: 1, description: spec.groupAction ? "group action factor: 1.0 for D < 1/4 in" : "group action factor: 1.0 (each row carries its own tributary shear flow)", reference: "NDS-2018 §11.3.6" });
+    factors.push({ symbol: "C_g", value: 1, description: spec.groupAction ? "group action factor: 1.0 for D < 1/4 in (nominal diameter)" : "group action factor: 1.0 (each row carries its own tributary shear flow)", reference: "NDS-2018 §11.3.6" });
   }
   if (spec.nds.endGrain) factors.push({ symbol: "C_eg", value: NDS_END_GRAIN_FACTOR, description: "end grain factor", reference: "NDS-2018 §12.5.2" });
   if (spec.nds.toeNailed) factors.push({ symbol: "C_tn", value: NDS_TOE_NAIL_FACTOR, description: "toe-nail factor", reference: "NDS-2018 §12.5.4" });

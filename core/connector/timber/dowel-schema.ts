@@ -96,7 +96,7 @@ export function timberAssumptions(name: string, c: Conditions): string[] {
     out.push(`${name}: C_D of each combination from its shortest-duration load (dead 0.9, live 1.0, snow 1.15, roof live 1.25, wind 1.6; at most 1.6 for connections) under ASD; λ by the combination's loads under LRFD (NDS-2018 §2.3.2, §11.3.2, Table N3).`);
     out.push(`${name}: spacings and distances for full design value (C_Δ = 1.0); ${c.groupAction ? "group action C_g from the row given" : "no group action reduction (C_g = 1.0): each row carries its own tributary shear flow"}.`);
   } else {
-    out.push(`${name}: k_mod of each combination from its shortest-duration load (dead permanent, live medium-term, snow, roof live and wind short-term, after EN 1995-1-1 Table 2.2; the national annex may differ); γ_M = 1.3 (recommended value; check the national annex); service class ${c.serviceClass ?? 1}.`);
+    out.push(`${name}: k_mod of each combination from its load-duration class, that of its shortest-duration load as the member's load-duration assumption classes them (EN 1995-1-1 §3.1.3(2), Table 2.2; the working names the class of each combination); γ_M = 1.3 (recommended value; check the national annex); service class ${c.serviceClass ?? 1}.`);
     out.push(`${name}: ${c.withdrawalCapacity ? "rope effect from the withdrawal capacity given, capped per EN 1995-1-1 §8.2.2(2)" : "rope effect left out (no withdrawal capacity given)"}; parts of family "panel" taken as ${c.panel ?? "plywood"}; parts with ρ_k over 500 kg/m³ taken as hardwood for k_90.`);
   }
   return out;

@@ -28,13 +28,15 @@ export function ec5Kmod(product: Ec5Product, serviceClass: ServiceClass, duratio
 /**
  * Duration class of each load category, after the examples of Table 2.2 (the national annex decides):
  * self-weight permanent, imposed floor load medium-term, snow and roof (maintenance) loads short-term,
- * wind short-term (Table 2.2 lists wind under short-term and instantaneous; the shorter k_mod is kept).
+ * wind short-term (Table 2.2 lists wind under short-term and instantaneous; the lower k_mod is kept). Used only
+ * where the combination has no class of its own; the combinations carry the job's class for wind
+ * (beam.windDuration, core/beam/load-categories.ts).
  */
 export const ec5DurationByCategory: Record<string, Ec5Duration> = { dead: "permanent", live: "medium", snow: "short", "roof-live": "short", wind: "short" };
 
 /** Duration class of a combination: the context's, or else that of its shortest-duration load (§3.1.3(2)). */
 export function ec5DurationOf(duration: DurationClass, categories: string[]): { duration: Ec5Duration; why: string } {
-  if (duration !== "unspecified") return { duration, why: "duration class of the combination" };
+  if (duration !== "unspecified") return { duration, why: `${duration === "instantaneous" ? "instantaneous" : `${duration}-term`}, the combination's load-duration class` };
   const known = categories.filter((c) => c in ec5DurationByCategory).map((c) => ({ c, d: ec5DurationByCategory[c]! }));
   if (known.length === 0) return { duration: "medium", why: "no load category given: medium-term assumed" };
   const shortest = known.reduce((a, b) => (ORDER.indexOf(b.d) > ORDER.indexOf(a.d) ? b : a));

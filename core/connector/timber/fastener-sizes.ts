@@ -1,7 +1,7 @@
 /**
  * Trade sizes of timber fasteners in inches: pennyweight nails (ASTM F1667 common, box and sinker
  * nails as tabulated in NDS-2018 Table L4), wood screw gauges (ASME B18.6.1, NDS Table L3) and lag
- * screw root diameters (ASME B18.2.1, NDS Table L2).
+ * screw root diameters and tip lengths (ASME B18.2.1, NDS Table L2).
  */
 export interface NailSize {
   name: string;
@@ -63,23 +63,32 @@ export function screwGauge(name: string): { name: string; diameterIn: number; ro
 
 export const knownScrewGauges = (): string[] => Object.keys(screwGauges).map((g) => `#${g}`);
 
-/** Lag screw root diameters D_r by shank diameter D, in. */
-const lagRoots: [number, number][] = [
-  [0.25, 0.173],
-  [0.3125, 0.227],
-  [0.375, 0.265],
-  [0.4375, 0.328],
-  [0.5, 0.371],
-  [0.625, 0.471],
-  [0.75, 0.579],
-  [0.875, 0.683],
-  [1, 0.78],
+/**
+ * Lag screws by shank diameter D: root diameter D_r and length of the tapered tip E, in (ASME B18.2.1,
+ * NDS-2018 Appendix Table L2 [M]).
+ */
+const lagSizes: [number, number, number][] = [
+  [0.25, 0.173, 5 / 32],
+  [0.3125, 0.227, 3 / 16],
+  [0.375, 0.265, 7 / 32],
+  [0.4375, 0.328, 9 / 32],
+  [0.5, 0.371, 5 / 16],
+  [0.625, 0.471, 13 / 32],
+  [0.75, 0.579, 1 / 2],
+  [0.875, 0.683, 9 / 16],
+  [1, 0.78, 5 / 8],
 ];
+
+const lagRow = (diameterIn: number) => lagSizes.find(([d]) => Math.abs(d - diameterIn) < 0.002);
 
 /** Root diameter of a lag screw of shank diameter D (in), or null when D is not a standard size. */
 export function lagScrewRoot(diameterIn: number): number | null {
-  const row = lagRoots.find(([d]) => Math.abs(d - diameterIn) < 0.002);
-  return row ? row[1] : null;
+  return lagRow(diameterIn)?.[1] ?? null;
+}
+
+/** Tip length E of a lag screw of shank diameter D (in), or null when D is not a standard size. */
+export function lagScrewTip(diameterIn: number): number | null {
+  return lagRow(diameterIn)?.[2] ?? null;
 }
 
 /** "3/4", "3/4 in", "1-1/8", "1", "0.75" → inches; null when not a size written in inches. */

@@ -40,13 +40,16 @@ export const ndsMoistureConditions = ["dry", "wet", "fabricated-wet"] as const;
 export type NdsMoisture = (typeof ndsMoistureConditions)[number];
 
 /**
- * C_M for lateral loads on dowel-type fasteners: 1.0 fabricated and used dry (MC ≤ 19 %); 0.7 in
- * service above 19 %; 0.4 fabricated wet and used dry, except 1.0 for D < 1/4 in.
+ * C_M for lateral loads on dowel-type fasteners (Table 11.3.3 and its footnote [M]): 1.0 fabricated and
+ * used dry (MC ≤ 19 %); 0.7 in service above 19 %; fabricated wet and used dry 0.4, or 0.7 for D < 1/4 in,
+ * and 1.0 for one fastener, a single row parallel to grain, or rows parallel to grain with a separate
+ * splice plate each. D is the nominal diameter.
  */
-export function ndsWetServiceFactor(moisture: NdsMoisture, diameterIn: number): number {
-  if (moisture === "dry") return 1.0;
-  if (moisture === "wet") return 0.7;
-  return diameterIn < 0.25 ? 1.0 : 0.4;
+export function ndsWetServiceFactor(moisture: NdsMoisture, diameterIn: number, layout: { singleRowParallelToGrain: boolean } = { singleRowParallelToGrain: false }): { value: number; why: string } {
+  if (moisture === "dry") return { value: 1.0, why: "dry" };
+  if (moisture === "wet") return { value: 0.7, why: "wet in service" };
+  if (layout.singleRowParallelToGrain) return { value: 1.0, why: "fabricated wet, used dry; a single row of fasteners parallel to grain" };
+  return diameterIn < 0.25 ? { value: 0.7, why: "fabricated wet, used dry; D < 1/4 in" } : { value: 0.4, why: "fabricated wet, used dry; more than one row, D ≥ 1/4 in" };
 }
 
 export const ndsTemperatureRanges = ["up-to-100F", "100-125F", "125-150F"] as const;
@@ -76,6 +79,14 @@ export interface NdsGroupActionInput {
   sideStiffnessLb: number;
   /** Wood-to-metal connections use γ = 270 000 D^1.5, wood-to-wood 180 000 D^1.5 (lb/in). */
   woodToMetal: boolean;
+}
+
+/**
+ * E_s A_s for the group action factor, lb: the side member's in single shear; in double shear the sum over
+ * the two outer members (NDS §11.3.6, A_s the sum of the side members' areas [M]).
+ */
+export function ndsGroupSideStiffness(outerMembers: readonly { E: number; area: number }[]): number {
+  return outerMembers.reduce((sum, m) => sum + m.E * m.area, 0);
 }
 
 /**

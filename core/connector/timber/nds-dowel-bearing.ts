@@ -13,17 +13,21 @@ export interface NdsBearing {
  * F_e of wood from its specific gravity G:
  * D < 1/4 in: F_e = 16 600 G^1.84 at any angle;
  * 1/4 ≤ D ≤ 1 in: F_e∥ = 11 200 G, F_e⊥ = 6 100 G^1.45/√D, combined at angle θ by Hankinson's formula.
+ * D is the diameter in the yield model; for a threaded fastener the √D of F_e⊥ takes the nominal (shank)
+ * diameter (our reading of Table 12.3.3's footnote [M]; it gives the lower F_e⊥ of the two readings).
  */
-export function ndsWoodBearing(specificGravity: number, diameterIn: number, angleDeg: number): NdsBearing {
+export function ndsWoodBearing(specificGravity: number, diameterIn: number, angleDeg: number, nominalDiameterIn = diameterIn): NdsBearing {
   const G = specificGravity;
   if (diameterIn < 0.25) {
     return { value: 16_600 * G ** 1.84, parallel: null, perpendicular: null, formula: "F_e = 16 600 G^1.84 (D < 1/4 in)" };
   }
+  const Dperp = Math.max(diameterIn, nominalDiameterIn);
   const parallel = 11_200 * G;
-  const perpendicular = (6_100 * G ** 1.45) / Math.sqrt(diameterIn);
+  const perpendicular = (6_100 * G ** 1.45) / Math.sqrt(Dperp);
   const theta = (foldAngle(angleDeg) * Math.PI) / 180;
   const value = hankinson(parallel, perpendicular, theta);
-  return { value, parallel, perpendicular, formula: "F_e∥ = 11 200 G; F_e⊥ = 6 100 G^1.45/√D; F_eθ by Hankinson (NDS App. J)" };
+  const nominal = Dperp > diameterIn + 1e-9 ? ` with the nominal D = ${Number(Dperp.toPrecision(4))} in (Table 12.3.3 footnote, as read [M])` : "";
+  return { value, parallel, perpendicular, formula: `F_e∥ = 11 200 G; F_e⊥ = 6 100 G^1.45/√D${nominal}; F_eθ by Hankinson (NDS App. J)` };
 }
 
 /** Hankinson's formula: F_θ = F∥ F⊥/(F∥ sin²θ + F⊥ cos²θ), θ in radians. */
@@ -44,12 +48,16 @@ export function ndsSteelBearing(tensileStrengthPsi: number, thicknessIn: number)
   };
 }
 
+/** Diameters the NDS nail tables' F_yb footnotes cover, in [M]. */
+export const NDS_NAIL_FYB_RANGE_IN = [0.099, 0.375] as const;
+
 /**
  * F_yb of nails, spikes and small screws by diameter, psi (the diameter bands of the NDS nail tables'
- * footnotes; below 0.099 in the first band's value is kept, above 0.375 in the bolt value).
+ * footnotes [M]); null outside the diameters they cover, where F_yb must be given.
  */
-export function ndsNailBendingYield(diameterIn: number): number {
+export function ndsNailBendingYield(diameterIn: number): number | null {
   const D = diameterIn;
+  if (D < NDS_NAIL_FYB_RANGE_IN[0] - 1e-9 || D > NDS_NAIL_FYB_RANGE_IN[1] + 1e-9) return null;
   if (D <= 0.142) return 100_000;
   if (D <= 0.177) return 90_000;
   if (D <= 0.236) return 80_000;

@@ -7,6 +7,8 @@ export type NdsYieldMode = "Im" | "Is" | "II" | "IIIm" | "IIIs" | "IV";
 export interface NdsYieldInput {
   /** Diameter D used in the equations (root diameter where threads are in the shear plane), in. */
   diameterIn: number;
+  /** Nominal (shank) diameter of a threaded fastener, in, for the R_d of Table 12.3.1B's footnote; the diameter above when absent. */
+  nominalDiameterIn?: number | undefined;
   /** Dowel bending yield strength F_yb, psi. */
   bendingYieldPsi: number;
   /** Dowel bearing length in the side member ℓs (each side member in double shear), in. */
@@ -53,11 +55,17 @@ export function foldAngle(angleDeg: number): number {
   return a > 90 ? 180 - a : a;
 }
 
-/** Reduction term R_d of NDS Table 12.3.1B for a mode. */
-export function ndsReductionTerm(diameterIn: number, mode: NdsYieldMode, maxAngleDeg: number): number {
-  if (diameterIn <= 0.17) return 2.2;
-  if (diameterIn < 0.25) return 10 * diameterIn + 0.5;
+/**
+ * Reduction term R_d of NDS Table 12.3.1B for a mode, D the diameter in the yield model. A threaded
+ * fastener of nominal diameter at least 1/4 in whose root diameter is below 1/4 in takes R_d = K_D K_θ
+ * (the table's footnote [M]).
+ */
+export function ndsReductionTerm(diameterIn: number, mode: NdsYieldMode, maxAngleDeg: number, nominalDiameterIn = diameterIn): number {
   const kt = kTheta(maxAngleDeg);
+  if (diameterIn < 0.25) {
+    const KD = diameterIn <= 0.17 ? 2.2 : 10 * diameterIn + 0.5;
+    return nominalDiameterIn >= 0.25 - 1e-9 ? KD * kt : KD;
+  }
   if (mode === "Im" || mode === "Is") return 4 * kt;
   if (mode === "II") return 3.6 * kt;
   return 3.2 * kt;
@@ -73,7 +81,7 @@ export function ndsYieldLimit(p: NdsYieldInput): NdsYieldLimit {
   const Fem = p.mainBearingPsi;
   const Re = Fem / Fes;
   const Rt = lm / ls;
-  const rd = (mode: NdsYieldMode) => ndsReductionTerm(D, mode, p.maxAngleDeg);
+  const rd = (mode: NdsYieldMode) => ndsReductionTerm(D, mode, p.maxAngleDeg, p.nominalDiameterIn ?? D);
   const k3 = -1 + Math.sqrt((2 * (1 + Re)) / Re + (2 * Fyb * (2 + Re) * D * D) / (3 * Fem * ls * ls));
   const modeIV = (D * D) * Math.sqrt((2 * Fem * Fyb) / (3 * (1 + Re)));
   const modes: NdsYieldModeValue[] = [];

@@ -89,17 +89,21 @@ describe("combinationSet: the built-in sets against the standards' tables", () =
   test("the unfactored set keeps every load as entered, factor 1", () => {
     const { combinations } = setOf("unfactored");
     expect(combinations).toHaveLength(1);
-    expect(combinations[0]).toMatchObject({ id: "U", name: "Loads as entered", factors: { dead: 1, live: 1, "roof-live": 1, snow: 1, wind: 1 }, duration: "instantaneous" });
+    expect(combinations[0]).toMatchObject({ id: "U", name: "Loads as entered", factors: { dead: 1, live: 1, "roof-live": 1, snow: 1, wind: 1 }, duration: "short" });
   });
 });
 
 describe("combinationSet: load durations and categories", () => {
   test("each combination carries the duration of its shortest-duration load (EN 1995-1-1 §3.1.3(2) [V]; classes by category [M]/[CP])", () => {
-    expect(builtInDuration).toEqual({ dead: "permanent", live: "medium", "roof-live": "short", snow: "short", wind: "instantaneous" });
+    // Wind: short-term unless the job chooses instantaneous (Table 2.2 lists both [M]; national annexes differ).
+    expect(builtInDuration).toEqual({ dead: "permanent", live: "medium", "roof-live": "short", snow: "short", wind: "short" });
     const byId = Object.fromEntries(setOf("asce7-22-strength").combinations.map((c) => [c.id, c]));
     expect(byId["LRFD-1"]).toMatchObject({ duration: "permanent", categories: ["dead"] });
     expect(byId["LRFD-2b"]).toMatchObject({ duration: "short", categories: ["dead", "live", "snow"] });
-    expect(byId["LRFD-4a"]!.duration).toBe("instantaneous");
+    expect(byId["LRFD-4a"]!.duration).toBe("short");
+    const instantaneous = Object.fromEntries(setOf("asce7-22-strength", everyCategory, { windDuration: "instantaneous" }).combinations.map((c) => [c.id, c]));
+    expect(instantaneous["LRFD-4a"]!.duration).toBe("instantaneous");
+    expect(instantaneous["LRFD-2b"]!.duration).toBe("short");
     expect(shortestDuration([])).toBe("unspecified");
   });
 

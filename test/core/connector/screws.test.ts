@@ -21,8 +21,8 @@ describe("woodScrewKind by the NDS", () => {
     expectClose(r.value / LBF, z.governing.zLb, { rel: 1e-9 });
   });
 
-  test("with a thread length that keeps the threads in the main member, the shank diameter is used", () => {
-    const r = woodScrewKind.resistance(WoodScrew.parse({ id: "s", kind: "wood-screw", standard: "NDS-2018", gauge: "#10", length: 3 * IN, threadLength: 1 * IN }), us(1.5, 3.5));
+  test("with threads bearing over at most a quarter of the main member's bearing length (0.5 in of 2.5 in), the shank diameter is used (§12.3.7 [M])", () => {
+    const r = woodScrewKind.resistance(WoodScrew.parse({ id: "s", kind: "wood-screw", standard: "NDS-2018", gauge: "#10", length: 4 * IN, threadLength: 0.5 * IN }), us(1.5, 3.5));
     expectClose(r.steps.find((s) => s.symbol === "D")!.value / IN, 0.19, { rel: 1e-9 });
   });
 
@@ -46,7 +46,8 @@ describe("lagScrewKind by the NDS", () => {
     const r = lagScrewKind.resistance(LagScrew.parse({ id: "l", kind: "lag-screw", standard: "NDS-2018", size: "3/8", length: 4 * IN }), us(1.5, 5.5));
     expectClose(r.steps.find((s) => s.symbol === "D")!.value / IN, 0.265, { rel: 1e-9 });
     expectClose(r.steps.find((s) => s.symbol === "F_yb")!.value / (1000 * LBF / IN ** 2), 45, { rel: 1e-9 });
-    const z = ndsYieldLimit({ diameterIn: 0.265, bendingYieldPsi: 45_000, sideLengthIn: 1.5, mainLengthIn: 2.5, sideBearingPsi: 11_200 * 0.5, mainBearingPsi: 11_200 * 0.5, shear: "single", maxAngleDeg: 0 });
+    // ℓ_m = 4 − 1.5 − 7/32 in: the tip of a 3/8 in lag (Appendix Table L2 [M]) is not bearing length.
+    const z = ndsYieldLimit({ diameterIn: 0.265, bendingYieldPsi: 45_000, sideLengthIn: 1.5, mainLengthIn: 4 - 1.5 - 7 / 32, sideBearingPsi: 11_200 * 0.5, mainBearingPsi: 11_200 * 0.5, shear: "single", maxAngleDeg: 0 });
     expectClose(r.value / LBF, z.governing.zLb, { rel: 1e-9 });
   });
   test("penetration below 4D (tip excluded) is refused; double shear is refused", () => {

@@ -24,6 +24,16 @@ describe("shapeRectangles", () => {
     expect(flat).toEqual({ x0: 0, x1: 7.25 * 25.4, y0: 0, y1: 1.5 * 25.4 });
   });
 
+  test("timbers 5 in and thicker are dressed 1/2 in less on both sizes: 6x10 is 5.5 × 9.5 in, 5x5 is 4.5 × 4.5, 8x12 is 7.5 × 11.5; a 4x10 stays 3.5 × 9.25 (PS 20, NDS Supplement Table 1A [M])", () => {
+    expect(lumberSize("6x10")).toEqual({ thickness: 5.5 * 25.4, width: 9.5 * 25.4 });
+    expect(lumberSize("5x5")).toEqual({ thickness: 4.5 * 25.4, width: 4.5 * 25.4 });
+    expect(lumberSize("8x12")).toEqual({ thickness: 7.5 * 25.4, width: 11.5 * 25.4 });
+    expect(lumberSize("4x10")).toEqual({ thickness: 3.5 * 25.4, width: 9.25 * 25.4 });
+    const [edge] = shapeRectangles({ type: "lumber", nominal: "6x10", orientation: "edge" });
+    expect(edge!.x1 - edge!.x0).toBeCloseTo(5.5 * 25.4, 9);
+    expect(edge!.y1 - edge!.y0).toBeCloseTo(9.5 * 25.4, 9);
+  });
+
   test("an I-section part gives the same properties as its three plates (REFERENCES §1.3 [D])", () => {
     const asShape = sectionOf([part("girder", { type: "i-section", designation: "", d: 600, tw: 10, bf: 300, tf: 20 })]);
     expectClose(asShape.section.area, 17_600, { rel: 1e-12 });
