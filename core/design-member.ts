@@ -12,6 +12,7 @@ import { contextFor } from "./fastening/connector-context.js";
 import { discreteSchedule, type JointInput } from "./fastening/discrete-schedule.js";
 import { globalise, jointDemand, localView, memberJointsOf } from "./fastening/member-joints.js";
 import { partTerminations } from "./fastening/part-terminations.js";
+import { rowFit, rowFitProblem } from "./fastening/row-fit.js";
 import { interfaceDemand, interfaceOf, multiPlyOf, type MultiPly } from "./fastening/side-load-transfer.js";
 import { weldSchedule } from "./fastening/weld-schedule.js";
 import { fastenerReach } from "./multi-ply/ply-detailing.js";
@@ -186,7 +187,13 @@ export function designMember(job: JobDocument): DesignResult {
       const problem = reachProblem(r.schedule, plies, p.plyInterface, p.input.contexts[0]![0]!.members[0].thickness, job.units);
       if (problem) r.schedule = { ...r.schedule, detailingProblems: [...r.schedule.detailingProblems, problem], passes: false };
     }
-    if (r.schedule) schedules.push(r.schedule);
+    if (r.schedule) {
+      // Connectors side by side must fit across the contact, whatever the kind: shared detailing, not a kind's warning.
+      const fit = rowFit(r.schedule.limits, r.schedule.rows, p.joint.lines);
+      r.schedule = { ...r.schedule, rowFit: fit };
+      if (fit && !fit.fits) r.schedule = { ...r.schedule, detailingProblems: [...r.schedule.detailingProblems, rowFitProblem(fit, r.schedule.limits, r.schedule.rows, r.schedule.connectorLabel, job.units)], passes: false };
+      schedules.push(r.schedule);
+    }
     if (r.bondLine) bondLines.push(r.bondLine);
     if (r.weld) welds.push(r.weld);
     r.warnings.forEach((w) => warnings.add(w));
@@ -313,6 +320,7 @@ function reachProblem(s: Schedule, plies: MultiPly, k: number, sidePly: number, 
 }
 
 function scheduleFailure(s: Schedule): string {
+  if (s.rowFit && !s.rowFit.fits) return `a row does not fit across the contact (${s.detailingProblems.join("; ")})`;
   if (s.infeasible) return "no spacing within the limits carries the shear flow";
   if (s.detailingProblems.length > 0 && s.verification.passes && s.mode === "design") return `the connectors cannot be placed as designed (${s.detailingProblems.join("; ")})`;
   if (s.detailingProblems.length > 0 && s.verification.passes) return `the given spacing is outside the detailing limits (${s.detailingProblems.join("; ")})`;
