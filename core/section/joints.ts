@@ -113,6 +113,8 @@ export function searchJoints(
     });
   }
   const shareOf = (k: number, cut: Cut) => (sharing === "per-line" ? cut.firstMoment / cut.crossed.length : (cut.firstMoment * contacts[k]!.length) / cut.width);
+  // The flow each line of a cut carries: per line, or per unit width for a glue line.
+  const intensity = (cut: Cut) => cut.firstMoment / (sharing === "per-line" ? cut.crossed.length : cut.width);
   const fewerThenSmaller = (c: Cut, best: Cut) => c.crossed.length < best.crossed.length || (c.crossed.length === best.crossed.length && c.smallerArea < best.smallerArea - tol * tol);
 
   const assigned = new Map<number, Cut>();
@@ -132,7 +134,7 @@ export function searchJoints(
       if (short.has(cut)) continue;
       const sum = cut.crossed.reduce((s, k) => s + carried(k), 0);
       if (sum >= cut.firstMoment - qTol) continue;
-      if (!worst || cut.firstMoment / cut.crossed.length > worst.firstMoment / worst.crossed.length) worst = cut;
+      if (!worst || intensity(cut) > intensity(worst)) worst = cut;
     }
     if (!worst) break;
     const raised = worst.crossed.filter((k) => !fixedShare.has(key(contacts[k]!)) && carried(k) < shareOf(k, worst!) - qTol);

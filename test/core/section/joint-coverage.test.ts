@@ -263,12 +263,12 @@ describe("joint coverage (issue 16 §1)", () => {
     expect(result.status.failures.join("\n")).toMatch(/Contact line between .* the cut that holds left \+ right \+ cap has Q = /);
   });
 
-  test("generated assemblies: every contact line in exactly one joint, Q by strips, and every cut carried by the lines it crosses", () => {
+  test.each(["per-line", "by-width"] as const)("generated assemblies, flow shared %s: every contact line in exactly one joint, Q by strips, and every cut carried by the lines it crosses", (sharing) => {
     fc.assert(
       fc.property(assembly, (parts) => {
         const section = buildSection(parts, materials);
         const contacts = findContacts(section);
-        const { joints, uncovered } = searchJoints(section, contacts);
+        const { joints, uncovered } = searchJoints(section, contacts, { sharing });
         expect(uncovered).toEqual([]);
         const owner = new Map<string, (typeof joints)[number]>();
         for (const j of joints) for (const l of j.lines) {
@@ -282,11 +282,13 @@ describe("joint coverage (issue 16 §1)", () => {
         expectClose(section.secondMoment, integrated.I, { rel: 1e-6 });
         for (const j of joints) expect(Math.abs(j.firstMoment - Math.abs(integrated.firstMoment(new Set(j.held))))).toBeLessThan(1e-6 * scale);
 
-        // Each line is fastened for its joint's Q shared equally by the lines that joint's cut crosses (counted here).
+        // Each line is fastened for its joint's Q shared by the lines that joint's cut crosses (counted here):
+        // equally (connectors, welds), or in proportion to their widths (glue: one stress τ = VQ/(I·t)).
         const crossedBy = (held: ReadonlySet<string>) => contacts.filter((c) => held.has(c.a) !== held.has(c.b));
         const share = (l: ContactLine) => {
           const j = owner.get(lineKey(l))!;
-          return j.firstMoment / crossedBy(new Set(j.held)).length;
+          const crossed = crossedBy(new Set(j.held));
+          return sharing === "per-line" ? j.firstMoment / crossed.length : (j.firstMoment * l.length) / crossed.reduce((t, c) => t + c.length, 0);
         };
         const ids = parts.map((p) => p.id);
         for (let mask = 1; mask < 1 << (ids.length - 1); mask++) {
@@ -298,7 +300,7 @@ describe("joint coverage (issue 16 §1)", () => {
           expect(carried).toBeGreaterThanOrEqual(Math.abs(integrated.firstMoment(held)) - 1e-6 * scale);
         }
       }),
-      { numRuns: 300 },
+      { numRuns: 200 },
     );
   });
 
