@@ -10,7 +10,7 @@ import { bondLineResult } from "./fastening/bond-line-result.js";
 import { compositeDesign } from "./fastening/composite-design.js";
 import { contextFor } from "./fastening/connector-context.js";
 import { discreteSchedule, type JointInput } from "./fastening/discrete-schedule.js";
-import { globalise, jointDemand, localView, memberJointsOf } from "./fastening/member-joints.js";
+import { globalise, jointDemand, localView, memberJointsOf, type MemberJoint } from "./fastening/member-joints.js";
 import { partTerminations } from "./fastening/part-terminations.js";
 import { rowFit, rowFitProblem } from "./fastening/row-fit.js";
 import { interfaceDemand, interfaceOf, multiPlyOf, type MultiPly } from "./fastening/side-load-transfer.js";
@@ -86,7 +86,7 @@ export function designMember(job: JobDocument): DesignResult {
         joint.crossed.length > lineCount
           ? `The cut that holds ${joint.held.join(" + ")} crosses ${joint.crossed.length} contact lines; ${
               kind.mechanism === "bond-line" ? "q = V·Q/I is shared by them in proportion to their widths (one stress τ = V·Q/(I·t))" : "q = V·Q/I is shared equally by them (the same connector on each, so equal stiffness)"
-            }. This joint fastens the ${lineCount} of them this cut loads most; the others are fastened for the joint that loads them more.`
+            }. This joint fastens ${lineCount} of them; ${fastenedElsewhere(joint, joints)}.`
           : plyInterface !== null
           ? `Interface ${plyInterface + 1} of side-by-side plies: its connectors pass the loads that arrive on one face (or on top of plies of unequal stiffness) to the plies beyond, in proportion to each ply's E·I; q = V·Q/I is zero here.`
           : lineCount > 1
@@ -251,6 +251,16 @@ export function designMember(job: JobDocument): DesignResult {
     ],
     warnings: [...warnings],
   };
+}
+
+/** The joints that fasten the other lines a joint's cut crosses, because their cuts load those lines more. */
+function fastenedElsewhere(joint: MemberJoint["joint"], joints: MemberJoint[]): string {
+  const key = (l: { a: string; b: string; orientation: string; level: number }) => `${l.a}|${l.b}|${l.orientation}|${l.level}`;
+  const mine = new Set(joint.lines.map(key));
+  const others = joint.crossed.filter((l) => !mine.has(key(l)));
+  const owners = [...new Set(others.map((l) => joints.find((j) => j.joint.lines.some((m) => key(m) === key(l)))?.joint.id).filter((id): id is string => id !== undefined))];
+  const lines = `the other${others.length === 1 ? " line" : ` ${others.length} lines`} (${others.map((l) => `${l.a}–${l.b}`).join(", ")})`;
+  return owners.length > 0 ? `${lines} ${others.length === 1 ? "is" : "are"} fastened for joint ${owners.join(", joint ")}, whose cut loads ${others.length === 1 ? "it" : "them"} more` : `${lines} belong to no joint`;
 }
 
 function uncoveredReason(u: UncoveredContact, units: JobDocument["units"]): string {
