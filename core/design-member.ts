@@ -191,6 +191,10 @@ export function designMember(job: JobDocument): DesignResult {
       // Connectors side by side must fit across the contact, whatever the kind: shared detailing, not a kind's warning.
       const fit = rowFit(r.schedule.limits, r.schedule.rows, p.joint.lines);
       r.schedule = { ...r.schedule, rowFit: fit };
+      if (!fit) {
+        const narrowest = Math.min(...p.joint.lines.map((l) => l.widest));
+        notChecked.push(`Joint ${p.joint.id}: whether ${r.schedule.rows === 1 ? "a connector" : `${r.schedule.rows} connectors side by side`} fit${r.schedule.rows === 1 ? "s" : ""} across the contact (${inJobUnits(narrowest, "length", job.units)} wide at its narrowest): connector ${r.schedule.connector} gives no edge distance${r.schedule.rows > 1 ? " or spacing across" : ""}.`);
+      }
       if (fit && !fit.fits) r.schedule = { ...r.schedule, detailingProblems: [...r.schedule.detailingProblems, rowFitProblem(fit, r.schedule.limits, r.schedule.rows, r.schedule.connectorLabel, job.units)], passes: false };
       schedules.push(r.schedule);
     }
