@@ -263,6 +263,15 @@ describe("joint coverage (issue 16 §1)", () => {
     expect(result.status.failures.join("\n")).toMatch(/Contact line between .* the cut that holds left \+ right \+ cap has Q = /);
   });
 
+  test("more parts than the joint search takes (the job schema allows 16): every contact line is reported, none silently dropped", () => {
+    const layers = Array.from({ length: 17 }, (_, i) => rectangle(`lam${i + 1}`, 100, 20, 0, 20 * i));
+    const section = buildSection(layers, materials);
+    const { joints, uncovered } = searchJoints(section, findContacts(section));
+    expect(joints).toEqual([]);
+    expect(uncovered).toHaveLength(16);
+    expect(uncovered.every((u) => u.cause === "too-many-parts")).toBe(true);
+  });
+
   test.each(["per-line", "by-width"] as const)("generated assemblies, flow shared %s: every contact line in exactly one joint, Q by strips, and every cut carried by the lines it crosses", (sharing) => {
     fc.assert(
       fc.property(assembly, (parts) => {
