@@ -10,14 +10,16 @@ import { bondLineResult } from "./fastening/bond-line-result.js";
 import { compositeDesign } from "./fastening/composite-design.js";
 import { contextFor } from "./fastening/connector-context.js";
 import { discreteSchedule, type JointInput } from "./fastening/discrete-schedule.js";
-import { globalise, jointDemand, localView, memberJoints } from "./fastening/member-joints.js";
+import { globalise, jointDemand, localView, memberJointsOf, type MemberJoint } from "./fastening/member-joints.js";
 import { partTerminations } from "./fastening/part-terminations.js";
+import { rowFit, rowFitProblem } from "./fastening/row-fit.js";
 import { interfaceDemand, interfaceOf, multiPlyOf, type MultiPly } from "./fastening/side-load-transfer.js";
 import { weldSchedule } from "./fastening/weld-schedule.js";
 import { fastenerReach } from "./multi-ply/ply-detailing.js";
 import { interfaceTransfer, plyShares } from "./multi-ply/ply-shares.js";
 import type { JobDocument } from "./schema/job.js";
 import { RESULT_FORMAT, RESULT_VERSION, type BondLineResult, type DesignResult, type JointResult, type MemberCheck, type Schedule, type WeldResult } from "./schema/result.js";
+import { MAX_PARTS_FOR_JOINT_SEARCH, type UncoveredContact } from "./section/joints.js";
 import { buildSection, positioned } from "./section/section-model.js";
 import { sectionResult } from "./section/section-result.js";
 import { stressProfile } from "./section/stress-profile.js";
@@ -36,7 +38,7 @@ export function designMember(job: JobDocument): DesignResult {
   const stepped = stretches.length > 1;
   // The section drawn and reported: every part, wherever along the member it runs.
   const section = stepped ? buildSection(positioned(job.parts), job.materials) : stretches[0]!.section;
-  const joints = memberJoints(job, stretches, length);
+  const { joints, uncovered } = memberJointsOf(job, stretches, length);
   const beam = analyseBeam(job, stretches, combinationsOf(job));
   const stations = stationsFor(beam.length, [...new Set(beam.results.flatMap((r) => r.actions.breaks))]);
   const profile = stressProfile(section);
@@ -53,6 +55,8 @@ export function designMember(job: JobDocument): DesignResult {
     kind.assumptions(connector).forEach((a) => assumptions.add(a));
     kind.standards(connector).forEach((s) => standards.add(s));
     const lineCount = joint.lines.length;
+    // q = V·Q/I is shared equally by every line the cut crosses; this joint fastens the lines it governs.
+    const share = kind.mechanism === "bond-line" ? 1 : lineCount / joint.crossed.length;
     const flowFactor = Math.max(...mj.stretches.map((x) => x.flowFactor));
     const stressFactor = Math.max(...mj.stretches.map((x) => x.stressFactor));
     const inPlaneOfBending = !stepped && joint.firstMoment <= 1e-9 * section.transformedArea * (section.bounds.y1 - section.bounds.y0);
@@ -79,7 +83,11 @@ export function designMember(job: JobDocument): DesignResult {
       extent: mj.extent,
       stretches: stepped ? mj.stretches.map((x) => ({ from: x.from, to: x.to, firstMoment: x.firstMoment, flowFactor: x.flowFactor })) : [],
       sharing:
-        plyInterface !== null
+        joint.crossed.length > lineCount
+          ? `The cut that holds ${joint.held.join(" + ")} crosses ${joint.crossed.length} contact lines; ${
+              kind.mechanism === "bond-line" ? "q = V·Q/I is shared by them in proportion to their widths (one stress τ = V·Q/(I·t))" : "q = V·Q/I is shared equally by them (the same connector on each, so equal stiffness)"
+            }. This joint fastens ${lineCount} of them; ${fastenedElsewhere(joint, joints)}.`
+          : plyInterface !== null
           ? `Interface ${plyInterface + 1} of side-by-side plies: its connectors pass the loads that arrive on one face (or on top of plies of unequal stiffness) to the plies beyond, in proportion to each ply's E·I; q = V·Q/I is zero here.`
           : lineCount > 1
             ? `q is shared equally by the ${lineCount} contact lines (the same connector on each, so equal stiffness).`
@@ -92,18 +100,18 @@ export function designMember(job: JobDocument): DesignResult {
     if (plyInterface !== null) {
       input = { ...common, beam, stations, flowFactor: 1, stressFactor: 1 / joint.contactWidth, demandActions: interfaceDemand(job, beam, plies!, plyInterface) };
     } else if (!stepped) {
-      input = { ...common, beam, stations, flowFactor, stressFactor };
+      input = { ...common, beam, stations, flowFactor: flowFactor * share, stressFactor };
     } else {
       const view = mj.extent ? localView(beam, stations, mj.extent) : { beam, stations };
       const local = mj.extent ? { ...common, fastening: shiftProvided(fastening, -mj.extent.from) } : common;
-      input = { ...local, ...view, flowFactor: 1, stressFactor: 1 / joint.contactWidth, demandActions: jointDemand(beam, mj) };
+      input = { ...local, ...view, flowFactor: share, stressFactor: 1 / joint.contactWidth, demandActions: jointDemand(beam, mj) };
     }
-    return { joint, kind, input, extent: mj.extent, plyInterface };
+    return { joint, kind, input, extent: mj.extent, plyInterface, share };
   });
 
   type Run = { schedule?: Schedule; bondLine?: BondLineResult; weld?: WeldResult; warnings: string[]; mirrored: boolean };
-  const run = ({ kind, input, extent }: (typeof prepared)[number], override: Partial<Pick<JointInput, "flowFactor" | "maxSpacingCap" | "extraDemand">> = {}): Run => {
-    const inputs = { ...input, ...override };
+  const run = ({ kind, input, extent, share }: (typeof prepared)[number], override: Partial<Pick<JointInput, "flowFactor" | "maxSpacingCap" | "extraDemand">> = {}): Run => {
+    const inputs = { ...input, ...override, ...(override.flowFactor !== undefined ? { flowFactor: override.flowFactor * share } : {}) };
     const back = <T extends Schedule | WeldResult | BondLineResult>(r: T): T => (extent ? globalise(r, stations, extent) : r);
     if (kind.mechanism === "bond-line") return { bondLine: back(bondLineResult(inputs, kind)), warnings: [], mirrored: false };
     if (kind.mechanism === "weld") {
@@ -180,7 +188,17 @@ export function designMember(job: JobDocument): DesignResult {
       const problem = reachProblem(r.schedule, plies, p.plyInterface, p.input.contexts[0]![0]!.members[0].thickness, job.units);
       if (problem) r.schedule = { ...r.schedule, detailingProblems: [...r.schedule.detailingProblems, problem], passes: false };
     }
-    if (r.schedule) schedules.push(r.schedule);
+    if (r.schedule) {
+      // Connectors side by side must fit across the contact, whatever the kind: shared detailing, not a kind's warning.
+      const fit = rowFit(r.schedule.limits, r.schedule.rows, p.joint.lines);
+      r.schedule = { ...r.schedule, rowFit: fit };
+      if (!fit) {
+        const narrowest = Math.min(...p.joint.lines.map((l) => l.widest));
+        notChecked.push(`Joint ${p.joint.id}: whether ${r.schedule.rows === 1 ? "a connector" : `${r.schedule.rows} connectors side by side`} fit${r.schedule.rows === 1 ? "s" : ""} across the contact (${inJobUnits(narrowest, "length", job.units)} wide at its narrowest): connector ${r.schedule.connector} gives no edge distance${r.schedule.rows > 1 ? " or spacing across" : ""}.`);
+      }
+      if (fit && !fit.fits) r.schedule = { ...r.schedule, detailingProblems: [...r.schedule.detailingProblems, rowFitProblem(fit, r.schedule.limits, r.schedule.rows, r.schedule.connectorLabel, job.units)], passes: false };
+      schedules.push(r.schedule);
+    }
     if (r.bondLine) bondLines.push(r.bondLine);
     if (r.weld) welds.push(r.weld);
     r.warnings.forEach((w) => warnings.add(w));
@@ -192,6 +210,7 @@ export function designMember(job: JobDocument): DesignResult {
   }
   if (section.parts.length > 1 && joints.length === 0) warnings.add("No joint was found between the parts; check that the parts touch face to face.");
   const failures = [
+    ...uncovered.map((u) => `Contact line between ${u.line.a} and ${u.line.b} (${u.line.orientation} at ${inJobUnits(u.line.level, "length", job.units)}${stepped ? `, ${inJobUnits(u.from, "span", job.units)}–${inJobUnits(u.to, "span", job.units)} along the member` : ""}): ${uncoveredReason(u, job.units)}`),
     ...schedules.filter((s) => !s.passes).map((s) => `Joint ${s.joint}: ${scheduleFailure(s)} (utilisation ${s.verification.maxUtilisation.toFixed(2)}).`),
     ...bondLines.filter((b) => !b.passes).map((b) => `Bond line ${b.joint}: stress exceeds the strength (utilisation ${b.utilisation.toFixed(2)}).`),
     ...welds.filter((w) => !w.passes).map((w) => `Weld ${w.joint}: shear flow exceeds the weld's resistance (utilisation ${w.utilisation.toFixed(2)}).${w.sizeNote ? ` ${w.sizeNote}` : ""}`),
@@ -237,6 +256,23 @@ export function designMember(job: JobDocument): DesignResult {
     ],
     warnings: [...warnings],
   };
+}
+
+/** The joints that fasten the other lines a joint's cut crosses, because their cuts load those lines more. */
+function fastenedElsewhere(joint: MemberJoint["joint"], joints: MemberJoint[]): string {
+  const key = (l: { a: string; b: string; orientation: string; level: number }) => `${l.a}|${l.b}|${l.orientation}|${l.level}`;
+  const mine = new Set(joint.lines.map(key));
+  const others = joint.crossed.filter((l) => !mine.has(key(l)));
+  const owners = [...new Set(others.map((l) => joints.find((j) => j.joint.lines.some((m) => key(m) === key(l)))?.joint.id).filter((id): id is string => id !== undefined))];
+  const lines = `the other${others.length === 1 ? " line" : ` ${others.length} lines`} (${others.map((l) => `${l.a}–${l.b}`).join(", ")})`;
+  return owners.length > 0 ? `${lines} ${others.length === 1 ? "is" : "are"} fastened for joint ${owners.join(", joint ")}, whose cut loads ${others.length === 1 ? "it" : "them"} more` : `${lines} belong to no joint`;
+}
+
+function uncoveredReason(u: UncoveredContact, units: JobDocument["units"]): string {
+  if (u.cause === "too-many-parts") return `no joint fastens it: the section has ${u.parts} parts and joints are searched among at most ${MAX_PARTS_FOR_JOINT_SEARCH}. Name the held groups in the fastening.`;
+  if (u.cause === "no-cut") return "no joint fastens it: no split of the section into two touching groups crosses it.";
+  const q = (v: number) => inJobUnits(v, "firstMoment", units);
+  return `the cut that holds ${u.held.join(" + ")} has Q = ${q(u.firstMoment)}, but the joints named in the fastening fasten its ${u.lines} contact lines for ${q(u.carried)} in all. Name that held group in the fastening, or fasten its lines for it.`;
 }
 
 function multiPlyResult(plies: MultiPly, joints: JointResult[]): DesignResult["multiPly"] {
@@ -299,6 +335,7 @@ function reachProblem(s: Schedule, plies: MultiPly, k: number, sidePly: number, 
 }
 
 function scheduleFailure(s: Schedule): string {
+  if (s.rowFit && !s.rowFit.fits) return `a row does not fit across the contact (${s.detailingProblems.join("; ")})`;
   if (s.infeasible) return "no spacing within the limits carries the shear flow";
   if (s.detailingProblems.length > 0 && s.verification.passes && s.mode === "design") return `the connectors cannot be placed as designed (${s.detailingProblems.join("; ")})`;
   if (s.detailingProblems.length > 0 && s.verification.passes) return `the given spacing is outside the detailing limits (${s.detailingProblems.join("; ")})`;

@@ -53,7 +53,7 @@ export interface FieldLayoutOptions {
 type Source = { kind: "schedule"; item: Schedule } | { kind: "weld"; item: WeldResult } | { kind: "bond-line"; item: BondLineResult };
 
 /**
- * The joints of a result as the builder lays them out, in the result's joint order, with joints
+ * The joints of a result as the builder lays them out (those that can be built), in the result's joint order, with joints
  * whose layout is the same in every number (the top and bottom joints of a symmetric box beam)
  * gathered into one entry so the sheet shows them once.
  */
@@ -68,6 +68,8 @@ export function fieldLayout(
     const bond = result.bondLines.find((b) => b.joint === j.id);
     // Named by part id, as the section sketch names the parts.
     const run = j.extent ? { ...j.extent, part: j.held.join(", ") } : null;
+    // A row that does not fit across its contact cannot be built: no layout is drawn for it (the sheet says why).
+    if (schedule && schedule.rowFit && !schedule.rowFit.fits) continue;
     if (schedule) sources.push({ source: { kind: "schedule", item: schedule }, run });
     else if (weld) sources.push({ source: { kind: "weld", item: weld }, run });
     else if (bond) sources.push({ source: { kind: "bond-line", item: bond }, run });

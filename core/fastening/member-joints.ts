@@ -4,7 +4,8 @@ import type { Station } from "../beam/stations.js";
 import type { JobDocument } from "../schema/job.js";
 import type { BondLineResult, Schedule, WeldResult } from "../schema/result.js";
 import { findContacts } from "../section/contacts.js";
-import { fastenedJoints, type FastenedJoint } from "../section/fastened-joints.js";
+import { fastenedJointsOf, type FastenedJoint } from "../section/fastened-joints.js";
+import type { UncoveredContact } from "../section/joints.js";
 import type { SectionModel } from "../section/section-model.js";
 
 /** A joint of the member and where it runs: stretch by stretch its Q/I, when the section changes along the member. */
@@ -22,9 +23,21 @@ export interface MemberJoint extends FastenedJoint {
  * is split into one joint per run, named by where it runs.
  */
 export function memberJoints(job: JobDocument, stretches: (SectionStretch & { parts: string[] })[], length: number): MemberJoint[] {
+  return memberJointsOf(job, stretches, length).joints;
+}
+
+/** The member's joints, and the contact lines no joint fastens as it must, stretch by stretch (where along the member: from, to). */
+export function memberJointsOf(
+  job: JobDocument,
+  stretches: (SectionStretch & { parts: string[] })[],
+  length: number,
+): { joints: MemberJoint[]; uncovered: (UncoveredContact & { from: number; to: number })[] } {
   const found = new Map<string, MemberJoint[]>();
+  const uncovered: (UncoveredContact & { from: number; to: number })[] = [];
   for (const s of stretches) {
-    for (const fj of fastenedJoints(job, s.section, findContacts(s.section))) {
+    const fastened = fastenedJointsOf(job, s.section, findContacts(s.section));
+    uncovered.push(...fastened.uncovered.map((u) => ({ ...u, from: s.x0, to: s.x1 })));
+    for (const fj of fastened.joints) {
       const I = s.section.secondMoment;
       const piece = { from: s.x0, to: s.x1, firstMoment: fj.joint.firstMoment, flowFactor: fj.joint.firstMoment / I, stressFactor: fj.joint.firstMoment / (I * fj.joint.contactWidth) };
       const runs = found.get(fj.joint.id) ?? [];
@@ -44,7 +57,7 @@ export function memberJoints(job: JobDocument, stretches: (SectionStretch & { pa
       out.push({ ...run, joint: { ...run.joint, id }, extent: whole ? null : { from, to } });
     }
   }
-  return out;
+  return { joints: out, uncovered };
 }
 
 /** The flow a joint's connectors answer to, per combination: V(x)·Q/I(x) over the joint's run, in the run's own coordinate from 0. */

@@ -254,6 +254,12 @@ export const Schedule = z.object({
   }),
   /** The worst row under each combination on its own. */
   perCombination: z.array(z.object({ combination: z.string(), maxUtilisation: z.number(), at: q("span") })),
+  /**
+   * The connectors of one row side by side across the narrowest contact line: the width they need (two edge
+   * distances and the spacings between them) and the width the line has. Absent when the connector gives
+   * neither an edge distance nor, with more than one per row, a spacing across.
+   */
+  rowFit: z.object({ needed: q("length"), available: q("length"), between: z.tuple([z.string(), z.string()]), fits: z.boolean() }).nullable().optional(),
   /** Check mode: spacings of the given schedule outside the detailing limits. */
   detailingProblems: z.array(z.string()),
   passes: z.boolean(),

@@ -14,6 +14,8 @@ export interface ContactLine {
   to: number;
   /** Touching length across the section (the width t this line contributes), mm. */
   length: number;
+  /** Longest single stretch of touching faces along the line (the width a row of connectors has), mm. */
+  widest: number;
 }
 
 export interface Overlap {
@@ -63,6 +65,7 @@ export function findContacts(section: SectionModel): ContactLine[] {
     extent: (r: Rect) => [number, number],
   ) {
     const byLevel = new Map<number, ContactLine>();
+    const pieces = new Map<ContactLine, [number, number][]>();
     for (const r of lo.rects) for (const s of hi.rects) {
       if (Math.abs(far(r) - near(s)) > tol) continue;
       const [r0, r1] = extent(r);
@@ -77,10 +80,31 @@ export function findContacts(section: SectionModel): ContactLine[] {
         line.from = Math.min(line.from, from);
         line.to = Math.max(line.to, to);
         line.length += to - from;
-      } else byLevel.set(key, { a: lo.id, b: hi.id, orientation, level, from, to, length: to - from });
+        pieces.get(line)!.push([from, to]);
+      } else {
+        const made: ContactLine = { a: lo.id, b: hi.id, orientation, level, from, to, length: to - from, widest: to - from };
+        byLevel.set(key, made);
+        pieces.set(made, [[from, to]]);
+      }
     }
+    for (const [line, spans] of pieces) line.widest = widestRun(spans, tol);
     out.push(...byLevel.values());
   }
+}
+
+/** Longest run of intervals that overlap or abut (within tol), mm. */
+function widestRun(spans: [number, number][], tol: number): number {
+  const sorted = [...spans].sort((p, q) => p[0] - q[0]);
+  let widest = 0;
+  let [start, end] = sorted[0]!;
+  for (const [from, to] of sorted.slice(1)) {
+    if (from <= end + tol) end = Math.max(end, to);
+    else {
+      widest = Math.max(widest, end - start);
+      [start, end] = [from, to];
+    }
+  }
+  return Math.max(widest, end - start);
 }
 
 /** Groups of parts that touch each other; more than one group means the section falls apart. */

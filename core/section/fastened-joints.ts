@@ -1,7 +1,7 @@
-import type { Connector } from "../connector/registry.js";
+import { kindOf, type Connector } from "../connector/registry.js";
 import type { Fastening, JobDocument } from "../schema/job.js";
 import type { ContactLine } from "./contacts.js";
-import { findJoints, jointForHeldGroup, type JointPlane } from "./joints.js";
+import { jointForHeldGroup, searchJoints, type FlowSharing, type JointPlane, type UncoveredContact } from "./joints.js";
 import type { SectionModel } from "./section-model.js";
 
 export interface FastenedJoint {
@@ -12,18 +12,23 @@ export interface FastenedJoint {
   path: string;
 }
 
+/** A glue line shares a cut's flow by width (one stress τ = VQ/(I·t)); connectors and welds share it equally per line. */
+const sharingOf = (connector: Connector): FlowSharing => (kindOf(connector).mechanism === "bond-line" ? "by-width" : "per-line");
+
 /**
- * The joints of the section with their fastening: the held groups the job names, then every joint
- * found from the contacts whose lines none of those claims, fastened by the default.
+ * The joints of the section with their fastening: the held groups the job names, then the joints
+ * found from the contacts for every line none of those claims, fastened by the default; and the
+ * contact lines no joint fastens as it must (see `searchJoints`).
  */
-export function fastenedJoints(job: JobDocument, section: SectionModel, contacts: ContactLine[]): FastenedJoint[] {
+export function fastenedJointsOf(job: JobDocument, section: SectionModel, contacts: ContactLine[]): { joints: FastenedJoint[]; uncovered: UncoveredContact[] } {
   const connectors = new Map(job.connectors.map((c) => [c.id, c]));
   const custom = job.fastening.joints.map((f, i) => ({ joint: jointForHeldGroup(section, contacts, f.held), connector: connectors.get(f.connector)!, fastening: f, path: `fastening.joints[${i}]` }));
-  const claimed = new Set(custom.flatMap((c) => c.joint.lines.map(lineKey)));
-  const found = findJoints(section, contacts)
-    .filter((j) => !j.lines.some((l) => claimed.has(lineKey(l))))
-    .map((joint) => ({ joint, connector: connectors.get(job.fastening.default.connector)!, fastening: job.fastening.default, path: "fastening.default" }));
-  return [...custom, ...found];
+  const fallback = connectors.get(job.fastening.default.connector)!;
+  const search = searchJoints(section, contacts, { sharing: sharingOf(fallback), fixed: custom.map((c) => ({ joint: c.joint, sharing: sharingOf(c.connector) })) });
+  const found = search.joints.map((joint) => ({ joint, connector: fallback, fastening: job.fastening.default, path: "fastening.default" }));
+  return { joints: [...custom, ...found], uncovered: search.uncovered };
 }
 
-const lineKey = (l: { a: string; b: string; level: number }) => `${l.a}|${l.b}|${l.level}`;
+export function fastenedJoints(job: JobDocument, section: SectionModel, contacts: ContactLine[]): FastenedJoint[] {
+  return fastenedJointsOf(job, section, contacts).joints;
+}

@@ -53,7 +53,11 @@ export function fieldSheet(c: WorksheetContext): number[] {
   sheet.y += elevation.height + 8;
 
   const laidOut = new Set(joints.flatMap((j) => j.joints));
-  const missing = result.joints.filter((j) => !laidOut.has(j.id));
+  const unbuildable = result.schedules.filter((s) => s.rowFit && !s.rowFit.fits);
+  for (const s of unbuildable) {
+    sheet.paragraph(`Joint ${s.joint} cannot be built as designed: ${s.detailingProblems.join("; ")} Nothing is drawn for it. Do not build that joint from this sheet.`, { font: "bold", colour: ink.fail });
+  }
+  const missing = result.joints.filter((j) => !laidOut.has(j.id) && !unbuildable.some((s) => s.joint === j.id));
   if (missing.length > 0)
     sheet.paragraph(`No layout in the result for ${missing.map((j) => `joint ${j.id}`).join(", ")}: nothing is drawn for ${missing.length === 1 ? "it" : "them"}. Do not build ${missing.length === 1 ? "that joint" : "those joints"} from this sheet.`, {
       font: "bold",

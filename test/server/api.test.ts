@@ -1,3 +1,4 @@
+import { readFileSync } from "node:fs";
 import type { FastifyInstance } from "fastify";
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
@@ -96,6 +97,23 @@ describe("POST /api/designs", () => {
     expect(res.body.fingerprint).toMatch(/^[0-9a-f]{64}$/);
     expect(res.body.schedules).toHaveLength(2);
     expect(res.body.schedules[0].zones[0].spacing).toBeLessThanOrEqual(27);
+  });
+
+  test("a row of connectors that does not fit across its contact fails the joint, with both widths in the job's units (issue 16 §2)", async () => {
+    const job = JSON.parse(readFileSync(new URL("../../fixtures/examples/porch-beam-16d-nds.us.json", import.meta.url), "utf8"));
+    job.fastening.default.rows = 3;
+    const res = await post(job);
+    expect(res.status).toBe(200);
+    expect(res.body.status.passes).toBe(false);
+    // 16d common, D = 0.162 in (REFERENCES §5.4) [V]; edge 2.5D and 5D across (the code's nail spacings) [CP]:
+    // 2 × 0.405 + 2 × 0.81 = 2.43 in against the 1-1/2 in web edge [D].
+    for (const s of res.body.schedules) {
+      expect(s.passes).toBe(false);
+      expect(s.rowFit.fits).toBe(false);
+      expect(s.rowFit.needed).toBeCloseTo(2.43, 9);
+      expect(s.rowFit.available).toBeCloseTo(1.5, 9);
+    }
+    expect(res.body.status.failures.join("\n")).toMatch(/need 2\.43 in across the contact between "web" and "top" .* only 1\.5 in wide/);
   });
 
   test("the same job gives the same fingerprint; a changed load changes it", async () => {

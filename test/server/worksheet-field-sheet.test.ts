@@ -234,6 +234,20 @@ describe("the field sheet at the end of the worksheet", () => {
     expect(inkOnPage(file, pages, "box-beam-check-red").red).toBeGreaterThan(200);
   });
 
+  test("three 16d nails across a 1-1/2 in web edge cannot be built: nothing is drawn for those joints and the sheet says why (issue 16 §2)", async () => {
+    const job = example("porch-beam-16d-nds.us");
+    job.fastening.default.rows = 3;
+    const { run, text } = await fieldSheetOf("porch-three-across", job);
+    expect(run.result.status.passes).toBe(false);
+    expect(fieldLayout(run.result, {})).toEqual([]);
+    expect(text).toContain("DOES NOT PASS — DO NOT BUILD FROM THIS SHEET");
+    for (const id of ["top", "bottom"]) expect(text).toContain(`Joint ${id} cannot be built as designed`);
+    // 2 × 2.5D + 2 × 5D with D = 0.162 in (REFERENCES §5.4 [V]; the code's nail spacings [CP]) = 2.43 in, on a 1.5 in edge.
+    expect(text).toContain("need 2.43 in across the contact");
+    expect(text).toContain("which is only 1.5 in wide");
+    expect(text).not.toMatch(/1st row .* from END A/);
+  });
+
   test("the field sheet alone is the worksheet's last page, word for word but for the page number", async () => {
     const name = "mezzanine-edge-beam.si";
     const { text, pages } = await fieldSheetOf("field-only", example(name));

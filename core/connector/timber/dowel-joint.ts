@@ -541,13 +541,7 @@ function dowelWarnings(spec: DowelSpec, context: ConnectorContext): string[] {
   if (g.through) {
     out.push(`The ${spec.noun} point passes through part "${g.through.member.part}" (penetration ${inJobUnits(g.through.penetration, "length", u)}); only the part's thickness is counted and the protruding point is not credited.`);
   }
-  const limits = dowelDetailing(spec, context);
-  for (const { member: m } of g.parts) {
-    const need = 2 * (limits.edgeDistance ?? 0) + (context.rows - 1) * (limits.rowSpacing ?? 0);
-    if (!isSteel(m.material) && need > m.width + 1e-9) {
-      out.push(`${context.rows} ${spec.noun}${context.rows > 1 ? "s" : ""} per row need ${inJobUnits(need, "length", u)} across part "${m.part}" (edge distances${context.rows > 1 ? " and row spacing" : ""}), which is only ${inJobUnits(m.width, "length", u)} wide: stagger or reduce the rows, or check splitting.`);
-    }
-  }
+  // Whether a row fits across the contact is checked for every kind by the pipeline (core/fastening/row-fit.ts).
   return out;
 }
 
