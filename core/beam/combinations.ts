@@ -1,7 +1,8 @@
 import type { CombinationSettings, Beam, LoadCategory } from "../schema/beam.js";
 import type { JobDocument } from "../schema/job.js";
 import type { Combination } from "../schema/result.js";
-import { ndsTimeEffectFactor } from "../connector/timber/nds-adjustment.js";
+import { ndsLoadDurationFactor, ndsTimeEffectFactor } from "../connector/timber/nds-adjustment.js";
+import { beamModelOf } from "./beam-model.js";
 import { categoriesOf, presentCategories, shortestDuration, type CategoryInfo } from "./load-categories.js";
 
 type Factors = Partial<Record<LoadCategory, number>>;
@@ -115,7 +116,9 @@ export function combinationSet(beam: Beam, settings: CombinationSettings, selfWe
       break;
   }
   const builtIn = settings.set !== "custom";
-  if (builtIn) raw = withSelections(raw, present);
+  // Categories placed span by span: a selection that only leaves such a load off is one of the patterns.
+  const patternedHere = beamModelOf(beam.spans, beam.supports).regions.length > 1 ? new Set(beam.patternedCategories.filter((c) => info.has(c))) : new Set<string>();
+  if (builtIn) raw = withSelections(raw, present, patternedHere, info);
   const named = (settings.custom ?? []).reduce((m, c) => m.set(c.id, c.name), new Map<string, string>());
   const combinations: Combination[] = [];
   const seen = new Map<string, number>();
@@ -202,14 +205,31 @@ export function patternTimeEffect(base: Combination, loaded: string[], info: Map
   return own.value < base.timeEffect.value ? own : base.timeEffect;
 }
 
-/** Each combination, then the same with every selection of its variable loads left out (fewest left out first). */
-function withSelections(list: Raw[], present: CategoryInfo[]): Raw[] {
+/**
+ * Each combination, then the same with every selection of its variable loads left out (fewest left out
+ * first). A selection is not written out where leaving off one of its loads, X, changes no resistance
+ * factor (duration class, C_D, λ) and X is the only patterned category of the combination that holds it:
+ * that combination's live-load patterns then include X on no span, at the same resistance, and every
+ * other arrangement the patterns choose gives larger actions there.
+ */
+function withSelections(list: Raw[], present: CategoryInfo[], patterned: Set<string>, info: Map<string, CategoryInfo>): Raw[] {
   const out: Raw[] = [];
+  const factorsOf = (categories: string[], principal: string[]) =>
+    `${shortestDuration(categories.map((c) => info.get(c)!.duration))}|${ndsLoadDurationFactor(categories, shortestDuration(categories.map((c) => info.get(c)!.duration))).value}|${formTimeEffect(principal, categories, info).value}`;
   for (const r of list) {
     const variable = present.filter((c) => !permanentLoad(c) && (r.factors[c.id] ?? 0) !== 0);
+    const all = present.filter((c) => (r.factors[c.id] ?? 0) !== 0).map((c) => c.id);
+    const principal = r.principal ?? [];
     const masks = Array.from({ length: 1 << variable.length }, (_, m) => m).sort((a, b) => bits(a) - bits(b) || a - b);
     for (const m of masks) {
       const dropped = variable.filter((_, i) => m & (1 << i));
+      const left = all.filter((c) => !dropped.some((d) => d.id === c));
+      const inPatterns = dropped.some((x) => {
+        if (!patterned.has(x.id) || principal.includes(x.id)) return false;
+        const withX = [...left, x.id];
+        return withX.every((c) => c === x.id || !patterned.has(c)) && factorsOf(withX, principal) === factorsOf(left, principal);
+      });
+      if (inPatterns) continue;
       const factors = { ...r.factors };
       for (const d of dropped) delete factors[d.id];
       out.push({ ...r, id: dropped.length === 0 ? r.id : `${r.id} without ${dropped.map((d) => d.symbol).join(", ")}`, factors });
