@@ -165,3 +165,77 @@ describe("property: adding a load of any category never lowers the connectors ne
     );
   });
 });
+
+describe("property: the combinations left out (pruned, or held by the live-load patterns) change no result", () => {
+  // Every selection written out here, independently of the program's set, as a table of the job's own
+  // (which is not pruned): the loads as entered (dead with every selection of the four variable
+  // categories), and EN 1990 (6.10) for dead and two variable categories: γG 1.35 or 1.0, 1.5 on the
+  // leading action, 1.5ψ0 on the other (ψ0: L 0.7, S 0.5, W 0.6, EN 1990 Table A1.1 [M]), every selection.
+  const subsetsOf = <T,>(xs: T[]) => Array.from({ length: 1 << xs.length }, (_, m) => xs.filter((_, i) => m & (1 << i)));
+  const asEntered = subsetsOf(["live", "roof-live", "snow", "wind"]).map((kept) => Object.fromEntries(["dead", ...kept].map((c) => [c, 1])));
+  const psi0: Record<string, number> = { live: 0.7, snow: 0.5, wind: 0.6 };
+  const en1990 = (variable: string[]) =>
+    [1.35, 1.0].flatMap((g) => [
+      { dead: g },
+      ...variable.flatMap((lead) => subsetsOf(variable).map((kept) => ({ dead: g, ...Object.fromEntries(kept.map((c) => [c, c === lead ? 1.5 : 1.5 * psi0[c]!])) }))),
+    ]);
+  const load = fc.record({
+    start: fc.integer({ min: 0, max: 19 }),
+    extent: fc.integer({ min: 1, max: 20 }),
+    w: fc.integer({ min: -40, max: 120 }).filter((w) => w !== 0),
+  });
+  const spansOf = fc.array(fc.integer({ min: 6, max: 14 }), { minLength: 1, maxLength: 3 });
+  /** Twentieths of the member: a load from `start` over `extent` of them, cut at the far end. */
+  const placed = (raw: { start: number; extent: number; w: number }[], categories: string[], L: number, scale: number): Partial<Load>[] =>
+    raw.map((l, i) => ({ type: "uniform", category: categories[i % categories.length]!, w: l.w * scale, from: (l.start * L) / 20, to: (Math.min(20, l.start + l.extent) * L) / 20 }));
+  const compare = (pruned: DesignResult, full: DesignResult, label: string) => {
+    expect(pruned.schedules.length).toBe(full.schedules.length);
+    pruned.schedules.forEach((s, j) => {
+      const f = full.schedules[j]!;
+      expectClose(s.efficiency.demandIntegral, f.efficiency.demandIntegral, { rel: 1e-9, abs: 1e-9 }, label);
+      expect(s.count, label).toBe(f.count);
+      expectClose(s.verification.maxUtilisation, f.verification.maxUtilisation, { rel: 1e-9, abs: 1e-12 }, label);
+    });
+    const worst = (r: DesignResult) => Math.max(0, ...r.checks.filter((c) => !c.id.startsWith("deflection")).map((c) => ("utilisation" in c && typeof c.utilisation === "number" ? c.utilisation : 0)));
+    expectClose(worst(pruned), worst(full), { rel: 1e-9, abs: 1e-12 }, label);
+  };
+  const custom = (list: Record<string, number>[]) => ({ set: "custom", custom: list.map((factors, i) => ({ id: `C${i + 1}`, factors })) });
+
+  test("designMember: the unfactored set on generated continuous members with loads of either sign equals the 16 selections written out (NDS C_D by each one's shortest load)", () => {
+    expect(asEntered).toHaveLength(16);
+    fc.assert(
+      fc.property(spansOf, fc.array(load, { minLength: 2, maxLength: 6 }), fc.shuffledSubarray(["dead", "live", "roof-live", "snow", "wind"], { minLength: 2 }), (spans, raw, categories) => {
+        const loads = placed(raw, categories, spans.reduce((a, b) => a + b, 0), 1);
+        const job = (combinations: Record<string, unknown>) =>
+          nailedTimberI({ kind: "nail", standard: "NDS-2018", size: "16d common" }, { combinations, beam: { spans, loads, selfWeight: false } } as Partial<JobInput>);
+        compare(design(job({ set: "unfactored" })), design(job(custom(asEntered))), JSON.stringify({ spans, loads }));
+      }),
+      { numRuns: 30 },
+    );
+  });
+
+  test("designMember: EN 1990 (6.10) on generated continuous members, EC5 nails, equals every selection written out (k_mod by each one's shortest load)", () => {
+    fc.assert(
+      fc.property(spansOf, fc.array(load, { minLength: 2, maxLength: 6 }), fc.shuffledSubarray(["live", "snow", "wind"], { minLength: 2, maxLength: 2 }), (spans, raw, variable) => {
+        const metres = spans.map((l) => l / 3);
+        const loads = placed(raw, ["dead", ...variable], metres.reduce((a, b) => a + b, 0), 0.02);
+        const job = (combinations: Record<string, unknown>) =>
+          nailedTimberI({ kind: "nail", standard: "EN1995-1-1", diameter: 3.1, length: 75, serviceClass: 1 }, {
+            units: "si",
+            basis: "factored",
+            combinations,
+            materials: [{ id: "DFL", name: "C24", family: "sawn-timber", E: 11_000, density: 420, characteristicDensity: 350, meanDensity: 420, strength: { bending: 14.8, shear: 2.46 } }],
+            parts: [
+              { id: "bottom", material: "DFL", shape: { type: "rectangle", b: 140, h: 38 }, x: 0, y: 0 },
+              { id: "web", material: "DFL", shape: { type: "rectangle", b: 38, h: 235 }, x: 51, y: 38 },
+              { id: "top", material: "DFL", shape: { type: "rectangle", b: 140, h: 38 }, x: 0, y: 273 },
+            ],
+            beam: { spans: metres, loads, selfWeight: false },
+            spacing: { module: 5, minZoneLength: 300, maxZonesPerSpan: 5, symmetric: true },
+          } as Partial<JobInput>);
+        compare(design(job({ set: "en1990-6.10" })), design(job(custom(en1990(variable)))), JSON.stringify({ spans: metres, loads }));
+      }),
+      { numRuns: 30 },
+    );
+  });
+});
