@@ -1,4 +1,4 @@
-import { analyseBeam, type BeamAnalysis } from "./beam/analyse-beam.js";
+import { analyseBeam, selfWeightOf, type BeamAnalysis } from "./beam/analyse-beam.js";
 import { beamAssumptions } from "./beam/beam-assumptions.js";
 import { beamResult } from "./beam/beam-result.js";
 import { memberActions } from "./beam/member-actions.js";
@@ -37,7 +37,8 @@ export function designMember(job: JobDocument): DesignResult {
   // The section drawn and reported: every part, wherever along the member it runs.
   const section = stepped ? buildSection(positioned(job.parts), job.materials) : stretches[0]!.section;
   const joints = memberJoints(job, stretches, length);
-  const combinationList = combinationSet(job.beam, job.combinations, job.beam.selfWeight ? 1 : 0);
+  // The same self-weight as the analysis and the assumptions take, so that all three see the same categories.
+  const combinationList = combinationSet(job.beam, job.combinations, job.beam.selfWeight ? Math.max(...stretches.map((s) => selfWeightOf(s.section))) : 0);
   const beam = analyseBeam(job, stretches, combinationList.combinations);
   const stations = stationsFor(beam.length, [...new Set(beam.results.flatMap((r) => r.actions.breaks))]);
   const profile = stressProfile(section);
