@@ -131,10 +131,11 @@ export function combinationSet(beam: Beam, settings: CombinationSettings, selfWe
     const key = present.map((c) => factors[c.id] ?? 0).join("|");
     const principal = (r.principal ?? []).filter((p) => categories.includes(p));
     const timeEffect = formTimeEffect(principal, categories, info);
-    // The same loads in the same form are one combination; in two forms (λ) both stay.
+    // The same loads in the same form are one combination (in two forms, λ, both stay); a selection that
+    // repeats another is not a combination of the standard left out, so it is not listed.
     const same = seen.get(`${key}|${principal.join(",")}|${timeEffect.value}`);
     if (same !== undefined && builtIn) {
-      omitted.push({ id: r.id, name: combinations[same]!.name, reason: `the same as ${combinations[same]!.id} with the loads present` });
+      if (!r.id.includes(" without ")) omitted.push({ id: r.id, name: combinations[same]!.name, reason: `the same as ${combinations[same]!.id} with the loads present` });
       continue;
     }
     const name =

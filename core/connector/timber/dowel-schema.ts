@@ -90,7 +90,7 @@ export function dowelConditions(c: Conditions, ropeCap: number, ropeName: string
 export function timberAssumptions(name: string, c: Conditions): string[] {
   const out = [`${name}: loaded laterally along the member by the shear flow; one row's connectors each carry an equal share.`];
   if (c.standard === "NDS-2018") {
-    out.push(`${name}: C_D of each combination from its shortest-duration load (dead 0.9, live 1.0, snow 1.15, roof live 1.25, wind 1.6; at most 1.6 for connections) under ASD; λ by the combination's loads under LRFD (NDS-2018 §2.3.2, §11.3.2, Table N3).`);
+    out.push(`${name}: C_D of each combination from its shortest-duration load (dead 0.9, live 1.0, snow 1.15, roof live 1.25, wind 1.6; at most 1.6 for connections) under ASD; λ by the combination's form (its principal load) under LRFD (NDS-2018 §2.3.2, §11.3.2, Table N3).`);
     out.push(`${name}: spacings and distances for full design value (C_Δ = 1.0); ${c.groupAction ? "group action C_g from the row given" : "no group action reduction (C_g = 1.0): each row carries its own tributary shear flow"}.`);
   } else {
     out.push(`${name}: k_mod of each combination from its shortest-duration load (dead permanent, live medium-term, snow, roof live and wind short-term, after EN 1995-1-1 Table 2.2; the national annex may differ); γ_M = 1.3 (recommended value; check the national annex); service class ${c.serviceClass ?? 1}.`);
