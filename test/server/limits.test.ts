@@ -112,13 +112,13 @@ describe("the time limit", () => {
     const limited = await buildApp({ timeLimits: { designMs: 300 } });
     try {
       const job = example("workshop-box-beam.si");
-      // A heavy but valid member: six spans, 60 loads, three patterned categories (about a second or more).
+      // A heavy but valid member: ten spans, 120 loads, three patterned categories (about a second or more).
       const categories = ["dead", "live", "snow", "wind"];
       const heavy = {
         ...job,
         beam: {
-          spans: Array(6).fill(3.2),
-          loads: Array.from({ length: 60 }, (_, i) => ({ type: "point", category: categories[i % 4], P: 1, at: (i * 0.31) % 19 })),
+          spans: Array(10).fill(3.2),
+          loads: Array.from({ length: 120 }, (_, i) => ({ type: "point", category: categories[i % 4], P: 1, at: (i * 0.31) % 31 })),
           patternedCategories: ["live", "snow", "wind"],
         },
         combinations: { set: "asce7-22-allowable" },
