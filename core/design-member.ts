@@ -1,8 +1,8 @@
-import { analyseBeam, type BeamAnalysis } from "./beam/analyse-beam.js";
+import { analyseBeam, selfWeightOf, type BeamAnalysis } from "./beam/analyse-beam.js";
 import { beamAssumptions } from "./beam/beam-assumptions.js";
 import { beamResult } from "./beam/beam-result.js";
 import { memberActions } from "./beam/member-actions.js";
-import { combinationsOf } from "./beam/combinations.js";
+import { combinationSet } from "./beam/combinations.js";
 import { stationsFor } from "./beam/stations.js";
 import { memberChecks } from "./checks/member-checks.js";
 import { kindOf } from "./connector/registry.js";
@@ -39,7 +39,9 @@ export function designMember(job: JobDocument): DesignResult {
   // The section drawn and reported: every part, wherever along the member it runs.
   const section = stepped ? buildSection(positioned(job.parts), job.materials) : stretches[0]!.section;
   const { joints, uncovered } = memberJointsOf(job, stretches, length);
-  const beam = analyseBeam(job, stretches, combinationsOf(job));
+  // The same self-weight as the analysis and the assumptions take, so that all three see the same categories.
+  const combinationList = combinationSet(job.beam, job.combinations, job.beam.selfWeight ? Math.max(...stretches.map((s) => selfWeightOf(s.section))) : 0);
+  const beam = analyseBeam(job, stretches, combinationList.combinations);
   const stations = stationsFor(beam.length, [...new Set(beam.results.flatMap((r) => r.actions.breaks))]);
   const profile = stressProfile(section);
   const plies = stepped ? null : multiPlyOf(section);
@@ -242,7 +244,7 @@ export function designMember(job: JobDocument): DesignResult {
       : [],
     terminations,
     joints: jointResults,
-    beam: beamResult(beam, stations),
+    beam: { ...beamResult(beam, stations), omitted: combinationList.omitted },
     schedules,
     bondLines,
     welds,

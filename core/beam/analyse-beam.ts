@@ -5,6 +5,7 @@ import type { Combination } from "../schema/result.js";
 import type { SectionModel } from "../section/section-model.js";
 import { beamModelOf, type LoadRegion, type Support, type SupportCondition } from "./beam-model.js";
 import { governingPatterns, regionsIn } from "./live-load-patterns.js";
+import { patternTimeEffect } from "./combinations.js";
 import { categoriesOf, presentCategories, shortestDuration } from "./load-categories.js";
 import {
   combineActions,
@@ -193,6 +194,7 @@ export function analyseMember(input: MemberInput): BeamAnalysis {
         name: `${base.name}, ${inPattern.map((c) => c.replace("-", " ")).join(" and ")} ${spansText}`,
         categories,
         duration: customDuration(base) ?? durationOf(categories),
+        ...(base.timeEffect ? { timeEffect: patternTimeEffect(base, categories, info)! } : {}),
         base: base.id,
         pattern: loadedRegions.map((r) => regions[r]!.spans[0]!),
       };

@@ -18,9 +18,14 @@ export function beamAssumptions(job: JobDocument, beam: BeamAnalysis): string[] 
   ];
   const { notes, omitted } = combinationSet(job.beam, job.combinations, beam.selfWeight);
   out.push(...notes);
-  if (omitted.length > 0) out.push(`Combinations left out because they cannot govern (their factors lie between those of two others, so their actions lie between theirs at every point, or are a fraction of another's, so their actions are never larger; and their load duration is no shorter): ${omitted.map((o) => `${o.id} ${o.name} (${o.reason})`).join("; ")}.`);
+  if (omitted.length > 0) {
+    out.push(
+      `${omitted.length} combination${omitted.length === 1 ? "" : "s"} left out because ${omitted.length === 1 ? "it cannot" : "they cannot"} govern: the same loads as one kept, or factors between those of two others (their actions then lie between theirs at every point, whatever the signs) or a fraction of another's, where the others hold no load category it lacks (so no shorter load duration: C_D and k_mod no higher) and have no higher λ in any live-load pattern: ${omitted.map((o) => `${o.id} ${o.name} (${o.reason})`).join("; ")}.`,
+    );
+  }
   out.push(
     `Load-duration class of each combination: that of its shortest-duration load (EN 1995-1-1 §3.1.3(2)), with dead permanent, live medium-term, roof live short-term, snow short-term, wind ${windDurationOf(job.beam) === "short" ? "short-term" : "instantaneous"} (${job.beam.windDuration === undefined ? "the default; the job may choose instantaneous in beam.windDuration" : "as the job chooses in beam.windDuration"}) (EN 1995-1-1 Table 2.2 as commonly applied; national annexes may class snow and wind differently), or as the job's own categories state.`,
+    "NDS LRFD time effect factor λ by the combination's form (NDS-2018 Table N3, from memory): 1.4D 0.6; 1.6L principal 0.8 for live load from occupancy (the built-in live category), 0.7 from storage (a category of the job's own acting as live load with a long-term duration), 1.25 from impact (instantaneous; at most 1.0 for connections); 1.6Lr or 1.6S principal 0.8; 1.0W principal 1.0. Where the principal load is absent (a selection without it, a pattern that leaves it off) or the set names none (loads as entered, EN 1990, a table of the job's own), the least λ any load present would take as principal.",
   );
   if (beam.patterned.length > 0) {
     out.push(

@@ -1,6 +1,8 @@
 import type { CombinationSettings, Beam, LoadCategory } from "../schema/beam.js";
 import type { JobDocument } from "../schema/job.js";
 import type { Combination } from "../schema/result.js";
+import { ndsLoadDurationFactor, ndsTimeEffectFactor } from "../connector/timber/nds-adjustment.js";
+import { beamModelOf } from "./beam-model.js";
 import { categoriesOf, presentCategories, shortestDuration, type CategoryInfo } from "./load-categories.js";
 
 type Factors = Partial<Record<LoadCategory, number>>;
@@ -9,6 +11,8 @@ type Factors = Partial<Record<LoadCategory, number>>;
 export interface CombinationTemplate {
   id: string;
   factors: Factors;
+  /** The principal load of the form (the 1.6 load of ASCE/SEI 7 §2.3.1 combinations 2 and 3, 1.0W of 4 and 5): NDS LRFD λ follows it. */
+  principal?: LoadCategory;
 }
 
 /**
@@ -19,15 +23,15 @@ export interface CombinationTemplate {
  */
 export const asce7StrengthCombinations: CombinationTemplate[] = [
   { id: "LRFD-1", factors: { dead: 1.4 } },
-  { id: "LRFD-2a", factors: { dead: 1.2, live: 1.6, "roof-live": 0.5 } },
-  { id: "LRFD-2b", factors: { dead: 1.2, live: 1.6, snow: 0.3 } },
-  { id: "LRFD-3a", factors: { dead: 1.2, "roof-live": 1.6, live: 1.0 } },
-  { id: "LRFD-3b", factors: { dead: 1.2, "roof-live": 1.6, wind: 0.5 } },
-  { id: "LRFD-3c", factors: { dead: 1.2, snow: 1.0, live: 1.0 } },
-  { id: "LRFD-3d", factors: { dead: 1.2, snow: 1.0, wind: 0.5 } },
-  { id: "LRFD-4a", factors: { dead: 1.2, wind: 1.0, live: 1.0, "roof-live": 0.5 } },
-  { id: "LRFD-4b", factors: { dead: 1.2, wind: 1.0, live: 1.0, snow: 0.3 } },
-  { id: "LRFD-5", factors: { dead: 0.9, wind: 1.0 } },
+  { id: "LRFD-2a", factors: { dead: 1.2, live: 1.6, "roof-live": 0.5 }, principal: "live" },
+  { id: "LRFD-2b", factors: { dead: 1.2, live: 1.6, snow: 0.3 }, principal: "live" },
+  { id: "LRFD-3a", factors: { dead: 1.2, "roof-live": 1.6, live: 1.0 }, principal: "roof-live" },
+  { id: "LRFD-3b", factors: { dead: 1.2, "roof-live": 1.6, wind: 0.5 }, principal: "roof-live" },
+  { id: "LRFD-3c", factors: { dead: 1.2, snow: 1.0, live: 1.0 }, principal: "snow" },
+  { id: "LRFD-3d", factors: { dead: 1.2, snow: 1.0, wind: 0.5 }, principal: "snow" },
+  { id: "LRFD-4a", factors: { dead: 1.2, wind: 1.0, live: 1.0, "roof-live": 0.5 }, principal: "wind" },
+  { id: "LRFD-4b", factors: { dead: 1.2, wind: 1.0, live: 1.0, snow: 0.3 }, principal: "wind" },
+  { id: "LRFD-5", factors: { dead: 0.9, wind: 1.0 }, principal: "wind" },
 ];
 
 /**
@@ -69,35 +73,39 @@ export function combinationsOf(job: JobDocument): Combination[] {
 }
 
 /**
- * The combinations of a set for the categories present in the beam: factors of absent categories are
- * dropped, repeats removed, and (for the built-in sets) a combination is omitted when its factors lie
- * on the segment between two others (its actions then lie between theirs at every point) or are a
- * fraction of another's (its actions are that fraction of the other's, never larger in size). Factors
- * are never negative, so the others carry no category it lacks and their load-duration class is no
- * shorter: it can govern no connector, no stress and neither extreme of an envelope.
- * `selfWeight` is any non-zero number when self-weight is on.
+ * The combinations of a set for the categories present in the beam. A timber connector's resistance
+ * follows the shortest-duration load of the combination (NDS C_D and λ, EN 1995 k_mod), and a variable
+ * load may be absent (ASCE/SEI 7-22 §2.3.1, §2.4.1: the effects of one or more loads not acting are
+ * investigated [M]; EN 1990 Table A1.2(B): a favourable variable action takes γ = 0 [M]); so each built-in
+ * combination comes with every selection of its variable loads left out, each at its own duration.
+ * Factors of absent categories are dropped and repeats removed. Then a combination is omitted when it
+ * cannot govern: its factors lie on the segment between two others' (its actions then lie between
+ * theirs at every point, whatever their signs) or are a fraction of another's, and each of those others
+ * holds no category it lacks (so no shorter duration: C_D and k_mod no higher) and has no higher λ, in any
+ * live-load pattern. `selfWeight` is any non-zero number when self-weight is on.
  */
 export function combinationSet(beam: Beam, settings: CombinationSettings, selfWeight: number): CombinationSetResult {
   const info = categoriesOf(beam, settings.psi0);
   const present = [...info.values()].filter((c) => presentCategories(beam, selfWeight).has(c.id));
   const notes: string[] = [];
-  let raw: { id: string; factors: Record<string, number>; duration?: Combination["duration"] | undefined }[];
+  let raw: Raw[];
   switch (settings.set) {
     case "unfactored":
       raw = [{ id: "U", factors: Object.fromEntries(present.map((c) => [c.id, 1])) }];
+      notes.push("Load combinations: the loads as entered, factor 1, all together and with every selection of the variable categories left out (dead load alone included), each at the load duration of its own shortest-duration load.");
       break;
     case "asce7-22-strength":
       raw = fromTemplates(asce7StrengthCombinations, present);
-      notes.push("Load combinations: ASCE/SEI 7-22 §2.3.1 basic combinations for strength design (rain, seismic and the other loads without a category here are not included; 1.0L is kept in combinations 3 and 4).");
+      notes.push("Load combinations: ASCE/SEI 7-22 §2.3.1 basic combinations for strength design, each also with its variable loads left out in every selection (rain, seismic and the other loads without a category here are not included; 1.0L is kept in combinations 3 and 4).");
       break;
     case "asce7-22-allowable":
       raw = fromTemplates(asce7AllowableCombinations, present);
-      notes.push("Load combinations: ASCE/SEI 7-22 §2.4.1 basic combinations for allowable stress design (rain, seismic and the other loads without a category here are not included).");
+      notes.push("Load combinations: ASCE/SEI 7-22 §2.4.1 basic combinations for allowable stress design, each also with its variable loads left out in every selection (rain, seismic and the other loads without a category here are not included).");
       break;
     case "en1990-6.10":
       raw = en1990(present);
       notes.push(
-        `Load combinations: EN 1990 eq. (6.10), γG = 1.35 or 1.0 on all permanent loads together, γQ = 1.5 on the leading variable load, 1.5·ψ0 on the others; ψ0 used: ${present
+        `Load combinations: EN 1990 eq. (6.10), γG = 1.35 or 1.0 on all permanent loads together, γQ = 1.5 on the leading variable load, 1.5·ψ0 on the others, each accompanying load also left out in every selection; ψ0 used: ${present
           .filter((c) => c.actsAs !== "dead")
           .map((c) => `${c.symbol} ${c.psi0}`)
           .join(", ") || "none (no variable loads)"} (EN 1990 Table A1.1 recommended values unless the job sets them). Roof imposed load is not combined with snow or wind (EN 1991-1-1 §3.3.2(1)).`,
@@ -107,44 +115,149 @@ export function combinationSet(beam: Beam, settings: CombinationSettings, selfWe
       raw = (settings.custom ?? []).map((c) => ({ id: c.id, factors: Object.fromEntries(present.filter((p) => (c.factors[p.id] ?? 0) !== 0).map((p) => [p.id, c.factors[p.id]!])), duration: c.duration }));
       break;
   }
+  const builtIn = settings.set !== "custom";
+  // Categories placed span by span: a selection that only leaves such a load off is one of the patterns.
+  const patternedHere = beamModelOf(beam.spans, beam.supports).regions.length > 1 ? new Set(beam.patternedCategories.filter((c) => info.has(c))) : new Set<string>();
+  if (builtIn) raw = withSelections(raw, present, patternedHere, info);
   const named = (settings.custom ?? []).reduce((m, c) => m.set(c.id, c.name), new Map<string, string>());
   const combinations: Combination[] = [];
-  const seen = new Map<string, string>();
+  const seen = new Map<string, number>();
   const omitted: CombinationSetResult["omitted"] = [];
   for (const r of raw) {
-    const factors = Object.fromEntries(present.filter((c) => (r.factors[c.id] ?? 0) !== 0).map((c) => [c.id, r.factors[c.id]!]));
-    const name = settings.set === "unfactored" ? "Loads as entered" : named.get(r.id) || nameOf(factors, info, settings.set === "en1990-6.10");
+    const factors: Record<string, number> = {};
+    for (const c of present) if ((r.factors[c.id] ?? 0) !== 0) factors[c.id] = r.factors[c.id]!;
+    const categories = Object.keys(factors);
+    if (categories.length === 0 && builtIn) continue;
     const key = present.map((c) => factors[c.id] ?? 0).join("|");
-    if (Object.keys(factors).length === 0 && settings.set !== "custom") continue;
-    const same = seen.get(key);
-    if (same !== undefined && settings.set !== "custom") {
-      omitted.push({ id: r.id, name, reason: `the same as ${same} with the loads present` });
+    const principal = (r.principal ?? []).filter((p) => categories.includes(p));
+    const timeEffect = formTimeEffect(principal, categories, info);
+    // The same loads in the same form are one combination (in two forms, λ, both stay); a selection that
+    // repeats another is not a combination of the standard left out, so it is not listed.
+    const same = seen.get(`${key}|${principal.join(",")}|${timeEffect.value}`);
+    if (same !== undefined && builtIn) {
+      if (!r.id.includes(" without ")) omitted.push({ id: r.id, name: combinations[same]!.name, reason: `the same as ${combinations[same]!.id} with the loads present` });
       continue;
     }
-    seen.set(key, r.id);
-    const categories = Object.keys(factors);
-    combinations.push({ id: r.id, name, factors, duration: r.duration ?? shortestDuration(categories.map((c) => info.get(c)!.duration)), categories });
+    const name =
+      settings.set === "unfactored"
+        ? r.id === "U" ? "Loads as entered" : `${nameOf(factors, info, false)}, as entered`
+        : named.get(r.id) || nameOf(factors, info, settings.set === "en1990-6.10");
+    const combination: Combination = {
+      id: r.id,
+      name,
+      factors,
+      duration: r.duration ?? shortestDuration(categories.map((c) => info.get(c)!.duration)),
+      categories,
+      ...(principal.length > 0 ? { principal } : {}),
+      timeEffect,
+    };
+    seen.set(`${key}|${principal.join(",")}|${timeEffect.value}`, combinations.length);
+    combinations.push(combination);
   }
-  const kept = settings.set === "custom" || settings.set === "unfactored" ? combinations : pruneInterior(combinations, present, omitted);
+  const patterned = new Set(beam.patternedCategories);
+  const kept = builtIn ? pruneInterior(combinations, present, patterned, info, omitted) : combinations;
   if (kept.length === 0) kept.push({ id: "U", name: "No loads", factors: {}, duration: "unspecified", categories: [] });
-  const ids = relabelling(kept);
-  const rename = (text: string) => text.replace(/\b(?:LRFD|ASD)-\d+[a-z]\b/g, (id) => ids.get(id) ?? id);
+  const rename = renaming(kept);
   return {
-    combinations: kept.map((c) => ({ ...c, id: ids.get(c.id) ?? c.id })),
-    omitted: omitted.map((o) => ({ ...o, reason: rename(o.reason) })),
+    combinations: kept.map((c) => ({ ...c, id: rename(c.id) })),
+    omitted: omitted.map((o) => ({ ...o, id: rename(o.id), reason: rename(o.reason) })),
     notes,
   };
 }
 
-function fromTemplates(templates: CombinationTemplate[], present: CategoryInfo[]) {
-  return templates.map((t) => ({ id: t.id, factors: Object.fromEntries(present.map((c) => [c.id, t.factors[c.actsAs] ?? 0])) }));
+interface Raw {
+  id: string;
+  factors: Record<string, number>;
+  duration?: Combination["duration"] | undefined;
+  /** Ids of the categories that take the principal load's role in the form. */
+  principal?: string[];
 }
 
-function en1990(present: CategoryInfo[]) {
+/** A load that is there whenever the member is: a dead-type category of permanent duration. */
+const permanentLoad = (c: CategoryInfo) => c.actsAs === "dead" && c.duration === "permanent";
+
+/**
+ * λ of a combination's form (NDS-2018 Table N3 [M]): that of its principal load where it is present
+ * (the least, where several categories share that role), else the least any variable load present
+ * would take as principal, 0.6 with permanent loads alone.
+ */
+export function formTimeEffect(principal: string[], categories: string[], info: Map<string, CategoryInfo>): { value: number; reason: string } {
+  const form = (id: string) => {
+    const c = info.get(id)!;
+    return { symbol: c.symbol, actsAs: c.actsAs, duration: c.duration };
+  };
+  const known = categories.filter((c) => info.has(c));
+  const variables = known.filter((c) => !permanentLoad(info.get(c)!)).map(form);
+  const principals = principal.filter((p) => known.includes(p)).map(form);
+  const options = principals.length > 0 ? principals.map((p) => ndsTimeEffectFactor({ principal: p, variables })) : [ndsTimeEffectFactor({ principal: null, variables })];
+  const least = options.reduce((a, b) => (b.value < a.value ? b : a));
+  return { value: least.value, reason: least.load };
+}
+
+/**
+ * λ of one live-load pattern of a combination, `loaded` the categories it loads: the combination's while a
+ * principal load is loaded; else the lower of the combination's and the loaded loads' own (never above the
+ * combination's, so that the patterns chosen by their actions also give the largest q/R).
+ */
+export function patternTimeEffect(base: Combination, loaded: string[], info: Map<string, CategoryInfo>): Combination["timeEffect"] {
+  if (!base.timeEffect) return undefined;
+  if ((base.principal ?? []).some((p) => loaded.includes(p))) return base.timeEffect;
+  const own = formTimeEffect([], loaded, info);
+  return own.value < base.timeEffect.value ? own : base.timeEffect;
+}
+
+/**
+ * Each combination, then the same with every selection of its variable loads left out (fewest left out
+ * first). A selection is not written out where leaving off one of its loads, X, changes no resistance
+ * factor (duration class, C_D, λ) and X is the only patterned category of the combination that holds it:
+ * that combination's live-load patterns then include X on no span, at the same resistance, and every
+ * other arrangement the patterns choose gives larger actions there.
+ */
+function withSelections(list: Raw[], present: CategoryInfo[], patterned: Set<string>, info: Map<string, CategoryInfo>): Raw[] {
+  const out: Raw[] = [];
+  const factorsOf = (categories: string[], principal: string[]) =>
+    `${shortestDuration(categories.map((c) => info.get(c)!.duration))}|${ndsLoadDurationFactor(categories, shortestDuration(categories.map((c) => info.get(c)!.duration))).value}|${formTimeEffect(principal, categories, info).value}`;
+  for (const r of list) {
+    const variable = present.filter((c) => !permanentLoad(c) && (r.factors[c.id] ?? 0) !== 0);
+    const all = present.filter((c) => (r.factors[c.id] ?? 0) !== 0).map((c) => c.id);
+    const principal = r.principal ?? [];
+    const masks = Array.from({ length: 1 << variable.length }, (_, m) => m).sort((a, b) => bits(a) - bits(b) || a - b);
+    for (const m of masks) {
+      const dropped = variable.filter((_, i) => m & (1 << i));
+      const left = all.filter((c) => !dropped.some((d) => d.id === c));
+      const inPatterns = dropped.some((x) => {
+        if (!patterned.has(x.id) || principal.includes(x.id)) return false;
+        const withX = [...left, x.id];
+        return withX.every((c) => c === x.id || !patterned.has(c)) && factorsOf(withX, principal) === factorsOf(left, principal);
+      });
+      if (inPatterns) continue;
+      const factors = { ...r.factors };
+      for (const d of dropped) delete factors[d.id];
+      out.push({ ...r, id: dropped.length === 0 ? r.id : `${r.id} without ${dropped.map((d) => d.symbol).join(", ")}`, factors });
+    }
+  }
+  return out;
+}
+
+const bits = (m: number) => {
+  let n = 0;
+  for (let x = m; x; x &= x - 1) n++;
+  return n;
+};
+
+function fromTemplates(templates: CombinationTemplate[], present: CategoryInfo[]): Raw[] {
+  return templates.map((t) => ({
+    id: t.id,
+    factors: Object.fromEntries(present.map((c) => [c.id, t.factors[c.actsAs] ?? 0])),
+    ...(t.principal ? { principal: present.filter((c) => c.actsAs === t.principal).map((c) => c.id) } : {}),
+  }));
+}
+
+function en1990(present: CategoryInfo[]): Raw[] {
   const { gammaGsup, gammaGinf, gammaQ } = EN1990_FACTORS;
   const permanent = present.filter((c) => c.actsAs === "dead");
   const variable = present.filter((c) => c.actsAs !== "dead");
-  const out: { id: string; factors: Record<string, number> }[] = [];
+  const out: Raw[] = [];
   const withG = (g: number, rest: Record<string, number>) => ({ ...Object.fromEntries(permanent.map((c) => [c.id, g])), ...rest });
   out.push({ id: "EN-1a", factors: withG(gammaGsup, {}) }, { id: "EN-1b", factors: withG(gammaGinf, {}) });
   variable.forEach((lead, k) => {
@@ -155,32 +268,52 @@ function en1990(present: CategoryInfo[]) {
   return out;
 }
 
-/** Drops combinations on the segment between two others or between one and zero (see `combinationSet`). */
-function pruneInterior(list: Combination[], present: CategoryInfo[], omitted: CombinationSetResult["omitted"]): Combination[] {
+/**
+ * Drops combinations on the segment between two others or between one and zero (see `combinationSet`),
+ * where each of the two holds only categories the dropped one holds and has no higher λ than the least
+ * λ any live-load pattern of the dropped one can take.
+ */
+function pruneInterior(list: Combination[], present: CategoryInfo[], patterned: Set<string>, info: Map<string, CategoryInfo>, omitted: CombinationSetResult["omitted"]): Combination[] {
   const vec = (c: Combination) => present.map((p) => c.factors[p.id] ?? 0);
-  const vectors = list.map(vec);
-  const zero = present.map(() => 0);
-  const candidates = [{ id: "no load", v: zero }, ...list.map((c, i) => ({ id: c.id, v: vectors[i]! }))];
+  const lambda = (c: Combination) => c.timeEffect?.value ?? 0;
+  // The least λ of any pattern: a pattern that leaves every principal load off takes the loads' own λ.
+  const leastLambda = (c: Combination) => {
+    const principal = c.principal ?? [];
+    if (principal.length === 0 || !principal.every((p) => patterned.has(p))) return lambda(c);
+    const rest = c.categories.filter((k) => !principal.includes(k));
+    return Math.min(lambda(c), formTimeEffect([], rest, info).value);
+  };
+  const bit = new Map(present.map((p, i) => [p.id, 2 ** i]));
+  const maskOf = (c: Combination) => c.categories.reduce((m, k) => m + (bit.get(k) ?? 0), 0);
+  const entries = list.map((c) => ({ id: c.id, c: c as Combination | null, v: vec(c), cats: maskOf(c), high: lambda(c), low: leastLambda(c) }));
+  const zero = { id: "no load", c: null, v: present.map(() => 0), cats: 0, high: 0, low: 0 };
+  // Integer weights for a numeric key of a direction (a collision only costs a missed omission).
+  const weights = present.map((_, i) => 1 + 1_000_003 * i);
   const keep: Combination[] = [];
-  list.forEach((c, i) => {
-    const a = vectors[i]!;
-    for (let p = 0; p < candidates.length; p++) {
-      for (let q = p + 1; q < candidates.length; q++) {
-        const b1 = candidates[p]!;
-        const b2 = candidates[q]!;
-        if (b1.id === c.id || b2.id === c.id) continue;
-        const t = onSegment(a, b1.v, b2.v);
-        if (t === null) continue;
-        omitted.push({
-          id: c.id,
-          name: c.name,
-          reason: b1.id === "no load" ? `a fraction (${round(t)}) of ${b2.id}` : `between ${b1.id} and ${b2.id}`,
-        });
-        return;
+  for (const a of entries) {
+    // a lies between b1 and b2 when b1 − a and b2 − a point in opposite directions: find such pairs by
+    // the direction's key, then confirm exactly. Each b holds only categories a holds, and no higher λ.
+    const byDirection = new Map<number, (typeof entries)[number]>();
+    let reason: string | null = null;
+    for (const b of [zero, ...entries]) {
+      if (b === a || (b.cats & a.cats) !== b.cats || b.high > a.low + 1e-12) continue;
+      let size = 0;
+      for (let i = 0; i < b.v.length; i++) size += (b.v[i]! - a.v[i]!) ** 2;
+      size = Math.sqrt(size);
+      if (!(size > 0)) continue;
+      let key = 0;
+      for (let i = 0; i < b.v.length; i++) key += Math.round(((b.v[i]! - a.v[i]!) * 1e6) / size) * weights[i]!;
+      const other = byDirection.get(-key);
+      const t = other ? onSegment(a.v, other.v, b.v) : null;
+      if (other && t !== null) {
+        reason = other === zero ? `a fraction (${round(t)}) of ${b.id}` : `between ${other.id} and ${b.id}`;
+        break;
       }
+      byDirection.set(key, b);
     }
-    keep.push(c);
-  });
+    if (reason === null) keep.push(a.c!);
+    else omitted.push({ id: a.id, name: a.c!.name, reason });
+  }
   return keep;
 }
 
@@ -202,12 +335,14 @@ function onSegment(a: number[], b1: number[], b2: number[]): number | null {
   return t;
 }
 
-/** "LRFD-2a" becomes "LRFD-2" when no other alternative of combination 2 is left. */
-function relabelling(list: Combination[]): Map<string, string> {
-  const stem = (id: string) => id.replace(/^((?:LRFD|ASD)-\d+)[a-z]$/, "$1");
-  const count = new Map<string, number>();
-  for (const c of list) count.set(stem(c.id), (count.get(stem(c.id)) ?? 0) + 1);
-  return new Map(list.filter((c) => count.get(stem(c.id)) === 1 && stem(c.id) !== c.id).map((c) => [c.id, stem(c.id)]));
+/** "LRFD-2a" becomes "LRFD-2" (in every id and text) when no other alternative of combination 2 is left. */
+function renaming(list: Combination[]): (text: string) => string {
+  const letters = new Map<string, Set<string>>();
+  for (const c of list) {
+    const m = /^((?:LRFD|ASD)-\d+)([a-z])\b/.exec(c.id);
+    if (m) letters.set(m[1]!, (letters.get(m[1]!) ?? new Set()).add(m[2]!));
+  }
+  return (text) => text.replace(/\b((?:LRFD|ASD)-\d+)([a-z])\b/g, (id, stem: string, letter: string) => (letters.get(stem)?.size === 1 && letters.get(stem)!.has(letter) ? stem : id));
 }
 
 function nameOf(factors: Record<string, number>, info: Map<string, CategoryInfo>, eurocode: boolean): string {

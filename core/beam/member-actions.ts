@@ -217,23 +217,45 @@ function extremeOver(
   absolute: boolean,
   sign = 1,
 ): Extreme {
-  let best: Extreme = { value: -Infinity, x: a };
-  const consider = (value: number, x: number) => {
-    const score = absolute ? Math.abs(value) : sign * value;
-    if (score > best.value) best = { value: score, x };
-  };
-  for (const p of actions.pieces) {
+  let bestValue = -Infinity;
+  let bestX = a;
+  const pieces = actions.pieces;
+  // The first piece that reaches a (pieces are in order along the member); then on until one starts past b.
+  let lo0 = 0;
+  let hi0 = pieces.length;
+  while (lo0 < hi0) {
+    const mid = (lo0 + hi0) >> 1;
+    if (pieces[mid]!.x1 < a) lo0 = mid + 1;
+    else hi0 = mid;
+  }
+  for (let k = lo0; k < pieces.length; k++) {
+    const p = pieces[k]!;
+    if (p.x0 > b) break;
     const lo = Math.max(a, p.x0);
     const hi = Math.min(b, p.x1);
     if (hi < lo) continue;
     const c = coefficients(p);
-    consider(poly(c, lo - p.x0), lo);
-    consider(poly(c, hi - p.x0), hi);
+    const ends = [lo, hi];
+    for (const x of ends) {
+      const value = poly(c, x - p.x0);
+      const score = absolute ? Math.abs(value) : sign * value;
+      if (score > bestValue) {
+        bestValue = score;
+        bestX = x;
+      }
+    }
     for (const u of realRoots(derivative(p))) {
       const x = p.x0 + u;
-      if (x > lo && x < hi) consider(poly(c, u), x);
+      if (!(x > lo && x < hi)) continue;
+      const value = poly(c, u);
+      const score = absolute ? Math.abs(value) : sign * value;
+      if (score > bestValue) {
+        bestValue = score;
+        bestX = x;
+      }
     }
   }
+  const best = { value: bestValue, x: bestX };
   if (best.value === -Infinity) return { value: 0, x: a };
   return { value: absolute ? best.value : sign * best.value, x: best.x };
 }

@@ -40,6 +40,8 @@ export interface ConnectorContext {
   duration: DurationClass;
   /** Load categories present in the combination with a non-zero factor. */
   categories: string[];
+  /** NDS LRFD time effect factor λ of the combination's form (NDS-2018 Table N3), where the combination gives it. */
+  timeEffect?: { value: number; reason: string } | undefined;
   combinationName: string;
   basis: "allowable" | "factored";
   /** The two parts at the contact line: head (side) member first, then the main member. In double shear read `double` instead. */

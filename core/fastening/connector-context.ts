@@ -17,6 +17,7 @@ export function contextFor(combination: Combination, job: Pick<JobDocument, "bas
   return {
     duration: combination.duration,
     categories: combination.categories,
+    timeEffect: combination.timeEffect,
     combinationName: combination.name,
     basis: job.basis,
     rows,

@@ -119,6 +119,10 @@ export const Combination = z.object({
   duration: z.enum(durationClasses),
   /** Load categories present in the job with a non-zero factor in this combination. */
   categories: z.array(z.string()),
+  /** The categories in the principal load's role in the standard's form (ASCE/SEI 7-22 §2.3.1: the 1.6 load of combinations 2 and 3, 1.0W of 4 and 5), where it names one. */
+  principal: z.array(z.string()).optional(),
+  /** NDS LRFD time effect factor λ of the combination (NDS-2018 Table N3 [M]): that of its principal load, with the reading. */
+  timeEffect: z.object({ value: z.number(), reason: z.string() }).optional(),
   /** For one live-load pattern of a combination: that combination's id. */
   base: z.string().optional(),
   /** For one live-load pattern: the spans (the job's numbering from 1) carrying the patterned loads. */
@@ -138,6 +142,8 @@ export const BeamResult = z.object({
   patterned: z.array(z.string()),
   selfWeight: q("lineLoad"),
   combinations: z.array(Combination),
+  /** Combinations of the set left out because they cannot govern, each with the reason. */
+  omitted: z.array(z.object({ id: z.string(), name: z.string(), reason: z.string() })).optional(),
   /** Stations along the member; a station repeats where V or M jumps (left value first). */
   stations: z.array(q("span")),
   perCombination: z.array(

@@ -14,7 +14,7 @@ import {
   ndsGroupSideStiffness,
   ndsLoadDurationFactor,
   ndsTemperatureFactor,
-  ndsTimeEffectFactor,
+  ndsConnectionTimeEffect,
   ndsWetServiceFactor,
   type NdsMoisture,
   type NdsTemperature,
@@ -374,10 +374,10 @@ function ndsResistance(spec: DowelSpec, context: ConnectorContext, g: DowelGeome
   if (spec.nds.endGrain) factors.push({ symbol: "C_eg", value: NDS_END_GRAIN_FACTOR, description: "end grain factor", reference: "NDS-2018 §12.5.2" });
   if (spec.nds.toeNailed) factors.push({ symbol: "C_tn", value: NDS_TOE_NAIL_FACTOR, description: "toe-nail factor", reference: "NDS-2018 §12.5.4" });
   if (!allowable) {
-    const lambda = ndsTimeEffectFactor(context.categories);
+    const lambda = ndsConnectionTimeEffect(context.timeEffect, context.categories);
     factors.push({ symbol: "K_F", value: NDS_KF_CONNECTIONS, description: "LRFD format conversion factor", reference: "NDS-2018 Table 11.3.1" });
     factors.push({ symbol: "φ_z", value: NDS_PHI_CONNECTIONS, description: "LRFD resistance factor, connections", reference: "NDS-2018 Table 11.3.1" });
-    factors.push({ symbol: "λ", value: lambda.value, description: `time effect factor (${lambda.load})`, reference: "NDS-2018 Table N3" });
+    factors.push({ symbol: "λ", value: lambda.value, description: `time effect factor (${lambda.load})`, reference: "NDS-2018 Table N3 [M]" });
   }
   for (const f of factors) steps.push({ symbol: f.symbol, description: f.description, value: f.value, quantity: "ratio", reference: f.reference });
   const product = factors.reduce((p, f) => p * f.value, 1);

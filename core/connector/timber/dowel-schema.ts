@@ -93,7 +93,7 @@ export function timberAssumptions(name: string, c: Conditions): string[] {
     out.push(`${name}: in double shear the central (main) member is the part between the joint's two contact lines; each outer member is checked with it, both outer members taken alike as the double-shear equations assume, and the weaker governs${c.standard === "NDS-2018" ? " (NDS-2018 Table 12.3.1A, double shear)" : " (EN 1995-1-1 eq. 8.7, 8.11–8.13)"}; a fastener driven from one face may be driven from either, so the shorter penetration into the far outer member is used.`);
   }
   if (c.standard === "NDS-2018") {
-    out.push(`${name}: C_D of each combination from its shortest-duration load (dead 0.9, live 1.0, snow 1.15, roof live 1.25, wind 1.6; at most 1.6 for connections) under ASD; λ by the combination's loads under LRFD (NDS-2018 §2.3.2, §11.3.2, Table N3).`);
+    out.push(`${name}: C_D of each combination from its shortest-duration load (dead 0.9, live 1.0, snow 1.15, roof live 1.25, wind 1.6; at most 1.6 for connections) under ASD; λ by the combination's form (its principal load) under LRFD (NDS-2018 §2.3.2, §11.3.2, Table N3).`);
     out.push(`${name}: spacings and distances for full design value (C_Δ = 1.0); ${c.groupAction ? "group action C_g from the row given" : "no group action reduction (C_g = 1.0): each row carries its own tributary shear flow"}.`);
   } else {
     out.push(`${name}: k_mod of each combination from its load-duration class, that of its shortest-duration load as the member's load-duration assumption classes them (EN 1995-1-1 §3.1.3(2), Table 2.2; the working names the class of each combination); γ_M = 1.3 (recommended value; check the national annex); service class ${c.serviceClass ?? 1}.`);

@@ -23,14 +23,73 @@ export function ndsLoadDurationFactor(categories: string[], duration: DurationCl
   return { value: Math.min(ndsLoadDurationByCategory[load]!, NDS_CONNECTION_CD_CAP), load };
 }
 
-/** λ of a combination (NDS Table N3): 0.6 for dead load alone, 0.8 with occupancy live, snow or roof live, 1.0 with wind. */
-export function ndsTimeEffectFactor(categories: string[]): { value: number; load: string } {
-  const byCategory: Record<string, number> = { dead: 0.6, live: 0.8, snow: 0.8, "roof-live": 0.8, wind: 1.0 };
-  const known = categories.filter((c) => c in byCategory);
-  if (known.length === 0) return { value: 0.8, load: "no load category given" };
-  const load = known.reduce((a, b) => (byCategory[b]! > byCategory[a]! ? b : a));
-  return { value: byCategory[load]!, load };
+/** A load of a combination as Table N3 reads it: the built-in category it acts as and its duration class. */
+export interface NdsFormLoad {
+  /** How the load is named in the working: D, L, S, or the id of a category of the job's own. */
+  symbol: string;
+  actsAs: "dead" | "live" | "roof-live" | "snow" | "wind";
+  duration: Exclude<DurationClass, "unspecified">;
 }
+
+/** λ by duration class, for a load whose category does not fix the row of Table N3 (the longer the load, the lower). */
+const lambdaByDuration: Record<NdsFormLoad["duration"], number> = { permanent: 0.6, long: 0.7, medium: 0.8, short: 0.8, instantaneous: 1.0 };
+
+/**
+ * λ when `load` is the principal load of the combination (NDS-2018 Table N3, from memory [M]):
+ * 1.2D + 1.6L + 0.5(Lr or S): 0.7 when L is from storage, 0.8 occupancy, 1.25 impact;
+ * 1.2D + 1.6(Lr or S) + (L or 0.5W): 0.8; 1.2D + 1.0W + L + 0.5(Lr or S) and 0.9D + 1.0W: 1.0.
+ * A live-type load's use is read from its duration class: permanent as dead load (0.6), long-term storage,
+ * medium- and short-term occupancy, instantaneous impact. Any other load takes the lower of its row and its
+ * duration class's value, so a category of the job's own declared longer than its model never gains.
+ */
+export function ndsPrincipalTimeEffect(load: NdsFormLoad): { value: number; load: string } {
+  if (load.actsAs === "live") {
+    const use = { permanent: "permanent, as dead load", long: "storage", medium: "occupancy", short: "occupancy", instantaneous: "impact" }[load.duration];
+    const value = { permanent: 0.6, long: 0.7, medium: 0.8, short: 0.8, instantaneous: 1.25 }[load.duration];
+    return { value, load: `${load.symbol}, live load from ${use}` };
+  }
+  if (load.actsAs === "dead") return { value: 0.6, load: `${load.symbol}, dead load` };
+  const row = load.actsAs === "wind" ? 1.0 : 0.8;
+  return { value: Math.min(row, lambdaByDuration[load.duration]), load: load.symbol };
+}
+
+/**
+ * λ of a combination (NDS-2018 Table N3 [M]) from its form: 0.6 for dead load alone (1.4D); otherwise that of
+ * the principal load (the 1.6 load of ASCE/SEI 7 combinations 2 and 3, 1.0W in 4 and 5). Where the form names
+ * no principal load, or it is absent from this combination (a subset, or a live-load pattern that leaves it
+ * off), the least λ any variable load present would take as principal (never more than the table's row).
+ */
+export function ndsTimeEffectFactor(form: { principal: NdsFormLoad | null; variables: NdsFormLoad[] }): { value: number; load: string } {
+  if (form.variables.length === 0) return { value: 0.6, load: "dead load alone (1.4D)" };
+  if (form.principal && form.variables.some((v) => v.symbol === form.principal!.symbol)) {
+    const p = ndsPrincipalTimeEffect(form.principal);
+    return { value: p.value, load: `principal load ${p.load}` };
+  }
+  const least = form.variables.map(ndsPrincipalTimeEffect).reduce((a, b) => (b.value < a.value ? b : a));
+  return { value: least.value, load: `no principal load named: the least λ of the loads present, ${least.load} as principal` };
+}
+
+/**
+ * λ for a connection: the combination's, at most 1.0 (NDS Table N3 note, from memory [M]: time effect factors
+ * above 1.0 do not apply to connections; so too the impact C_D, Table 2.3.2 note). A context without the
+ * combination's form (a bare check) takes the least λ of the built-in categories it names.
+ */
+export function ndsConnectionTimeEffect(timeEffect: { value: number; reason: string } | undefined, categories: string[]): { value: number; load: string } {
+  let te = timeEffect ? { value: timeEffect.value, load: timeEffect.reason } : null;
+  if (!te) {
+    const builtIn: Record<string, NdsFormLoad> = {
+      live: { symbol: "L", actsAs: "live", duration: "medium" },
+      "roof-live": { symbol: "Lr", actsAs: "roof-live", duration: "short" },
+      snow: { symbol: "S", actsAs: "snow", duration: "short" },
+      wind: { symbol: "W", actsAs: "wind", duration: "instantaneous" },
+    };
+    te = ndsTimeEffectFactor({ principal: null, variables: categories.flatMap((c) => (builtIn[c] ? [builtIn[c]!] : [])) });
+  }
+  return te.value > NDS_CONNECTION_LAMBDA_CAP ? { value: NDS_CONNECTION_LAMBDA_CAP, load: `${te.load}; at most 1.0 for connections` } : te;
+}
+
+/** Time effect factors above 1.0 do not apply to connections (NDS Table N3 note [M]). */
+export const NDS_CONNECTION_LAMBDA_CAP = 1.0;
 
 /** LRFD format conversion factor and resistance factor for connections (Table 11.3.1). */
 export const NDS_KF_CONNECTIONS = 3.32;
