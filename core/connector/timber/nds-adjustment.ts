@@ -50,7 +50,10 @@ export function ndsPrincipalTimeEffect(load: NdsFormLoad): { value: number; load
   }
   if (load.actsAs === "dead") return { value: 0.6, load: `${load.symbol}, dead load` };
   const row = load.actsAs === "wind" ? 1.0 : 0.8;
-  return { value: Math.min(row, lambdaByDuration[load.duration]), load: load.symbol };
+  // Wind is a ten-minute load to the NDS whether EN 1995 classes it short-term or instantaneous (beam.windDuration
+  // chooses the latter for k_mod only): only a longer class than short-term lowers its row.
+  const duration = load.actsAs === "wind" && load.duration === "short" ? "instantaneous" : load.duration;
+  return { value: Math.min(row, lambdaByDuration[duration]), load: load.symbol };
 }
 
 /**

@@ -143,8 +143,18 @@ describe("rows of bolts across the depth of the plies (moved from the stand-alon
       expectClose(s.limits.edgeDistance!, 84, { rel: 1e-9 });
     }
   });
-  test("rows that do not fit the depth are reported with the reason: 2 rows need 216 mm and 3 rows 264 mm across an 89 mm ply [D]", () => {
-    expect(acrossWarnings(run(bolted(89, 2))).join(" ")).toContain("2 bolts per row need 216 mm");
-    expect(acrossWarnings(run(bolted(89, 3))).join(" ")).toContain("3 bolts per row need 264 mm");
+  test("rows that do not fit the depth fail the joint with both widths: 2 rows need 216 mm and 3 rows 264 mm across an 89 mm ply [D]", () => {
+    // The fit across the contact is now checked for every kind by the pipeline (core/fastening/row-fit.ts): the
+    // joint fails with both widths instead of passing with a warning.
+    for (const [rows, needed] of [[2, 216], [3, 264]] as const) {
+      const r = run(bolted(89, rows));
+      expect(r.schedules.length).toBeGreaterThan(0);
+      for (const s of r.schedules) {
+        expect(s.rowFit).toMatchObject({ fits: false });
+        expectClose(s.rowFit!.needed, needed, { rel: 1e-9 });
+        expectClose(s.rowFit!.available, 89, { rel: 1e-9 });
+        expect(s.passes).toBe(false);
+      }
+    }
   });
 });
