@@ -117,7 +117,7 @@ function introWithSketch(c: WorksheetContext, joints: FieldJoint[], dims: Builde
       "body",
     ],
     ...(hasRows
-      ? ([["Rows as drawn: the first and last at the end distance, each zone at its spacing or closer; where two zones meet the gap may be shorter than either spacing.", "body"]] as [string, "body"][])
+      ? ([["Rows as drawn: the first and last at the end distance, each zone at its spacing or closer; where two zones meet or the rows from the two ends meet a gap may differ from both spacings, but no two rows are ever closer than the minimum spacing. Set every row at its position from END A.", "body"]] as [string, "body"][])
       : []),
     ...(hasSegments
       ? ([
