@@ -281,7 +281,8 @@ function designedRemedies(
   };
   const text: string[] = [];
   const designed: Remedy[] = [];
-  const shown = (u: number) => u.toFixed(2);
+  // Never shown rounded up to 1.00: a passing design reads below it.
+  const shown = (u: number) => (u.toFixed(2) === "1.00" && u <= 1 + 1e-9 ? (Math.floor(u * 1000) / 1000).toFixed(3) : u.toFixed(2));
 
   let perRow: { rows: number; result: NonNullable<ReturnType<typeof attempt>> } | null = null;
   let triedRows = problem.rows;
