@@ -21,7 +21,7 @@ export function statusBanner(result: DesignResult): HTMLElement {
             s.infeasible!.reason
               ? `Over ${where}: ${s.infeasible!.reason}`
               : `Over ${where} the required spacing falls to ${shown(result, s.infeasible!.smallestRequired, "length")}, below the minimum spacing of ${shown(result, s.infeasible!.minSpacing, "length")}.`
-          } The schedule below is placed at the minimum there and fails. Each option below was designed again with the change and passes:`,
+          } The schedule below is placed at the minimum there and fails. Options, each designed again with the change:`,
         }),
         el("ul", {}, s.infeasible!.options.map((o) => el("li", { text: o }))),
       ]);
