@@ -3,7 +3,7 @@ import { allowedSpacings } from "./allowed-spacings.js";
 import { checkSchedule, type ScheduleCheck } from "./check-schedule.js";
 import { DemandCurve } from "./demand.js";
 import { placeRows } from "./place-rows.js";
-import type { RowUtilisation } from "./verify-rows.js";
+import { verifyRows, type RowUtilisation } from "./verify-rows.js";
 import { boundaryGrid, CellMaxima, planZones, roundStep, spacingWithoutEndRow, type PlannedZone } from "./zoning.js";
 
 export interface ScheduleProblem {
@@ -98,11 +98,11 @@ export function designSchedule(p: ScheduleProblem): ScheduleDesign {
   // spacing (its mirror image too) until every row passes.
   const planned = plan.zones.map((z) => ({ ...z }));
   const flowSpacings = planned.map((z) => z.spacing);
-  let check = checkOf(planned);
+  let rowsNow = verifyRows(place(planned), demand);
   const tightenedAt = new Map<number, number>();
   for (let round = 0; round < 4 * planned.length + 40; round++) {
     // The worst failing row whose zone can still step down.
-    const candidates = check.rowChecks
+    const candidates = rowsNow
       .filter((r) => r.utilisation > 1 + 1e-9)
       .map((r) => ({ row: r, i: zoneIndexOf(planned, r.x) }))
       .map((c) => ({ ...c, step: indexBelow(spacings, planned[c.i]!.spacing) }))
@@ -114,9 +114,9 @@ export function designSchedule(p: ScheduleProblem): ScheduleDesign {
       planned[t]!.spacing = spacings[step]!;
       if (!tightenedAt.has(t)) tightenedAt.set(t, worst.x);
     }
-    check = checkOf(planned);
+    rowsNow = verifyRows(place(planned), demand);
   }
-  const { positions, rowChecks, zones, perCombination } = check;
+  const { positions, rowChecks, zones, perCombination } = checkOf(planned);
   const zoneReasons: (ZoneReason | null)[] = planned.map((z, i) => {
     const tightenedHere = tightenedAt.get(i);
     if (tightenedHere !== undefined) return { kind: "row-fit", flowSpacing: flowSpacings[i]!, at: tightenedHere };
@@ -133,9 +133,9 @@ export function designSchedule(p: ScheduleProblem): ScheduleDesign {
   const peak = demand.maxOver(0, L);
   const uniformPlan = planZones({ ...base, maxZones: 1 });
   const uniformZone = uniformPlan.zones[0]!;
-  const uniformCheck = uniformZone.feasible ? checkOf(uniformPlan.zones) : null;
+  const uniformRows = uniformZone.feasible ? place(uniformPlan.zones) : null;
   const uniform =
-    uniformCheck && uniformCheck.rowChecks.every((r) => r.utilisation <= 1 + 1e-9) ? { spacing: uniformZone.spacing, count: uniformCheck.positions.length * perRow } : null;
+    uniformRows && verifyRows(uniformRows, demand).every((r) => r.utilisation <= 1 + 1e-9) ? { spacing: uniformZone.spacing, count: uniformRows.length * perRow } : null;
 
   const failingRows = rowChecks.filter((r) => r.utilisation > 1 + 1e-9);
   const mirroredCells = mirrored ? [...shortCells, ...shortCells.map((c) => ({ from: L - c.to, to: L - c.from })).reverse()] : shortCells;
