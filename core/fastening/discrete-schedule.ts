@@ -120,7 +120,8 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
       rows,
       lines: lineCount,
       endDistance: limits.endDistance,
-      minGap: minSpacing,
+      // A given zone below the minimum keeps its rows as given (it fails as a detailing problem).
+      minGap: Math.min(minSpacing, ...(provided.type === "zones" ? provided.zones.map((z) => z.spacing) : [])),
       provided: provided.type === "zones" ? { zones: provided.zones } : { positions: provided.positions },
     });
     const worst = check.rowChecks.reduce((w, r) => (r.utilisation > w.utilisation ? r : w));
