@@ -117,7 +117,7 @@ function introWithSketch(c: WorksheetContext, joints: FieldJoint[], dims: Builde
       "body",
     ],
     ...(hasRows
-      ? ([["Rows as drawn: the first and last at the end distance, each zone at its spacing or closer; where two zones meet or the rows from the two ends meet a gap may differ from both spacings, but no two rows are ever closer than the minimum spacing. Set every row at its position from END A.", "body"]] as [string, "body"][])
+      ? ([["Rows as drawn: the first and last at the end distance, the rest at each zone's spacing; where two zones meet, or where the rows set out from the two ends meet, one gap may differ from the spacings: set those rows at the positions drawn. No two rows are closer than the connector's minimum spacing.", "body"]] as [string, "body"][])
       : []),
     ...(hasSegments
       ? ([
