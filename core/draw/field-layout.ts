@@ -13,6 +13,15 @@ export interface FieldZone {
   rows: number;
   /** Connectors in the zone, all lines; null for welds and bond lines. */
   connectors: number | null;
+  /** The zone's first and last row from END A (span units): rows go at the spacing from the first, the last where given; null without rows. */
+  firstRow: number | null;
+  lastRow: number | null;
+  /**
+   * How the builder sets the zone's rows out: at the spacing from its first row (the last where given), back
+   * from its last row (the first where given), or, where neither holds (rows from the two ends meet inside
+   * it), every row listed.
+   */
+  setOut: "from-first" | "from-last" | "listed" | null;
   passes: boolean;
   failingCombinations: string[];
 }
@@ -106,6 +115,7 @@ function fieldJointOf(result: Pick<DesignResult, "beam" | "units">, source: Sour
         segment: null,
         rows: s.positions.filter(inZone(z, i === s.zones.length - 1)).length,
         connectors: z.count,
+        ...rowsAtEnds(s.positions.filter(inZone(z, i === s.zones.length - 1)), z.spacing / k),
         passes: z.passes,
         failingCombinations: z.failingCombinations,
       })),
@@ -139,6 +149,7 @@ function fieldJointOf(result: Pick<DesignResult, "beam" | "units">, source: Sour
         segment: z.pattern === "intermittent" ? z.segmentLength : null,
         rows: z.pattern === "intermittent" ? positions.filter(inZone(z, i === w.zones.length - 1)).length : 0,
         connectors: null,
+        ...rowsAtEnds(z.pattern === "intermittent" ? positions.filter(inZone(z, i === w.zones.length - 1)) : [], (z.pitch ?? 0) / k),
         passes: z.passes,
         failingCombinations: z.failingCombinations,
       })),
@@ -161,7 +172,7 @@ function fieldJointOf(result: Pick<DesignResult, "beam" | "units">, source: Sour
     connectorLabel: b.connectorLabel,
     across: 1,
     lineCount: 1,
-    zones: [{ from: start, to: end, spacing: null, segment: null, rows: 0, connectors: null, passes: b.passes, failingCombinations: b.passes ? [] : [b.combination] }],
+    zones: [{ from: start, to: end, spacing: null, segment: null, rows: 0, connectors: null, firstRow: null, lastRow: null, setOut: null, passes: b.passes, failingCombinations: b.passes ? [] : [b.combination] }],
     positions: [],
     endDistance: null,
     run,
@@ -179,4 +190,13 @@ function weldName(w: WeldResult, units: DesignResult["units"], electrode: string
 }
 
 /** Whether x falls in a zone: from its start up to (not including) its end, the last zone including the member end. */
+/** First and last row of a zone and how its rows are set out; spacing in span units. */
+function rowsAtEnds(xs: number[], spacing: number): Pick<FieldZone, "firstRow" | "lastRow" | "setOut"> {
+  if (xs.length === 0) return { firstRow: null, lastRow: null, setOut: null };
+  const gaps = xs.slice(1).map((x, k) => x - xs[k]!);
+  const regular = (g: number[]) => g.every((x) => Math.abs(x - spacing) <= 1e-6 * Math.max(1, spacing));
+  const setOut = regular(gaps.slice(0, -1)) ? "from-first" : regular(gaps.slice(1)) ? "from-last" : "listed";
+  return { firstRow: xs[0]!, lastRow: xs[xs.length - 1]!, setOut };
+}
+
 const inZone = (z: { from: number; to: number }, last: boolean) => (x: number) => x >= z.from - 1e-9 && (last ? x <= z.to + 1e-9 : x < z.to - 1e-9);

@@ -1,0 +1,42 @@
+import { readdirSync, readFileSync } from "node:fs";
+import { join } from "node:path";
+import { describe, expect, test } from "vitest";
+import { builderDimensions } from "../../core/draw/builder-dimensions.js";
+import { fieldLayout } from "../../core/draw/field-layout.js";
+import { convertJob } from "../../core/units/convert-job.js";
+import { runDesign } from "../../server/design-service.js";
+
+const EXAMPLES = join(import.meta.dirname, "../../fixtures/examples");
+const examples = readdirSync(EXAMPLES).filter((f) => f.endsWith(".json"));
+
+/** The rows a builder sets out from the field sheet's zone table: its first and last rows, its spacing and the rule named. */
+function setOut(z: { firstRow: number | null; lastRow: number | null; setOut: string | null; spacing: number | null }, spacing: number): number[] {
+  const [a, b] = [z.firstRow!, z.lastRow!];
+  const tol = 1e-6 * Math.max(1, spacing);
+  const out: number[] = [];
+  if (z.setOut === "from-first") {
+    for (let x = a; x < b - tol; x += spacing) out.push(x);
+    out.push(b);
+  } else {
+    for (let x = b; x > a + tol; x -= spacing) out.unshift(x);
+    out.unshift(a);
+  }
+  return out;
+}
+
+describe("field sheet: the zone table sets out exactly the rows designed", () => {
+  for (const file of examples) {
+    test(`${file}, in both unit systems: first row, last row and spacing (or the rows listed) give every row`, () => {
+      const own = runDesign(JSON.parse(readFileSync(join(EXAMPLES, file), "utf8")));
+      const other = runDesign(convertJob(own.job, own.job.units === "si" ? "us" : "si"));
+      for (const run of [own, other]) {
+        const k = builderDimensions(run.result.units).spanToLength;
+        for (const j of fieldLayout(run.result, {}).filter((x) => x.kind === "connectors")) {
+          const built = j.zones.flatMap((z) => (z.setOut === null ? [] : z.setOut === "listed" ? j.positions.filter((x) => x >= z.firstRow! && x <= z.lastRow!) : setOut(z, z.spacing! / k)));
+          expect(built.length, `${file} ${j.joints.join(",")}`).toBe(j.positions.length);
+          built.forEach((x, i) => expect(Math.abs(x - j.positions[i]!), `${file} row ${i}`).toBeLessThan(1e-6 * Math.max(1, j.positions[i]!)));
+        }
+      }
+    });
+  }
+});
