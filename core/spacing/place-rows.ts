@@ -13,7 +13,8 @@ export interface SpacedZone {
  * mirrored plan) are stepped from the left end at their spacings, those right of it from the right
  * end, so each end zone keeps its own spacing up to its end row. Where a zone takes over, its first
  * row comes at the zone's start or at the minimum spacing from the last row, whichever is further.
- * The two runs meet in the sparsest zone: a last gap shorter than the minimum is shared with the gap
+ * The two runs meet in the sparsest zone, whose rows stop at its end (a row is put at its end where the
+ * gap left would be longer than its spacing): a last gap shorter than the minimum is shared with the gap
  * before it (the row between moves to the middle), or, where that would still be short, the row
  * between is left out.
  */
@@ -42,7 +43,11 @@ export function placeRows(zones: SpacedZone[], length: number, endDistance: numb
   const firstRight = right[right.length - 1]!;
   const p = meet === 0 ? e : Math.max(z.from, lastLeft + minGap);
   const middle: number[] = [];
-  for (let x = p, k = 0; x < firstRight - eps; x = p + ++k * z.spacing) if (x > lastLeft + eps) middle.push(x);
+  const stop = Math.min(firstRight, meet === m - 1 ? L - e : z.to);
+  for (let x = p, k = 0; x < stop - eps; x = p + ++k * z.spacing) if (x > lastLeft + eps) middle.push(x);
+  // A gap longer than this zone's spacing left before the next zone's first row gets a row at the zone's end.
+  const lastMiddle = middle.length > 0 ? middle[middle.length - 1]! : lastLeft;
+  if (firstRight - lastMiddle > z.spacing + eps && z.to - lastMiddle >= minGap * (1 - 1e-9) && firstRight - z.to >= minGap * (1 - 1e-9) && z.to < firstRight - eps) middle.push(z.to);
   const rows = [...left, ...middle, ...right.reverse()];
   return withoutShortGaps(rows, minGap, eps);
 }

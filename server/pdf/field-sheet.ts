@@ -117,7 +117,7 @@ function introWithSketch(c: WorksheetContext, joints: FieldJoint[], dims: Builde
       "body",
     ],
     ...(hasRows
-      ? ([["Rows as drawn: the first and last at the end distance; in each zone the rows go at its spacing from the row the table names (its first, or back from its last), and the row at the zone's other end where the table gives it; a zone whose rows meet from both ends has every row listed. No two rows are closer than the connector's minimum spacing.", "body"]] as [string, "body"][])
+      ? ([["Rows as drawn: the first and last at the end distance; in each zone the rows go at its spacing from its first row, or back from its last, and the row at its other end where the table gives it; “from both”: from the first and back from the last toward the middle of the zone, with a row in the middle where the gap left is more than the spacing. No two rows are closer than the connector's minimum spacing.", "body"]] as [string, "body"][])
       : []),
     ...(hasSegments
       ? ([
@@ -178,7 +178,7 @@ function zonesTable(c: WorksheetContext, joints: FieldJoint[], dims: BuilderDime
           ? [
               cell(z.firstRow === null ? "—" : dims.position(z.firstRow)),
               cell(z.lastRow === null ? "—" : dims.position(z.lastRow)),
-              cell(z.setOut === "from-first" ? "from first" : z.setOut === "from-last" ? "back from last" : z.setOut === "listed" ? "listed below" : "—"),
+              cell(z.setOut === "from-first" ? "from first" : z.setOut === "from-last" ? "back from last" : z.setOut === "from-both" ? "from both" : z.setOut === "listed" ? "listed below" : "—"),
             ]
           : []),
         cell(bad ? `${zoneCallOut(j, z, dims)} — FAILS` : zoneCallOut(j, z, dims), true),

@@ -10,16 +10,25 @@ const EXAMPLES = join(import.meta.dirname, "../../fixtures/examples");
 const examples = readdirSync(EXAMPLES).filter((f) => f.endsWith(".json"));
 
 /** The rows a builder sets out from the field sheet's zone table: its first and last rows, its spacing and the rule named. */
-function setOut(z: { firstRow: number | null; lastRow: number | null; setOut: string | null; spacing: number | null }, spacing: number): number[] {
+function setOut(z: { from: number; to: number; firstRow: number | null; lastRow: number | null; setOut: string | null; spacing: number | null }, spacing: number): number[] {
   const [a, b] = [z.firstRow!, z.lastRow!];
   const tol = 1e-6 * Math.max(1, spacing);
   const out: number[] = [];
   if (z.setOut === "from-first") {
     for (let x = a; x < b - tol; x += spacing) out.push(x);
     out.push(b);
-  } else {
+  } else if (z.setOut === "from-last") {
     for (let x = b; x > a + tol; x -= spacing) out.unshift(x);
     out.unshift(a);
+  } else {
+    // From both ends toward the zone's middle m, and a row at m where the gap left is more than the spacing.
+    const m = (z.from + z.to) / 2;
+    const left: number[] = [];
+    const right: number[] = [];
+    for (let x = a; x <= m + tol; x += spacing) left.push(x);
+    for (let x = b; x >= m - tol && x > left[left.length - 1]! + tol; x -= spacing) right.unshift(x);
+    const gap = right.length > 0 ? right[0]! - left[left.length - 1]! : 0;
+    out.push(...left, ...(gap > spacing + tol ? [m] : []), ...right);
   }
   return out;
 }
