@@ -157,3 +157,35 @@ describe("property: designed rows keep the minimum spacing and pass their tribut
     );
   });
 });
+
+describe("property: a joint is reported as no schedule carrying it only when rows at the minimum spacing throughout fail too (fast-check, fixed seed)", () => {
+  test("generated plank I members near their connectors' limit", () => {
+    fc.assert(
+      fc.property(
+        fc.record({
+          span: fc.double({ min: 1.5, max: 8, noNaN: true }),
+          w: fc.double({ min: 0.5, max: 3, noNaN: true }),
+          resistance: fc.double({ min: 150, max: 900, noNaN: true }),
+          minSpacing: fc.integer({ min: 8, max: 40 }),
+          endDistance: fc.integer({ min: 0, max: 60 }),
+          symmetric: fc.boolean(),
+        }),
+        (g) => {
+          const job = clone(plankIJob());
+          job.beam = { spans: [g.span], loads: [{ type: "uniform", category: "dead", w: g.w }], selfWeight: false };
+          job.connectors = [{ id: "N", kind: "rated", label: "rated", resistance: g.resistance, minSpacing: g.minSpacing, maxSpacing: 600, endDistance: g.endDistance }];
+          job.spacing = { module: 1, minZoneLength: 100, maxZonesPerSpan: 5, symmetric: g.symmetric };
+          const zoned = design(job).result;
+          if (!zoned.schedules.some((s) => s.infeasible)) return;
+          const uniform = clone(job);
+          uniform.spacing = { ...uniform.spacing, maxZonesPerSpan: 1, maximum: g.minSpacing };
+          const atMinimum = design(uniform).result;
+          zoned.schedules.forEach((s, i) => {
+            if (s.infeasible) expect(atMinimum.schedules[i]!.passes, `joint ${s.joint}: the minimum spacing throughout passes`).toBe(false);
+          });
+        },
+      ),
+      { numRuns: 30 },
+    );
+  });
+});
