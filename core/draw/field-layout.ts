@@ -13,6 +13,14 @@ export interface FieldZone {
   rows: number;
   /** Connectors in the zone, all lines; null for welds and bond lines. */
   connectors: number | null;
+  /** The zone's first and last row from END A (span units): rows go at the spacing from the first, the last where given; null without rows. */
+  firstRow: number | null;
+  lastRow: number | null;
+  /**
+   * How the builder sets the zone's rows out (setOutRows): at the spacing from its first row, back from its last,
+   * or from both toward the middle; where none gives the rows, every row is listed.
+   */
+  setOut: "from-first" | "from-last" | "from-both" | "listed" | null;
   passes: boolean;
   failingCombinations: string[];
 }
@@ -108,6 +116,7 @@ function fieldJointOf(result: Pick<DesignResult, "beam" | "units">, source: Sour
         segment: null,
         rows: s.positions.filter(inZone(z, i === s.zones.length - 1)).length,
         connectors: z.count,
+        ...rowsAtEnds(s.positions.filter(inZone(z, i === s.zones.length - 1)), z.spacing / k, z),
         passes: z.passes,
         failingCombinations: z.failingCombinations,
       })),
@@ -141,6 +150,7 @@ function fieldJointOf(result: Pick<DesignResult, "beam" | "units">, source: Sour
         segment: z.pattern === "intermittent" ? z.segmentLength : null,
         rows: z.pattern === "intermittent" ? positions.filter(inZone(z, i === w.zones.length - 1)).length : 0,
         connectors: null,
+        ...rowsAtEnds(z.pattern === "intermittent" ? positions.filter(inZone(z, i === w.zones.length - 1)) : [], (z.pitch ?? 0) / k, z),
         passes: z.passes,
         failingCombinations: z.failingCombinations,
       })),
@@ -163,7 +173,7 @@ function fieldJointOf(result: Pick<DesignResult, "beam" | "units">, source: Sour
     connectorLabel: b.connectorLabel,
     across: 1,
     lineCount: 1,
-    zones: [{ from: start, to: end, spacing: null, segment: null, rows: 0, connectors: null, passes: b.passes, failingCombinations: b.passes ? [] : [b.combination] }],
+    zones: [{ from: start, to: end, spacing: null, segment: null, rows: 0, connectors: null, firstRow: null, lastRow: null, setOut: null, passes: b.passes, failingCombinations: b.passes ? [] : [b.combination] }],
     positions: [],
     endDistance: null,
     run,
@@ -181,4 +191,46 @@ function weldName(w: WeldResult, units: DesignResult["units"], electrode: string
 }
 
 /** Whether x falls in a zone: from its start up to (not including) its end, the last zone including the member end. */
+/**
+ * The rows a builder sets out in a zone from its first and last rows at its spacing (span units): from the first
+ * (the last row where given), back from the last (the first where given), or from both toward the middle of the
+ * zone, with a row in the middle where the gap left there is more than the spacing.
+ */
+export function setOutRows(first: number, last: number, spacing: number, rule: "from-first" | "from-last" | "from-both", middle = (first + last) / 2): number[] {
+  const tol = 1e-6 * Math.max(1, spacing, Math.abs(last));
+  if (spacing <= 0 || last - first <= tol) return last - first <= tol ? [first] : [first, last];
+  const forward = (to: number) => {
+    const out: number[] = [];
+    for (let k = 0, x = first; x <= to + tol; x = first + ++k * spacing) out.push(x);
+    return out;
+  };
+  const back = (to: number) => {
+    const out: number[] = [];
+    for (let k = 0, x = last; x >= to - tol; x = last - ++k * spacing) out.unshift(x);
+    return out;
+  };
+  if (rule === "from-first") {
+    const out = forward(last).filter((x) => x < last - tol);
+    return [...out, last];
+  }
+  if (rule === "from-last") {
+    const out = back(first).filter((x) => x > first + tol);
+    return [first, ...out];
+  }
+  const left = forward(middle);
+  const right = back(middle).filter((x) => x > left[left.length - 1]! + tol);
+  const gap = right.length > 0 ? right[0]! - left[left.length - 1]! : 0;
+  return gap > spacing + tol ? [...left, middle, ...right] : [...left, ...right];
+}
+
+/** First and last row of a zone and how its rows are set out; spacing in span units. */
+function rowsAtEnds(xs: number[], spacing: number, zone: { from: number; to: number }): Pick<FieldZone, "firstRow" | "lastRow" | "setOut"> {
+  if (xs.length === 0) return { firstRow: null, lastRow: null, setOut: null };
+  const first = xs[0]!;
+  const last = xs[xs.length - 1]!;
+  const same = (ys: number[]) => ys.length === xs.length && ys.every((y, i) => Math.abs(y - xs[i]!) <= 1e-6 * Math.max(1, Math.abs(y)));
+  const rule = (["from-first", "from-last", "from-both"] as const).find((r) => same(setOutRows(first, last, spacing, r, (zone.from + zone.to) / 2)));
+  return { firstRow: first, lastRow: last, setOut: rule ?? "listed" };
+}
+
 const inZone = (z: { from: number; to: number }, last: boolean) => (x: number) => x >= z.from - 1e-9 && (last ? x <= z.to + 1e-9 : x < z.to - 1e-9);

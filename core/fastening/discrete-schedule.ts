@@ -6,8 +6,9 @@ import type { Connector } from "../connector/registry.js";
 import type { Fastening, JobDocument } from "../schema/job.js";
 import type { Schedule } from "../schema/result.js";
 import type { JointPlane } from "../section/joints.js";
+import { rowFit } from "./row-fit.js";
 import { checkSchedule } from "../spacing/check-schedule.js";
-import { demandCurve, designSchedule } from "../spacing/design-schedule.js";
+import { demandCurve, designSchedule, type ZoneReason } from "../spacing/design-schedule.js";
 import { spacingDefaults } from "../spacing/spacing-defaults.js";
 import { inJobUnits } from "../units/format.js";
 import { toCore } from "../units/quantity.js";
@@ -37,7 +38,7 @@ export interface JointInput {
 }
 
 const VERIFICATION_METHOD =
-  "each row: tributary length (halfway to its neighbours or to the member end) × the largest shear flow over that length ÷ (connectors per row × R)";
+  "each row: tributary length (halfway to its neighbours or to the member end) × the largest shear flow over that length ÷ (connectors per row × R); and no two rows closer than the minimum spacing";
 
 const leastOf = <T extends { value: number }>(values: T[]) => values.reduce((a, b) => (b.value < a.value ? b : a));
 
@@ -120,6 +121,8 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
       rows,
       lines: lineCount,
       endDistance: limits.endDistance,
+      // A given zone below the minimum keeps its rows as given (it fails as a detailing problem).
+      minGap: Math.min(minSpacing, ...(provided.type === "zones" ? provided.zones.map((z) => z.spacing) : [])),
       provided: provided.type === "zones" ? { zones: provided.zones } : { positions: provided.positions },
     });
     const worst = check.rowChecks.reduce((w, r) => (r.utilisation > w.utilisation ? r : w));
@@ -127,6 +130,7 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
       ...(z.spacing < minSpacing * (1 - 1e-9) ? [`zone ${len(z.from)}–${len(z.to)}: spacing ${len(z.spacing)} is below the minimum ${len(minSpacing)}`] : []),
       ...(z.spacing > maxSpacing * (1 + 1e-9) ? [`zone ${len(z.from)}–${len(z.to)}: spacing ${len(z.spacing)} is above the maximum ${len(maxSpacing)}`] : []),
     ]);
+    detailing.push(...shortGaps(check.positions, minSpacing, limits.sources, len));
     const passes = worst.utilisation <= 1 + 1e-9 && detailing.length === 0;
     return {
       mirrored: false,
@@ -163,31 +167,42 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
   const worst = design.rowChecks.reduce((w, r) => (r.utilisation > w.utilisation ? r : w));
   const tooShort = beam.length < 2 * limits.endDistance * (1 - 1e-9);
   const peakShear = Math.max(...actions.map((a) => maxAbsShear(a, 0, beam.length).value));
-  const options = design.infeasible
+  const gapProblems = shortGaps(design.positions, minSpacing, limits.sources, len);
+  const reason = design.infeasible ? infeasibleReason(design.infeasible, limits.endDistance, design.spacings[0]!, len) : undefined;
+  const remedies = design.infeasible ? designedRemedies(input, kind, problem, settings, resistances) : null;
+  const options = remedies
     ? [
-        `${design.infeasible.connectorsPerRowNeeded} connectors per row at the minimum spacing of ${len(design.spacings[0]!)}.`,
-        `A connector with at least ${design.infeasible.resistanceFactorNeeded.toFixed(2)} × the resistance of ${label} at the same spacing.`,
-        ...largerSizeOption(kind, connector, contexts, resistances, design.infeasible.resistanceFactorNeeded, design.spacings[0]!, job.units),
-        ...(limits.endDistance > design.spacings[0]! / 2 ? [`A shorter end distance than ${len(limits.endDistance)}, or an extra row near each end: the end row carries the flow from the member end to halfway to the next row.`] : []),
-        `A glued joint: the bond-line stress would peak at ${inJobUnits(peakShear * stressFactor, "stress", job.units)} (τ = q/t over t = ${len(joint.contactWidth)}).`,
+        ...remedies.text,
+        `Not designed here: a glued joint would see a bond-line stress up to ${inJobUnits(peakShear * stressFactor, "stress", job.units)} (τ = q/t over t = ${len(joint.contactWidth)}); design it as a glue line.`,
       ]
     : [];
+  const zones = design.zones.map((z, i) => {
+    const note = zoneNote(design.zoneReasons[i] ?? null, len);
+    return note ? { ...z, note } : z;
+  });
   return {
     mirrored: design.mirrored,
     warnings,
     schedule: {
       ...common,
       mode: "design",
-      zones: design.zones,
+      zones,
       positions: design.positions,
       count: design.count,
       efficiency: efficiencyOf(design.lowerBound, design.demandIntegral, design.count, design.uniform),
       verification: { maxUtilisation: worst.utilisation, at: worst.x, combination: worst.combination, passes: worst.utilisation <= 1 + 1e-9, method: VERIFICATION_METHOD },
       perCombination: design.perCombination,
-      detailingProblems: [],
-      passes: !design.infeasible && !tooShort && worst.utilisation <= 1 + 1e-9,
+      detailingProblems: gapProblems,
+      passes: !design.infeasible && !tooShort && worst.utilisation <= 1 + 1e-9 && gapProblems.length === 0,
       infeasible: design.infeasible
-        ? { where: design.infeasible.where, smallestRequired: design.infeasible.smallestRequired, minSpacing: design.spacings[0]!, options }
+        ? {
+            where: design.infeasible.where,
+            smallestRequired: design.infeasible.smallestRequired,
+            minSpacing: design.spacings[0]!,
+            ...(reason ? { reason } : {}),
+            options,
+            remedies: remedies!.designed,
+          }
         : tooShort
           ? {
               where: [{ from: 0, to: beam.length }],
@@ -225,31 +240,140 @@ function designedAlike(
   return made;
 }
 
+type ScheduleSettings = Omit<Parameters<typeof designSchedule>[0], "length" | "combinations" | "flowFactor" | "lines" | "rows">;
+type Remedy = NonNullable<NonNullable<Schedule["infeasible"]>["remedies"]>[number];
+
+/** At most this many more connectors per row are tried as a remedy. */
+const MORE_PER_ROW = 6;
+
 /**
- * The first larger trade size of the connector that carries the shortfall: no placement problem, and at
- * its own smallest spacing a capacity per unit length (R/s) at least the factor needed times this one's
- * at the smallest spacing allowed now, in every combination; or a sentence saying none of its sizes does.
+ * Remedies for a joint no schedule carries, each designed again with the change before it is offered:
+ * more connectors per row (the fewest that pass, with their row fitting across the contact), the next
+ * larger trade size that passes, and the least factor on the resistance that passes. Each comes with the
+ * utilisation its design reaches; where none of a kind passes, a sentence says so.
  */
-function largerSizeOption(
+function designedRemedies(
+  input: JointInput,
   kind: DiscreteConnectorKind<Connector>,
-  connector: Connector,
-  contexts: ConnectorContext[][],
+  problem: { length: number; combinations: { id: string; actions: MemberActions; resistance: number }[]; flowFactor: number; lines: number; rows: number },
+  settings: ScheduleSettings,
   resistances: ConnectorResistance[],
-  factorNeeded: number,
-  smallestSpacing: number,
-  units: JobDocument["units"],
-): string[] {
-  const candidates = kind.largerSizes?.(connector) ?? [];
-  if (candidates.length === 0) return [];
-  for (const candidate of candidates) {
-    if (contexts[0]!.some((c) => (kind.problems?.(candidate, c) ?? []).length > 0)) continue;
-    const r = contexts.map((lines) => Math.min(...lines.map((c) => kind.resistance(candidate, c).value)));
-    const spacing = Math.max(governingLimits(contexts[0]!.map((c) => kind.detailing(candidate, c))).minSpacing, smallestSpacing);
-    if (r.every((value, i) => value / spacing >= (factorNeeded * resistances[i]!.value) / smallestSpacing * (1 - 1e-9))) {
-      return [`The next larger size that carries it: ${kind.describe(candidate)}, ${inJobUnits(Math.min(...r), "connectorForce", units)} per connector, at ${inJobUnits(spacing, "length", units)} or closer.`];
+): { text: string[]; designed: Remedy[] } {
+  const { job, joint, connector, contexts, beam } = input;
+  const units = job.units;
+  const len = (mm: number) => inJobUnits(mm, "length", units);
+  const label = kind.describe(connector);
+  const combos = beam.results.length;
+  const leastNow = Math.min(...resistances.map((r) => r.value));
+  const attempt = (c: Connector, rows: number, factor: number) => {
+    const lines = contexts.map((ls) => ls.map((ctx) => ({ ...ctx, rows })));
+    if (lines[0]!.some((ctx) => (kind.problems?.(c, ctx) ?? []).length > 0)) return null;
+    const limits = governingLimits(lines[0]!.map((ctx) => kind.detailing(c, ctx)));
+    if (rowFit(limits, rows, joint.lines)?.fits === false) return null;
+    if (beam.length < 2 * limits.endDistance * (1 - 1e-9)) return null;
+    const r = lines.map((ls) => Math.min(...ls.map((ctx) => kind.resistance(c, ctx).value)) * factor);
+    const scale = Math.min(...r) / leastNow;
+    const combinations = problem.combinations.map((k, i) => ({ ...k, resistance: i < combos ? r[i]! : k.resistance * scale }));
+    const minSpacing = Math.max(limits.minSpacing, job.spacing.minimum ?? 0);
+    const maxSpacing = Math.max(minSpacing, Math.min(limits.maxSpacing ?? settings.maxSpacing, job.spacing.maximum ?? Infinity, input.maxSpacingCap ?? Infinity));
+    const d = designSchedule({ ...problem, combinations, rows, ...settings, minSpacing, maxSpacing, endDistance: limits.endDistance });
+    const utilisation = Math.max(...d.rowChecks.map((x) => x.utilisation));
+    const shortGap = d.positions.some((x, k) => k > 0 && x - d.positions[k - 1]! < minSpacing * (1 - 1e-9));
+    return { passes: !d.infeasible && utilisation <= 1 + 1e-9 && !shortGap, utilisation, count: d.count, resistance: Math.min(...r), spacing: d.spacings[0]! };
+  };
+  const text: string[] = [];
+  const designed: Remedy[] = [];
+  // Never shown rounded up to 1.00: a passing design reads below it.
+  const shown = (u: number) => (u.toFixed(2) === "1.00" && u <= 1 + 1e-9 ? (Math.floor(u * 1000) / 1000).toFixed(3) : u.toFixed(2));
+
+  let perRow: { rows: number; result: NonNullable<ReturnType<typeof attempt>> } | null = null;
+  let triedRows = problem.rows;
+  for (let n = problem.rows + 1; n <= problem.rows + MORE_PER_ROW; n++) {
+    const r = attempt(connector, n, 1);
+    if (!r) break; // the row no longer fits across the contact, or another placement problem
+    triedRows = n;
+    if (r.passes) {
+      perRow = { rows: n, result: r };
+      break;
     }
   }
-  return [`No larger size of this connector, up to ${kind.describe(candidates[candidates.length - 1]!)}, carries it at its own smallest spacing.`];
+  if (perRow) {
+    text.push(`${perRow.rows} connectors per row (now ${problem.rows}): designed again, the schedule passes with utilisation ${shown(perRow.result.utilisation)} and ${perRow.result.count} connectors.`);
+    designed.push({ change: "rows", rows: perRow.rows, utilisation: perRow.result.utilisation, count: perRow.result.count });
+  } else {
+    text.push(
+      triedRows > problem.rows
+        ? `More connectors per row does not pass: up to ${triedRows} per row (as many as fit across the contact, at most ${problem.rows + MORE_PER_ROW}) a row still fails.`
+        : `More connectors per row is not possible: ${problem.rows + 1} per row do not fit across the contact (edge distances and spacing across the line) or cannot be placed.`,
+    );
+  }
+
+  const sizes = kind.largerSizes?.(connector) ?? [];
+  if (sizes.length > 0) {
+    let found = false;
+    for (const candidate of sizes) {
+      const r = attempt(candidate, problem.rows, 1);
+      if (!r?.passes) continue;
+      const size = (candidate as { size?: unknown }).size;
+      text.push(`The next larger size that passes: ${kind.describe(candidate)}, ${inJobUnits(r.resistance, "connectorForce", units)} per connector; designed again, utilisation ${shown(r.utilisation)} with ${r.count} connectors (its minimum spacing ${len(r.spacing)}).`);
+      designed.push({ change: "size", ...(typeof size === "string" ? { size } : {}), utilisation: r.utilisation, count: r.count });
+      found = true;
+      break;
+    }
+    if (!found) text.push(`No larger size of this connector, up to ${kind.describe(sizes[sizes.length - 1]!)}, passes with ${problem.rows} per row.`);
+  }
+
+  // The least factor on R that passes, to two decimals, found by bisection on designs.
+  const at = (f: number) => attempt(connector, problem.rows, f);
+  let hi = 2;
+  let high = at(hi);
+  while (high && !high.passes && hi < 64) high = at((hi *= 2));
+  if (high?.passes) {
+    let lo = 1;
+    while (hi - lo > 0.005) {
+      const mid = (lo + hi) / 2;
+      if (at(mid)?.passes) hi = mid;
+      else lo = mid;
+    }
+    const factor = Math.ceil(hi * 100 - 1e-9) / 100;
+    const r = at(factor);
+    if (r?.passes) {
+      text.push(`A connector with at least ${factor.toFixed(2)} × the resistance of ${label} and the same detailing limits: designed again, utilisation ${shown(r.utilisation)} with ${r.count} connectors.`);
+      designed.push({ change: "resistance", resistanceFactor: factor, utilisation: r.utilisation, count: r.count });
+    }
+  } else text.push(`No stronger connector with the same detailing limits passes (up to ${hi} × the resistance of ${label}).`);
+  return { text, designed };
+}
+
+/** Gaps between rows shorter than the minimum spacing, as detailing problems. */
+function shortGaps(positions: number[], minSpacing: number, sources: string[], len: (mm: number) => string): string[] {
+  const short = positions.map((x, k) => ({ a: positions[k - 1], b: x })).filter((g): g is { a: number; b: number } => g.a !== undefined && g.b - g.a < minSpacing * (1 - 1e-6));
+  if (short.length === 0) return [];
+  const shown = short.slice(0, 3).map((g) => `${len(g.b - g.a)} between the rows at ${len(g.a)} and ${len(g.b)}`);
+  const source = sources.find((t) => /spacing/i.test(t));
+  return [
+    `${short.length} gap${short.length === 1 ? "" : "s"} between rows shorter than the minimum spacing of ${len(minSpacing)}${source ? ` (${source})` : ""}: ${shown.join("; ")}${short.length > 3 ? "; …" : ""}`,
+  ];
+}
+
+/** The sentence beside a zone that is closer than the shear flow along it needs. */
+function zoneNote(reason: ZoneReason | null, len: (mm: number) => string): string | undefined {
+  if (!reason) return undefined;
+  if (reason.kind === "end-row") {
+    return `End row governs: the row at the end distance ${len(reason.endDistance)} carries from the member end to halfway to the next row (e + s/2), so this zone is closer than the ${len(reason.flowSpacing)} the shear flow along it allows.`;
+  }
+  return `Closer than the ${len(reason.flowSpacing)} the shear flow along it allows: at ${len(reason.at)}, where zones meet or the last rows are fitted to the end, a row carried more than its share until the zone was tightened.`;
+}
+
+/** What fails, where the flow alone would allow the minimum spacing. */
+function infeasibleReason(inf: NonNullable<ReturnType<typeof designSchedule>["infeasible"]>, endDistance: number, minSpacing: number, len: (mm: number) => string): string | undefined {
+  if (inf.cause === "flow" || !inf.worstRow) return undefined;
+  const r = inf.worstRow;
+  const tributary = r.to - r.from;
+  if (r.endRow) {
+    return `The shear flow alone needs ${len(inf.smallestRequired)}, which the minimum spacing of ${len(minSpacing)} meets, but the end row at ${len(r.x)} carries from the member end to halfway to the next row, ${len(tributary)} (the end distance ${len(endDistance)} plus half a spacing): utilisation ${r.utilisation.toFixed(2)}.`;
+  }
+  return `The shear flow alone needs ${len(inf.smallestRequired)}, which the minimum spacing of ${len(minSpacing)} meets, but the row at ${len(r.x)} carries ${len(tributary)} of the member: utilisation ${r.utilisation.toFixed(2)}.`;
 }
 
 function requiredAt(stations: Station[], demand: ReturnType<typeof demandCurve>): (number | null)[] {

@@ -210,6 +210,8 @@ export const Zone = z.object({
   passes: z.boolean(),
   /** Combinations under which a row of this zone is over-utilised. */
   failingCombinations: z.array(z.string()),
+  /** Why the zone is closer than the shear flow along it needs (the end row's reach, or a row where zones meet). */
+  note: z.string().optional(),
 });
 export type Zone = z.infer<typeof Zone>;
 
@@ -274,7 +276,22 @@ export const Schedule = z.object({
       where: z.array(z.object({ from: q("span"), to: q("span") })),
       smallestRequired: q("length"),
       minSpacing: q("length"),
+      /** What fails, where the flow alone would allow the minimum spacing (the end row's reach, a row where zones meet). */
+      reason: z.string().optional(),
       options: z.array(z.string()),
+      /** The remedies offered, each designed again with the change and passing: what changes and the utilisation it reaches. */
+      remedies: z
+        .array(
+          z.object({
+            change: z.enum(["rows", "size", "resistance"]),
+            rows: z.number().int().optional(),
+            size: z.string().optional(),
+            resistanceFactor: z.number().optional(),
+            utilisation: z.number(),
+            count: z.number().int(),
+          }),
+        )
+        .optional(),
     })
     .nullable(),
   /** Envelope of shear flow per line and required spacing at the beam stations. */

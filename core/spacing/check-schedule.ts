@@ -28,13 +28,15 @@ export function checkSchedule(p: {
   rows: number;
   lines: number;
   endDistance: number;
+  /** Least gap between rows placed from zones: the connector's minimum spacing. */
+  minGap?: number;
   /** Zones (rows placed from them unless positions are also given), or rows one by one. */
   provided: { zones: ProvidedZone[]; positions?: number[] } | { positions: number[] };
 }): ScheduleCheck {
   const L = p.demand.length;
   const given = p.provided.positions ? [...p.provided.positions].sort((a, b) => a - b) : undefined;
   const zones: ProvidedZone[] = "zones" in p.provided ? p.provided.zones : zonesOfPositions(given!, L);
-  const positions = given ?? placeRows(zones.map((z) => ({ ...z, feasible: true })), L, p.endDistance, false);
+  const positions = given ?? placeRows(zones, L, p.endDistance, false, p.minGap ?? 0);
   const rowChecks = verifyRows(positions, p.demand);
   const single = p.demand.terms.map((t) => ({ id: t.combination, rows: verifyRows(positions, new DemandCurve(L, [t])) }));
   const perCombination = single.map(({ id, rows }) => {

@@ -139,7 +139,15 @@ export function evaluateZone(p: ZoningProblem, a: number, b: number, first: bool
   return { cost, rows, spacing: s, feasible: spacing !== undefined };
 }
 
-function zoneSpacing(p: ZoningProblem, a: number, b: number, first: boolean, last: boolean): number | undefined {
+/**
+ * The spacing the flow along the zone allows, leaving out the end row's reach (e + s/2): where this is
+ * larger than the zone's spacing, the end row governs the zone. Undefined when no spacing carries it.
+ */
+export function spacingWithoutEndRow(p: ZoningProblem, a: number, b: number, first: boolean, last: boolean): number | undefined {
+  return zoneSpacing(p, a, b, first, last, false);
+}
+
+function zoneSpacing(p: ZoningProblem, a: number, b: number, first: boolean, last: boolean, endRow = true): number | undefined {
   // Start from the largest spacing the zone's own demand allows; the rows' reach into the neighbours only
   // tightens as s grows, so the largest spacing that carries its demand is found by bisection.
   const peak = p.demand(a, b);
@@ -147,7 +155,7 @@ function zoneSpacing(p: ZoningProblem, a: number, b: number, first: boolean, las
   if (topIndex < 0) return undefined;
   // Usually the zone's own demand governs and the first candidate carries it; otherwise the answer is
   // mostly a step or two below: step down 1, 2, 4, … until a spacing carries, then bisect the bracket.
-  const carries = (i: number) => zoneCarries(p, a, b, first, last, p.spacings[i]!);
+  const carries = (i: number) => zoneCarries(p, a, b, first, last, p.spacings[i]!, endRow);
   if (carries(topIndex)) return p.spacings[topIndex];
   let failing = topIndex;
   let carrying = -1;
@@ -169,12 +177,13 @@ function zoneSpacing(p: ZoningProblem, a: number, b: number, first: boolean, las
 }
 
 /** Whether rows at spacing s over [a, b] carry the demand over their reach, the end rows' included. */
-function zoneCarries(p: ZoningProblem, a: number, b: number, first: boolean, last: boolean, s: number): boolean {
+function zoneCarries(p: ZoningProblem, a: number, b: number, first: boolean, last: boolean, s: number, endRow: boolean): boolean {
   const L = p.length;
   const e = p.endDistance;
   const reachLeft = first ? 0 : a - s / 2;
   const reachRight = last ? (p.mirrored ? b : L) : b + s / 2;
   if (s * p.demand(reachLeft, reachRight) > 1 + 1e-12) return false;
+  if (!endRow) return true;
   if (first && e > s / 2 && (e + s / 2) * p.demand(0, e + s / 2) > 1 + 1e-12) return false;
   if (last && !p.mirrored && e > s / 2 && (e + s / 2) * p.demand(L - e - s / 2, L) > 1 + 1e-12) return false;
   return true;

@@ -121,7 +121,7 @@ function introWithSketch(c: WorksheetContext, joints: FieldJoint[], dims: Builde
       "body",
     ],
     ...(hasRows
-      ? ([["Rows as drawn: the first and last at the end distance, each zone at its spacing or closer; where two zones meet the gap may be shorter than either spacing.", "body"]] as [string, "body"][])
+      ? ([["Rows as drawn: the first and last at the end distance; in each zone the rows go at its spacing from its first row, or back from its last, and the row at its other end where the table gives it; “from both”: from the first and back from the last toward the middle of the zone, with a row in the middle where the gap left is more than the spacing. No two rows are closer than the connector's minimum spacing.", "body"]] as [string, "body"][])
       : []),
     ...(hasSegments
       ? ([
@@ -178,6 +178,13 @@ function zonesTable(c: WorksheetContext, joints: FieldJoint[], dims: BuilderDime
         cell(String(i + 1)),
         cell(dims.position(z.from)),
         cell(dims.position(z.to)),
+        ...(connectors
+          ? [
+              cell(z.firstRow === null ? "—" : dims.position(z.firstRow)),
+              cell(z.lastRow === null ? "—" : dims.position(z.lastRow)),
+              cell(z.setOut === "from-first" ? "from first" : z.setOut === "from-last" ? "back from last" : z.setOut === "from-both" ? "from both" : z.setOut === "listed" ? "listed below" : "—"),
+            ]
+          : []),
         cell(bad ? `${zoneCallOut(j, z, dims)} — FAILS` : zoneCallOut(j, z, dims), true),
         cell(j.kind === "weld" && z.spacing === null ? "—" : String(z.rows)),
         ...(connectors ? [cell(z.connectors === null ? "—" : String(z.connectors))] : []),
@@ -189,14 +196,24 @@ function zonesTable(c: WorksheetContext, joints: FieldJoint[], dims: BuilderDime
     { header: "Zone", weight: 0.62, align: "right" },
     { header: "From END A", weight: 0.95, align: "right" },
     { header: "To", weight: 0.85, align: "right" },
+    // Rows go at the spacing from the first row; the last is where it is given (the two set-outs meet there).
+    ...(connectors
+      ? [
+          { header: "First row", weight: 0.85, align: "right" as const },
+          { header: "Last row", weight: 0.85, align: "right" as const },
+          { header: "Set out", weight: 0.95 },
+        ]
+      : []),
     { header: welds ? (connectors ? "Spacing, or segment @ pitch" : "Segment @ pitch") : "Spacing", weight: (welds ? 1.5 : 1.1) + (fails ? 0.6 : 0) },
     { header: welds ? (connectors ? "Rows or segments" : laidOut.some((j) => j.kind === "weld" && j.arrangement === "staggered" && j.across > 1) ? "Segments, near side" : "Segments each side") : "Rows", weight: welds ? 0.9 : 0.6, align: "right" },
     ...(connectors ? [{ header: "Count", weight: 0.75, align: "right" as const }] : []),
   ];
   sheet.heading(`Zones of ${named ? "every joint" : jointNames(laidOut[0]!.joints).toLowerCase()}: positions from END A in ${dims.positionUnit}${connectors ? ", counts on all lines" : ""}`, 2, 60);
-  const twoColumns = rows.length > ONE_COLUMN_ZONES && !named;
+  // Connector zones carry their first and last rows: too wide to print in two columns.
+  const twoColumns = rows.length > ONE_COLUMN_ZONES && !named && !connectors;
   if (!twoColumns) {
     table(sheet, columns, rows, { size: 8.5 });
+    listedRows(c, laidOut, dims);
     return;
   }
   const half = Math.ceil(rows.length / 2);
@@ -211,6 +228,21 @@ function zonesTable(c: WorksheetContext, joints: FieldJoint[], dims: BuilderDime
   sheet.y = top;
   table(sheet, columns, right, { size: 8, width, indent: width + gutter });
   sheet.y = Math.max(leftBottom, sheet.y);
+  listedRows(c, laidOut, dims);
+}
+
+/** Every row of a zone whose rows are not one run at its spacing (the rows set out from the two ends meet in it). */
+function listedRows(c: WorksheetContext, joints: FieldJoint[], dims: BuilderDimensions): void {
+  const lines = joints.flatMap((j) =>
+    j.kind !== "connectors"
+      ? []
+      : j.zones.flatMap((z, i) =>
+          z.setOut === "listed"
+            ? [`${joints.length > 1 ? `${jointNames(j.joints)}, zone` : "Zone"} ${i + 1}, every row from END A: ${j.positions.filter((x) => x >= z.from - 1e-9 && x <= z.to + 1e-9 && x >= z.firstRow! - 1e-9 && x <= z.lastRow! + 1e-9).map((x) => dims.position(x)).join(", ")}.`]
+            : [],
+        ),
+  );
+  if (lines.length > 0) c.sheet.list(lines, { size: 8 });
 }
 
 /** Parts present over only some stretches of the member (a cover plate), with the face they are on. */

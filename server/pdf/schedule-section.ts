@@ -79,7 +79,7 @@ export function scheduleSection(c: WorksheetContext, group: Schedule[]): void {
       ...s.zones.map((z, i) => [
         String(i + 1),
         text.range(z.from, z.to),
-        { text: text.of(z.spacing, "length"), bold: true },
+        { text: text.of(z.spacing, "length"), bold: true, ...(z.note ? { note: `note ${i + 1}` } : {}) },
         String(z.rows),
         String(z.count),
         z.requiredSpacing === null ? "—" : text.of(z.requiredSpacing, "length"),
@@ -91,6 +91,9 @@ export function scheduleSection(c: WorksheetContext, group: Schedule[]): void {
     ],
     { rowColour: (i) => (s.zones[i] && !s.zones[i]!.passes ? ink.fail : undefined) },
   );
+
+  const notes = s.zones.map((z, i) => (z.note ? `Zone ${i + 1}: ${z.note}` : null)).filter((n): n is string => n !== null);
+  if (notes.length > 0) sheet.list(notes, { size: 8 });
 
   if (s.detailingProblems.length > 0) {
     sheet.heading(check ? "Detailing problems of the given schedule" : "Detailing problems", 2, 30);

@@ -11,7 +11,9 @@ export function infeasibleStatement(c: WorksheetContext, s: Schedule, name = `Jo
   if (!inf) return [];
   const where = inf.where.map((w) => c.text.range(w.from, w.to)).join(" and ");
   return [
-    `${name}: no spacing within the limits carries the shear flow over ${where}. The smallest required spacing is ${c.text.of(inf.smallestRequired, "length")}, below the minimum spacing of ${c.text.of(inf.minSpacing, "length")}.`,
+    inf.reason
+      ? `${name}: no spacing within the limits carries the shear flow over ${where}. ${inf.reason}`
+      : `${name}: no spacing within the limits carries the shear flow over ${where}. The smallest required spacing is ${c.text.of(inf.smallestRequired, "length")}, below the minimum spacing of ${c.text.of(inf.minSpacing, "length")}.`,
     ...inf.options.map((o) => `Option: ${o}`),
   ];
 }

@@ -21,7 +21,7 @@ export function scheduleBlock(result: DesignResult, schedule: Schedule, width: n
       cells: [
         String(k + 1),
         range(result, z.from, z.to).replace(` ${u.span ?? ""}`, ""),
-        formatNumber(z.spacing),
+        z.note ? el("span", {}, [formatNumber(z.spacing), el("span", { className: "sub", text: `note ${k + 1}` })]) : formatNumber(z.spacing),
         String(z.rows),
         String(z.count),
         z.requiredSpacing === null ? "any" : formatNumber(z.requiredSpacing),
@@ -61,6 +61,7 @@ export function scheduleBlock(result: DesignResult, schedule: Schedule, width: n
     demandNote(result, schedule),
     figure(scheduleElevation(result, schedule, { width, height: 92 }), "diagram elevation"),
     zones,
+    zoneNotes(schedule),
     el("dl", { className: "figures" }, [
       ...term("Connectors", `${schedule.count} in all (every line of the joint)`),
       ...term("Lower bound", `${formatNumber(e.lowerBound, 4)} (∫ of demand over resistance along the member: no schedule can use fewer)`),
@@ -83,6 +84,12 @@ export function scheduleBlock(result: DesignResult, schedule: Schedule, width: n
     resistanceDetails(result, schedule),
     spacingDiagram(result, schedule, width),
   ]);
+}
+
+/** Why a zone is closer than the shear flow along it needs, beside its number. */
+function zoneNotes(schedule: Schedule): HTMLElement | null {
+  const notes = schedule.zones.map((z, k) => (z.note ? `Zone ${k + 1}: ${z.note}` : null)).filter((n): n is string => n !== null);
+  return notes.length ? el("ul", { className: "zone-notes" }, notes.map((n) => el("li", { text: n }))) : null;
 }
 
 const term = (name: string, value: string) => [el("dt", { text: name }), el("dd", { text: value })];

@@ -17,7 +17,11 @@ export function statusBanner(result: DesignResult): HTMLElement {
       return el("div", { className: "infeasible" }, [
         el("h3", { text: `Joint ${s.joint}: no spacing within the limits carries the ${demandName(result, s.joint)}` }),
         el("p", {
-          text: `Over ${where} the required spacing falls to ${shown(result, s.infeasible!.smallestRequired, "length")}, below the minimum spacing of ${shown(result, s.infeasible!.minSpacing, "length")}. The schedule below is placed at the minimum there and fails. Options:`,
+          text: `${
+            s.infeasible!.reason
+              ? `Over ${where}: ${s.infeasible!.reason}`
+              : `Over ${where} the required spacing falls to ${shown(result, s.infeasible!.smallestRequired, "length")}, below the minimum spacing of ${shown(result, s.infeasible!.minSpacing, "length")}.`
+          } The schedule below is placed at the minimum there and fails. Options, each designed again with the change:`,
         }),
         el("ul", {}, s.infeasible!.options.map((o) => el("li", { text: o }))),
       ]);
