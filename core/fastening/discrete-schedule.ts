@@ -7,6 +7,7 @@ import type { Fastening, JobDocument } from "../schema/job.js";
 import type { Schedule } from "../schema/result.js";
 import type { JointPlane } from "../section/joints.js";
 import { rowFit } from "./row-fit.js";
+import { allowedSpacings } from "../spacing/allowed-spacings.js";
 import { checkSchedule } from "../spacing/check-schedule.js";
 import { demandCurve, designSchedule, type ZoneReason } from "../spacing/design-schedule.js";
 import { spacingDefaults } from "../spacing/spacing-defaults.js";
@@ -276,6 +277,8 @@ function designedRemedies(
     const combinations = problem.combinations.map((k, i) => ({ ...k, resistance: i < combos ? r[i]! : k.resistance * scale }));
     const minSpacing = Math.max(limits.minSpacing, job.spacing.minimum ?? 0);
     const maxSpacing = Math.max(minSpacing, Math.min(limits.maxSpacing ?? settings.maxSpacing, job.spacing.maximum ?? Infinity, input.maxSpacingCap ?? Infinity));
+    // A larger size whose least spacing leaves no allowed spacing up to the maximum cannot be placed (the job would be refused).
+    if (allowedSpacings({ module: settings.module, preferred: settings.preferred, min: minSpacing, max: maxSpacing }).length === 0) return null;
     const d = designSchedule({ ...problem, combinations, rows, ...settings, minSpacing, maxSpacing, endDistance: limits.endDistance });
     const utilisation = Math.max(...d.rowChecks.map((x) => x.utilisation));
     const shortGap = d.positions.some((x, k) => k > 0 && x - d.positions[k - 1]! < minSpacing * (1 - 1e-9));
