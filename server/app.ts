@@ -4,7 +4,7 @@ import { fileURLToPath } from "node:url";
 import fastifyStatic from "@fastify/static";
 import { build } from "esbuild";
 import Fastify, { type FastifyError, type FastifyInstance } from "fastify";
-import { DesignThreads } from "./design-threads.js";
+import { DesignQueues, DesignThreads } from "./design-threads.js";
 import { ApiError, errorBody, type ErrorCode } from "./errors.js";
 import { loadExamples } from "./examples.js";
 import { hostCheck, loopbackHosts } from "./host-check.js";
@@ -26,10 +26,14 @@ export interface AppOptions {
   dataDir?: string;
   /** The store's clock and test hooks. */
   store?: StoreOptions;
-  /** Threads that design and draw worksheets; one fewer than the cores (at least 1, at most 4) by default. */
+  /** Threads that design; one fewer than the cores (at least 1, at most 4) by default. Worksheets have their own. */
   designThreads?: number;
+  /** Threads that draw worksheets; 1 by default. */
+  worksheetThreads?: number;
   /** Time limits, ms: a design or a worksheet still running then is stopped (README "Performance and limits"). */
   timeLimits?: { designMs?: number; worksheetMs?: number };
+  /** Heap of each thread, MiB, and how many tasks may wait (README "Performance and limits"). */
+  threadLimits?: { memoryMb?: number; designQueue?: number; worksheetQueue?: number };
   /** Host names the service answers to; loopback names by default, "any" when it listens on another address. */
   allowedHosts?: readonly string[] | "any";
   /** Memory for answers already computed, bytes; 0 turns the cache off. */
@@ -60,16 +64,32 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
   const pageScript = await bundlePage();
 
   const limits = { designMs: options.timeLimits?.designMs ?? serviceLimits.designMs, worksheetMs: options.timeLimits?.worksheetMs ?? serviceLimits.worksheetMs };
-  const designs = new DesignThreads({
-    threads: options.designThreads ?? Math.max(1, Math.min(4, availableParallelism() - 1)),
-    timeLimitMs: (task) => (task.kind === "worksheet" ? limits.worksheetMs : limits.designMs),
-  });
+  const memoryMb = options.threadLimits?.memoryMb ?? serviceLimits.threadMemoryMb;
+  const designs = new DesignQueues(
+    new DesignThreads({
+      name: "design",
+      threads: options.designThreads ?? Math.max(1, Math.min(4, availableParallelism() - 1)),
+      timeLimitMs: () => limits.designMs,
+      memoryMb,
+      queueLength: options.threadLimits?.designQueue ?? serviceLimits.designQueue,
+    }),
+    new DesignThreads({
+      name: "worksheet",
+      threads: options.worksheetThreads ?? 1,
+      timeLimitMs: () => limits.worksheetMs,
+      memoryMb,
+      queueLength: options.threadLimits?.worksheetQueue ?? serviceLimits.worksheetQueue,
+    }),
+  );
   app.addHook("onClose", () => designs.close());
   if (options.warmThreads) designs.warm();
   const cache = new ResultCache(options.resultCacheBytes ?? 32 * 1024 * 1024);
 
   app.setErrorHandler((error: FastifyError | ApiError, request, reply) => {
-    if (error instanceof ApiError) return reply.status(errorBody(error.code).statusCode).send(errorBody(error.code, error.message, boundedIssues(error.issues)));
+    if (error instanceof ApiError) {
+      if (error.extra.retryAfterSeconds) reply.header("retry-after", String(error.extra.retryAfterSeconds));
+      return reply.status(errorBody(error.code).statusCode).send(errorBody(error.code, error.message, boundedIssues(error.issues)));
+    }
     const code = fastifyCode(error as FastifyError);
     if (code === "ERR_BODY_TOO_LARGE") {
       const limit = mebibytes(request.routeOptions.bodyLimit ?? serviceLimits.bodyBytes);

@@ -1,6 +1,7 @@
 import type { DesignResult, JobDocument, JobIssue, UnitSystem } from "../core/index.js";
 import { designInUnits } from "./design-in-units.js";
 import { ApiError, type ErrorCode } from "./errors.js";
+import { summariseResult, type ResultSummary } from "./result-summary.js";
 import { renderWorksheet, worksheetFileName } from "./pdf/worksheet.js";
 
 /** Work the design threads do: everything that may take long runs there, never on the thread that answers HTTP. */
@@ -9,6 +10,8 @@ export type DesignTask =
   | { kind: "result-json"; input: unknown; units?: UnitSystem | undefined }
   /** The job, the job in core units and the result in the job's and in `units`, as objects. */
   | { kind: "result"; input: unknown; units?: UnitSystem | undefined }
+  /** What a list of members shows for a job being saved; null when the design itself fails (the revision is kept). */
+  | { kind: "summary"; input: unknown }
   /** The PDF worksheet, with what its headers need. */
   | { kind: "worksheet"; input: unknown; printDate?: string | undefined };
 
@@ -26,7 +29,13 @@ export interface WorksheetRun {
   titleRevision: string;
 }
 
-export type TaskAnswer<T extends DesignTask> = T extends { kind: "result-json" } ? string : T extends { kind: "result" } ? ResultRun : WorksheetRun;
+export type TaskAnswer<T extends DesignTask> = T extends { kind: "result-json" }
+  ? string
+  : T extends { kind: "result" }
+    ? ResultRun
+    : T extends { kind: "summary" }
+      ? ResultSummary | null
+      : WorksheetRun;
 
 /** An error as it crosses between threads. */
 export interface WireError {
@@ -35,13 +44,23 @@ export interface WireError {
   issues: JobIssue[];
 }
 
-export async function performTask(task: DesignTask): Promise<string | ResultRun | WorksheetRun> {
+export async function performTask(task: DesignTask): Promise<string | ResultRun | WorksheetRun | ResultSummary | null> {
   switch (task.kind) {
     case "result-json":
       return JSON.stringify(designInUnits(task.input, task.units).shown);
     case "result": {
       const { job, core, result, shown } = designInUnits(task.input, task.units);
       return { job, core, result, shown };
+    }
+    case "summary": {
+      let run;
+      try {
+        run = designInUnits(task.input);
+      } catch (error) {
+        if (error instanceof ApiError) throw error;
+        return null;
+      }
+      return summariseResult(run.result);
     }
     case "worksheet": {
       const run = designInUnits(task.input);

@@ -1,12 +1,13 @@
 import type { FastifyInstance } from "fastify";
 import type { z } from "zod";
-import { issuesFromZod, JobDocument, toDisplayUnits, type UnitSystem } from "../../core/index.js";
+import { issuesFromZod, JobDocument, toDisplayUnits, type JobIssue, type UnitSystem } from "../../core/index.js";
+import type { ResultSummary } from "../result-summary.js";
 import type { DesignTask, TaskAnswer } from "../design-tasks.js";
-import type { DesignThreads } from "../design-threads.js";
+import type { TaskRunner } from "../design-threads.js";
 import { ApiError } from "../errors.js";
 import { today } from "../pdf/worksheet.js";
 import { inputChanges, resultChanges } from "../store/compare-revisions.js";
-import { JobStore, prefixIssues, type StoreOptions } from "../store/job-store.js";
+import { JobStore, prefixIssues, validJob, type ImportPlan, type StoreOptions } from "../store/job-store.js";
 import { CompareQuery, NewMember, NewProject, SaveRevision } from "../store/store-schemas.js";
 
 export interface StoreRoutesOptions {
@@ -14,7 +15,7 @@ export interface StoreRoutesOptions {
   dataDir: string;
   store?: StoreOptions;
   /** Where designs and worksheets run. */
-  designs: DesignThreads;
+  designs: TaskRunner;
 }
 
 /** A project file may be far larger than one job. */
@@ -51,7 +52,7 @@ function unitsQuery(value: string | undefined): UnitSystem | undefined {
 }
 
 /** A stored job that no longer validates (a later program changed the schema) is reported with its revision in the path. */
-async function designStored<T extends DesignTask>(designs: DesignThreads, task: T, at: string): Promise<TaskAnswer<T>> {
+async function designStored<T extends DesignTask>(designs: TaskRunner, task: T, at: string): Promise<TaskAnswer<T>> {
   try {
     return await designs.run(task);
   } catch (error) {
@@ -60,6 +61,39 @@ async function designStored<T extends DesignTask>(designs: DesignThreads, task: 
     }
     throw error;
   }
+}
+
+/**
+ * A job to be saved: validated here (the store's messages and paths), then its summary worked out on a
+ * design thread with the time and memory limits; a job that cannot be designed within them is not saved (422).
+ */
+async function summaryForSave(designs: TaskRunner, job: unknown): Promise<ResultSummary | null> {
+  validJob(job, "job");
+  return designStored(designs, { kind: "summary", input: job }, "job");
+}
+
+/** Each revision of an import designed on the design threads, two at a time; those past a limit are listed with their paths. */
+async function importSummaries(designs: TaskRunner, plan: ImportPlan): Promise<(member: number, revision: number) => ResultSummary | null> {
+  const work = plan.members.flatMap((m, mi) => m.revisions.map((r, ri) => ({ mi, ri, job: r.job })));
+  const found = new Map<string, ResultSummary | null>();
+  const issues: JobIssue[] = [];
+  let next = 0;
+  const lane = async () => {
+    while (next < work.length && issues.length === 0) {
+      const { mi, ri, job } = work[next++]!;
+      try {
+        found.set(`${mi}/${ri}`, await designs.run({ kind: "summary", input: job }, { unbounded: true }));
+      } catch (error) {
+        if (!(error instanceof ApiError) || (error.code !== "ERR_DESIGN_TIME_LIMIT" && error.code !== "ERR_DESIGN_MEMORY_LIMIT")) throw error;
+        issues.push({ path: `members[${mi}].revisions[${ri}].job`, message: `cannot be designed within the service's limits: ${error.message}` });
+      }
+    }
+  };
+  await Promise.all([lane(), lane()]);
+  if (issues.length > 0) {
+    throw new ApiError("ERR_PROJECT_FILE_INVALID", "A revision of the project file cannot be designed within the service's time and memory limits; nothing was stored.", issues);
+  }
+  return (mi, ri) => found.get(`${mi}/${ri}`) ?? null;
 }
 
 type P = { Params: { project: string } };
@@ -88,7 +122,9 @@ export async function storeRoutes(app: FastifyInstance, options: StoreRoutesOpti
   app.post<P>("/api/projects/:project/members", async (request, reply) => {
     const id = projectId(request.params.project);
     const body = parse(NewMember, request.body);
-    return reply.status(201).send(store.createMember(id, body.job, { note: body.note }));
+    store.project(id);
+    const summary = await summaryForSave(designs, body.job);
+    return reply.status(201).send(store.createMember(id, body.job, { note: body.note, summary }));
   });
 
   app.get<M>("/api/projects/:project/members/:member", async (request) => store.member(projectId(request.params.project), memberId(request.params.member)));
@@ -98,7 +134,9 @@ export async function storeRoutes(app: FastifyInstance, options: StoreRoutesOpti
   app.post<M>("/api/projects/:project/members/:member/revisions", async (request, reply) => {
     const [p, m] = [projectId(request.params.project), memberId(request.params.member)];
     const body = parse(SaveRevision, request.body);
-    const saved = store.saveRevision(p, m, body.job, body.basedOn === undefined ? { note: body.note } : { basedOn: body.basedOn, note: body.note });
+    store.member(p, m);
+    const summary = await summaryForSave(designs, body.job);
+    const saved = store.saveRevision(p, m, body.job, body.basedOn === undefined ? { note: body.note, summary } : { basedOn: body.basedOn, note: body.note, summary });
     return reply.status(201).send(saved);
   });
 
@@ -109,6 +147,13 @@ export async function storeRoutes(app: FastifyInstance, options: StoreRoutesOpti
   app.get<R & { Querystring: { units?: string } }>("/api/projects/:project/members/:member/revisions/:revision/result", async (request, reply) => {
     const stored = store.revision(projectId(request.params.project), memberId(request.params.member), revisionNumber(request.params.revision));
     const json = await designStored(designs, { kind: "result-json", input: stored.job, units: unitsQuery(request.query.units) }, "job");
+    if (stored.summary === null) {
+      // A revision from a version-1 store: its summary, worked out on a design thread now that it has designed there once.
+      designs.run({ kind: "summary", input: stored.job }).then(
+        (summary) => summary && store.setSummary(stored.memberId, stored.revision, summary),
+        () => undefined,
+      );
+    }
     return reply.type("application/json; charset=utf-8").send(json);
   });
 
@@ -188,5 +233,8 @@ export async function storeRoutes(app: FastifyInstance, options: StoreRoutesOpti
     return reply.header("content-disposition", `attachment; filename="${name}.stitchplan-project.json"`).send(file);
   });
 
-  app.post("/api/projects/import", { bodyLimit: IMPORT_BODY_LIMIT }, async (request, reply) => reply.status(201).send(store.importProject(request.body)));
+  app.post("/api/projects/import", { bodyLimit: IMPORT_BODY_LIMIT }, async (request, reply) => {
+    const plan = store.checkImport(request.body);
+    return reply.status(201).send(store.storeImport(plan, await importSummaries(designs, plan)));
+  });
 }

@@ -1,9 +1,9 @@
 import { join } from "node:path";
 import Database from "better-sqlite3";
-import { canonicalJson, designMember, issuesFromZod, PROGRAM, prepareJob, type JobDocument, type JobIssue } from "../../core/index.js";
+import { canonicalJson, issuesFromZod, PROGRAM, prepareJob, type JobDocument, type JobIssue } from "../../core/index.js";
 import { fingerprintOf } from "../fingerprint.js";
 import { ApiError } from "../errors.js";
-import { summariseResult, type ResultSummary } from "../result-summary.js";
+import type { ResultSummary } from "../result-summary.js";
 import { LATEST_SCHEMA_VERSION, schemaVersion } from "./migrations.js";
 import { DATABASE_FILE, openDatabase } from "./open-database.js";
 import { PROJECT_FILE_FORMAT, PROJECT_FILE_VERSION, ProjectFile, type NewProject } from "./store-schemas.js";
@@ -153,7 +153,7 @@ export function prefixIssues(issues: JobIssue[], prefix: string): JobIssue[] {
 }
 
 /** Validates a job for saving; throws ERR_INPUT_INVALID with `job.…` paths. */
-function validJob(input: unknown, at: string): { job: JobDocument; core: JobDocument } {
+export function validJob(input: unknown, at: string): { job: JobDocument; core: JobDocument } {
   if (input === undefined) throw new ApiError("ERR_INPUT_INVALID", "The request needs the job document in `job`; nothing was stored.", [{ path: at, message: "is required (the job document)" }]);
   if (typeof input !== "object" || input === null || Array.isArray(input)) {
     throw new ApiError("ERR_INPUT_INVALID", "The job document has problems; nothing was stored.", [{ path: at, message: "must be a job document (a JSON object)" }]);
@@ -163,13 +163,10 @@ function validJob(input: unknown, at: string): { job: JobDocument; core: JobDocu
   return prepared;
 }
 
-/** The summary of a valid job's result, or null when the design itself fails (the revision is kept all the same). */
-function summaryOf(core: JobDocument): ResultSummary | null {
-  try {
-    return summariseResult(designMember(core));
-  } catch {
-    return null;
-  }
+/** A project file whose every revision validates, ready to be stored. */
+export interface ImportPlan {
+  file: ProjectFile;
+  members: { createdAt?: string | undefined; revisions: { job: JobDocument; revision: number; savedAt: string; note: string; basedOn: number | null; program: string }[]; worksheets: ProjectFile["members"][number]["worksheets"] }[];
 }
 
 const isMarkTaken = (error: unknown) => error instanceof Database.SqliteError && error.code === "SQLITE_CONSTRAINT_UNIQUE" && /members\.mark/.test(error.message);
@@ -298,10 +295,13 @@ export class JobStore {
     };
   }
 
-  /** A new member with its first revision, in one transaction. The job must be valid. */
-  createMember(projectId: number, input: unknown, options: { note?: string } = {}): SavedRevision {
-    const { job, core } = validJob(input, "job");
-    const summary = summaryOf(core);
+  /**
+   * A new member with its first revision, in one transaction. The job must be valid; its summary is
+   * worked out by the caller on a design thread (never here, on the thread that answers requests).
+   */
+  createMember(projectId: number, input: unknown, options: { note?: string; summary?: ResultSummary | null } = {}): SavedRevision {
+    const { job } = validJob(input, "job");
+    const summary = options.summary ?? null;
     try {
       return this.db
         .transaction(() => {
@@ -329,9 +329,9 @@ export class JobStore {
    * Saves a job as the member's next revision. The number is taken inside the write lock, so two saves
    * at once (two tabs, two processes) become two revisions; neither replaces the other.
    */
-  saveRevision(projectId: number, memberId: number, input: unknown, options: { basedOn?: number; note?: string } = {}): SavedRevision {
-    const { job, core } = validJob(input, "job");
-    const summary = summaryOf(core);
+  saveRevision(projectId: number, memberId: number, input: unknown, options: { basedOn?: number; note?: string; summary?: ResultSummary | null } = {}): SavedRevision {
+    const { job } = validJob(input, "job");
+    const summary = options.summary ?? null;
     try {
       return this.db
         .transaction((): SavedRevision => {
@@ -501,7 +501,12 @@ export class JobStore {
    * problem reported with its path (`members[3].revisions[0].job.parts[1].shape.h`); with any problem,
    * nothing is stored.
    */
-  importProject(input: unknown): Project {
+  importProject(input: unknown, summaries: (member: number, revision: number) => ResultSummary | null = () => null): Project {
+    return this.storeImport(this.checkImport(input), summaries);
+  }
+
+  /** The validation half of an import: every problem with its path, or the plan to store. */
+  checkImport(input: unknown): ImportPlan {
     const parsed = ProjectFile.safeParse(input, { reportInput: true });
     if (!parsed.success) {
       throw new ApiError("ERR_PROJECT_FILE_INVALID", undefined, issuesFromZod(parsed.error));
@@ -514,8 +519,8 @@ export class JobStore {
         if (r.revision !== ri + 1) issues.push({ path: `${at}.revision`, message: `must be ${ri + 1}: revisions are numbered 1, 2, 3… in order, without gaps` });
         if (r.basedOn !== null && r.basedOn >= r.revision) issues.push({ path: `${at}.basedOn`, message: `must be an earlier revision than ${r.revision}` });
         try {
-          const { job, core } = validJob(r.job, `${at}.job`);
-          return { ...r, job, core };
+          const { job } = validJob(r.job, `${at}.job`);
+          return { ...r, job };
         } catch (error) {
           if (!(error instanceof ApiError)) throw error;
           issues.push(...error.issues);
@@ -537,7 +542,12 @@ export class JobStore {
       } else marks.set(last.job.member.mark, mi);
     });
     if (issues.length > 0) throw new ApiError("ERR_PROJECT_FILE_INVALID", `The project file has ${issues.length} problem${issues.length === 1 ? "" : "s"}, each listed with its path; nothing was stored.`, issues);
+    return { file, members: members.map((m) => ({ createdAt: m.createdAt, revisions: m.revisions.map((r) => r!), worksheets: m.worksheets })) };
+  }
 
+  /** The storing half of an import, with each revision's summary (member and revision index). */
+  storeImport(plan: ImportPlan, summaries: (member: number, revision: number) => ResultSummary | null = () => null): Project {
+    const { file, members } = plan;
     try {
       return this.db
         .transaction(() => {
@@ -545,15 +555,17 @@ export class JobStore {
           const projectId = Number(
             this.db.prepare("INSERT INTO projects (name, number, client, created_at) VALUES (?, ?, ?, ?)").run(file.project.name, file.project.number, file.project.client, file.project.createdAt ?? now).lastInsertRowid,
           );
-          for (const m of members) {
-            const revisions = m.revisions.map((r) => r!);
+          for (const [mi, m] of members.entries()) {
+            const revisions = m.revisions;
             const last = revisions[revisions.length - 1]!;
             const memberId = Number(
               this.db
                 .prepare("INSERT INTO members (project_id, mark, description, created_at) VALUES (?, ?, ?, ?)")
                 .run(projectId, last.job.member.mark, last.job.member.description, m.createdAt ?? revisions[0]!.savedAt).lastInsertRowid,
             );
-            for (const r of revisions) this.insertRevision(memberId, r.revision, r.job, { savedAt: r.savedAt, note: r.note, basedOn: r.basedOn, summary: null, program: r.program });
+            for (const [ri, r] of revisions.entries()) {
+              this.insertRevision(memberId, r.revision, r.job, { savedAt: r.savedAt, note: r.note, basedOn: r.basedOn, summary: summaries(mi, ri), program: r.program });
+            }
             for (const w of m.worksheets) {
               this.db
                 .prepare("INSERT INTO worksheets (member_id, revision, fingerprint, issued_at, file_name, pdf, program, title_revision) VALUES (?, ?, ?, ?, ?, NULL, ?, ?)")
@@ -570,6 +582,15 @@ export class JobStore {
     }
   }
 
+  /** Keeps a summary worked out later for a revision that had none (a cache: a busy or read-only file just skips it). */
+  setSummary(memberId: number, revision: number, summary: ResultSummary): void {
+    try {
+      this.db.prepare("UPDATE revisions SET summary = ? WHERE member_id = ? AND number = ? AND summary IS NULL").run(JSON.stringify(summary), memberId, revision);
+    } catch {
+      // Worked out again next time.
+    }
+  }
+
   private insertRevision(
     memberId: number,
     number: number,
@@ -583,20 +604,13 @@ export class JobStore {
     return { revision: number, savedAt: meta.savedAt, note: meta.note, basedOn: meta.basedOn, fingerprint, program: meta.program || programName, summary: meta.summary };
   }
 
-  /** Revisions from an import or an older store have no summary yet: work it out once and keep it. */
+  /**
+   * A listing reads the summary kept with the revision and never designs: a design belongs on a design
+   * thread with its limits, and a job that could stop the process must not be run by a listing. A revision
+   * from a version-1 store has none (null) until a design thread works it out (`setSummary`).
+   */
   private revisionInfo(row: RevisionRow): RevisionInfo {
-    let summary: ResultSummary | null = row.summary ? (JSON.parse(row.summary) as ResultSummary) : null;
-    if (!summary) {
-      const prepared = prepareJob(JSON.parse(row.job));
-      summary = prepared.ok ? summaryOf(prepared.core) : null;
-      if (summary) {
-        try {
-          this.db.prepare("UPDATE revisions SET summary = ? WHERE member_id = ? AND number = ? AND summary IS NULL").run(JSON.stringify(summary), row.member_id, row.number);
-        } catch {
-          // A cache: when the file is busy or read-only the summary is simply worked out again next time.
-        }
-      }
-    }
+    const summary = row.summary ? (JSON.parse(row.summary) as ResultSummary) : null;
     return { revision: row.number, savedAt: row.saved_at, note: row.note, basedOn: row.based_on, fingerprint: row.fingerprint, program: row.program, summary };
   }
 }
