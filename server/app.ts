@@ -9,6 +9,7 @@ import { ApiError, errorBody, type ErrorCode } from "./errors.js";
 import { loadExamples } from "./examples.js";
 import { hostCheck, loopbackHosts } from "./host-check.js";
 import { boundedIssues, serviceLimits } from "./job-limits.js";
+import { requestGuard, rewriteUrl } from "./request-guard.js";
 import { ResultCache } from "./result-cache.js";
 import { securityHeaders } from "./security-headers.js";
 import { apiRoutes } from "./routes/api.js";
@@ -59,7 +60,9 @@ async function bundlePage(): Promise<string> {
 
 /** Builds the HTTP app without listening: tests inject requests or listen on port 0. */
 export async function buildApp(options: AppOptions = {}): Promise<FastifyInstance> {
-  const app = Fastify({ logger: false, bodyLimit: options.bodyLimit ?? serviceLimits.bodyBytes });
+  const app = Fastify({ logger: false, bodyLimit: options.bodyLimit ?? serviceLimits.bodyBytes, rewriteUrl: (request) => rewriteUrl(request.url) });
+  // Only JSON is read: a text body must not reach a route as a string.
+  app.removeContentTypeParser(["text/plain"]);
   const examples = loadExamples(options.examplesDir ?? join(projectRoot, "fixtures/examples"));
   const pageScript = await bundlePage();
 
@@ -99,9 +102,11 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
     return reply.status(500).send(errorBody("ERR_INTERNAL"));
   });
   app.setNotFoundHandler((_request, reply) => reply.status(404).send(errorBody("ERR_NOT_FOUND")));
+  // The headers first, so that every refusal below carries them too.
+  await securityHeaders(app);
   const allowedHosts = options.allowedHosts ?? loopbackHosts;
   if (allowedHosts !== "any") hostCheck(app, allowedHosts);
-  await securityHeaders(app);
+  requestGuard(app);
 
   await app.register(apiRoutes, { examples, designs, cache });
   if (options.dataDir) await app.register(storeRoutes, { dataDir: options.dataDir, store: options.store, designs });
@@ -123,6 +128,7 @@ function fastifyCode(error: FastifyError): ErrorCode | undefined {
     case "FST_ERR_CTP_INVALID_MEDIA_TYPE":
       return "ERR_UNSUPPORTED_MEDIA_TYPE";
     default:
-      return error.statusCode === 404 ? "ERR_NOT_FOUND" : error.statusCode && error.statusCode < 500 ? "ERR_INPUT_INVALID" : undefined;
+      // A static file refused (403) or missing is, to the client, nothing at this address.
+      return error.statusCode === 404 || error.statusCode === 403 ? "ERR_NOT_FOUND" : error.statusCode && error.statusCode < 500 ? "ERR_INPUT_INVALID" : undefined;
   }
 }

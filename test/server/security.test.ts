@@ -1,7 +1,7 @@
 // Security of the local service: where it listens, its headers, the Host check, what static serving
 // can reach, and names people type kept as text in the API, the PDF and its file name.
 import { execFileSync } from "node:child_process";
-import { writeFileSync } from "node:fs";
+import { readFileSync, writeFileSync } from "node:fs";
 import { connect } from "node:net";
 import { networkInterfaces } from "node:os";
 import { join } from "node:path";
@@ -201,6 +201,81 @@ describe("names people type", () => {
       expect(text).toContain(`B-1 "</title><img src=x onerror=1>`);
       expect(text).toContain("≤ τ ≥ σ");
     } finally {
+      folder.remove();
+    }
+  });
+});
+
+describe("requests from other sites, and bodies that are not JSON", () => {
+  const changing = [
+    { method: "POST" as const, url: "/api/designs" },
+    { method: "POST" as const, url: "/api/conversions?to=us" },
+    { method: "POST" as const, url: "/api/worksheets" },
+  ];
+
+  test("a state-changing request with another site's Origin or Sec-Fetch-Site is a 403 ERR_CROSS_SITE with the hardening headers; GETs and this site's own requests are answered", async () => {
+    const job = JSON.stringify(example("workshop-box-beam.si"));
+    for (const { method, url } of changing) {
+      for (const headers of [{ origin: "https://elsewhere.example" }, { origin: "null" }, { "sec-fetch-site": "cross-site" }, { "sec-fetch-site": "same-site" }]) {
+        const res = await app.inject({ method, url, payload: job, headers: { "content-type": "application/json", ...headers } });
+        expect(res.statusCode, `${url} ${JSON.stringify(headers)}`).toBe(403);
+        expect(res.json()).toMatchObject({ statusCode: 403, code: "ERR_CROSS_SITE", error: "Forbidden" });
+        expect(res.headers["content-security-policy"]).toContain("default-src 'self'");
+      }
+    }
+    const own = await app.inject({ method: "POST", url: "/api/designs", payload: job, headers: { "content-type": "application/json", origin: "http://127.0.0.1", host: "127.0.0.1", "sec-fetch-site": "same-origin" } });
+    expect(own.statusCode).toBe(200);
+    expect((await app.inject({ method: "GET", url: "/api/health", headers: { origin: "https://elsewhere.example" } })).statusCode).toBe(200);
+  });
+
+  test("only application/json bodies are taken: text/plain, a form, or an empty POST with no type is a 415 with the documented body", async () => {
+    for (const { method, url } of changing) {
+      for (const [type, payload] of [["text/plain", "{}"], ["application/x-www-form-urlencoded", "a=1"], ["multipart/form-data; boundary=x", "--x--"], [undefined, ""]] as const) {
+        const res = await app.inject({ method, url, payload, headers: type ? { "content-type": type } : {} });
+        expect(res.statusCode, `${url} ${type}`).toBe(415);
+        expect(res.json()).toMatchObject({ statusCode: 415, code: "ERR_UNSUPPORTED_MEDIA_TYPE", error: "Unsupported Media Type", issues: [{ path: "(headers).content-type", message: "must be application/json" }] });
+        expect(res.headers["x-content-type-options"]).toBe("nosniff");
+      }
+    }
+  });
+
+  test("the page's requests send JSON: every fetch with a method other than GET in web/src names application/json", () => {
+    const sources = ["web/src/api.ts", "web/src/store/store-api.ts"].map((f) => readFileSync(join(import.meta.dirname, "../..", f), "utf8"));
+    for (const source of sources) {
+      for (const call of source.match(/fetch\([^;]*method[^;]*/g) ?? []) expect(call).toMatch(/content-type": "application\/json"/);
+    }
+    // A POST without a body (issuing a worksheet) sends {} as JSON.
+    expect(sources[1]).toMatch(/if \(method !== "GET" && body === undefined\) body = \{\};/);
+  });
+});
+
+describe("every answer has the documented body and the hardening headers", () => {
+  test("a malformed URL, a path with .., a refused host and a missing page: documented code and body, and the CSP", async () => {
+    for (const path of ["/%zz", "/../", "/..%2f", "/%2e%2e/package.json", "/api/../api/health", "/no-such-page"]) {
+      const res = await rawGet(path);
+      expect(res.status, path).toBe(404);
+      expect(JSON.parse(res.body), path).toEqual({ statusCode: 404, code: "ERR_NOT_FOUND", error: "Not Found", message: "There is nothing at this address.", issues: [] });
+      expect(res.headers.toLowerCase(), path).toContain("content-security-policy: default-src 'self'");
+      expect(res.headers.toLowerCase(), path).toContain("x-content-type-options: nosniff");
+    }
+    const host = await rawGet("/api/health", "rebound.example");
+    expect(host.status).toBe(403);
+    expect(JSON.parse(host.body)).toMatchObject({ statusCode: 403, code: "ERR_HOST_NOT_ALLOWED", error: "Forbidden" });
+    expect(host.headers.toLowerCase()).toContain("content-security-policy: default-src 'self'");
+  });
+
+  test("a body nested deeper than any job is a 400 on every JSON route, conversions and the store included", async () => {
+    const folder = tempFolder("security");
+    const withStore = await buildApp({ dataDir: folder.dir });
+    try {
+      const deep = `{"job":${"[".repeat(100_000)}${"]".repeat(100_000)}}`;
+      for (const url of ["/api/designs", "/api/conversions?to=si", "/api/worksheets", "/api/projects", "/api/projects/import"]) {
+        const res = await withStore.inject({ method: "POST", url, payload: deep, headers: { "content-type": "application/json" } });
+        expect(res.statusCode, url).toBe(400);
+        expect(res.json(), url).toMatchObject({ code: "ERR_INPUT_INVALID", issues: [{ path: "(body)", message: "must nest at most 64 levels deep" }] });
+      }
+    } finally {
+      await withStore.close();
       folder.remove();
     }
   });

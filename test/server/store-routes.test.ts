@@ -189,7 +189,7 @@ describe("compare", () => {
 describe("worksheets", () => {
   test("POST …/revisions/:n/worksheets returns the PDF (201), records the issue, and the fingerprint look-up finds it", async () => {
     const { p, m } = await projectWithMember("Issued");
-    const res = await api().post(`/api/projects/${p}/members/${m}/revisions/1/worksheets`).buffer(true).parse(binary);
+    const res = await api().post(`/api/projects/${p}/members/${m}/revisions/1/worksheets`).send({}).buffer(true).parse(binary);
     expect(res.status).toBe(201);
     expect(res.headers["content-type"]).toBe("application/pdf");
     expect(res.headers["content-disposition"]).toContain("DEMO-103_LB-1_rev-A.pdf");

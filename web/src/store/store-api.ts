@@ -38,6 +38,8 @@ export type Answer<T> = { ok: true; value: T } | { ok: false; problem: StoreProb
 const unreachable: StoreProblem = { status: 0, code: "UNREACHABLE", message: "The stitchplan service did not answer. Is it still running?", issues: [] };
 
 async function call<T>(method: string, url: string, body?: unknown, read: (r: Response) => Promise<T> = (r) => r.json() as Promise<T>): Promise<Answer<T>> {
+  // The service takes changes only as JSON (a guard against other sites' forms): a POST without a body sends {}.
+  if (method !== "GET" && body === undefined) body = {};
   let response: Response;
   try {
     response = await fetch(url, {
