@@ -18,7 +18,11 @@ export interface FastenedJoint {
  */
 export function fastenedJoints(job: JobDocument, section: SectionModel, contacts: ContactLine[]): FastenedJoint[] {
   const connectors = new Map(job.connectors.map((c) => [c.id, c]));
-  const custom = job.fastening.joints.map((f, i) => ({ joint: jointForHeldGroup(section, contacts, f.held), connector: connectors.get(f.connector)!, fastening: f, path: `fastening.joints[${i}]` }));
+  // Where parts start and stop along the member, a held group is a joint only in the stretches where it
+  // touches the rest (a cover plate over the middle of a beam): elsewhere it crosses no line and holds nothing.
+  const custom = job.fastening.joints
+    .map((f, i) => ({ joint: jointForHeldGroup(section, contacts, f.held), connector: connectors.get(f.connector)!, fastening: f, path: `fastening.joints[${i}]` }))
+    .filter((c) => c.joint.lines.length > 0);
   const claimed = new Set(custom.flatMap((c) => c.joint.lines.map(lineKey)));
   const found = findJoints(section, contacts)
     .filter((j) => !j.lines.some((l) => claimed.has(lineKey(l))))
