@@ -1,5 +1,6 @@
 import { join } from "node:path";
 import Database from "better-sqlite3";
+import { showHidden } from "../../core/text/plain-text.js";
 import { canonicalJson, issuesFromZod, PROGRAM, prepareJob, type JobDocument, type JobIssue } from "../../core/index.js";
 import { fingerprintOf } from "../fingerprint.js";
 import { ApiError } from "../errors.js";
@@ -135,9 +136,9 @@ const ISSUE_SELECT = `
 const issueOf = (r: IssueRow): WorksheetIssue => ({
   id: r.id,
   projectId: r.project_id,
-  projectName: r.project_name,
+  projectName: showHidden(r.project_name),
   memberId: r.member_id,
-  mark: r.mark,
+  mark: showHidden(r.mark),
   revision: r.revision,
   titleRevision: r.title_revision,
   fingerprint: r.fingerprint,
@@ -285,8 +286,9 @@ export class JobStore {
     return {
       id: row.id,
       projectId: row.project_id,
-      mark: row.mark,
-      description: row.description,
+      // Names saved before control and text-direction characters were refused are shown with them visible.
+      mark: showHidden(row.mark),
+      description: showHidden(row.description),
       createdAt: row.created_at,
       revisions,
       latest: this.revisionInfo(latest),
@@ -452,7 +454,7 @@ export class JobStore {
            WHERE r.fingerprint >= ? AND r.fingerprint < ? ORDER BY r.saved_at`,
         )
         .all(...range) as { project_id: number; project_name: string; member_id: number; mark: string; number: number; saved_at: string; fingerprint: string }[]
-    ).map((r) => ({ projectId: r.project_id, projectName: r.project_name, memberId: r.member_id, mark: r.mark, revision: r.number, savedAt: r.saved_at, fingerprint: r.fingerprint }));
+    ).map((r) => ({ projectId: r.project_id, projectName: showHidden(r.project_name), memberId: r.member_id, mark: showHidden(r.mark), revision: r.number, savedAt: r.saved_at, fingerprint: r.fingerprint }));
     if (issues.length === 0 && revisions.length === 0) {
       throw new ApiError("ERR_WORKSHEET_NOT_FOUND", `No issued worksheet or saved revision in this job store has the fingerprint ${fingerprint}.`);
     }
@@ -611,7 +613,7 @@ export class JobStore {
    */
   private revisionInfo(row: RevisionRow): RevisionInfo {
     const summary = row.summary ? (JSON.parse(row.summary) as ResultSummary) : null;
-    return { revision: row.number, savedAt: row.saved_at, note: row.note, basedOn: row.based_on, fingerprint: row.fingerprint, program: row.program, summary };
+    return { revision: row.number, savedAt: row.saved_at, note: showHidden(row.note), basedOn: row.based_on, fingerprint: row.fingerprint, program: row.program, summary };
   }
 }
 
@@ -633,6 +635,6 @@ interface MemberRow {
   created_at: string;
 }
 
-const projectOf = (r: ProjectRow): Project => ({ id: r.id, name: r.name, number: r.number, client: r.client, createdAt: r.created_at, members: r.members, updatedAt: r.updated_at });
+const projectOf = (r: ProjectRow): Project => ({ id: r.id, name: showHidden(r.name), number: showHidden(r.number), client: showHidden(r.client), createdAt: r.created_at, members: r.members, updatedAt: r.updated_at });
 
 const range = (a: number, b: number) => (a === b ? `${a}` : `${a} to ${b}`);

@@ -9,6 +9,7 @@ import type { FastifyInstance } from "fastify";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { startServer } from "../../bench/loopback.js";
 import { buildApp } from "../../server/app.js";
+import { JobStore } from "../../server/store/job-store.js";
 import { example, tempFolder } from "./store/store-fixtures.js";
 
 let app: FastifyInstance;
@@ -164,8 +165,9 @@ describe("names people type", () => {
   const hostile = {
     project: `<script>alert("p")</script> O'Brien & "Sons" — Δοκός Балка`,
     mark: `B-1 "</title><img src=x onerror=1>`,
-    description: "\u202eevil\u202c ≤ τ ≥ σ; \r\nSet-Cookie: x=1",
-    number: `../../etc/passwd\r\nX-Injected: 1`,
+    // Control and text-direction characters (a line break, U+202E) are refused at the field: see below.
+    description: "evil ≤ τ ≥ σ; Set-Cookie: x=1",
+    number: `../../etc/passwd X-Injected: 1`,
   };
 
   function hostileJob() {
@@ -274,6 +276,53 @@ describe("every answer has the documented body and the hardening headers", () =>
         expect(res.statusCode, url).toBe(400);
         expect(res.json(), url).toMatchObject({ code: "ERR_INPUT_INVALID", issues: [{ path: "(body)", message: "must nest at most 64 levels deep" }] });
       }
+    } finally {
+      await withStore.close();
+      folder.remove();
+    }
+  });
+});
+
+describe("control and text-direction characters in names", () => {
+  const json = { "content-type": "application/json" };
+  const hidden = ["\u202e", "\u2066", "\u200f", "\u0007", "\u0085", "\u061c"];
+
+  test("are refused at the field that holds them, naming the character and where it is", async () => {
+    for (const c of hidden) {
+      const job = example("workshop-box-beam.si");
+      job.member.mark = `MB${c}2`;
+      job.project.name = `Harbour ${c}Lane`;
+      const res = await app.inject({ method: "POST", url: "/api/designs", payload: JSON.stringify(job), headers: json });
+      expect(res.statusCode).toBe(400);
+      const code = `U+${c.codePointAt(0)!.toString(16).toUpperCase().padStart(4, "0")}`;
+      expect(res.json().issues).toEqual(
+        expect.arrayContaining([
+          { path: "member.mark", message: `must not hold control or text-direction characters (${code} at character 3)` },
+          { path: "project.name", message: `must not hold control or text-direction characters (${code} at character 9)` },
+        ]),
+      );
+    }
+    const plain = example("workshop-box-beam.si");
+    plain.member.mark = "MB-2 ÄÖ 北 שלום";
+    expect((await app.inject({ method: "POST", url: "/api/designs", payload: JSON.stringify(plain), headers: json })).statusCode).toBe(200);
+  });
+
+  test("a store project name is refused the same way; a member saved before the rule lists with the character shown as ⟨U+202E⟩", async () => {
+    const folder = tempFolder("hidden");
+    const withStore = await buildApp({ dataDir: folder.dir });
+    try {
+      const refused = await withStore.inject({ method: "POST", url: "/api/projects", payload: JSON.stringify({ name: "Level\u202e 2" }), headers: json });
+      expect(refused.statusCode).toBe(400);
+      expect(refused.json().issues).toEqual([{ path: "name", message: "must not hold control or text-direction characters (U+202E at character 6)" }]);
+      const project = (await withStore.inject({ method: "POST", url: "/api/projects", payload: JSON.stringify({ name: "Level 2" }), headers: json })).json();
+      const saved = (await withStore.inject({ method: "POST", url: `/api/projects/${project.id}/members`, payload: JSON.stringify({ job: example("workshop-box-beam.si") }), headers: json })).json();
+      // As an older program could have stored it: straight into the file.
+      const store = JobStore.open(folder.dir);
+      store.db.prepare("UPDATE members SET mark = ?, description = ? WHERE id = ?").run("MB\u202e-2", "left\u2066right", saved.memberId);
+      store.close();
+      const members = await withStore.inject({ method: "GET", url: `/api/projects/${project.id}/members` });
+      expect(members.statusCode).toBe(200);
+      expect(members.json()[0]).toMatchObject({ mark: "MB⟨U+202E⟩-2", description: "left⟨U+2066⟩right" });
     } finally {
       await withStore.close();
       folder.remove();
