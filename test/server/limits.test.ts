@@ -64,6 +64,17 @@ describe("size limits", () => {
     expect(await refusedAt(checking({ type: "zones", zones }), "fastening.default.provided.zones")).toBe("at most 60 zones");
   });
 
+  test("a zoned schedule to check that gives more than 20,000 rows is a 400 at its zones (a spacing of 1e-6 mm stopped the process)", async () => {
+    const job = example("workshop-box-beam.si");
+    const checking = (spacing: number) => ({ ...job, mode: "check", fastening: { ...job.fastening, default: { ...job.fastening.default, provided: { type: "zones", zones: [{ from: 0, to: 4.8, spacing }] } } } });
+    for (const spacing of [1e-300, 5e-324, 1e-6, 1e-4, 0.001]) {
+      expect(await refusedAt(checking(spacing), "fastening.default.provided.zones")).toMatch(/^gives (over a billion|about \d+) rows along the member; a schedule to check may have at most 20000/);
+    }
+    // 4800 mm at 0.25 mm: 19,200 rows, inside the limit (and far below any connector's least spacing, so it fails its detailing).
+    expect((await design(checking(0.25))).statusCode).toBe(200);
+    expect((await app.inject({ method: "GET", url: "/api/health" })).statusCode).toBe(200);
+  });
+
   test("a member longer than the limit is refused at beam.spans with the limit, in the job's units (1e300 m used to stop the process)", async () => {
     // The service takes members up to 1,000 m; core may refuse shorter ones with its own range.
     const limit = /(up to|to) (500|1000) m\b/;
