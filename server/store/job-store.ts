@@ -4,91 +4,19 @@ import { showHidden } from "../../core/text/plain-text.js";
 import { canonicalJson, issuesFromZod, PROGRAM, prepareJob, type JobDocument, type JobIssue } from "../../core/index.js";
 import { fingerprintOf } from "../fingerprint.js";
 import { ApiError } from "../errors.js";
-import type { ResultSummary } from "../result-summary.js";
+import type { FingerprintLookUp, Member, Project, ResultSummary, RevisionInfo, SavedRevision, StoredRevision, WorksheetIssue } from "../../core/schema/store-contract.js";
+
+export type { FingerprintLookUp, Member, Project, RevisionInfo, SavedRevision, StoredRevision, WorksheetIssue };
 import { LATEST_SCHEMA_VERSION, schemaVersion } from "./migrations.js";
 import { DATABASE_FILE, openDatabase } from "./open-database.js";
 import { PROJECT_FILE_FORMAT, PROJECT_FILE_VERSION, ProjectFile, type NewProject } from "./store-schemas.js";
 
-export interface Project {
-  id: number;
-  name: string;
-  number: string;
-  client: string;
-  createdAt: string;
-  /** Members in the project. */
-  members: number;
-  /** When a revision was last saved in the project; null when it has no members. */
-  updatedAt: string | null;
-}
 
-export interface RevisionInfo {
-  revision: number;
-  savedAt: string;
-  note: string;
-  /** The revision this one was edited from, when the client said so. */
-  basedOn: number | null;
-  /** Input fingerprint with the program version that saved it. */
-  fingerprint: string;
-  /** Program version that saved it ("" for a revision from a version-1 store). */
-  program: string;
-  /** Pass or fail, what governs, connectors; null when the job could not be designed. */
-  summary: ResultSummary | null;
-}
 
-export interface Member {
-  id: number;
-  projectId: number;
-  /** Mark and description of the latest revision's job. */
-  mark: string;
-  description: string;
-  createdAt: string;
-  revisions: number;
-  latest: RevisionInfo;
-  /** Worksheets issued for any revision of the member. */
-  issued: number;
-  lastIssue: WorksheetIssue | null;
-}
 
-export interface StoredRevision extends RevisionInfo {
-  projectId: number;
-  memberId: number;
-  /** The job document as saved, defaults filled in. */
-  job: JobDocument;
-}
 
-export interface SavedRevision {
-  projectId: number;
-  memberId: number;
-  mark: string;
-  revision: RevisionInfo;
-  /** For example: another revision was saved after the one this edit started from. */
-  warnings: string[];
-}
 
-export interface WorksheetIssue {
-  id: number;
-  projectId: number;
-  projectName: string;
-  memberId: number;
-  mark: string;
-  revision: number;
-  /** Revision text printed in the title block (the job's `member.revision`). */
-  titleRevision: string;
-  fingerprint: string;
-  issuedAt: string;
-  fileName: string;
-  program: string;
-  /** Whether the issued PDF's bytes are kept (not for worksheets brought in by an import). */
-  hasPdf: boolean;
-}
 
-export interface FingerprintLookUp {
-  fingerprint: string;
-  /** Worksheets issued with this fingerprint, oldest first. */
-  issues: WorksheetIssue[];
-  /** Saved revisions whose input has this fingerprint. */
-  revisions: { projectId: number; projectName: string; memberId: number; mark: string; revision: number; savedAt: string; fingerprint: string }[];
-}
 
 export interface StoreOptions {
   /** The clock; tests fix it. */

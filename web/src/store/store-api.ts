@@ -1,20 +1,19 @@
 import type { JobIssue } from "../../../core/schema/job-issues.js";
-import type { InputChange, ResultChanges } from "../../../server/store/compare-revisions.js";
-import type { FingerprintLookUp, Member, Project, RevisionInfo, SavedRevision, StoredRevision, WorksheetIssue } from "../../../server/store/job-store.js";
+import type {
+  Comparison,
+  FingerprintLookUp,
+  InputChange,
+  Member,
+  Project,
+  ResultChanges,
+  RevisionInfo,
+  RevisionListItem,
+  SavedRevision,
+  StoredRevision,
+  WorksheetIssue,
+} from "../../../core/schema/store-contract.js";
 
-export type { FingerprintLookUp, InputChange, Member, Project, ResultChanges, RevisionInfo, SavedRevision, StoredRevision, WorksheetIssue };
-
-export type RevisionListItem = RevisionInfo & { issues: WorksheetIssue[] };
-
-export interface Comparison {
-  units: string;
-  unitLabels: Record<string, string>;
-  from: { revision: number; savedAt: string; note: string; fingerprint: string; units: string };
-  to: { revision: number; savedAt: string; note: string; fingerprint: string; units: string };
-  sameInputs: boolean;
-  inputs: InputChange[];
-  results: ResultChanges;
-}
+export type { Comparison, FingerprintLookUp, InputChange, Member, Project, ResultChanges, RevisionInfo, RevisionListItem, SavedRevision, StoredRevision, WorksheetIssue };
 
 export interface IssuedWorksheet {
   blob: Blob;
