@@ -1,4 +1,4 @@
-import type { DesignResult, JobDocument, JobIssue, UnitSystem } from "../core/index.js";
+import { designMember, prepareJob, type DesignResult, type JobDocument, type JobIssue, type UnitSystem } from "../core/index.js";
 import { designInUnits } from "./design-in-units.js";
 import { ApiError, type ErrorCode } from "./errors.js";
 import { summariseResult, type ResultSummary } from "./result-summary.js";
@@ -12,6 +12,8 @@ export type DesignTask =
   | { kind: "result"; input: unknown; units?: UnitSystem | undefined }
   /** What a list of members shows for a job being saved; null when the design itself fails (the revision is kept). */
   | { kind: "summary"; input: unknown }
+  /** A revision of a project file: the job as parsed (defaults filled in) and its summary, so the import validates off the HTTP thread too. */
+  | { kind: "prepared-summary"; input: unknown }
   /** The PDF worksheet, with what its headers need. */
   | { kind: "worksheet"; input: unknown; printDate?: string | undefined };
 
@@ -35,7 +37,14 @@ export type TaskAnswer<T extends DesignTask> = T extends { kind: "result-json" }
     ? ResultRun
     : T extends { kind: "summary" }
       ? ResultSummary | null
-      : WorksheetRun;
+      : T extends { kind: "prepared-summary" }
+        ? PreparedSummary
+        : WorksheetRun;
+
+export interface PreparedSummary {
+  job: JobDocument;
+  summary: ResultSummary | null;
+}
 
 /** An error as it crosses between threads. */
 export interface WireError {
@@ -44,7 +53,7 @@ export interface WireError {
   issues: JobIssue[];
 }
 
-export async function performTask(task: DesignTask): Promise<string | ResultRun | WorksheetRun | ResultSummary | null> {
+export async function performTask(task: DesignTask): Promise<string | ResultRun | WorksheetRun | ResultSummary | PreparedSummary | null> {
   switch (task.kind) {
     case "result-json":
       return JSON.stringify(designInUnits(task.input, task.units).shown);
@@ -61,6 +70,22 @@ export async function performTask(task: DesignTask): Promise<string | ResultRun 
         return null;
       }
       return summariseResult(run.result);
+    }
+    case "prepared-summary": {
+      const input = task.input;
+      if (input === null || typeof input !== "object" || Array.isArray(input)) {
+        throw new ApiError("ERR_INPUT_INVALID", undefined, [{ path: "(document)", message: "must be a job document (a JSON object)" }]);
+      }
+      const prepared = prepareJob(input);
+      if (!prepared.ok) throw new ApiError("ERR_INPUT_INVALID", undefined, prepared.issues);
+      let summary: ResultSummary | null = null;
+      try {
+        // Utilisations and counts are pure numbers: the result in core units gives the same summary.
+        summary = summariseResult(designMember(prepared.core));
+      } catch (error) {
+        if (error instanceof ApiError) throw error;
+      }
+      return { job: prepared.job, summary };
     }
     case "worksheet": {
       const run = designInUnits(task.input);

@@ -2,12 +2,13 @@ import type { FastifyInstance } from "fastify";
 import type { z } from "zod";
 import { issuesFromZod, JobDocument, toDisplayUnits, type JobIssue, type UnitSystem } from "../../core/index.js";
 import type { ResultSummary } from "../result-summary.js";
-import type { DesignTask, TaskAnswer } from "../design-tasks.js";
+import type { ProjectFile } from "../store/store-schemas.js";
+import type { DesignTask, PreparedSummary, TaskAnswer } from "../design-tasks.js";
 import type { TaskRunner } from "../design-threads.js";
 import { ApiError } from "../errors.js";
 import { today } from "../pdf/worksheet.js";
 import { inputChanges, resultChanges } from "../store/compare-revisions.js";
-import { JobStore, prefixIssues, validJob, type ImportPlan, type StoreOptions } from "../store/job-store.js";
+import { JobStore, prefixIssues, validJob, type StoreOptions } from "../store/job-store.js";
 import { CompareQuery, NewMember, NewProject, SaveRevision } from "../store/store-schemas.js";
 
 export interface StoreRoutesOptions {
@@ -72,28 +73,43 @@ async function summaryForSave(designs: TaskRunner, job: unknown): Promise<Result
   return designStored(designs, { kind: "summary", input: job }, "job");
 }
 
-/** Each revision of an import designed on the design threads, two at a time; those past a limit are listed with their paths. */
-async function importSummaries(designs: TaskRunner, plan: ImportPlan): Promise<(member: number, revision: number) => ResultSummary | null> {
-  const work = plan.members.flatMap((m, mi) => m.revisions.map((r, ri) => ({ mi, ri, job: r.job })));
-  const found = new Map<string, ResultSummary | null>();
-  const issues: JobIssue[] = [];
+/**
+ * Each revision of an import validated and designed on the design threads, two at a time (the HTTP thread
+ * only reads the file's own fields): the jobs as parsed and their summaries, or every problem with its path;
+ * a revision past a time or memory limit stops the rest.
+ */
+async function prepareImport(designs: TaskRunner, file: ProjectFile): Promise<{ jobOf: (m: number, r: number) => JobDocument; summaryOf: (m: number, r: number) => ResultSummary | null }> {
+  const work = file.members.flatMap((m, mi) => m.revisions.map((r, ri) => ({ mi, ri, job: r.job })));
+  const found = new Map<string, PreparedSummary>();
+  const invalid = new Map<string, JobIssue[]>();
+  const limits: JobIssue[] = [];
   let next = 0;
   const lane = async () => {
-    while (next < work.length && issues.length === 0) {
+    while (next < work.length && limits.length === 0) {
       const { mi, ri, job } = work[next++]!;
+      const at = `members[${mi}].revisions[${ri}]`;
       try {
-        found.set(`${mi}/${ri}`, await designs.run({ kind: "summary", input: job }, { unbounded: true }));
+        found.set(`${mi}/${ri}`, await designs.run({ kind: "prepared-summary", input: job }, { unbounded: true }));
       } catch (error) {
-        if (!(error instanceof ApiError) || (error.code !== "ERR_DESIGN_TIME_LIMIT" && error.code !== "ERR_DESIGN_MEMORY_LIMIT")) throw error;
-        issues.push({ path: `members[${mi}].revisions[${ri}].job`, message: `cannot be designed within the service's limits: ${error.message}` });
+        if (!(error instanceof ApiError)) throw error;
+        if (error.code === "ERR_INPUT_INVALID") invalid.set(`${mi}/${ri}`, prefixIssues(error.issues, `${at}.job`));
+        else if (error.code === "ERR_DESIGN_TIME_LIMIT" || error.code === "ERR_DESIGN_MEMORY_LIMIT") limits.push({ path: `${at}.job`, message: `cannot be designed within the service's limits: ${error.message}` });
+        else throw error;
       }
     }
   };
   await Promise.all([lane(), lane()]);
-  if (issues.length > 0) {
-    throw new ApiError("ERR_PROJECT_FILE_INVALID", "A revision of the project file cannot be designed within the service's time and memory limits; nothing was stored.", issues);
+  if (limits.length > 0) {
+    throw new ApiError("ERR_PROJECT_FILE_INVALID", "A revision of the project file cannot be designed within the service's time and memory limits; nothing was stored.", limits);
   }
-  return (mi, ri) => found.get(`${mi}/${ri}`) ?? null;
+  return {
+    jobOf: (mi, ri) => {
+      const issues = invalid.get(`${mi}/${ri}`);
+      if (issues) throw new ApiError("ERR_INPUT_INVALID", undefined, issues);
+      return found.get(`${mi}/${ri}`)!.job;
+    },
+    summaryOf: (mi, ri) => found.get(`${mi}/${ri}`)?.summary ?? null,
+  };
 }
 
 type P = { Params: { project: string } };
@@ -234,7 +250,8 @@ export async function storeRoutes(app: FastifyInstance, options: StoreRoutesOpti
   });
 
   app.post("/api/projects/import", { bodyLimit: IMPORT_BODY_LIMIT }, async (request, reply) => {
-    const plan = store.checkImport(request.body);
-    return reply.status(201).send(store.storeImport(plan, await importSummaries(designs, plan)));
+    const file = JobStore.parseProjectFile(request.body);
+    const { jobOf, summaryOf } = await prepareImport(designs, file);
+    return reply.status(201).send(store.storeImport(store.checkImport(file, jobOf), summaryOf));
   });
 }

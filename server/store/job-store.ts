@@ -432,16 +432,23 @@ export class JobStore {
    * nothing is stored.
    */
   importProject(input: unknown, summaries: (member: number, revision: number) => ResultSummary | null = () => null): Project {
-    return this.storeImport(this.checkImport(input), summaries);
+    const file = JobStore.parseProjectFile(input);
+    return this.storeImport(this.checkImport(file, (mi, ri) => validJob(file.members[mi]!.revisions[ri]!.job, `members[${mi}].revisions[${ri}].job`).job), summaries);
   }
 
-  /** The validation half of an import: every problem with its path, or the plan to store. */
-  checkImport(input: unknown): ImportPlan {
+  /** A project file's own fields (not yet its jobs); throws ERR_PROJECT_FILE_INVALID with every problem. */
+  static parseProjectFile(input: unknown): ProjectFile {
     const parsed = ProjectFile.safeParse(input, { reportInput: true });
-    if (!parsed.success) {
-      throw new ApiError("ERR_PROJECT_FILE_INVALID", undefined, issuesFromZod(parsed.error));
-    }
-    const file = parsed.data;
+    if (!parsed.success) throw new ApiError("ERR_PROJECT_FILE_INVALID", undefined, issuesFromZod(parsed.error));
+    return parsed.data;
+  }
+
+  /**
+   * The validation half of an import: every problem with its path, or the plan to store. `jobOf` gives each
+   * revision's job as parsed, or throws ERR_INPUT_INVALID with its issues at their paths (the route has them
+   * validated on a design thread).
+   */
+  checkImport(file: ProjectFile, jobOf: (member: number, revision: number) => JobDocument): ImportPlan {
     const issues: JobIssue[] = [];
     const members = file.members.map((m, mi) => {
       const revisions = m.revisions.map((r, ri) => {
@@ -449,8 +456,7 @@ export class JobStore {
         if (r.revision !== ri + 1) issues.push({ path: `${at}.revision`, message: `must be ${ri + 1}: revisions are numbered 1, 2, 3… in order, without gaps` });
         if (r.basedOn !== null && r.basedOn >= r.revision) issues.push({ path: `${at}.basedOn`, message: `must be an earlier revision than ${r.revision}` });
         try {
-          const { job } = validJob(r.job, `${at}.job`);
-          return { ...r, job };
+          return { ...r, job: jobOf(mi, ri) };
         } catch (error) {
           if (!(error instanceof ApiError)) throw error;
           issues.push(...error.issues);
