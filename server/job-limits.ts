@@ -14,7 +14,7 @@ export const serviceLimits = {
   /** Heap of each design or worksheet thread, MiB. */
   threadMemoryMb: 512,
   /** Designs (results, comparisons, a save's summary) that may wait for a thread; one more is a 503. */
-  designQueue: 64,
+  designQueue: 128,
   /** Worksheets that may wait for a thread. */
   worksheetQueue: 8,
   /** Most problems listed in one error answer; the rest are counted. */
