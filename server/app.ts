@@ -1,4 +1,5 @@
 import { availableParallelism } from "node:os";
+import type { Duplex } from "node:stream";
 import { dirname, join } from "node:path";
 import { fileURLToPath } from "node:url";
 import fastifyStatic from "@fastify/static";
@@ -11,7 +12,7 @@ import { hostCheck, loopbackHosts } from "./host-check.js";
 import { boundedIssues, serviceLimits } from "./job-limits.js";
 import { requestGuard, rewriteUrl } from "./request-guard.js";
 import { ResultCache } from "./result-cache.js";
-import { securityHeaders } from "./security-headers.js";
+import { hardeningHeaders, securityHeaders } from "./security-headers.js";
 import { apiRoutes } from "./routes/api.js";
 import { storeRoutes } from "./routes/store.js";
 import type { StoreOptions } from "./store/job-store.js";
@@ -60,7 +61,7 @@ async function bundlePage(): Promise<string> {
 
 /** Builds the HTTP app without listening: tests inject requests or listen on port 0. */
 export async function buildApp(options: AppOptions = {}): Promise<FastifyInstance> {
-  const app = Fastify({ logger: false, bodyLimit: options.bodyLimit ?? serviceLimits.bodyBytes, rewriteUrl: (request) => rewriteUrl(request.url) });
+  const app = Fastify({ logger: false, bodyLimit: options.bodyLimit ?? serviceLimits.bodyBytes, rewriteUrl: (request) => rewriteUrl(request.url), clientErrorHandler: answerClientError });
   // Only JSON is read: a text body must not reach a route as a string.
   app.removeContentTypeParser(["text/plain"]);
   const examples = loadExamples(options.examplesDir ?? join(projectRoot, "fixtures/examples"));
@@ -98,7 +99,8 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
       const limit = mebibytes(request.routeOptions.bodyLimit ?? serviceLimits.bodyBytes);
       return reply.status(413).send(errorBody(code, `The request body is larger than the limit of ${limit}.`, [{ path: "(body)", message: `must be at most ${limit}` }]));
     }
-    if (code) return reply.status(errorBody(code).statusCode).send(errorBody(code));
+    // Fastify's own refusals keep the documented body; a 400 names what was wrong with the request (Fastify's sentence, which quotes no input).
+    if (code) return reply.status(errorBody(code).statusCode).send(errorBody(code, undefined, code === "ERR_INPUT_INVALID" ? [{ path: "(request)", message: String((error as FastifyError).message).slice(0, 200) }] : []));
     return reply.status(500).send(errorBody("ERR_INTERNAL"));
   });
   app.setNotFoundHandler((_request, reply) => reply.status(404).send(errorBody("ERR_NOT_FOUND")));
@@ -113,6 +115,17 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
   app.get("/app.js", (_request, reply) => reply.type("text/javascript; charset=utf-8").header("cache-control", "no-cache").send(pageScript));
   await app.register(fastifyStatic, { root: join(projectRoot, "web"), index: ["index.html"], allowedPath: (path) => !path.startsWith("/src/") });
   return app;
+}
+
+/** A request Node cannot parse (a malformed request line or header): the documented 400, with the hardening headers. */
+function answerClientError(error: NodeJS.ErrnoException, socket: Duplex): void {
+  if (error.code === "ECONNRESET" || !socket.writable) {
+    socket.destroy();
+    return;
+  }
+  const body = JSON.stringify(errorBody("ERR_INPUT_INVALID", "The request is not well-formed HTTP.", [{ path: "(request)", message: "cannot be read as an HTTP request" }]));
+  const headers = { ...hardeningHeaders, "content-type": "application/json; charset=utf-8", "content-length": String(Buffer.byteLength(body)), connection: "close" };
+  socket.end(`HTTP/1.1 400 Bad Request\r\n${Object.entries(headers).map(([k, v]) => `${k}: ${v}`).join("\r\n")}\r\n\r\n${body}`);
 }
 
 const mebibytes = (bytes: number) => (bytes % (1024 * 1024) === 0 ? `${bytes / (1024 * 1024)} MiB` : `${bytes} bytes`);

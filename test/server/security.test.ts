@@ -9,6 +9,7 @@ import type { FastifyInstance } from "fastify";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { startServer } from "../../bench/loopback.js";
 import { buildApp } from "../../server/app.js";
+import { hardeningHeaders } from "../../server/security-headers.js";
 import { JobStore } from "../../server/store/job-store.js";
 import { example, tempFolder } from "./store/store-fixtures.js";
 
@@ -264,6 +265,25 @@ describe("every answer has the documented body and the hardening headers", () =>
     expect(host.status).toBe(403);
     expect(JSON.parse(host.body)).toMatchObject({ statusCode: 403, code: "ERR_HOST_NOT_ALLOWED", error: "Forbidden" });
     expect(host.headers.toLowerCase()).toContain("content-security-policy: default-src 'self'");
+  });
+
+  test("a request Node cannot parse gets the documented 400 with the same hardening headers helmet sets on every other answer", async () => {
+    const res = await new Promise<string>((resolve, reject) => {
+      const socket = connect(port, "127.0.0.1", () => socket.write("GET /api/health HTTP/1.1\r\nHost: 127.0.0.1\r\nBad Header Line\r\n\r\n"));
+      let text = "";
+      socket.setEncoding("latin1");
+      socket.on("data", (chunk) => (text += chunk));
+      socket.on("end", () => resolve(text));
+      socket.on("error", reject);
+    });
+    const [head = "", body = ""] = res.split("\r\n\r\n");
+    expect(head.split("\r\n")[0]).toBe("HTTP/1.1 400 Bad Request");
+    expect(JSON.parse(body)).toMatchObject({ statusCode: 400, code: "ERR_INPUT_INVALID", error: "Bad Request", issues: [{ path: "(request)" }] });
+    const health = await app.inject("/api/health");
+    for (const [name, value] of Object.entries(hardeningHeaders)) {
+      expect(health.headers[name], name).toBe(value);
+      expect(head.toLowerCase()).toContain(`${name}: ${value}`.toLowerCase());
+    }
   });
 
   test("a body nested deeper than any job is a 400 on every JSON route, conversions and the store included", async () => {
