@@ -1,6 +1,7 @@
 import type { FastifyInstance } from "fastify";
 import type { z } from "zod";
 import { issuesFromZod, JobDocument, toDisplayUnits, type JobIssue, type UnitSystem } from "../../core/index.js";
+import type { Comparison } from "../../core/schema/store-contract.js";
 import type { ResultSummary } from "../result-summary.js";
 import type { ProjectFile } from "../store/store-schemas.js";
 import type { DesignTask, PreparedSummary, TaskAnswer } from "../design-tasks.js";
@@ -189,7 +190,7 @@ export async function storeRoutes(app: FastifyInstance, options: StoreRoutesOpti
         ? inputChanges(from.job, to.job)
         : inputChanges(toDisplayUnits(JobDocument, a.core, units), toDisplayUnits(JobDocument, b.core, units), { rel: 1e-9 });
     const meta = (r: typeof from) => ({ revision: r.revision, savedAt: r.savedAt, note: r.note, fingerprint: r.fingerprint, units: r.job.units });
-    return {
+    const comparison: Comparison = {
       projectId: p,
       memberId: m,
       units,
@@ -200,6 +201,7 @@ export async function storeRoutes(app: FastifyInstance, options: StoreRoutesOpti
       inputs,
       results: resultChanges(a.shown, b.shown),
     };
+    return comparison;
   });
 
   app.post<R>("/api/projects/:project/members/:member/revisions/:revision/worksheets", async (request, reply) => {

@@ -6,7 +6,7 @@ import { buildApp } from "../../server/app.js";
 import { serviceLimits } from "../../server/job-limits.js";
 import { readFileSync } from "node:fs";
 import { JobStore } from "../../server/store/job-store.js";
-import { manyLoadsJob, plankIJob } from "../job-builders.js";
+import { manyLoadsJob, plankIJob, twelveSpansPatternedJob } from "../job-builders.js";
 import { example, tempFolder } from "./store/store-fixtures.js";
 
 let app: FastifyInstance;
@@ -176,7 +176,7 @@ describe("designs, summaries and worksheets stay on their threads, within their 
     }
   });
 
-  test("a worksheet does not hold the designs: a design sent while a heavy worksheet prints is answered first", { timeout: 120_000 }, async () => {
+  test("a worksheet does not hold the designs: a design sent while a heavy worksheet prints is answered first; heavy worksheets print within the time and memory limits", { timeout: 120_000 }, async () => {
     const both = await buildApp({ designThreads: 1, warmThreads: true });
     try {
       const order: string[] = [];
@@ -186,6 +186,9 @@ describe("designs, summaries and worksheets stay on their threads, within their 
       expect(d.statusCode).toBe(200);
       expect(s.statusCode, s.body.slice(0, 300)).toBe(200);
       expect(order).toEqual(["design", "worksheet"]);
+      // The 12-span member with 9 patterned categories: its worksheet ran past 60 s; now it prints within the limits.
+      const twelve = await both.inject({ method: "POST", url: "/api/worksheets", payload: JSON.stringify(twelveSpansPatternedJob()), headers: json });
+      expect(twelve.statusCode, twelve.body.slice(0, 300)).toBe(200);
     } finally {
       await both.close();
     }
