@@ -1,5 +1,5 @@
 // Benchmarks: prints figures and writes them to bench/results/latest.md (and one line per run to
-// history.tsv); asserts nothing. BENCH_ONLY=examples,member,worksheet,spacing,beam,batch,http picks parts.
+// history.tsv); asserts nothing. BENCH_ONLY=examples,member,worksheet,spacing,beam,batch,http,fairness picks parts.
 import { appendFileSync, existsSync, mkdirSync, readdirSync, readFileSync, writeFileSync } from "node:fs";
 import { availableParallelism, cpus, loadavg } from "node:os";
 import { designMember, prepareJob } from "../core/index.js";
@@ -7,6 +7,7 @@ import { runDesign } from "../server/design-service.js";
 import { renderWorksheet } from "../server/pdf/worksheet.js";
 import { beamBench } from "./beam.js";
 import { batchBench } from "./batch.js";
+import { fairnessBench } from "./fairness.js";
 import { httpBench, type HttpFigures } from "./http.js";
 import { memberBench, type MemberFigures } from "./member.js";
 import { spacingBench } from "./spacing.js";
@@ -69,6 +70,7 @@ if (wanted("beam")) beamBench(say);
 if (wanted("batch")) await batchBench(say);
 let http: HttpFigures | undefined;
 if (wanted("http")) http = await httpBench(say, largestExample);
+if (wanted("fairness")) await fairnessBench(say);
 
 mkdirSync(new URL("bench/results/", root), { recursive: true });
 writeFileSync(new URL(`bench/results/${only ? `latest-${only.join("-")}` : "latest"}.md`, root), lines.join("\n") + "\n");

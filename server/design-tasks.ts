@@ -1,6 +1,7 @@
-import type { DesignResult, JobDocument, JobIssue, UnitSystem } from "../core/index.js";
+import { designMember, prepareJob, type DesignResult, type JobDocument, type JobIssue, type UnitSystem } from "../core/index.js";
 import { designInUnits } from "./design-in-units.js";
 import { ApiError, type ErrorCode } from "./errors.js";
+import { summariseResult, type ResultSummary } from "./result-summary.js";
 import { renderWorksheet, worksheetFileName } from "./pdf/worksheet.js";
 
 /** Work the design threads do: everything that may take long runs there, never on the thread that answers HTTP. */
@@ -9,6 +10,10 @@ export type DesignTask =
   | { kind: "result-json"; input: unknown; units?: UnitSystem | undefined }
   /** The job, the job in core units and the result in the job's and in `units`, as objects. */
   | { kind: "result"; input: unknown; units?: UnitSystem | undefined }
+  /** What a list of members shows for a job being saved; null when the design itself fails (the revision is kept). */
+  | { kind: "summary"; input: unknown }
+  /** A revision of a project file: the job as parsed (defaults filled in) and its summary, so the import validates off the HTTP thread too. */
+  | { kind: "prepared-summary"; input: unknown }
   /** The PDF worksheet, with what its headers need. */
   | { kind: "worksheet"; input: unknown; printDate?: string | undefined };
 
@@ -26,7 +31,20 @@ export interface WorksheetRun {
   titleRevision: string;
 }
 
-export type TaskAnswer<T extends DesignTask> = T extends { kind: "result-json" } ? string : T extends { kind: "result" } ? ResultRun : WorksheetRun;
+export type TaskAnswer<T extends DesignTask> = T extends { kind: "result-json" }
+  ? string
+  : T extends { kind: "result" }
+    ? ResultRun
+    : T extends { kind: "summary" }
+      ? ResultSummary | null
+      : T extends { kind: "prepared-summary" }
+        ? PreparedSummary
+        : WorksheetRun;
+
+export interface PreparedSummary {
+  job: JobDocument;
+  summary: ResultSummary | null;
+}
 
 /** An error as it crosses between threads. */
 export interface WireError {
@@ -35,13 +53,39 @@ export interface WireError {
   issues: JobIssue[];
 }
 
-export async function performTask(task: DesignTask): Promise<string | ResultRun | WorksheetRun> {
+export async function performTask(task: DesignTask): Promise<string | ResultRun | WorksheetRun | ResultSummary | PreparedSummary | null> {
   switch (task.kind) {
     case "result-json":
       return JSON.stringify(designInUnits(task.input, task.units).shown);
     case "result": {
       const { job, core, result, shown } = designInUnits(task.input, task.units);
       return { job, core, result, shown };
+    }
+    case "summary": {
+      let run;
+      try {
+        run = designInUnits(task.input);
+      } catch (error) {
+        if (error instanceof ApiError) throw error;
+        return null;
+      }
+      return summariseResult(run.result);
+    }
+    case "prepared-summary": {
+      const input = task.input;
+      if (input === null || typeof input !== "object" || Array.isArray(input)) {
+        throw new ApiError("ERR_INPUT_INVALID", undefined, [{ path: "(document)", message: "must be a job document (a JSON object)" }]);
+      }
+      const prepared = prepareJob(input);
+      if (!prepared.ok) throw new ApiError("ERR_INPUT_INVALID", undefined, prepared.issues);
+      let summary: ResultSummary | null = null;
+      try {
+        // Utilisations and counts are pure numbers: the result in core units gives the same summary.
+        summary = summariseResult(designMember(prepared.core));
+      } catch (error) {
+        if (error instanceof ApiError) throw error;
+      }
+      return { job: prepared.job, summary };
     }
     case "worksheet": {
       const run = designInUnits(task.input);

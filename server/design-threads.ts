@@ -8,6 +8,18 @@ export interface DesignThreadsOptions {
   threads: number;
   /** How long one task may run before its thread is stopped, ms. */
   timeLimitMs: (task: DesignTask) => number;
+  /** A thread's heap, MiB: a task that needs more stops that thread (422), not the service. */
+  memoryMb: number;
+  /** Tasks that may wait for a thread; one more is refused with 503 and Retry-After. */
+  queueLength: number;
+  /** What the tasks are, for messages ("design", "worksheet"). */
+  name: string;
+}
+
+/** What runs tasks: the routes see only this. */
+export interface TaskRunner {
+  /** `unbounded`: the task waits even when the queue is full (an import's own designs, already admitted). */
+  run<T extends DesignTask>(task: T, options?: { unbounded?: boolean }): Promise<TaskAnswer<T>>;
 }
 
 interface Pending {
@@ -23,8 +35,6 @@ interface Slot {
 }
 
 const WORKER_ENTRY = new URL("./design-worker.ts", import.meta.url);
-/** A thread's heap: a result of tens of megabytes fits; a runaway stops that thread, not the service. */
-const HEAP_MB = 1536;
 
 const seconds = (ms: number) => `${Number((ms / 1000).toPrecision(2))} s`;
 
@@ -33,7 +43,7 @@ const seconds = (ms: number) => `${Number((ms / 1000).toPrecision(2))} s`;
  * stays free to answer and any task that runs past its time limit is stopped with its thread.
  * Threads start on the first task and are replaced when one is stopped or fails.
  */
-export class DesignThreads {
+export class DesignThreads implements TaskRunner {
   private readonly slots: Slot[] = [];
   private readonly queue: Pending[] = [];
   private nextId = 1;
@@ -41,8 +51,14 @@ export class DesignThreads {
 
   constructor(private readonly options: DesignThreadsOptions) {}
 
-  run<T extends DesignTask>(task: T): Promise<TaskAnswer<T>> {
+  run<T extends DesignTask>(task: T, options: { unbounded?: boolean } = {}): Promise<TaskAnswer<T>> {
     if (this.closed) return Promise.reject(new ApiError("ERR_INTERNAL", "The server is stopping; send the request again once it has restarted."));
+    if (!options.unbounded && this.queue.length >= this.options.queueLength) {
+      const retryAfter = Math.max(1, Math.ceil(this.options.timeLimitMs(task) / 1000 / 10));
+      return Promise.reject(
+        new ApiError("ERR_BUSY", `${this.queue.length} ${this.options.name}s are already waiting for a thread (the limit); send the request again in ${retryAfter} s. Nothing was stored or changed.`, [], { retryAfterSeconds: retryAfter }),
+      );
+    }
     return new Promise<TaskAnswer<T>>((resolve, reject) => {
       this.queue.push({ task, resolve: resolve as (answer: unknown) => void, reject });
       this.dispatch();
@@ -83,7 +99,7 @@ export class DesignThreads {
   }
 
   private start(): Slot {
-    const slot: Slot = { worker: startThread(WORKER_ENTRY, { maxOldGenerationSizeMb: HEAP_MB }), ready: false, current: null };
+    const slot: Slot = { worker: startThread(WORKER_ENTRY, { maxOldGenerationSizeMb: this.options.memoryMb }), ready: false, current: null };
     slot.worker.on("message", (message: "ready" | { id: number; answer?: unknown; error?: WireError }) => {
       if (message === "ready") {
         slot.ready = true;
@@ -97,14 +113,19 @@ export class DesignThreads {
       this.dispatch();
     });
     let failure = "";
-    slot.worker.on("error", (error) => (failure = error.message));
+    let outOfMemory = false;
+    slot.worker.on("error", (error) => {
+      failure = error.message;
+      outOfMemory ||= (error as NodeJS.ErrnoException).code === "ERR_WORKER_OUT_OF_MEMORY";
+    });
     slot.worker.on("exit", () => {
       const index = this.slots.indexOf(slot);
       if (index < 0) return;
       this.slots.splice(index, 1);
       if (slot.current) {
         clearTimeout(slot.current.timer);
-        slot.current.reject(new ApiError("ERR_INTERNAL", `The design thread failed on this job${failure ? ` (${failure})` : ""}; please report the job. Nothing was stored or changed.`));
+        if (outOfMemory) slot.current.reject(tooLarge(this.options.memoryMb, this.options.name));
+        else slot.current.reject(new ApiError("ERR_INTERNAL", `The design thread failed on this job${failure ? ` (${failure})` : ""}; please report the job. Nothing was stored or changed.`));
       } else if (!slot.ready) {
         // A thread that cannot start would fail every task: answer those waiting instead of retrying forever.
         for (const pending of this.queue.splice(0)) pending.reject(new ApiError("ERR_INTERNAL", `The design thread did not start${failure ? ` (${failure})` : ""}.`));
@@ -126,6 +147,12 @@ export class DesignThreads {
   }
 }
 
+function tooLarge(memoryMb: number, name: string): ApiError {
+  return new ApiError("ERR_DESIGN_MEMORY_LIMIT", `The ${name} needed more than the memory limit of ${memoryMb} MiB and was stopped; nothing was stored or changed.`, [
+    { path: "(document)", message: `needs more than ${memoryMb} MiB to ${name === "worksheet" ? "print" : "design"}; fewer spans, loads, patterned load categories or combinations make it smaller` },
+  ]);
+}
+
 function tooLong(limitMs: number): ApiError {
   return new ApiError("ERR_DESIGN_TIME_LIMIT", `The design took longer than the limit of ${seconds(limitMs)} and was stopped; nothing was stored or changed.`, [
     {
@@ -133,4 +160,28 @@ function tooLong(limitMs: number): ApiError {
       message: `takes longer than ${seconds(limitMs)} to design; fewer spans, loads, patterned load categories or combinations shorten it`,
     },
   ]);
+}
+
+/**
+ * Designs and worksheets on separate threads with separate queues, so a long worksheet never holds the
+ * designs (nor a burst of designs the worksheets).
+ */
+export class DesignQueues implements TaskRunner {
+  constructor(
+    readonly designs: DesignThreads,
+    readonly worksheets: DesignThreads,
+  ) {}
+
+  run<T extends DesignTask>(task: T, options?: { unbounded?: boolean }): Promise<TaskAnswer<T>> {
+    return (task.kind === "worksheet" ? this.worksheets : this.designs).run(task, options);
+  }
+
+  warm(): void {
+    this.designs.warm();
+    this.worksheets.warm();
+  }
+
+  async close(): Promise<void> {
+    await Promise.all([this.designs.close(), this.worksheets.close()]);
+  }
 }

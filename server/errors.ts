@@ -8,7 +8,9 @@ export const errors = {
   ERR_UNSUPPORTED_MEDIA_TYPE: { statusCode: 415, message: "Send the job document with Content-Type: application/json." },
   ERR_BODY_TOO_LARGE: { statusCode: 413, message: "The request body is larger than the limit." },
   ERR_DESIGN_TIME_LIMIT: { statusCode: 422, message: "The design took longer than the time limit and was stopped; nothing was stored or changed." },
+  ERR_DESIGN_MEMORY_LIMIT: { statusCode: 422, message: "The design needed more than the memory limit and was stopped; nothing was stored or changed." },
   ERR_HOST_NOT_ALLOWED: { statusCode: 403, message: "This service answers only requests addressed to this machine by a loopback name." },
+  ERR_CROSS_SITE: { statusCode: 403, message: "This service takes changes only from its own page; the request came from another site." },
   ERR_NOT_FOUND: { statusCode: 404, message: "There is nothing at this address." },
   ERR_EXAMPLE_NOT_FOUND: { statusCode: 404, message: "There is no example with this id." },
   ERR_PROJECT_NOT_FOUND: { statusCode: 404, message: "There is no project with this id in the job store." },
@@ -18,6 +20,7 @@ export const errors = {
   ERR_MEMBER_EXISTS: { statusCode: 409, message: "Another member of this project already has this mark; nothing was stored." },
   ERR_PROJECT_FILE_INVALID: { statusCode: 400, message: "The project file has problems, each listed with its path; nothing was stored." },
   ERR_STORE_UNAVAILABLE: { statusCode: 503, message: "The job store could not complete the request; nothing was stored or changed." },
+  ERR_BUSY: { statusCode: 503, message: "Too many designs or worksheets are waiting; send the request again after the time in Retry-After." },
   ERR_INTERNAL: { statusCode: 500, message: "The server failed while computing; the input was not stored or changed." },
 } as const;
 
@@ -54,6 +57,8 @@ export class ApiError extends Error {
     readonly code: ErrorCode,
     message?: string,
     readonly issues: JobIssue[] = [],
+    /** ERR_BUSY: when to ask again (the Retry-After header). */
+    readonly extra: { retryAfterSeconds?: number } = {},
   ) {
     super(message ?? errors[code].message);
   }

@@ -11,6 +11,12 @@ export const serviceLimits = {
   designMs: 30_000,
   /** Longest a worksheet (design and PDF) may take, ms. */
   worksheetMs: 60_000,
+  /** Heap of each design or worksheet thread, MiB. */
+  threadMemoryMb: 512,
+  /** Designs (results, comparisons, a save's summary) that may wait for a thread; one more is a 503. */
+  designQueue: 128,
+  /** Worksheets that may wait for a thread. */
+  worksheetQueue: 8,
   /** Most problems listed in one error answer; the rest are counted. */
   issues: 100,
 } as const;

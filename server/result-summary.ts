@@ -1,15 +1,8 @@
 import type { DesignResult } from "../core/index.js";
+import type { ResultSummary } from "../core/schema/store-contract.js";
 
-/** What a list of members shows for one result: pass or fail, what governs, how many connectors. */
-export interface ResultSummary {
-  passes: boolean;
-  /** The result's one-sentence status. */
-  status: string;
-  /** The most utilised item: a schedule, a bond line, a weld or a member check; null when the result has none. */
-  governing: { item: string; utilisation: number } | null;
-  /** Connectors placed (or checked) in every schedule, all lines. */
-  connectors: number;
-}
+export type { ResultSummary };
+
 
 /** Utilisations and counts are pure numbers, so a result in any unit system gives the same summary. */
 export function summariseResult(result: DesignResult): ResultSummary {

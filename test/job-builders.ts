@@ -51,3 +51,64 @@ export function nailedIJob(model: "rigid" | "slip-aware", mode: "design" | "chec
 }
 
 export const clone = <T>(x: T): T => structuredClone(x);
+
+/**
+ * Invented heavy but valid jobs for the service's limits and fairness (not engineering values): the box
+ * beam of the opening example on six 3.2 m spans with 200 point and uniform loads in four patterned categories.
+ */
+export function manyLoadsJob(): JobInput {
+  const categories = ["dead", "live", "snow", "roof-live", "wind"] as const;
+  const job = workshopBoxBeam();
+  job.beam = {
+    spans: Array(6).fill(3.2),
+    loads: Array.from({ length: 200 }, (_, i) =>
+      i % 5 === 0
+        ? { type: "uniform" as const, category: categories[i % 5]!, w: 0.2 + (i % 7) * 0.05 }
+        : { type: "point" as const, category: categories[i % 5]!, P: 0.2 + (i % 11) * 0.05, at: Number(((i * 0.0931) % 19.1).toFixed(3)) },
+    ),
+    patternedCategories: ["live", "snow", "roof-live", "wind"],
+  };
+  job.combinations = { set: "asce7-22-allowable" };
+  return job;
+}
+
+/** Twelve 2 m spans with nine patterned categories (the built-in four and five of the job's own). Invented. */
+export function twelveSpansPatternedJob(): JobInput {
+  const job = workshopBoxBeam();
+  const own = ["storage", "plant", "crowd", "fitout", "ice"].map((id, i) => ({ id, actsAs: (["live", "live", "live", "dead", "snow"] as const)[i]! }));
+  const patterned = ["live", "roof-live", "snow", "wind", ...own.map((c) => c.id)];
+  job.beam = {
+    spans: Array(12).fill(2),
+    loads: [{ type: "uniform", category: "dead", w: 0.8 }, ...patterned.map((category, i) => ({ type: "uniform" as const, category, w: 0.3 + 0.05 * i }))],
+    categories: own,
+    patternedCategories: patterned,
+  };
+  job.combinations = { set: "asce7-22-allowable" };
+  return job;
+}
+
+/** The opening example's nailed plywood box beam (fixtures/examples/workshop-box-beam.si.json), as a builder. */
+function workshopBoxBeam(): JobInput {
+  return {
+    format: "stitchplan-job",
+    version: 1,
+    units: "si",
+    basis: "allowable",
+    project: { name: "Invented heavy job" },
+    member: { mark: "H-1" },
+    materials: [
+      { id: "C24", name: "Sawn softwood C24", family: "sawn-timber", E: 11_000, density: 420, strength: { bending: 9.5, shear: 1.6 } },
+      { id: "PLY", name: "Structural plywood 18 mm", family: "panel", E: 7000, density: 500, strength: { shear: 2.0 } },
+    ],
+    parts: [
+      { id: "web-left", material: "PLY", shape: { type: "rectangle", b: 18, h: 400 }, x: 0, y: 0 },
+      { id: "bottom", material: "C24", shape: { type: "rectangle", b: 95, h: 70 }, x: 18, y: 0 },
+      { id: "top", material: "C24", shape: { type: "rectangle", b: 95, h: 70 }, x: 18, y: 330 },
+      { id: "web-right", material: "PLY", shape: { type: "rectangle", b: 18, h: 400 }, x: 113, y: 0 },
+    ],
+    connectors: [{ id: "N1", kind: "rated", label: "3.1 × 65 mm ring-shank nail", resistance: 330, minSpacing: 35, maxSpacing: 150, endDistance: 30 }],
+    fastening: { default: { connector: "N1", rows: 2 } },
+    beam: { spans: [4.8], loads: [] },
+    spacing: { module: 5, minZoneLength: 300, maxZonesPerSpan: 5, symmetric: true },
+  };
+}

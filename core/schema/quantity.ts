@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { hiddenCharacter } from "../text/plain-text.js";
 import type { Quantity } from "../units/quantity.js";
 
 /** Registry of the quantity kind of each number in the job and result schemas. */
@@ -21,5 +22,10 @@ export const Id = z
   .max(40, "must be at most 40 characters")
   .regex(/^[A-Za-z0-9_.-]+$/, "may hold only letters, digits, '-', '_' and '.'");
 
-/** Free text shown on the page and printed on the worksheet. */
-export const Text = (max = 120) => z.string().max(max, `must be at most ${max} characters`);
+/** Free text shown on the page and printed on the worksheet: no control or text-direction characters (core/text/plain-text.ts). */
+export const Text = (max = 120) => z.string().max(max, `must be at most ${max} characters`).superRefine(refuseHidden);
+
+export function refuseHidden(text: string, ctx: z.RefinementCtx): void {
+  const found = hiddenCharacter(text);
+  if (found) ctx.addIssue({ code: "custom", message: `must not hold control or text-direction characters (${found})`, input: text });
+}

@@ -22,7 +22,11 @@ const sharingOf = (connector: Connector): FlowSharing => (kindOf(connector).mech
  */
 export function fastenedJointsOf(job: JobDocument, section: SectionModel, contacts: ContactLine[]): { joints: FastenedJoint[]; uncovered: UncoveredContact[] } {
   const connectors = new Map(job.connectors.map((c) => [c.id, c]));
-  const custom = job.fastening.joints.map((f, i) => ({ joint: jointForHeldGroup(section, contacts, f.held), connector: connectors.get(f.connector)!, fastening: f, path: `fastening.joints[${i}]` }));
+  // Where parts start and stop along the member, a held group is a joint only in the stretches where it
+  // touches the rest (a cover plate over the middle of a beam): elsewhere it crosses no line and holds nothing.
+  const custom = job.fastening.joints
+    .map((f, i) => ({ joint: jointForHeldGroup(section, contacts, f.held), connector: connectors.get(f.connector)!, fastening: f, path: `fastening.joints[${i}]` }))
+    .filter((c) => c.joint.lines.length > 0);
   const fallback = connectors.get(job.fastening.default.connector)!;
   const search = searchJoints(section, contacts, { sharing: sharingOf(fallback), fixed: custom.map((c) => ({ joint: c.joint, sharing: sharingOf(c.connector) })) });
   const found = search.joints.map((joint) => ({ joint, connector: fallback, fastening: job.fastening.default, path: "fastening.default" }));

@@ -11,6 +11,8 @@ export interface CollectedFiles {
 /** Result files a batch writes (`*.result.json`) are not job files, so an output folder can be read back without tripping over them. */
 const isJobFile = (name: string) => name.endsWith(".json") && !name.endsWith(".result.json") && !name.startsWith(".");
 
+const notRegular = { path: "(file)", message: "is not a regular file (a pipe, socket or device); skipped" };
+
 /** Expands the command line's files and folders (the `*.json` directly inside, by name) into job files, each once. */
 export async function collectJobFiles(paths: string[]): Promise<CollectedFiles> {
   const files: string[] = [];
@@ -33,12 +35,19 @@ export async function collectJobFiles(paths: string[]): Promise<CollectedFiles> 
       continue;
     }
     if (!info.isDirectory()) {
-      add(path);
+      if (info.isFile()) add(path);
+      else problems.push({ file: path, problems: [notRegular] });
       continue;
     }
     const names = (await readdir(path)).filter(isJobFile).sort();
     if (names.length === 0) problems.push({ file: path, problems: [{ path: "(folder)", message: "holds no job files (*.json)" }] });
-    for (const name of names) add(join(path, name));
+    for (const name of names) {
+      const file = join(path, name);
+      // A pipe or device named *.json would block the batch on its read.
+      const entry = await stat(file).catch(() => null);
+      if (entry?.isFile()) add(file);
+      else problems.push({ file, problems: [entry ? notRegular : { path: "(file)", message: "cannot be read (a broken link?); skipped" }] });
+    }
   }
   return { files, problems };
 }

@@ -1,8 +1,10 @@
-import { mkdir, writeFile } from "node:fs/promises";
+import { lstatSync, statSync } from "node:fs";
+import { mkdir } from "node:fs/promises";
 import { availableParallelism, loadavg } from "node:os";
 import { join, resolve } from "node:path";
 import type { UnitSystem } from "../../core/index.js";
 import { collectJobFiles, outputNames } from "./collect-job-files.js";
+import { identityOf, writeOutputFile } from "./output-file.js";
 import { runMemberTask, type MemberOutcome, type MemberTask } from "./member-files.js";
 import { summaryCsv } from "./summary-table.js";
 import { runInWorkers } from "./worker-pool.js";
@@ -92,15 +94,32 @@ export async function runBatch(options: BatchOptions): Promise<BatchReport> {
   await mkdir(options.out, { recursive: true });
   const names = outputNames(collected.files);
   const inputsResolved = new Set(collected.files.map((f) => resolve(f)));
+  // Inputs by identity as well as by path: an output folder reached through a link, or a file under another letter case, is the same file.
+  const identities = collected.files.flatMap((f) => {
+    try {
+      return [identityOf(statSync(f))];
+    } catch {
+      return [];
+    }
+  });
+  const inputs = new Set(identities);
+  const isInput = (path: string) => {
+    if (inputsResolved.has(resolve(path))) return true;
+    try {
+      return inputs.has(identityOf(lstatSync(path)));
+    } catch {
+      return false;
+    }
+  };
   const tasks: MemberTask[] = [];
   collected.files.forEach((file, index) => {
     const outBase = join(options.out, names[index]!);
-    const clash = [".result.json", ".schedule.csv", ".positions.csv", ".welds.csv", ".pdf"].map((ext) => resolve(outBase + ext)).find((p) => inputsResolved.has(p));
+    const clash = [".result.json", ".schedule.csv", ".positions.csv", ".welds.csv", ".pdf"].map((ext) => outBase + ext).find(isInput);
     if (clash) {
       outcomes.push({ index, file, mark: "", status: "error", summary: null, problems: [{ path: "(output)", message: `writing its outputs would overwrite the input file ${clash}; choose another --out folder` }], written: [], milliseconds: { design: 0, pdf: 0 } });
       return;
     }
-    tasks.push({ index, file, outBase, mode: options.mode, units: options.units, pdf: options.pdf, printDate: options.printDate ?? new Date().toISOString().slice(0, 10) });
+    tasks.push({ index, file, outBase, mode: options.mode, units: options.units, pdf: options.pdf, printDate: options.printDate ?? new Date().toISOString().slice(0, 10), inputs: identities });
   });
 
   const total = tasks.length;
@@ -111,6 +130,13 @@ export async function runBatch(options: BatchOptions): Promise<BatchReport> {
   else outcomes.push(...(await runInThisThread(tasks, onOutcome)));
   // Command-line paths that gave no file first, then the job files in order.
   outcomes.sort((a, b) => a.index - b.index);
-  if (options.summaryFile !== false) await writeFile(join(options.out, "summary.csv"), summaryCsv(outcomes));
+  if (options.summaryFile !== false) {
+    try {
+      writeOutputFile(join(options.out, "summary.csv"), summaryCsv(outcomes), inputs);
+    } catch (error) {
+      const code = (error as NodeJS.ErrnoException).code;
+      outcomes.push({ index: outcomes.length, file: join(options.out, "summary.csv"), mark: "", status: "error", summary: null, problems: [{ path: "(output)", message: code ? `cannot write summary.csv (${code === "ELOOP" ? "it is a symbolic link" : code})` : (error as Error).message }], written: [], milliseconds: { design: 0, pdf: 0 } });
+    }
+  }
   return { outcomes, threads, seconds: (performance.now() - started) / 1000, exitCode: exitCodeOf(outcomes) };
 }

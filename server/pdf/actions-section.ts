@@ -1,7 +1,7 @@
 import { lineDiagram } from "../../core/index.js";
 import { DIAGRAM_HEIGHT, figure, figureHeight } from "./figure.js";
 import { table } from "./table.js";
-import type { WorksheetContext } from "./worksheet-context.js";
+import { combinationsSummary, inFull, type WorksheetContext } from "./worksheet-context.js";
 
 const MAX_CURVES = 6;
 
@@ -48,6 +48,13 @@ export function actionsSection(c: WorksheetContext): void {
   );
 
   sheet.heading("Extremes and reactions", 2, 50);
+  const printed = inFull(result, beam.perCombination, (p) => p.combination);
+  if (printed.rest.length > 0) {
+    sheet.paragraph(
+      `Listed: the ${printed.shown.length} combinations that give the largest shear, moments, deflection or a support's largest or least reaction, or govern a result on this worksheet. The other ${printed.rest.length} (${combinationsSummary(result, printed.rest.map((p) => p.combination))}) lie within these extremes and are listed in the result file.`,
+      { size: 8.5 },
+    );
+  }
   table(
     sheet,
     [
@@ -58,7 +65,7 @@ export function actionsSection(c: WorksheetContext): void {
       { header: "max deflection", weight: 1.3, align: "right" },
       { header: "Reactions", weight: 2 },
     ],
-    beam.perCombination.map((p) => {
+    printed.shown.map((p) => {
       // A moment that is zero but for rounding (the free end of a simple span) prints as 0, not 3.5×10⁻¹⁰.
       const scale = Math.max(Math.abs(p.maxMoment.value), Math.abs(p.minMoment.value));
       const moment = (v: number) => text.of(Math.abs(v) < 1e-9 * scale ? 0 : v, "moment");

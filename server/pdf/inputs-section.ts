@@ -2,7 +2,7 @@ import { connectorFields, fasteningFields, loadFields, materialFields, shapeFiel
 import { numberText, type QuantityText } from "./quantity-text.js";
 import { ink } from "./sheet.js";
 import { keyValueTable, table } from "./table.js";
-import type { WorksheetContext } from "./worksheet-context.js";
+import { combinationsSummary, inFull, type WorksheetContext } from "./worksheet-context.js";
 
 const UNIT_SYSTEMS = { si: "SI (mm, m, kN, kN/m, N, MPa)", us: "US customary (in, ft, lbf, lbf/ft, psi)" } as const;
 const BASES = { allowable: "allowable: service loads against allowable values", factored: "factored: factored loads against design values" } as const;
@@ -123,6 +123,13 @@ export function inputsSection(c: WorksheetContext): void {
 
   sheet.heading("Load combinations", 2, 40);
   sheet.note(`Combination set: ${job.combinations.set}. Each combination's factors multiply the loads of each category.`);
+  const printedCombinations = inFull(result, beam.combinations, (k) => k.id);
+  if (printedCombinations.rest.length > 0) {
+    sheet.paragraph(
+      `${beam.combinations.length} combinations: the ${printedCombinations.shown.length} that govern a result on this worksheet are listed in full; the other ${printedCombinations.rest.length} (${combinationsSummary(result, printedCombinations.rest.map((k) => k.id))}) govern nothing here and are listed in the result file.`,
+      { size: 8.5 },
+    );
+  }
   table(
     sheet,
     [
@@ -131,7 +138,7 @@ export function inputsSection(c: WorksheetContext): void {
       { header: "Factors by load category", weight: 3 },
       { header: "Duration", weight: 0.9 },
     ],
-    beam.combinations.map((k) => [
+    printedCombinations.shown.map((k) => [
       { text: k.id, bold: true },
       { text: k.name, note: patternNote(k) },
       Object.entries(k.factors)
@@ -144,6 +151,13 @@ export function inputsSection(c: WorksheetContext): void {
   const service = (beam as { service?: { combination: { id: string; name: string; factors: Record<string, number> } }[] }).service ?? [];
   if (service.length > 0) {
     sheet.heading("Service cases for deflection", 2, 40);
+    const rest = inFull(result, service, (k) => k.combination.id).rest;
+    if (rest.length > 0) {
+      sheet.paragraph(
+        `${service.length} service cases: those that govern a deflection check are listed in full; the other ${rest.length} (${combinationsSummary(result, rest.map((k) => k.combination.id))}) govern nothing here and are listed in the result file.`,
+        { size: 8.5 },
+      );
+    }
     table(
       sheet,
       [
@@ -151,7 +165,7 @@ export function inputsSection(c: WorksheetContext): void {
         { header: "Name", weight: 1.7 },
         { header: "Factors by load category", weight: 2.6 },
       ],
-      service.map(({ combination: k }) => [
+      inFull(result, service, (k) => k.combination.id).shown.map(({ combination: k }) => [
         { text: k.id, bold: true },
         { text: k.name, note: patternNote(k) },
         Object.entries(k.factors)

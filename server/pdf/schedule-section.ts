@@ -6,7 +6,7 @@ import { ink } from "./sheet.js";
 import { infeasibleStatement } from "./status-section.js";
 import { keyValueTable, table, type Cell } from "./table.js";
 import { workingTables } from "./working-table.js";
-import { byOutcome, combinationName, combinationsCell, partNames, type Schedule, type WorksheetContext } from "./worksheet-context.js";
+import { byOutcome, COMBINATIONS_IN_FULL, combinationName, combinationsCell, partNames, type Schedule, type WorksheetContext } from "./worksheet-context.js";
 
 /**
  * Schedules that are the same in every number apart from the joint's name (the top and bottom joints
@@ -184,7 +184,15 @@ function worstRowPerCombination(c: WorksheetContext, s: Schedule): void {
   const { sheet, result, text } = c;
   if (s.perCombination.length === 0) return;
   sheet.heading("Worst row under each combination", 2, 50);
-  const rows = [...s.perCombination].sort((a, b) => b.maxUtilisation - a.maxUtilisation);
+  const sorted = [...s.perCombination].sort((a, b) => b.maxUtilisation - a.maxUtilisation);
+  const rows = sorted.slice(0, COMBINATIONS_IN_FULL);
+  const rest = sorted.slice(COMBINATIONS_IN_FULL);
+  if (rest.length > 0) {
+    sheet.paragraph(
+      `The ${rows.length} worst of ${sorted.length} combinations; under the other ${rest.length} the worst row's utilisation is at most ${formatRatio(rest[0]!.maxUtilisation)} (${rest.some((r) => r.maxUtilisation > 1 + 1e-9) ? "some FAIL: see the result file" : "all pass"}).`,
+      { size: 8.5, font: rest.some((r) => r.maxUtilisation > 1 + 1e-9) ? "bold" : "body" },
+    );
+  }
   table(
     sheet,
     [
@@ -236,7 +244,8 @@ function scheduleVerdict(c: WorksheetContext, s: Schedule, name: string): void {
 /** The combinations a failing zone fails under, when the result names them. */
 function failingUnder(zone: Schedule["zones"][number]): string | undefined {
   const ids = (zone as { failingCombinations?: string[] }).failingCombinations;
-  return ids && ids.length > 0 ? `under ${ids.join(", ")}` : undefined;
+  if (!ids || ids.length === 0) return undefined;
+  return ids.length > 12 ? `under ${ids.slice(0, 12).join(", ")} and ${ids.length - 12} more combinations` : `under ${ids.join(", ")}`;
 }
 
 /** Detail some connector kinds add to a resistance (all modes evaluated, slip moduli, conditions to confirm). */

@@ -86,16 +86,16 @@ export function table(sheet: Sheet, columns: Column[], rows: Row[], options: Tab
     const font: FontName = cell.bold ? "cond-bold" : "cond";
     if (measure(cell, font, col) <= room) return [cell, { ...cell, text: "", note: undefined }];
     const bare = { ...cell, note: undefined };
-    if (cell.note && measure(bare, font, col) <= room) return [bare, { ...cell, text: "" }];
-    const tokens = cell.text.split(/(\s+)/);
-    let lo = 1;
-    let hi = tokens.length;
-    while (lo < hi) {
-      const mid = Math.ceil((lo + hi) / 2);
-      if (measure({ ...bare, text: tokens.slice(0, mid).join("") }, font, col) <= room) lo = mid;
-      else hi = mid - 1;
+    if (cell.note && measure(bare, font, col) <= room) {
+      // The text fits and the note runs on: split the note too, or a note taller than a page would never end.
+      if (!cell.text) {
+        const [head, rest] = splitWords(cell.note, (note) => measure({ ...bare, text: "", note }, font, col) <= room);
+        return [{ ...bare, text: "", note: head || undefined }, { ...cell, text: "", note: rest || undefined }];
+      }
+      return [bare, { ...cell, text: "" }];
     }
-    return [{ ...bare, text: tokens.slice(0, lo).join("").trimEnd() }, { ...cell, text: tokens.slice(lo).join("").trimStart() }];
+    const [head, rest] = splitWords(cell.text, (text) => measure({ ...bare, text }, font, col) <= room);
+    return [{ ...bare, text: head }, { ...cell, text: rest }];
   };
 
   rows.forEach((row, index) => {
@@ -134,6 +134,19 @@ export function table(sheet: Sheet, columns: Column[], rows: Row[], options: Tab
     }
   });
   sheet.y += 6;
+}
+
+/** The most words of `text` that `fits` (at least one, so that every split makes progress), and the rest. */
+function splitWords(text: string, fits: (head: string) => boolean): [string, string] {
+  const tokens = text.split(/(\s+)/);
+  let lo = 1;
+  let hi = tokens.length;
+  while (lo < hi) {
+    const mid = Math.ceil((lo + hi) / 2);
+    if (fits(tokens.slice(0, mid).join(""))) lo = mid;
+    else hi = mid - 1;
+  }
+  return [tokens.slice(0, lo).join("").trimEnd(), tokens.slice(lo).join("").trimStart()];
 }
 
 /** A two-column list of labelled values, e.g. section properties. */

@@ -64,7 +64,7 @@ export function weldSection(c: WorksheetContext, w: WeldJoint): void {
       formatRatio(z.utilisation),
       z.passes
         ? { text: "passes", colour: ink.pass }
-        : { text: "FAILS", bold: true, colour: ink.fail, note: z.failingCombinations.length > 0 ? `under ${z.failingCombinations.map((k) => combinationName(result, k)).join(", ")}` : undefined },
+        : { text: "FAILS", bold: true, colour: ink.fail, note: z.failingCombinations.length > 0 ? `under ${z.failingCombinations.length > 12 ? `${z.failingCombinations.slice(0, 12).join(", ")} and ${z.failingCombinations.length - 12} more combinations` : z.failingCombinations.map((k) => combinationName(result, k)).join(", ")}` : undefined },
     ]),
     { rowColour: (i) => (w.zones[i] && !w.zones[i]!.passes ? ink.fail : undefined) },
   );

@@ -1,13 +1,13 @@
 import type { FastifyInstance } from "fastify";
 import { z } from "zod";
 import { convertJob, grades, JobDocument, Material, materialFromGrade, prepareJob, PROGRAM, quantityOf, toDisplayUnits } from "../../core/index.js";
-import type { DesignThreads } from "../design-threads.js";
+import type { TaskRunner } from "../design-threads.js";
 import { ApiError } from "../errors.js";
 import type { Example } from "../examples.js";
 import { ResultCache } from "../result-cache.js";
 
 /** The JSON API: every route parses, calls core through the design service, and returns. */
-export async function apiRoutes(app: FastifyInstance, options: { examples: Example[]; designs: DesignThreads; cache: ResultCache }) {
+export async function apiRoutes(app: FastifyInstance, options: { examples: Example[]; designs: TaskRunner; cache: ResultCache }) {
   const { designs, cache } = options;
   // Each number carries its quantity kind ("length", "span", "force" …) so a client can label and convert it.
   const jobSchema = z.toJSONSchema(JobDocument, { io: "input", unrepresentable: "any", metadata: quantityOf });

@@ -1,12 +1,15 @@
 import type { FastifyInstance } from "fastify";
 import type { z } from "zod";
-import { issuesFromZod, JobDocument, toDisplayUnits, type UnitSystem } from "../../core/index.js";
-import type { DesignTask, TaskAnswer } from "../design-tasks.js";
-import type { DesignThreads } from "../design-threads.js";
+import { issuesFromZod, JobDocument, toDisplayUnits, type JobIssue, type UnitSystem } from "../../core/index.js";
+import type { Comparison } from "../../core/schema/store-contract.js";
+import type { ResultSummary } from "../result-summary.js";
+import type { ProjectFile } from "../store/store-schemas.js";
+import type { DesignTask, PreparedSummary, TaskAnswer } from "../design-tasks.js";
+import type { TaskRunner } from "../design-threads.js";
 import { ApiError } from "../errors.js";
 import { today } from "../pdf/worksheet.js";
 import { inputChanges, resultChanges } from "../store/compare-revisions.js";
-import { JobStore, prefixIssues, type StoreOptions } from "../store/job-store.js";
+import { JobStore, prefixIssues, validJob, type StoreOptions } from "../store/job-store.js";
 import { CompareQuery, NewMember, NewProject, SaveRevision } from "../store/store-schemas.js";
 
 export interface StoreRoutesOptions {
@@ -14,7 +17,7 @@ export interface StoreRoutesOptions {
   dataDir: string;
   store?: StoreOptions;
   /** Where designs and worksheets run. */
-  designs: DesignThreads;
+  designs: TaskRunner;
 }
 
 /** A project file may be far larger than one job. */
@@ -51,7 +54,7 @@ function unitsQuery(value: string | undefined): UnitSystem | undefined {
 }
 
 /** A stored job that no longer validates (a later program changed the schema) is reported with its revision in the path. */
-async function designStored<T extends DesignTask>(designs: DesignThreads, task: T, at: string): Promise<TaskAnswer<T>> {
+async function designStored<T extends DesignTask>(designs: TaskRunner, task: T, at: string): Promise<TaskAnswer<T>> {
   try {
     return await designs.run(task);
   } catch (error) {
@@ -60,6 +63,54 @@ async function designStored<T extends DesignTask>(designs: DesignThreads, task: 
     }
     throw error;
   }
+}
+
+/**
+ * A job to be saved: validated here (the store's messages and paths), then its summary worked out on a
+ * design thread with the time and memory limits; a job that cannot be designed within them is not saved (422).
+ */
+async function summaryForSave(designs: TaskRunner, job: unknown): Promise<ResultSummary | null> {
+  validJob(job, "job");
+  return designStored(designs, { kind: "summary", input: job }, "job");
+}
+
+/**
+ * Each revision of an import validated and designed on the design threads, two at a time (the HTTP thread
+ * only reads the file's own fields): the jobs as parsed and their summaries, or every problem with its path;
+ * a revision past a time or memory limit stops the rest.
+ */
+async function prepareImport(designs: TaskRunner, file: ProjectFile): Promise<{ jobOf: (m: number, r: number) => JobDocument; summaryOf: (m: number, r: number) => ResultSummary | null }> {
+  const work = file.members.flatMap((m, mi) => m.revisions.map((r, ri) => ({ mi, ri, job: r.job })));
+  const found = new Map<string, PreparedSummary>();
+  const invalid = new Map<string, JobIssue[]>();
+  const limits: JobIssue[] = [];
+  let next = 0;
+  const lane = async () => {
+    while (next < work.length && limits.length === 0) {
+      const { mi, ri, job } = work[next++]!;
+      const at = `members[${mi}].revisions[${ri}]`;
+      try {
+        found.set(`${mi}/${ri}`, await designs.run({ kind: "prepared-summary", input: job }, { unbounded: true }));
+      } catch (error) {
+        if (!(error instanceof ApiError)) throw error;
+        if (error.code === "ERR_INPUT_INVALID") invalid.set(`${mi}/${ri}`, prefixIssues(error.issues, `${at}.job`));
+        else if (error.code === "ERR_DESIGN_TIME_LIMIT" || error.code === "ERR_DESIGN_MEMORY_LIMIT") limits.push({ path: `${at}.job`, message: `cannot be designed within the service's limits: ${error.message}` });
+        else throw error;
+      }
+    }
+  };
+  await Promise.all([lane(), lane()]);
+  if (limits.length > 0) {
+    throw new ApiError("ERR_PROJECT_FILE_INVALID", "A revision of the project file cannot be designed within the service's time and memory limits; nothing was stored.", limits);
+  }
+  return {
+    jobOf: (mi, ri) => {
+      const issues = invalid.get(`${mi}/${ri}`);
+      if (issues) throw new ApiError("ERR_INPUT_INVALID", undefined, issues);
+      return found.get(`${mi}/${ri}`)!.job;
+    },
+    summaryOf: (mi, ri) => found.get(`${mi}/${ri}`)?.summary ?? null,
+  };
 }
 
 type P = { Params: { project: string } };
@@ -88,7 +139,9 @@ export async function storeRoutes(app: FastifyInstance, options: StoreRoutesOpti
   app.post<P>("/api/projects/:project/members", async (request, reply) => {
     const id = projectId(request.params.project);
     const body = parse(NewMember, request.body);
-    return reply.status(201).send(store.createMember(id, body.job, { note: body.note }));
+    store.project(id);
+    const summary = await summaryForSave(designs, body.job);
+    return reply.status(201).send(store.createMember(id, body.job, { note: body.note, summary }));
   });
 
   app.get<M>("/api/projects/:project/members/:member", async (request) => store.member(projectId(request.params.project), memberId(request.params.member)));
@@ -98,7 +151,9 @@ export async function storeRoutes(app: FastifyInstance, options: StoreRoutesOpti
   app.post<M>("/api/projects/:project/members/:member/revisions", async (request, reply) => {
     const [p, m] = [projectId(request.params.project), memberId(request.params.member)];
     const body = parse(SaveRevision, request.body);
-    const saved = store.saveRevision(p, m, body.job, body.basedOn === undefined ? { note: body.note } : { basedOn: body.basedOn, note: body.note });
+    store.member(p, m);
+    const summary = await summaryForSave(designs, body.job);
+    const saved = store.saveRevision(p, m, body.job, body.basedOn === undefined ? { note: body.note, summary } : { basedOn: body.basedOn, note: body.note, summary });
     return reply.status(201).send(saved);
   });
 
@@ -109,6 +164,13 @@ export async function storeRoutes(app: FastifyInstance, options: StoreRoutesOpti
   app.get<R & { Querystring: { units?: string } }>("/api/projects/:project/members/:member/revisions/:revision/result", async (request, reply) => {
     const stored = store.revision(projectId(request.params.project), memberId(request.params.member), revisionNumber(request.params.revision));
     const json = await designStored(designs, { kind: "result-json", input: stored.job, units: unitsQuery(request.query.units) }, "job");
+    if (stored.summary === null) {
+      // A revision from a version-1 store: its summary, worked out on a design thread now that it has designed there once.
+      designs.run({ kind: "summary", input: stored.job }).then(
+        (summary) => summary && store.setSummary(stored.memberId, stored.revision, summary),
+        () => undefined,
+      );
+    }
     return reply.type("application/json; charset=utf-8").send(json);
   });
 
@@ -128,7 +190,7 @@ export async function storeRoutes(app: FastifyInstance, options: StoreRoutesOpti
         ? inputChanges(from.job, to.job)
         : inputChanges(toDisplayUnits(JobDocument, a.core, units), toDisplayUnits(JobDocument, b.core, units), { rel: 1e-9 });
     const meta = (r: typeof from) => ({ revision: r.revision, savedAt: r.savedAt, note: r.note, fingerprint: r.fingerprint, units: r.job.units });
-    return {
+    const comparison: Comparison = {
       projectId: p,
       memberId: m,
       units,
@@ -139,6 +201,7 @@ export async function storeRoutes(app: FastifyInstance, options: StoreRoutesOpti
       inputs,
       results: resultChanges(a.shown, b.shown),
     };
+    return comparison;
   });
 
   app.post<R>("/api/projects/:project/members/:member/revisions/:revision/worksheets", async (request, reply) => {
@@ -188,5 +251,9 @@ export async function storeRoutes(app: FastifyInstance, options: StoreRoutesOpti
     return reply.header("content-disposition", `attachment; filename="${name}.stitchplan-project.json"`).send(file);
   });
 
-  app.post("/api/projects/import", { bodyLimit: IMPORT_BODY_LIMIT }, async (request, reply) => reply.status(201).send(store.importProject(request.body)));
+  app.post("/api/projects/import", { bodyLimit: IMPORT_BODY_LIMIT }, async (request, reply) => {
+    const file = JobStore.parseProjectFile(request.body);
+    const { jobOf, summaryOf } = await prepareImport(designs, file);
+    return reply.status(201).send(store.storeImport(store.checkImport(file, jobOf), summaryOf));
+  });
 }

@@ -1,14 +1,7 @@
 import type { DesignResult } from "../../core/index.js";
+import type { InputChange, ResultChanges, ScheduleChange, UtilisationChange, ZoneChange, ZoneView } from "../../core/schema/store-contract.js";
 
-/** One input that differs between two job documents, at a field path such as `parts[1].shape.h`. */
-export interface InputChange {
-  path: string;
-  change: "changed" | "added" | "removed";
-  /** Value in the older revision; null when added. */
-  from: unknown;
-  /** Value in the newer revision; null when removed. */
-  to: unknown;
-}
+export type { InputChange, ResultChanges, ScheduleChange, UtilisationChange, ZoneChange, ZoneView };
 
 const isRecord = (v: unknown): v is Record<string, unknown> => typeof v === "object" && v !== null && !Array.isArray(v);
 
@@ -79,57 +72,15 @@ export function inputChanges(from: unknown, to: unknown, options: { rel?: number
   return out;
 }
 
-export interface Pair<T> {
+interface Pair<T> {
   from: T | null;
   to: T | null;
 }
 
-export interface ZoneView {
-  from: number;
-  to: number;
-  spacing: number;
-  rows: number;
-  count: number;
-  utilisation: number;
-  passes: boolean;
-}
 
-export interface ZoneChange extends Pair<ZoneView> {
-  /** Zone number along the member, from 1. */
-  zone: number;
-  change: "same" | "changed" | "added" | "removed";
-  /** Fields of the zone that differ. */
-  fields: (keyof ZoneView)[];
-}
 
-export interface ScheduleChange {
-  joint: string;
-  change: "same" | "changed" | "added" | "removed";
-  connector: Pair<string>;
-  count: Pair<number>;
-  maxUtilisation: Pair<number>;
-  passes: Pair<boolean>;
-  zones: ZoneChange[];
-}
 
-export interface UtilisationChange {
-  /** Joint id for a bond line, check id for a member check. */
-  id: string;
-  title: string;
-  change: "same" | "changed" | "added" | "removed";
-  utilisation: Pair<number>;
-  passes: Pair<boolean>;
-}
 
-export interface ResultChanges {
-  passes: Pair<boolean>;
-  connectors: Pair<number>;
-  schedules: ScheduleChange[];
-  bondLines: UtilisationChange[];
-  /** Welded joints by their largest utilisation (zones of segment and pitch are in the results themselves). */
-  welds: UtilisationChange[];
-  checks: UtilisationChange[];
-}
 
 const zoneFields: (keyof ZoneView)[] = ["from", "to", "spacing", "rows", "count", "utilisation", "passes"];
 

@@ -1,93 +1,22 @@
 import { join } from "node:path";
 import Database from "better-sqlite3";
-import { canonicalJson, designMember, issuesFromZod, PROGRAM, prepareJob, type JobDocument, type JobIssue } from "../../core/index.js";
+import { showHidden } from "../../core/text/plain-text.js";
+import { canonicalJson, issuesFromZod, PROGRAM, prepareJob, type JobDocument, type JobIssue } from "../../core/index.js";
 import { fingerprintOf } from "../fingerprint.js";
 import { ApiError } from "../errors.js";
-import { summariseResult, type ResultSummary } from "../result-summary.js";
+import type { FingerprintLookUp, Member, Project, ResultSummary, RevisionInfo, SavedRevision, StoredRevision, WorksheetIssue } from "../../core/schema/store-contract.js";
+
+export type { FingerprintLookUp, Member, Project, RevisionInfo, SavedRevision, StoredRevision, WorksheetIssue };
 import { LATEST_SCHEMA_VERSION, schemaVersion } from "./migrations.js";
 import { DATABASE_FILE, openDatabase } from "./open-database.js";
 import { PROJECT_FILE_FORMAT, PROJECT_FILE_VERSION, ProjectFile, type NewProject } from "./store-schemas.js";
 
-export interface Project {
-  id: number;
-  name: string;
-  number: string;
-  client: string;
-  createdAt: string;
-  /** Members in the project. */
-  members: number;
-  /** When a revision was last saved in the project; null when it has no members. */
-  updatedAt: string | null;
-}
 
-export interface RevisionInfo {
-  revision: number;
-  savedAt: string;
-  note: string;
-  /** The revision this one was edited from, when the client said so. */
-  basedOn: number | null;
-  /** Input fingerprint with the program version that saved it. */
-  fingerprint: string;
-  /** Program version that saved it ("" for a revision from a version-1 store). */
-  program: string;
-  /** Pass or fail, what governs, connectors; null when the job could not be designed. */
-  summary: ResultSummary | null;
-}
 
-export interface Member {
-  id: number;
-  projectId: number;
-  /** Mark and description of the latest revision's job. */
-  mark: string;
-  description: string;
-  createdAt: string;
-  revisions: number;
-  latest: RevisionInfo;
-  /** Worksheets issued for any revision of the member. */
-  issued: number;
-  lastIssue: WorksheetIssue | null;
-}
 
-export interface StoredRevision extends RevisionInfo {
-  projectId: number;
-  memberId: number;
-  /** The job document as saved, defaults filled in. */
-  job: JobDocument;
-}
 
-export interface SavedRevision {
-  projectId: number;
-  memberId: number;
-  mark: string;
-  revision: RevisionInfo;
-  /** For example: another revision was saved after the one this edit started from. */
-  warnings: string[];
-}
 
-export interface WorksheetIssue {
-  id: number;
-  projectId: number;
-  projectName: string;
-  memberId: number;
-  mark: string;
-  revision: number;
-  /** Revision text printed in the title block (the job's `member.revision`). */
-  titleRevision: string;
-  fingerprint: string;
-  issuedAt: string;
-  fileName: string;
-  program: string;
-  /** Whether the issued PDF's bytes are kept (not for worksheets brought in by an import). */
-  hasPdf: boolean;
-}
 
-export interface FingerprintLookUp {
-  fingerprint: string;
-  /** Worksheets issued with this fingerprint, oldest first. */
-  issues: WorksheetIssue[];
-  /** Saved revisions whose input has this fingerprint. */
-  revisions: { projectId: number; projectName: string; memberId: number; mark: string; revision: number; savedAt: string; fingerprint: string }[];
-}
 
 export interface StoreOptions {
   /** The clock; tests fix it. */
@@ -135,9 +64,9 @@ const ISSUE_SELECT = `
 const issueOf = (r: IssueRow): WorksheetIssue => ({
   id: r.id,
   projectId: r.project_id,
-  projectName: r.project_name,
+  projectName: showHidden(r.project_name),
   memberId: r.member_id,
-  mark: r.mark,
+  mark: showHidden(r.mark),
   revision: r.revision,
   titleRevision: r.title_revision,
   fingerprint: r.fingerprint,
@@ -153,7 +82,7 @@ export function prefixIssues(issues: JobIssue[], prefix: string): JobIssue[] {
 }
 
 /** Validates a job for saving; throws ERR_INPUT_INVALID with `job.…` paths. */
-function validJob(input: unknown, at: string): { job: JobDocument; core: JobDocument } {
+export function validJob(input: unknown, at: string): { job: JobDocument; core: JobDocument } {
   if (input === undefined) throw new ApiError("ERR_INPUT_INVALID", "The request needs the job document in `job`; nothing was stored.", [{ path: at, message: "is required (the job document)" }]);
   if (typeof input !== "object" || input === null || Array.isArray(input)) {
     throw new ApiError("ERR_INPUT_INVALID", "The job document has problems; nothing was stored.", [{ path: at, message: "must be a job document (a JSON object)" }]);
@@ -163,13 +92,10 @@ function validJob(input: unknown, at: string): { job: JobDocument; core: JobDocu
   return prepared;
 }
 
-/** The summary of a valid job's result, or null when the design itself fails (the revision is kept all the same). */
-function summaryOf(core: JobDocument): ResultSummary | null {
-  try {
-    return summariseResult(designMember(core));
-  } catch {
-    return null;
-  }
+/** A project file whose every revision validates, ready to be stored. */
+export interface ImportPlan {
+  file: ProjectFile;
+  members: { createdAt?: string | undefined; revisions: { job: JobDocument; revision: number; savedAt: string; note: string; basedOn: number | null; program: string }[]; worksheets: ProjectFile["members"][number]["worksheets"] }[];
 }
 
 const isMarkTaken = (error: unknown) => error instanceof Database.SqliteError && error.code === "SQLITE_CONSTRAINT_UNIQUE" && /members\.mark/.test(error.message);
@@ -288,8 +214,9 @@ export class JobStore {
     return {
       id: row.id,
       projectId: row.project_id,
-      mark: row.mark,
-      description: row.description,
+      // Names saved before control and text-direction characters were refused are shown with them visible.
+      mark: showHidden(row.mark),
+      description: showHidden(row.description),
       createdAt: row.created_at,
       revisions,
       latest: this.revisionInfo(latest),
@@ -298,10 +225,13 @@ export class JobStore {
     };
   }
 
-  /** A new member with its first revision, in one transaction. The job must be valid. */
-  createMember(projectId: number, input: unknown, options: { note?: string } = {}): SavedRevision {
-    const { job, core } = validJob(input, "job");
-    const summary = summaryOf(core);
+  /**
+   * A new member with its first revision, in one transaction. The job must be valid; its summary is
+   * worked out by the caller on a design thread (never here, on the thread that answers requests).
+   */
+  createMember(projectId: number, input: unknown, options: { note?: string; summary?: ResultSummary | null } = {}): SavedRevision {
+    const { job } = validJob(input, "job");
+    const summary = options.summary ?? null;
     try {
       return this.db
         .transaction(() => {
@@ -329,9 +259,9 @@ export class JobStore {
    * Saves a job as the member's next revision. The number is taken inside the write lock, so two saves
    * at once (two tabs, two processes) become two revisions; neither replaces the other.
    */
-  saveRevision(projectId: number, memberId: number, input: unknown, options: { basedOn?: number; note?: string } = {}): SavedRevision {
-    const { job, core } = validJob(input, "job");
-    const summary = summaryOf(core);
+  saveRevision(projectId: number, memberId: number, input: unknown, options: { basedOn?: number; note?: string; summary?: ResultSummary | null } = {}): SavedRevision {
+    const { job } = validJob(input, "job");
+    const summary = options.summary ?? null;
     try {
       return this.db
         .transaction((): SavedRevision => {
@@ -452,7 +382,7 @@ export class JobStore {
            WHERE r.fingerprint >= ? AND r.fingerprint < ? ORDER BY r.saved_at`,
         )
         .all(...range) as { project_id: number; project_name: string; member_id: number; mark: string; number: number; saved_at: string; fingerprint: string }[]
-    ).map((r) => ({ projectId: r.project_id, projectName: r.project_name, memberId: r.member_id, mark: r.mark, revision: r.number, savedAt: r.saved_at, fingerprint: r.fingerprint }));
+    ).map((r) => ({ projectId: r.project_id, projectName: showHidden(r.project_name), memberId: r.member_id, mark: showHidden(r.mark), revision: r.number, savedAt: r.saved_at, fingerprint: r.fingerprint }));
     if (issues.length === 0 && revisions.length === 0) {
       throw new ApiError("ERR_WORKSHEET_NOT_FOUND", `No issued worksheet or saved revision in this job store has the fingerprint ${fingerprint}.`);
     }
@@ -501,12 +431,24 @@ export class JobStore {
    * problem reported with its path (`members[3].revisions[0].job.parts[1].shape.h`); with any problem,
    * nothing is stored.
    */
-  importProject(input: unknown): Project {
+  importProject(input: unknown, summaries: (member: number, revision: number) => ResultSummary | null = () => null): Project {
+    const file = JobStore.parseProjectFile(input);
+    return this.storeImport(this.checkImport(file, (mi, ri) => validJob(file.members[mi]!.revisions[ri]!.job, `members[${mi}].revisions[${ri}].job`).job), summaries);
+  }
+
+  /** A project file's own fields (not yet its jobs); throws ERR_PROJECT_FILE_INVALID with every problem. */
+  static parseProjectFile(input: unknown): ProjectFile {
     const parsed = ProjectFile.safeParse(input, { reportInput: true });
-    if (!parsed.success) {
-      throw new ApiError("ERR_PROJECT_FILE_INVALID", undefined, issuesFromZod(parsed.error));
-    }
-    const file = parsed.data;
+    if (!parsed.success) throw new ApiError("ERR_PROJECT_FILE_INVALID", undefined, issuesFromZod(parsed.error));
+    return parsed.data;
+  }
+
+  /**
+   * The validation half of an import: every problem with its path, or the plan to store. `jobOf` gives each
+   * revision's job as parsed, or throws ERR_INPUT_INVALID with its issues at their paths (the route has them
+   * validated on a design thread).
+   */
+  checkImport(file: ProjectFile, jobOf: (member: number, revision: number) => JobDocument): ImportPlan {
     const issues: JobIssue[] = [];
     const members = file.members.map((m, mi) => {
       const revisions = m.revisions.map((r, ri) => {
@@ -514,8 +456,7 @@ export class JobStore {
         if (r.revision !== ri + 1) issues.push({ path: `${at}.revision`, message: `must be ${ri + 1}: revisions are numbered 1, 2, 3… in order, without gaps` });
         if (r.basedOn !== null && r.basedOn >= r.revision) issues.push({ path: `${at}.basedOn`, message: `must be an earlier revision than ${r.revision}` });
         try {
-          const { job, core } = validJob(r.job, `${at}.job`);
-          return { ...r, job, core };
+          return { ...r, job: jobOf(mi, ri) };
         } catch (error) {
           if (!(error instanceof ApiError)) throw error;
           issues.push(...error.issues);
@@ -537,7 +478,12 @@ export class JobStore {
       } else marks.set(last.job.member.mark, mi);
     });
     if (issues.length > 0) throw new ApiError("ERR_PROJECT_FILE_INVALID", `The project file has ${issues.length} problem${issues.length === 1 ? "" : "s"}, each listed with its path; nothing was stored.`, issues);
+    return { file, members: members.map((m) => ({ createdAt: m.createdAt, revisions: m.revisions.map((r) => r!), worksheets: m.worksheets })) };
+  }
 
+  /** The storing half of an import, with each revision's summary (member and revision index). */
+  storeImport(plan: ImportPlan, summaries: (member: number, revision: number) => ResultSummary | null = () => null): Project {
+    const { file, members } = plan;
     try {
       return this.db
         .transaction(() => {
@@ -545,15 +491,17 @@ export class JobStore {
           const projectId = Number(
             this.db.prepare("INSERT INTO projects (name, number, client, created_at) VALUES (?, ?, ?, ?)").run(file.project.name, file.project.number, file.project.client, file.project.createdAt ?? now).lastInsertRowid,
           );
-          for (const m of members) {
-            const revisions = m.revisions.map((r) => r!);
+          for (const [mi, m] of members.entries()) {
+            const revisions = m.revisions;
             const last = revisions[revisions.length - 1]!;
             const memberId = Number(
               this.db
                 .prepare("INSERT INTO members (project_id, mark, description, created_at) VALUES (?, ?, ?, ?)")
                 .run(projectId, last.job.member.mark, last.job.member.description, m.createdAt ?? revisions[0]!.savedAt).lastInsertRowid,
             );
-            for (const r of revisions) this.insertRevision(memberId, r.revision, r.job, { savedAt: r.savedAt, note: r.note, basedOn: r.basedOn, summary: null, program: r.program });
+            for (const [ri, r] of revisions.entries()) {
+              this.insertRevision(memberId, r.revision, r.job, { savedAt: r.savedAt, note: r.note, basedOn: r.basedOn, summary: summaries(mi, ri), program: r.program });
+            }
             for (const w of m.worksheets) {
               this.db
                 .prepare("INSERT INTO worksheets (member_id, revision, fingerprint, issued_at, file_name, pdf, program, title_revision) VALUES (?, ?, ?, ?, ?, NULL, ?, ?)")
@@ -570,6 +518,15 @@ export class JobStore {
     }
   }
 
+  /** Keeps a summary worked out later for a revision that had none (a cache: a busy or read-only file just skips it). */
+  setSummary(memberId: number, revision: number, summary: ResultSummary): void {
+    try {
+      this.db.prepare("UPDATE revisions SET summary = ? WHERE member_id = ? AND number = ? AND summary IS NULL").run(JSON.stringify(summary), memberId, revision);
+    } catch {
+      // Worked out again next time.
+    }
+  }
+
   private insertRevision(
     memberId: number,
     number: number,
@@ -583,21 +540,14 @@ export class JobStore {
     return { revision: number, savedAt: meta.savedAt, note: meta.note, basedOn: meta.basedOn, fingerprint, program: meta.program || programName, summary: meta.summary };
   }
 
-  /** Revisions from an import or an older store have no summary yet: work it out once and keep it. */
+  /**
+   * A listing reads the summary kept with the revision and never designs: a design belongs on a design
+   * thread with its limits, and a job that could stop the process must not be run by a listing. A revision
+   * from a version-1 store has none (null) until a design thread works it out (`setSummary`).
+   */
   private revisionInfo(row: RevisionRow): RevisionInfo {
-    let summary: ResultSummary | null = row.summary ? (JSON.parse(row.summary) as ResultSummary) : null;
-    if (!summary) {
-      const prepared = prepareJob(JSON.parse(row.job));
-      summary = prepared.ok ? summaryOf(prepared.core) : null;
-      if (summary) {
-        try {
-          this.db.prepare("UPDATE revisions SET summary = ? WHERE member_id = ? AND number = ? AND summary IS NULL").run(JSON.stringify(summary), row.member_id, row.number);
-        } catch {
-          // A cache: when the file is busy or read-only the summary is simply worked out again next time.
-        }
-      }
-    }
-    return { revision: row.number, savedAt: row.saved_at, note: row.note, basedOn: row.based_on, fingerprint: row.fingerprint, program: row.program, summary };
+    const summary = row.summary ? (JSON.parse(row.summary) as ResultSummary) : null;
+    return { revision: row.number, savedAt: row.saved_at, note: showHidden(row.note), basedOn: row.based_on, fingerprint: row.fingerprint, program: row.program, summary };
   }
 }
 
@@ -619,6 +569,6 @@ interface MemberRow {
   created_at: string;
 }
 
-const projectOf = (r: ProjectRow): Project => ({ id: r.id, name: r.name, number: r.number, client: r.client, createdAt: r.created_at, members: r.members, updatedAt: r.updated_at });
+const projectOf = (r: ProjectRow): Project => ({ id: r.id, name: showHidden(r.name), number: showHidden(r.number), client: showHidden(r.client), createdAt: r.created_at, members: r.members, updatedAt: r.updated_at });
 
 const range = (a: number, b: number) => (a === b ? `${a}` : `${a} to ${b}`);

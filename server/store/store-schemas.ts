@@ -1,17 +1,18 @@
 import { z } from "zod";
+import { refuseHidden } from "../../core/schema/quantity.js";
 
 /** Request and file contracts of the job store. A job inside them is checked by prepareJob, so it is `unknown` here. */
 
 const Timestamp = z.iso.datetime({ offset: true, message: "must be a date and time such as 2025-03-14T09:30:00.000Z" });
 
 export const NewProject = z.strictObject({
-  name: z.string().trim().min(1, "must not be empty").max(120, "must be at most 120 characters"),
-  number: z.string().trim().max(40, "must be at most 40 characters").default(""),
-  client: z.string().trim().max(120, "must be at most 120 characters").default(""),
+  name: z.string().trim().min(1, "must not be empty").max(120, "must be at most 120 characters").superRefine(refuseHidden),
+  number: z.string().trim().max(40, "must be at most 40 characters").superRefine(refuseHidden).default(""),
+  client: z.string().trim().max(120, "must be at most 120 characters").superRefine(refuseHidden).default(""),
 });
 export type NewProject = z.infer<typeof NewProject>;
 
-const Note = z.string().max(500, "must be at most 500 characters").default("");
+const Note = z.string().max(500, "must be at most 500 characters").superRefine(refuseHidden).default("");
 
 /** POST …/members: the member's first revision. */
 export const NewMember = z.strictObject({ job: z.unknown(), note: Note });
@@ -68,9 +69,9 @@ export const ProjectFile = z.strictObject({
   program: z.strictObject({ name: z.string(), version: z.string() }).optional(),
   exportedAt: Timestamp.optional(),
   project: z.strictObject({
-    name: z.string().trim().min(1, "must not be empty").max(120),
-    number: z.string().max(40).default(""),
-    client: z.string().max(120).default(""),
+    name: z.string().trim().min(1, "must not be empty").max(120).superRefine(refuseHidden),
+    number: z.string().max(40).superRefine(refuseHidden).default(""),
+    client: z.string().max(120).superRefine(refuseHidden).default(""),
     createdAt: Timestamp.optional(),
   }),
   members: z.array(ProjectFileMember).max(2000, "at most 2000 members"),

@@ -88,6 +88,15 @@ describe("GET routes", () => {
 });
 
 describe("POST /api/designs", () => {
+  test("the cover-plate example with its held group named (fastening.joints) designs and prints (it answered 500)", { timeout: 60_000 }, async () => {
+    const job = (await request(app.server).get("/api/examples/cover-plate-retrofit.us")).body;
+    job.fastening.joints = [{ held: ["plate"], connector: "B34", rows: 2 }];
+    const res = await post(job);
+    expect(res.status, JSON.stringify(res.body).slice(0, 300)).toBe(200);
+    expect(res.body.joints.map((j: { id: string }) => j.id)).toEqual(["plate"]);
+    expect((await request(app.server).post("/api/worksheets").send(job)).status).toBe(200);
+  });
+
   test("a valid job returns the result in the job's units with the fingerprint", async () => {
     const res = await post(plankIJob());
     expect(res.status).toBe(200);

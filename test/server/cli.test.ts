@@ -1,5 +1,5 @@
-import { spawnSync } from "node:child_process";
-import { copyFileSync, existsSync, mkdirSync, readdirSync, readFileSync, writeFileSync } from "node:fs";
+import { execFileSync, spawnSync } from "node:child_process";
+import { copyFileSync, existsSync, mkdirSync, readdirSync, readFileSync, symlinkSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { PassThrough } from "node:stream";
 import { afterAll, describe, expect, test } from "vitest";
@@ -159,6 +159,54 @@ describe("runBatch", () => {
     expect(autoThreads(1000, true, 1, 0)).toBe(1);
     expect(autoThreads(1000, false, 2, 1.2)).toBe(1);
     expect(autoThreads(1000, false, 8, 3)).toBe(5);
+  });
+});
+
+describe("the command line and the file system", () => {
+  test("a symbolic link planted in the output folder is not written through: the file it points to is left alone", async () => {
+    const dir = jobFolder("links-in");
+    const out = join(work.dir, "links-out");
+    mkdirSync(out);
+    const outside = join(work.dir, "precious.txt");
+    writeFileSync(outside, "keep me");
+    symlinkSync(outside, join(out, "glued-lintel.si.result.json"));
+    symlinkSync(outside, join(out, "summary.csv"));
+    const report = await runBatch({ mode: "design", inputs: [dir], out, pdf: false, threads: 1 });
+    expect(readFileSync(outside, "utf8")).toBe("keep me");
+    const lintel = report.outcomes.find((o) => o.file.endsWith("glued-lintel.si.json"))!;
+    expect(lintel).toMatchObject({ status: "error", problems: [{ path: "(output)", message: expect.stringContaining("symbolic link") }] });
+    expect(report.outcomes.some((o) => o.file.endsWith("summary.csv") && o.status === "error")).toBe(true);
+    expect(report.exitCode).toBe(3);
+  });
+
+  test("an output folder that is the input folder under another name (a link) never overwrites an input", async () => {
+    const dir = join(work.dir, "same-folder");
+    mkdirSync(dir);
+    const mine = '{"my": "notes"}';
+    writeFileSync(join(dir, "beam.result.json"), mine);
+    copyFileSync(join(EXAMPLES, "glued-lintel.si.json"), join(dir, "beam.json"));
+    symlinkSync(dir, join(work.dir, "same-folder-link"));
+    const report = await runBatch({ mode: "design", inputs: [join(dir, "beam.json"), join(dir, "beam.result.json")], out: join(work.dir, "same-folder-link"), pdf: false, threads: 1, summaryFile: false });
+    expect(report.outcomes[0]).toMatchObject({ status: "error", problems: [{ path: "(output)", message: expect.stringContaining("would overwrite the input file") }] });
+    expect(readFileSync(join(dir, "beam.result.json"), "utf8")).toBe(mine);
+  });
+
+  test("a FIFO named *.json is skipped with a message (it used to hang the batch); the other files are done", { timeout: 30_000 }, async () => {
+    const dir = jobFolder("fifo");
+    execFileSync("mkfifo", [join(dir, "pipe.json")]);
+    const report = await runBatch({ mode: "design", inputs: [dir, join(dir, "pipe.json")], out: join(work.dir, "fifo-out"), pdf: false, threads: 1 });
+    const pipe = report.outcomes.filter((o) => o.file.endsWith("pipe.json"));
+    expect(pipe.length).toBeGreaterThan(0);
+    for (const o of pipe) expect(o).toMatchObject({ status: "invalid", problems: [{ path: "(file)", message: "is not a regular file (a pipe, socket or device); skipped" }] });
+    expect(report.outcomes.filter((o) => o.status === "pass").length).toBe(3);
+  });
+
+  test("a file that is not JSON is reported with where it breaks, never with its content", async () => {
+    const dir = jobFolder("secret", { "notes.json": "SECRET-TOKEN-1234 is not a job", "half.json": '{"format": "stitchplan-job", "SECRET-KEY": ' });
+    const { err } = await cli(["design", dir, "--out", join(work.dir, "secret-out"), "--quiet", "--no-pdf"]);
+    expect(err).toMatch(/notes\.json: \(file\): is not valid JSON/);
+    expect(err).toMatch(/half\.json: \(file\): is not valid JSON/);
+    expect(err).not.toContain("SECRET");
   });
 });
 

@@ -10,7 +10,7 @@ import { buildApp } from "../../server/app.js";
 import { errors } from "../../server/errors.js";
 import { tempFolder } from "./store/store-fixtures.js";
 import { knownCoreProblem } from "./fuzz/known-core-problems.js";
-import { bodyText, examples, mutatedJob, renamedJob } from "./fuzz/payloads.js";
+import { bodyText, checkModeJob, examples, mutatedJob, renamedJob } from "./fuzz/payloads.js";
 
 const SEED = Number(process.env.FC_SEED ?? 20_261_202);
 const SCALE = Number(process.env.FUZZ_SCALE ?? 1);
@@ -76,6 +76,20 @@ async function send(route: string, payload: string): Promise<{ status: number; b
   return { status: res.statusCode, body: String(res.headers["content-type"] ?? "").startsWith("application/pdf") ? res.rawPayload : res.json() };
 }
 
+/** After each batch: the service answers its health check and the store's listings, which only read what is kept. */
+async function healthy(batch: string): Promise<void> {
+  expect((await app.inject("/api/health")).statusCode, `health after ${batch}`).toBe(200);
+  const projects = await app.inject("/api/projects");
+  expect(projects.statusCode, `project list after ${batch}`).toBe(200);
+  for (const project of (projects.json() as { id: number }[]).slice(-5)) {
+    const members = await app.inject(`/api/projects/${project.id}/members`);
+    expect(members.statusCode, `member list after ${batch}`).toBe(200);
+    for (const member of (members.json() as { id: number }[]).slice(0, 5)) {
+      expect((await app.inject(`/api/projects/${project.id}/members/${member.id}/revisions`)).statusCode, `revision list after ${batch}`).toBe(200);
+    }
+  }
+}
+
 const property = <T>(arb: fc.Arbitrary<T>, check: (value: T) => Promise<void>) => fc.asyncProperty(arb, check);
 const options = (numRuns: number) => ({ numRuns: runs(numRuns), seed: SEED, endOnFailure: true });
 
@@ -95,6 +109,7 @@ describe("fuzzing the JSON endpoints (fast-check, fixed seed)", () => {
     );
     // Enough of the bodies were valid to reach the engine, not only the schema.
     expect(designed).toBeGreaterThan(runs(5300) * 0.15);
+    await healthy("designs");
   });
 
   test("POST /api/conversions: 2,000 bodies to both unit systems", { timeout: 300_000 }, async () => {
@@ -106,6 +121,7 @@ describe("fuzzing the JSON endpoints (fast-check, fixed seed)", () => {
       }),
       options(2000),
     );
+    await healthy("conversions");
   });
 
   test("POST /api/worksheets: 1,000 bodies; valid ones (20 of them) render with hostile and foreign names", { timeout: 600_000 }, async () => {
@@ -133,6 +149,7 @@ describe("fuzzing the JSON endpoints (fast-check, fixed seed)", () => {
       options(1000),
     );
     expect(rendered).toBeGreaterThan(5);
+    await healthy("worksheets");
   });
 
   test("the job store's routes: 1,700 bodies to new projects, new members, new revisions and imports; what is refused is not stored", { timeout: 600_000 }, async () => {
@@ -147,6 +164,7 @@ describe("fuzzing the JSON endpoints (fast-check, fixed seed)", () => {
     );
     const after = (await app.inject(`/api/projects/${projectId}/members/${memberId}/revisions`)).json().length;
     expect(after - before).toBe(saved);
+    await healthy("revisions");
 
     await fc.assert(
       property(
@@ -155,6 +173,7 @@ describe("fuzzing the JSON endpoints (fast-check, fixed seed)", () => {
       ),
       options(500),
     );
+    await healthy("new members");
     await fc.assert(
       property(
         fc.oneof(fc.jsonValue({ maxDepth: 3 }), fc.record({ name: fc.oneof(fc.string({ unit: "binary", maxLength: 300 }), fc.jsonValue()), number: fc.jsonValue(), client: fc.string() }, { requiredKeys: [] })).map((v) => JSON.stringify(v)),
@@ -162,6 +181,7 @@ describe("fuzzing the JSON endpoints (fast-check, fixed seed)", () => {
       ),
       options(200),
     );
+    await healthy("new projects");
     // A project file: the export of the fuzzed project with its revisions bent like the jobs above.
     const exported = (await app.inject(`/api/projects/${projectId}/export`)).json();
     exported.members = exported.members.slice(0, 3).map((m: { revisions: unknown[] }) => ({ ...m, revisions: m.revisions.slice(0, 3) }));
@@ -178,6 +198,50 @@ describe("fuzzing the JSON endpoints (fast-check, fixed seed)", () => {
       ),
       options(300),
     );
+    await healthy("imports");
+  });
+
+  test("check-mode schedules at the extremes (1e-300, 5e-324, -0, 1e300 …): 400 designs, 100 saves, 60 imports; the store's listings and health answer after each batch", { timeout: 600_000 }, async () => {
+    let checked = 0;
+    await fc.assert(
+      property(checkModeJob, async ({ job }) => {
+        const { status, body } = await send("/api/designs", JSON.stringify(job));
+        if (status === 200) {
+          checked++;
+          const parsed = DesignResult.safeParse(body);
+          expect(parsed.success, `result does not match its schema: ${JSON.stringify(parsed.error?.issues.slice(0, 3))}`).toBe(true);
+          expect((body as { mode: string }).mode).toBe("check");
+        }
+      }),
+      options(400),
+    );
+    expect(checked).toBeGreaterThan(runs(400) * 0.1);
+    await healthy("check-mode designs");
+
+    const project = (await app.inject({ method: "POST", url: "/api/projects", payload: { name: "Fuzz, check mode" } })).json().id;
+    let member = 0;
+    await fc.assert(
+      property(checkModeJob, async ({ job }) => {
+        const mark = `C-${++member}`;
+        void (await send(`/api/projects/${project}/members`, JSON.stringify({ job: { ...(job as object), member: { ...((job as { member: object }).member ?? {}), mark } } })));
+      }),
+      options(100),
+    );
+    await healthy("check-mode saves");
+
+    await fc.assert(
+      property(fc.array(checkModeJob, { minLength: 1, maxLength: 3 }), async (jobs) => {
+        const file = {
+          format: "stitchplan-project",
+          version: 1,
+          project: { name: "Fuzz import, check mode" },
+          members: jobs.map(({ job }, i) => ({ revisions: [{ revision: 1, savedAt: "2025-03-14T09:00:00.000Z", job: { ...(job as object), member: { ...((job as { member: object }).member ?? {}), mark: `I-${i}` } } }] })),
+        };
+        void (await send("/api/projects/import", JSON.stringify(file)));
+      }),
+      options(60),
+    );
+    await healthy("check-mode imports");
   });
 
   test("afterwards the service answers: health, a design of each example, the store", async () => {

@@ -4,7 +4,10 @@ import type { FastifyInstance } from "fastify";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { buildApp } from "../../server/app.js";
 import { serviceLimits } from "../../server/job-limits.js";
-import { example } from "./store/store-fixtures.js";
+import { readFileSync } from "node:fs";
+import { JobStore } from "../../server/store/job-store.js";
+import { manyLoadsJob, plankIJob, twelveSpansPatternedJob } from "../job-builders.js";
+import { example, tempFolder } from "./store/store-fixtures.js";
 
 let app: FastifyInstance;
 beforeAll(async () => {
@@ -59,6 +62,17 @@ describe("size limits", () => {
     expect(await refusedAt(checking({ type: "positions", positions }), "fastening.default.provided.positions")).toBe("at most 5000 positions");
     const zones = Array.from({ length: 61 }, (_, i) => ({ from: i * 0.05, to: (i + 1) * 0.05, spacing: 50 }));
     expect(await refusedAt(checking({ type: "zones", zones }), "fastening.default.provided.zones")).toBe("at most 60 zones");
+  });
+
+  test("a zoned schedule to check that gives more than 20,000 rows is a 400 at its zones (a spacing of 1e-6 mm stopped the process)", async () => {
+    const job = example("workshop-box-beam.si");
+    const checking = (spacing: number) => ({ ...job, mode: "check", fastening: { ...job.fastening, default: { ...job.fastening.default, provided: { type: "zones", zones: [{ from: 0, to: 4.8, spacing }] } } } });
+    for (const spacing of [1e-300, 5e-324, 1e-6, 1e-4, 0.001]) {
+      expect(await refusedAt(checking(spacing), "fastening.default.provided.zones")).toMatch(/^gives (over a billion|about \d+) rows along the member; a schedule to check may have at most 20000/);
+    }
+    // 4800 mm at 0.25 mm: 19,200 rows, inside the limit (and far below any connector's least spacing, so it fails its detailing).
+    expect((await design(checking(0.25))).statusCode).toBe(200);
+    expect((await app.inject({ method: "GET", url: "/api/health" })).statusCode).toBe(200);
   });
 
   test("a member longer than the limit is refused at beam.spans with the limit, in the job's units (1e300 m used to stop the process)", async () => {
@@ -133,6 +147,120 @@ describe("the time limit", () => {
       expect(after.statusCode).toBe(200);
     } finally {
       await limited.close();
+    }
+  });
+});
+
+describe("designs, summaries and worksheets stay on their threads, within their limits", () => {
+  const json = { "content-type": "application/json" };
+
+  test("a design that needs more than the thread's memory is a 422 naming the limit; the service answers on", { timeout: 120_000 }, async () => {
+    const small = await buildApp({ threadLimits: { memoryMb: 40 } });
+    try {
+      const res = await small.inject({ method: "POST", url: "/api/designs", payload: JSON.stringify(manyLoadsJob()), headers: json });
+      expect(res.statusCode, res.body.slice(0, 300)).toBe(422);
+      expect(res.json()).toMatchObject({ code: "ERR_DESIGN_MEMORY_LIMIT", message: "The design needed more than the memory limit of 40 MiB and was stopped; nothing was stored or changed." });
+      expect((await small.inject({ method: "GET", url: "/api/health" })).statusCode).toBe(200);
+      expect((await small.inject({ method: "POST", url: "/api/designs", payload: JSON.stringify(plankIJob()), headers: json })).statusCode).toBe(200);
+    } finally {
+      await small.close();
+    }
+  });
+
+  test("a full design queue answers 503 with Retry-After; those admitted are answered", { timeout: 120_000 }, async () => {
+    const busy = await buildApp({ designThreads: 1, threadLimits: { designQueue: 1 } });
+    try {
+      const answers = await Promise.all(
+        Array.from({ length: 4 }, (_, i) => busy.inject({ method: "POST", url: "/api/designs", payload: JSON.stringify({ ...plankIJob(), member: { mark: `Q-${i}` } }), headers: json })),
+      );
+      const refused = answers.filter((a) => a.statusCode === 503);
+      expect(refused.length).toBeGreaterThan(0);
+      expect(refused[0]!.json()).toMatchObject({ statusCode: 503, code: "ERR_BUSY", error: "Service Unavailable" });
+      expect(Number(refused[0]!.headers["retry-after"])).toBeGreaterThan(0);
+      expect(answers.filter((a) => a.statusCode === 200).length).toBeGreaterThan(0);
+      expect(answers.every((a) => a.statusCode === 200 || a.statusCode === 503)).toBe(true);
+    } finally {
+      await busy.close();
+    }
+  });
+
+  test("a worksheet does not hold the designs: a design sent while a heavy worksheet prints is answered first; heavy worksheets print within the time and memory limits", { timeout: 120_000 }, async () => {
+    const both = await buildApp({ designThreads: 1, warmThreads: true });
+    try {
+      const order: string[] = [];
+      const sheet = both.inject({ method: "POST", url: "/api/worksheets", payload: JSON.stringify(manyLoadsJob()), headers: json }).then((r) => (order.push("worksheet"), r));
+      const design = both.inject({ method: "POST", url: "/api/designs", payload: JSON.stringify(plankIJob()), headers: json }).then((r) => (order.push("design"), r));
+      const [s, d] = await Promise.all([sheet, design]);
+      expect(d.statusCode).toBe(200);
+      expect(s.statusCode, s.body.slice(0, 300)).toBe(200);
+      expect(order).toEqual(["design", "worksheet"]);
+      // The 12-span member with 9 patterned categories: its worksheet ran past 60 s; now it prints within the limits.
+      const twelve = await both.inject({ method: "POST", url: "/api/worksheets", payload: JSON.stringify(twelveSpansPatternedJob()), headers: json });
+      expect(twelve.statusCode, twelve.body.slice(0, 300)).toBe(200);
+    } finally {
+      await both.close();
+    }
+  });
+});
+
+describe("the store designs on the design threads, never on the thread that answers", () => {
+  const json = { "content-type": "application/json" };
+
+  test("job-store.ts has no way to design: listings read the summary kept with the revision", () => {
+    const source = readFileSync(new URL("../../server/store/job-store.ts", import.meta.url), "utf8");
+    expect(source).not.toMatch(/designMember|designInUnits|runDesign|summariseResult|renderWorksheet/);
+  });
+
+  test("a save past the design time limit is a 422 and stores nothing; an import with such a revision is refused at its path", { timeout: 120_000 }, async () => {
+    const folder = tempFolder("limits");
+    const limited = await buildApp({ dataDir: folder.dir, timeLimits: { designMs: 300 } });
+    try {
+      // Starts the thread outside the limit.
+      expect((await limited.inject({ method: "POST", url: "/api/designs", payload: JSON.stringify(plankIJob()), headers: json })).statusCode).toBe(200);
+      const project = (await limited.inject({ method: "POST", url: "/api/projects", payload: JSON.stringify({ name: "Limits" }), headers: json })).json();
+      const save = await limited.inject({ method: "POST", url: `/api/projects/${project.id}/members`, payload: JSON.stringify({ job: manyLoadsJob() }), headers: json });
+      expect(save.statusCode, save.body.slice(0, 300)).toBe(422);
+      expect(save.json().code).toBe("ERR_DESIGN_TIME_LIMIT");
+      expect((await limited.inject({ method: "GET", url: `/api/projects/${project.id}/members` })).json()).toEqual([]);
+
+      const file = {
+        format: "stitchplan-project",
+        version: 1,
+        project: { name: "Imported" },
+        members: [
+          { revisions: [{ revision: 1, savedAt: "2025-03-14T09:00:00.000Z", job: plankIJob() }] },
+          { revisions: [{ revision: 1, savedAt: "2025-03-14T09:00:00.000Z", job: { ...manyLoadsJob(), member: { mark: "H-2" } } }] },
+        ],
+      };
+      const imported = await limited.inject({ method: "POST", url: "/api/projects/import", payload: JSON.stringify(file), headers: json });
+      expect(imported.statusCode, imported.body.slice(0, 300)).toBe(400);
+      expect(imported.json()).toMatchObject({ code: "ERR_PROJECT_FILE_INVALID", issues: [{ path: "members[1].revisions[0].job", message: expect.stringMatching(/^cannot be designed within the service's limits: The design took longer than the limit of 0.3 s/) }] });
+      expect((await limited.inject({ method: "GET", url: "/api/projects" })).json().map((p: { name: string }) => p.name)).toEqual(["Limits"]);
+    } finally {
+      await limited.close();
+      folder.remove();
+    }
+  });
+
+  test("an import keeps each revision's summary, worked out on a design thread; a revision stored without one lists as null", { timeout: 120_000 }, async () => {
+    const folder = tempFolder("limits");
+    const app2 = await buildApp({ dataDir: folder.dir });
+    try {
+      const file = { format: "stitchplan-project", version: 1, project: { name: "Imported" }, members: [{ revisions: [{ revision: 1, savedAt: "2025-03-14T09:00:00.000Z", job: plankIJob() }] }] };
+      const project = (await app2.inject({ method: "POST", url: "/api/projects/import", payload: JSON.stringify(file), headers: json })).json();
+      const [member] = (await app2.inject({ method: "GET", url: `/api/projects/${project.id}/members` })).json();
+      expect(member.latest.summary).toMatchObject({ passes: expect.any(Boolean), connectors: expect.any(Number) });
+    } finally {
+      await app2.close();
+    }
+    // Straight into the store, as a version-1 file would hold it: no summary, and a listing does not work one out.
+    const store = JobStore.open(folder.dir);
+    try {
+      const project = store.importProject({ format: "stitchplan-project", version: 1, project: { name: "Old" }, members: [{ revisions: [{ revision: 1, savedAt: "2025-03-14T09:00:00.000Z", job: plankIJob() }] }] });
+      expect(store.listMembers(project.id)[0]!.latest.summary).toBeNull();
+    } finally {
+      store.close();
+      folder.remove();
     }
   });
 });

@@ -1,7 +1,7 @@
 // Security of the local service: where it listens, its headers, the Host check, what static serving
 // can reach, and names people type kept as text in the API, the PDF and its file name.
 import { execFileSync } from "node:child_process";
-import { writeFileSync } from "node:fs";
+import { readFileSync, writeFileSync } from "node:fs";
 import { connect } from "node:net";
 import { networkInterfaces } from "node:os";
 import { join } from "node:path";
@@ -9,6 +9,8 @@ import type { FastifyInstance } from "fastify";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { startServer } from "../../bench/loopback.js";
 import { buildApp } from "../../server/app.js";
+import { hardeningHeaders } from "../../server/security-headers.js";
+import { JobStore } from "../../server/store/job-store.js";
 import { example, tempFolder } from "./store/store-fixtures.js";
 
 let app: FastifyInstance;
@@ -164,8 +166,9 @@ describe("names people type", () => {
   const hostile = {
     project: `<script>alert("p")</script> O'Brien & "Sons" — Δοκός Балка`,
     mark: `B-1 "</title><img src=x onerror=1>`,
-    description: "\u202eevil\u202c ≤ τ ≥ σ; \r\nSet-Cookie: x=1",
-    number: `../../etc/passwd\r\nX-Injected: 1`,
+    // Control and text-direction characters (a line break, U+202E) are refused at the field: see below.
+    description: "evil ≤ τ ≥ σ; Set-Cookie: x=1",
+    number: `../../etc/passwd X-Injected: 1`,
   };
 
   function hostileJob() {
@@ -201,6 +204,147 @@ describe("names people type", () => {
       expect(text).toContain(`B-1 "</title><img src=x onerror=1>`);
       expect(text).toContain("≤ τ ≥ σ");
     } finally {
+      folder.remove();
+    }
+  });
+});
+
+describe("requests from other sites, and bodies that are not JSON", () => {
+  const changing = [
+    { method: "POST" as const, url: "/api/designs" },
+    { method: "POST" as const, url: "/api/conversions?to=us" },
+    { method: "POST" as const, url: "/api/worksheets" },
+  ];
+
+  test("a state-changing request with another site's Origin or Sec-Fetch-Site is a 403 ERR_CROSS_SITE with the hardening headers; GETs and this site's own requests are answered", async () => {
+    const job = JSON.stringify(example("workshop-box-beam.si"));
+    for (const { method, url } of changing) {
+      for (const headers of [{ origin: "https://elsewhere.example" }, { origin: "null" }, { "sec-fetch-site": "cross-site" }, { "sec-fetch-site": "same-site" }]) {
+        const res = await app.inject({ method, url, payload: job, headers: { "content-type": "application/json", ...headers } });
+        expect(res.statusCode, `${url} ${JSON.stringify(headers)}`).toBe(403);
+        expect(res.json()).toMatchObject({ statusCode: 403, code: "ERR_CROSS_SITE", error: "Forbidden" });
+        expect(res.headers["content-security-policy"]).toContain("default-src 'self'");
+      }
+    }
+    const own = await app.inject({ method: "POST", url: "/api/designs", payload: job, headers: { "content-type": "application/json", origin: "http://127.0.0.1", host: "127.0.0.1", "sec-fetch-site": "same-origin" } });
+    expect(own.statusCode).toBe(200);
+    expect((await app.inject({ method: "GET", url: "/api/health", headers: { origin: "https://elsewhere.example" } })).statusCode).toBe(200);
+  });
+
+  test("only application/json bodies are taken: text/plain, a form, or an empty POST with no type is a 415 with the documented body", async () => {
+    for (const { method, url } of changing) {
+      for (const [type, payload] of [["text/plain", "{}"], ["application/x-www-form-urlencoded", "a=1"], ["multipart/form-data; boundary=x", "--x--"], [undefined, ""]] as const) {
+        const res = await app.inject({ method, url, payload, headers: type ? { "content-type": type } : {} });
+        expect(res.statusCode, `${url} ${type}`).toBe(415);
+        expect(res.json()).toMatchObject({ statusCode: 415, code: "ERR_UNSUPPORTED_MEDIA_TYPE", error: "Unsupported Media Type", issues: [{ path: "(headers).content-type", message: "must be application/json" }] });
+        expect(res.headers["x-content-type-options"]).toBe("nosniff");
+      }
+    }
+  });
+
+  test("the page's requests send JSON: every fetch with a method other than GET in web/src names application/json", () => {
+    const sources = ["web/src/api.ts", "web/src/store/store-api.ts"].map((f) => readFileSync(join(import.meta.dirname, "../..", f), "utf8"));
+    for (const source of sources) {
+      for (const call of source.match(/fetch\([^;]*method[^;]*/g) ?? []) expect(call).toMatch(/content-type": "application\/json"/);
+    }
+    // A POST without a body (issuing a worksheet) sends {} as JSON.
+    expect(sources[1]).toMatch(/if \(method !== "GET" && body === undefined\) body = \{\};/);
+  });
+});
+
+describe("every answer has the documented body and the hardening headers", () => {
+  test("a malformed URL, a path with .., a refused host and a missing page: documented code and body, and the CSP", async () => {
+    for (const path of ["/%zz", "/../", "/..%2f", "/%2e%2e/package.json", "/api/../api/health", "/no-such-page"]) {
+      const res = await rawGet(path);
+      expect(res.status, path).toBe(404);
+      expect(JSON.parse(res.body), path).toEqual({ statusCode: 404, code: "ERR_NOT_FOUND", error: "Not Found", message: "There is nothing at this address.", issues: [] });
+      expect(res.headers.toLowerCase(), path).toContain("content-security-policy: default-src 'self'");
+      expect(res.headers.toLowerCase(), path).toContain("x-content-type-options: nosniff");
+    }
+    const host = await rawGet("/api/health", "rebound.example");
+    expect(host.status).toBe(403);
+    expect(JSON.parse(host.body)).toMatchObject({ statusCode: 403, code: "ERR_HOST_NOT_ALLOWED", error: "Forbidden" });
+    expect(host.headers.toLowerCase()).toContain("content-security-policy: default-src 'self'");
+  });
+
+  test("a request Node cannot parse gets the documented 400 with the same hardening headers helmet sets on every other answer", async () => {
+    const res = await new Promise<string>((resolve, reject) => {
+      const socket = connect(port, "127.0.0.1", () => socket.write("GET /api/health HTTP/1.1\r\nHost: 127.0.0.1\r\nBad Header Line\r\n\r\n"));
+      let text = "";
+      socket.setEncoding("latin1");
+      socket.on("data", (chunk) => (text += chunk));
+      socket.on("end", () => resolve(text));
+      socket.on("error", reject);
+    });
+    const [head = "", body = ""] = res.split("\r\n\r\n");
+    expect(head.split("\r\n")[0]).toBe("HTTP/1.1 400 Bad Request");
+    expect(JSON.parse(body)).toMatchObject({ statusCode: 400, code: "ERR_INPUT_INVALID", error: "Bad Request", issues: [{ path: "(request)" }] });
+    const health = await app.inject("/api/health");
+    for (const [name, value] of Object.entries(hardeningHeaders)) {
+      expect(health.headers[name], name).toBe(value);
+      expect(head.toLowerCase()).toContain(`${name}: ${value}`.toLowerCase());
+    }
+  });
+
+  test("a body nested deeper than any job is a 400 on every JSON route, conversions and the store included", async () => {
+    const folder = tempFolder("security");
+    const withStore = await buildApp({ dataDir: folder.dir });
+    try {
+      const deep = `{"job":${"[".repeat(100_000)}${"]".repeat(100_000)}}`;
+      for (const url of ["/api/designs", "/api/conversions?to=si", "/api/worksheets", "/api/projects", "/api/projects/import"]) {
+        const res = await withStore.inject({ method: "POST", url, payload: deep, headers: { "content-type": "application/json" } });
+        expect(res.statusCode, url).toBe(400);
+        expect(res.json(), url).toMatchObject({ code: "ERR_INPUT_INVALID", issues: [{ path: "(body)", message: "must nest at most 64 levels deep" }] });
+      }
+    } finally {
+      await withStore.close();
+      folder.remove();
+    }
+  });
+});
+
+describe("control and text-direction characters in names", () => {
+  const json = { "content-type": "application/json" };
+  const hidden = ["\u202e", "\u2066", "\u200f", "\u0007", "\u0085", "\u061c"];
+
+  test("are refused at the field that holds them, naming the character and where it is", async () => {
+    for (const c of hidden) {
+      const job = example("workshop-box-beam.si");
+      job.member.mark = `MB${c}2`;
+      job.project.name = `Harbour ${c}Lane`;
+      const res = await app.inject({ method: "POST", url: "/api/designs", payload: JSON.stringify(job), headers: json });
+      expect(res.statusCode).toBe(400);
+      const code = `U+${c.codePointAt(0)!.toString(16).toUpperCase().padStart(4, "0")}`;
+      expect(res.json().issues).toEqual(
+        expect.arrayContaining([
+          { path: "member.mark", message: `must not hold control or text-direction characters (${code} at character 3)` },
+          { path: "project.name", message: `must not hold control or text-direction characters (${code} at character 9)` },
+        ]),
+      );
+    }
+    const plain = example("workshop-box-beam.si");
+    plain.member.mark = "MB-2 ÄÖ 北 שלום";
+    expect((await app.inject({ method: "POST", url: "/api/designs", payload: JSON.stringify(plain), headers: json })).statusCode).toBe(200);
+  });
+
+  test("a store project name is refused the same way; a member saved before the rule lists with the character shown as ⟨U+202E⟩", async () => {
+    const folder = tempFolder("hidden");
+    const withStore = await buildApp({ dataDir: folder.dir });
+    try {
+      const refused = await withStore.inject({ method: "POST", url: "/api/projects", payload: JSON.stringify({ name: "Level\u202e 2" }), headers: json });
+      expect(refused.statusCode).toBe(400);
+      expect(refused.json().issues).toEqual([{ path: "name", message: "must not hold control or text-direction characters (U+202E at character 6)" }]);
+      const project = (await withStore.inject({ method: "POST", url: "/api/projects", payload: JSON.stringify({ name: "Level 2" }), headers: json })).json();
+      const saved = (await withStore.inject({ method: "POST", url: `/api/projects/${project.id}/members`, payload: JSON.stringify({ job: example("workshop-box-beam.si") }), headers: json })).json();
+      // As an older program could have stored it: straight into the file.
+      const store = JobStore.open(folder.dir);
+      store.db.prepare("UPDATE members SET mark = ?, description = ? WHERE id = ?").run("MB\u202e-2", "left\u2066right", saved.memberId);
+      store.close();
+      const members = await withStore.inject({ method: "GET", url: `/api/projects/${project.id}/members` });
+      expect(members.statusCode).toBe(200);
+      expect(members.json()[0]).toMatchObject({ mark: "MB⟨U+202E⟩-2", description: "left⟨U+2066⟩right" });
+    } finally {
+      await withStore.close();
       folder.remove();
     }
   });

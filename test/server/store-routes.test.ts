@@ -1,6 +1,10 @@
+import { readdirSync, readFileSync } from "node:fs";
+import { join } from "node:path";
 import type { FastifyInstance } from "fastify";
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { z } from "zod";
+import * as contract from "../../core/schema/store-contract.js";
 import { buildApp } from "../../server/app.js";
 import { example, steppingClock, tempFolder } from "./store/store-fixtures.js";
 
@@ -189,7 +193,7 @@ describe("compare", () => {
 describe("worksheets", () => {
   test("POST …/revisions/:n/worksheets returns the PDF (201), records the issue, and the fingerprint look-up finds it", async () => {
     const { p, m } = await projectWithMember("Issued");
-    const res = await api().post(`/api/projects/${p}/members/${m}/revisions/1/worksheets`).buffer(true).parse(binary);
+    const res = await api().post(`/api/projects/${p}/members/${m}/revisions/1/worksheets`).send({}).buffer(true).parse(binary);
     expect(res.status).toBe(201);
     expect(res.headers["content-type"]).toBe("application/pdf");
     expect(res.headers["content-disposition"]).toContain("DEMO-103_LB-1_rev-A.pdf");
@@ -262,4 +266,34 @@ test("an app built without a data folder serves no store routes", async () => {
   } finally {
     await plain.close();
   }
+});
+
+describe("the store's contract (core/schema/store-contract.ts), shared with the page", () => {
+  test("every listing and answer of the store parses with the contract's schemas", async () => {
+    const { p, m } = await projectWithMember("Contract");
+    const job = example("loft-beam-16d.us");
+    job.beam.loads[0].w = 52;
+    await api().post(`/api/projects/${p}/members/${m}/revisions`).send({ job, basedOn: 1 });
+    const check = (schema: z.ZodType, body: unknown, what: string) => {
+      const parsed = schema.safeParse(body);
+      expect(parsed.success, `${what}: ${JSON.stringify(parsed.error?.issues.slice(0, 3))}`).toBe(true);
+    };
+    check(z.array(contract.Project), (await api().get("/api/projects")).body, "projects");
+    check(contract.Project, (await api().get(`/api/projects/${p}`)).body, "project");
+    check(z.array(contract.Member), (await api().get(`/api/projects/${p}/members`)).body, "members");
+    check(z.array(contract.RevisionListItem), (await api().get(`/api/projects/${p}/members/${m}/revisions`)).body, "revisions");
+    check(contract.StoredRevision, (await api().get(`/api/projects/${p}/members/${m}/revisions/latest`)).body, "revision");
+    const compared = (await api().get(`/api/projects/${p}/members/${m}/compare?from=1&to=2`)).body;
+    check(contract.Comparison, compared, "comparison");
+    check(contract.FingerprintLookUp, (await api().get(`/api/worksheets/${compared.to.fingerprint.slice(0, 12)}`)).body, "look-up");
+  });
+
+  test("the page imports no server code", () => {
+    const files = readdirSync(join(import.meta.dirname, "../../web/src"), { recursive: true, encoding: "utf8" }).filter((f) => f.endsWith(".ts"));
+    expect(files.length).toBeGreaterThan(5);
+    for (const file of files) {
+      const source = readFileSync(join(import.meta.dirname, "../../web/src", file), "utf8");
+      expect(source, file).not.toMatch(/from\s+["'](\.\.\/)+server\//);
+    }
+  });
 });

@@ -10,6 +10,8 @@ import { FIELD_SHEET_BAND } from "../../server/pdf/field-sheet.js";
 import { numberText, quantityText } from "../../server/pdf/quantity-text.js";
 import { REVIEW_NOTICE } from "../../server/pdf/title-block.js";
 import { renderWorksheet, worksheetFileName } from "../../server/pdf/worksheet.js";
+import { COMBINATIONS_IN_FULL } from "../../server/pdf/worksheet-context.js";
+import { manyLoadsJob, twelveSpansPatternedJob } from "../job-builders.js";
 
 const EXAMPLES = join(import.meta.dirname, "../../fixtures/examples");
 const PRINT_DATE = "2025-03-14";
@@ -387,5 +389,27 @@ describe("POST /api/worksheets", () => {
     } finally {
       await app.close();
     }
+  });
+});
+
+describe("worksheets of heavy valid jobs", () => {
+  test("twelve spans with nine patterned categories: the combinations that govern are printed in full, the rest summed up by the combination they pattern", { timeout: 120_000 }, async () => {
+    const r = await render("twelve-spans-patterned", twelveSpansPatternedJob());
+    const combinations = r.run.result.beam.combinations;
+    expect(combinations.length).toBeGreaterThan(COMBINATIONS_IN_FULL);
+    expect(r.text).toMatch(new RegExp(`${combinations.length} combinations: the \\d+ that govern a result on this worksheet are listed in full; the other \\d+ \\(ASD-1 \\(\\d+ patterns\\)`));
+    // Whatever a check or a schedule names as governing is printed with its factors.
+    for (const id of [...r.run.result.checks.map((k) => k.combination), ...r.run.result.schedules.map((s) => s.verification.combination)]) {
+      // Table cells break an id at its "/" or "-" (and pdftotext drops a hyphen at a line end).
+      if (id) expect(r.text.replace(/[\s-]/g, "").includes(id.replace(/-/g, "")), id).toBe(true);
+    }
+    expect(r.pageTexts.length).toBeLessThan(40);
+  });
+
+  test("a note taller than a page (a zone failing under 170 combinations) runs on and ends", { timeout: 120_000 }, async () => {
+    const job = manyLoadsJob();
+    const r = await render("many-loads", job);
+    expect(r.pageTexts.length).toBeLessThan(120);
+    expect(r.text).toContain(`${job.beam.loads.length}`);
   });
 });

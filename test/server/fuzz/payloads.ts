@@ -151,3 +151,47 @@ export const bodyText: fc.Arbitrary<string> = fc.oneof(
   { weight: 1, arbitrary: fc.string({ unit: "binary", maxLength: 200 }) },
   { weight: 1, arbitrary: fc.constantFrom("", "{", "[", "{}", "[]", "null", "\ufeff{}", '{"a":1,"a":2}', '{"__proto__":{"polluted":1}}', '{"constructor":{"prototype":{"polluted":1}}}') },
 );
+
+/** Spacings and positions at the edges of what a number can be, and around what a schedule can hold. */
+const extremeNumber: fc.Arbitrary<Json> = fc.oneof(
+  fc.constantFrom<Json>(1e-300, 5e-324, -0, 0, -1, 1e300, 1e-6, 1e-4, 1e-3, 0.05, 0.5, 2 ** 53, Number.MAX_VALUE, "NaN", null),
+  fc.double({ min: 10, max: 400, noNaN: true }),
+);
+
+/** Examples whose joints are nailed, screwed or bolted (not glued or welded) in SI or US units. */
+const discreteExamples = examples.filter(({ job }) => {
+  const connectors = (job as { connectors?: { kind?: string }[] }).connectors ?? [];
+  return connectors.length > 0 && connectors.every((c) => c.kind !== "glue" && c.kind !== "fillet-weld" && c.kind !== "weld");
+});
+
+/**
+ * A check-mode job: an example with the schedule to check given in `fastening.default.provided`, as zones
+ * from end to end (their spacings, and sometimes their ends, at the extremes) or as row positions.
+ */
+export const checkModeJob: fc.Arbitrary<{ example: string; job: Json }> = fc
+  .tuple(
+    fc.nat({ max: Math.max(0, discreteExamples.length - 1) }),
+    fc.boolean(),
+    fc.array(fc.oneof({ weight: 3, arbitrary: fc.double({ min: 20, max: 300, noNaN: true }) as fc.Arbitrary<Json> }, { weight: 2, arbitrary: extremeNumber }), { minLength: 1, maxLength: 4 }),
+    fc.array(fc.oneof({ weight: 4, arbitrary: fc.double({ min: 0, max: 1, noNaN: true }) as fc.Arbitrary<Json> }, { weight: 1, arbitrary: extremeNumber }), { minLength: 1, maxLength: 40 }),
+    fc.option(extremeNumber, { nil: undefined }),
+  )
+  .map(([index, zoned, spacings, fractions, end]) => {
+    const { name, job: original } = discreteExamples[index]!;
+    const job = structuredClone(original) as { mode?: string; beam: { spans: number[] }; fastening: { default: Record<string, Json>; joints?: Json[] } };
+    const length = job.beam.spans.reduce((s, l) => s + l, 0);
+    job.mode = "check";
+    if (zoned) {
+      const n = spacings.length;
+      job.fastening.default.provided = {
+        type: "zones",
+        zones: spacings.map((spacing, i) => ({ from: (length * i) / n, to: i === n - 1 && end !== undefined ? end : (length * (i + 1)) / n, spacing })),
+      };
+    } else {
+      const positions = fractions.map((f) => (typeof f === "number" && f >= 0 && f <= 1 ? f * length : f)).sort((a, b) => (typeof a === "number" && typeof b === "number" ? a - b : 0));
+      job.fastening.default.provided = { type: "positions", positions };
+    }
+    // Joints of their own fastening would need their own schedules: the default fastens every joint here.
+    job.fastening.joints = [];
+    return { example: name, job: job as unknown as Json };
+  });

@@ -1,5 +1,7 @@
 import { afterEach, beforeEach, describe, expect, test } from "vitest";
 import { ApiError } from "../../../server/errors.js";
+import { runDesign } from "../../../server/design-service.js";
+import { summariseResult } from "../../../server/result-summary.js";
 import { JobStore } from "../../../server/store/job-store.js";
 import { example, steppingClock, tempFolder } from "./store-fixtures.js";
 
@@ -50,9 +52,10 @@ describe("JobStore revisions", () => {
     ]);
   });
 
-  test("a saved revision carries a summary: pass or fail, what governs, connectors", () => {
+  test("a saved revision keeps the summary it is given (worked out on a design thread by the route), and a listing reads it", () => {
     const project = store.createProject({ name: "Barn", number: "", client: "" });
-    const saved = store.createMember(project.id, example("loft-beam-16d.us"));
+    const job = example("loft-beam-16d.us");
+    const saved = store.createMember(project.id, job, { summary: summariseResult(runDesign(job).result) });
     expect(saved.revision.summary).toMatchObject({ passes: true, connectors: 70 });
     expect(saved.revision.summary!.governing!.utilisation).toBeGreaterThan(0.5);
     const [member] = store.listMembers(project.id);

@@ -1,20 +1,19 @@
 import type { JobIssue } from "../../../core/schema/job-issues.js";
-import type { InputChange, ResultChanges } from "../../../server/store/compare-revisions.js";
-import type { FingerprintLookUp, Member, Project, RevisionInfo, SavedRevision, StoredRevision, WorksheetIssue } from "../../../server/store/job-store.js";
+import type {
+  Comparison,
+  FingerprintLookUp,
+  InputChange,
+  Member,
+  Project,
+  ResultChanges,
+  RevisionInfo,
+  RevisionListItem,
+  SavedRevision,
+  StoredRevision,
+  WorksheetIssue,
+} from "../../../core/schema/store-contract.js";
 
-export type { FingerprintLookUp, InputChange, Member, Project, ResultChanges, RevisionInfo, SavedRevision, StoredRevision, WorksheetIssue };
-
-export type RevisionListItem = RevisionInfo & { issues: WorksheetIssue[] };
-
-export interface Comparison {
-  units: string;
-  unitLabels: Record<string, string>;
-  from: { revision: number; savedAt: string; note: string; fingerprint: string; units: string };
-  to: { revision: number; savedAt: string; note: string; fingerprint: string; units: string };
-  sameInputs: boolean;
-  inputs: InputChange[];
-  results: ResultChanges;
-}
+export type { Comparison, FingerprintLookUp, InputChange, Member, Project, ResultChanges, RevisionInfo, RevisionListItem, SavedRevision, StoredRevision, WorksheetIssue };
 
 export interface IssuedWorksheet {
   blob: Blob;
@@ -38,6 +37,8 @@ export type Answer<T> = { ok: true; value: T } | { ok: false; problem: StoreProb
 const unreachable: StoreProblem = { status: 0, code: "UNREACHABLE", message: "The stitchplan service did not answer. Is it still running?", issues: [] };
 
 async function call<T>(method: string, url: string, body?: unknown, read: (r: Response) => Promise<T> = (r) => r.json() as Promise<T>): Promise<Answer<T>> {
+  // The service takes changes only as JSON (a guard against other sites' forms): a POST without a body sends {}.
+  if (method !== "GET" && body === undefined) body = {};
   let response: Response;
   try {
     response = await fetch(url, {
