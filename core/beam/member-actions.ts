@@ -222,9 +222,12 @@ function extremeOver(
     const score = absolute ? Math.abs(value) : sign * value;
     if (score > best.value) best = { value: score, x };
   };
+  // A piece ending within a relative 1e-9 of the interval counts as meeting it, so a load or support
+  // that a unit conversion moves by a rounding error stays on the same side of a zone boundary.
+  const tol = 1e-9 * actions.length;
   for (const p of actions.pieces) {
-    const lo = Math.max(a, p.x0);
-    const hi = Math.min(b, p.x1);
+    const lo = Math.max(a - tol, p.x0);
+    const hi = Math.min(b + tol, p.x1);
     if (hi < lo) continue;
     const c = coefficients(p);
     consider(poly(c, lo - p.x0), lo);

@@ -191,7 +191,8 @@ export function boundaryGrid(end: number, step: number): number[] {
 /** A round step for zone boundaries giving at most `cells` cells over `end`, mm. */
 export function roundStep(end: number, system: "si" | "us", cells = 48): number {
   const steps = system === "si" ? [10, 20, 25, 50, 100, 200, 250, 500, 1000, 2000] : [0.5, 1, 2, 3, 6, 12, 24, 48, 96].map((s) => s * 25.4);
-  return steps.find((s) => end / s <= cells) ?? steps[steps.length - 1]!;
+  // Relative tolerance: the same member converted to the other unit system keeps its grid.
+  return steps.find((s) => end / s <= cells * (1 + 1e-9)) ?? steps[steps.length - 1]!;
 }
 
 /** Range maximum over grid cells by a sparse table; queries widen to whole cells (conservative). */

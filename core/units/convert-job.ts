@@ -1,16 +1,47 @@
 import { JobDocument } from "../schema/job.js";
 import { rescale } from "./convert.js";
-import { fromCore, toCore, type UnitSystem } from "./quantity.js";
+import { fromCore, toCore, type Quantity, type UnitSystem } from "./quantity.js";
+
+/**
+ * Relative distance a converted number may keep from the exact conversion. Small enough that a
+ * number of up to 9 significant figures comes back exactly (two such numbers differ by at least
+ * 1e-9 of their size), large enough that the other system's number carries no visible noise.
+ */
+const CONVERSION_TOLERANCE = 2e-10;
+
+/** The shortest decimal within the conversion tolerance of `exact` (both relative to the smaller). */
+function shortestNear(exact: number, accept: (candidate: number) => boolean = () => true): number | undefined {
+  for (let digits = 1; digits <= 17; digits++) {
+    const candidate = Number(exact.toPrecision(digits));
+    if (Math.abs(candidate - exact) <= CONVERSION_TOLERANCE * Math.min(Math.abs(candidate), Math.abs(exact)) && accept(candidate)) return candidate;
+  }
+  return undefined;
+}
+
+/**
+ * One number of `from` in `to`: the shortest decimal near the exact conversion whose conversion back
+ * is the number given, so that a round trip returns every number as it was entered.
+ */
+export function convertNumber(value: number, quantity: Quantity, from: UnitSystem, to: UnitSystem): number {
+  if (from === to || value === 0 || !Number.isFinite(value)) return value;
+  const there = (x: number) => fromCore(toCore(x, quantity, from), quantity, to);
+  const back = (y: number) => fromCore(toCore(y, quantity, to), quantity, from);
+  const exact = there(value);
+  if (!Number.isFinite(exact)) return exact;
+  return shortestNear(exact, (y) => shortestNear(back(y)) === value) ?? shortestNear(exact) ?? exact;
+}
 
 /**
  * A parsed job rewritten in the other unit system: every number that declares a quantity kind is
- * converted and rounded to 9 significant figures: no visible noise, and parts that touch still touch.
+ * converted to the shortest decimal that converts back to it (no visible noise, and a round trip
+ * returns the numbers entered). The spacing practice of the job (its module, shortest zone and
+ * round zone boundaries when the job leaves them out) stays that of the system it came from, so the
+ * converted job designs the same schedules; taking up the other system's practice is the user's choice.
  */
 export function convertJob(job: JobDocument, to: UnitSystem): JobDocument {
   if (job.units === to) return job;
-  const converted = rescale(JobDocument, job, (v, q) => {
-    const out = fromCore(toCore(v, q, job.units), q, to);
-    return out === 0 || !Number.isFinite(out) ? out : Number(out.toPrecision(9));
-  });
-  return { ...converted, units: to };
+  const converted = rescale(JobDocument, job, (v, q) => convertNumber(v, q, job.units, to));
+  const practice = job.spacing.practice ?? job.units;
+  const { practice: _dropped, ...spacing } = converted.spacing;
+  return { ...converted, units: to, spacing: practice === to ? spacing : { ...spacing, practice } };
 }
