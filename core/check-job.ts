@@ -12,6 +12,7 @@ import { partExtent, partStretches, sectionStretches } from "./section/stretches
 import { buildSection, positioned } from "./section/section-model.js";
 import { toCoreUnits } from "./units/convert.js";
 import { inJobUnits } from "./units/format.js";
+import { exceeds, fallsShort } from "./units/limits.js";
 
 export type PreparedJob = { ok: true; job: JobDocument; core: JobDocument } | { ok: false; issues: JobIssue[] };
 
@@ -194,7 +195,8 @@ function checkProvidedSchedules(joints: MemberJoint[], L: number, span: (x: numb
 function physicalRanges(job: JobDocument, text: (value: number, quantity: Parameters<typeof inJobUnits>[1]) => string): JobIssue[] {
   const issues: JobIssue[] = [];
   const outside = (path: string, value: number, quantity: Parameters<typeof inJobUnits>[1], lo: number, hi: number, what: string) => {
-    if (value < lo || value > hi) issues.push({ path, message: `${text(value, quantity)} is outside the range of ${what} (${text(lo, quantity)} to ${text(hi, quantity)})` });
+    // Relative tolerance: a value on a limit, converted to the other unit system, stays within it.
+    if (fallsShort(value, lo) || exceeds(value, hi)) issues.push({ path, message: `${text(value, quantity)} is outside the range of ${what} (${text(lo, quantity)} to ${text(hi, quantity)})` });
   };
   job.materials.forEach((m, i) => {
     outside(`materials[${i}].E`, m.E, "modulus", 1, 1e6, "structural materials");

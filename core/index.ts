@@ -14,5 +14,5 @@ export { sectionDrawing } from "./draw/section-drawing.js";
 export { lineDiagram } from "./draw/line-diagram.js";
 export { palette, type Drawing, type DrawItem } from "./draw/drawing.js";
 export { PROGRAM } from "./version.js";
-export { grades, materialFromGrade, type Grade } from "./materials/grades.js";
+export { grades, gradeMaterial, materialFromGrade, type Grade } from "./materials/grades.js";
 export { Material } from "./schema/job.js";

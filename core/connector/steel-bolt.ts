@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { exceeds, fallsShort } from "../units/limits.js";
 import { Id, positive, Text } from "../schema/quantity.js";
 import { formatNumber, inJobUnits } from "../units/format.js";
 import type { ConnectorContext, ConnectorResistance, DetailingLimits, DiscreteConnectorKind, JoinedMember, PlacementProblem, WorkingStep } from "./connector-kind.js";
@@ -280,16 +281,16 @@ function problems(c: SteelBolt, context: ConnectorContext): PlacementProblem[] {
     else if (m.material.tensileStrength === undefined) out.push({ on: "material", member: i as 0 | 1, field: "tensileStrength", message: `is needed for bearing at the bolt holes of part "${m.part}" (${c.standard === "AISC-360-16" ? "AISC 360-16 §J3.10" : "EN 1993-1-8 Table 3.4"})` });
   });
   const g = geometry(c, r);
-  if (c.minSpacing !== undefined && c.minSpacing < g.minSpacing - 1e-9) out.push({ on: "connector", field: "minSpacing", message: `${len(c.minSpacing)} is below the least spacing ${len(g.minSpacing)} (${c.standard === "AISC-360-16" ? "AISC 360-16 §J3.3, 2-2/3 d" : "EN 1993-1-8 Table 3.3, 2.2d₀"})` });
-  if (c.endDistance !== undefined && c.endDistance < g.minEnd - 1e-9) out.push({ on: "connector", field: "endDistance", message: `${len(c.endDistance)} is below the least end distance ${len(g.minEnd)} (${c.standard === "AISC-360-16" ? "AISC 360-16 Table J3.4" : "EN 1993-1-8 Table 3.3"})` });
-  if (c.edgeDistance !== undefined && c.edgeDistance < g.minEdge - 1e-9) out.push({ on: "connector", field: "edgeDistance", message: `${len(c.edgeDistance)} is below the least edge distance ${len(g.minEdge)} (${c.standard === "AISC-360-16" ? "AISC 360-16 Table J3.4" : "EN 1993-1-8 Table 3.3"})` });
+  if (c.minSpacing !== undefined && fallsShort(c.minSpacing, g.minSpacing)) out.push({ on: "connector", field: "minSpacing", message: `${len(c.minSpacing)} is below the least spacing ${len(g.minSpacing)} (${c.standard === "AISC-360-16" ? "AISC 360-16 §J3.3, 2-2/3 d" : "EN 1993-1-8 Table 3.3, 2.2d₀"})` });
+  if (c.endDistance !== undefined && fallsShort(c.endDistance, g.minEnd)) out.push({ on: "connector", field: "endDistance", message: `${len(c.endDistance)} is below the least end distance ${len(g.minEnd)} (${c.standard === "AISC-360-16" ? "AISC 360-16 Table J3.4" : "EN 1993-1-8 Table 3.3"})` });
+  if (c.edgeDistance !== undefined && fallsShort(c.edgeDistance, g.minEdge)) out.push({ on: "connector", field: "edgeDistance", message: `${len(c.edgeDistance)} is below the least edge distance ${len(g.minEdge)} (${c.standard === "AISC-360-16" ? "AISC 360-16 Table J3.4" : "EN 1993-1-8 Table 3.3"})` });
   for (const m of context.members) {
-    if (g.hole >= m.width - 1e-9) {
+    if (!fallsShort(g.hole, m.width)) {
       out.push({ on: "connector", field: c.size !== undefined ? "size" : "diameter", message: `a ${len(r.d)} bolt in a ${len(g.hole)} hole is larger than part "${m.part}" (${len(m.width)} wide across the contact line)` });
       continue;
     }
     const need = 2 * g.edgeDistance + (context.rows - 1) * g.rowSpacing;
-    if (need > m.width + 1e-9) {
+    if (exceeds(need, m.width)) {
       out.push(context.rows > 1
         ? { on: "fastening", field: "rows", message: `${context.rows} bolts per row need ${len(need)} across part "${m.part}" (edge distances and row spacing), which is only ${len(m.width)} wide` }
         : { on: "connector", field: c.edgeDistance !== undefined ? "edgeDistance" : c.size !== undefined ? "size" : "diameter", message: `the bolt needs ${len(need)} across part "${m.part}" for its edge distances, which is only ${len(m.width)} wide` });

@@ -18,6 +18,12 @@ function shortestNear(exact: number, accept: (candidate: number) => boolean = ()
   return undefined;
 }
 
+/** `x` without the noise of a unit conversion: the shortest decimal within the conversion tolerance (1600000.0000000002 → 1600000). */
+export function withoutNoise(x: number): number {
+  if (x === 0 || !Number.isFinite(x)) return x;
+  return shortestNear(x) ?? x;
+}
+
 /**
  * One number of `from` in `to`: the shortest decimal near the exact conversion whose conversion back
  * is the number given, so that a round trip returns every number as it was entered.

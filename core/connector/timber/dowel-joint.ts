@@ -1,4 +1,5 @@
 import type { Material } from "../../schema/job.js";
+import { exceeds, fallsShort } from "../../units/limits.js";
 import type { ConnectorContext, ConnectorResistance, DetailingLimits, JoinedMember, ModeValue, PlacementProblem, SlipModuli, WorkingStep } from "../connector-kind.js";
 import { MM_PER_IN, MPA_PER_PSI, N_PER_LBF } from "../quantity-text.js";
 import { inJobUnits } from "../../units/format.js";
@@ -105,7 +106,7 @@ export function dowelProblems(spec: DowelSpec, context: ConnectorContext): Place
       out.push({ on: "material", member, field: "characteristicDensity", message: `is needed for the embedment strength of part "${m.part}" under EN 1995-1-1 (§8.3.1, §8.5.1: from ρ_k)` });
     }
   });
-  if (spec.standard === "NDS-2018" && spec.yieldDiameter > MM_PER_IN + 1e-9) {
+  if (spec.standard === "NDS-2018" && exceeds(spec.yieldDiameter, MM_PER_IN)) {
     out.push({ on: "connector", field: "diameter", message: `${len(spec.diameter)} is beyond the NDS-2018 yield limit equations, which cover diameters up to 1 in (§12.3.3)` });
   }
   const geometry = dowelGeometry(spec, context);
@@ -113,7 +114,7 @@ export function dowelProblems(spec: DowelSpec, context: ConnectorContext): Place
     const where = spec.shear === "single" ? `part "${members[1].part}"` : `the far side member (taken as thick as "${members[0].part}")`;
     if (geometry.penetration <= 0) {
       out.push({ on: "connector", field: "length", message: `a ${len(spec.length!)} ${spec.noun} does not reach ${where}: it must be longer than ${len(spec.length! - geometry.penetration)}` });
-    } else if (spec.minPenetration && geometry.penetration < spec.minPenetration.multiple * spec.diameter - 1e-9) {
+    } else if (spec.minPenetration && fallsShort(geometry.penetration, spec.minPenetration.multiple * spec.diameter)) {
       out.push({
         on: "connector",
         field: "length",
@@ -122,19 +123,19 @@ export function dowelProblems(spec: DowelSpec, context: ConnectorContext): Place
     }
   }
   for (const m of members) {
-    if (spec.diameter >= m.width - 1e-9) out.push({ on: "connector", field: "diameter", message: `a ${len(spec.diameter)} ${spec.noun} is as large as part "${m.part}" is wide (${len(m.width)}) across the contact line` });
+    if (!fallsShort(spec.diameter, m.width)) out.push({ on: "connector", field: "diameter", message: `a ${len(spec.diameter)} ${spec.noun} is as large as part "${m.part}" is wide (${len(m.width)}) across the contact line` });
   }
   if (spec.standard === "EN1995-1-1" && spec.family === "nail" && !spec.predrilled) {
-    if (spec.diameter > 6 + 1e-9) out.push({ on: "connector", field: "predrilled", message: `nails over 6 mm in diameter must be predrilled (EN 1995-1-1 §8.3.1.2(2), as amended by A1)` });
+    if (exceeds(spec.diameter, 6)) out.push({ on: "connector", field: "predrilled", message: `nails over 6 mm in diameter must be predrilled (EN 1995-1-1 §8.3.1.2(2), as amended by A1)` });
     for (const m of members) {
       if (isSteel(m.material) || isPanel(m.material)) continue;
       const rho = m.material.characteristicDensity;
-      if (rho !== undefined && rho > 500) out.push({ on: "connector", field: "predrilled", message: `part "${m.part}" has ρ_k = ${rho} kg/m³ > 500: nails must be predrilled (EN 1995-1-1 §8.3.1.2(2))` });
+      if (rho !== undefined && exceeds(rho, 500)) out.push({ on: "connector", field: "predrilled", message: `part "${m.part}" has ρ_k = ${rho} kg/m³ > 500: nails must be predrilled (EN 1995-1-1 §8.3.1.2(2))` });
       if (rho !== undefined) {
         const d = spec.diameter;
         const tMin = Math.max(7 * d, ((13 * d - 30) * rho) / 400);
         const thickness = m === members[0] ? geometry.sideLength : m.thickness;
-        if (thickness < tMin - 1e-9) out.push({ on: "connector", field: "predrilled", message: `part "${m.part}" is ${len(thickness)} thick; without predrilling EN 1995-1-1 eq. (8.18) needs at least ${len(tMin)}: predrill or use a thicker part` });
+        if (fallsShort(thickness, tMin)) out.push({ on: "connector", field: "predrilled", message: `part "${m.part}" is ${len(thickness)} thick; without predrilling EN 1995-1-1 eq. (8.18) needs at least ${len(tMin)}: predrill or use a thicker part` });
       }
     }
   }
@@ -244,7 +245,7 @@ function ndsResistance(spec: DowelSpec, context: ConnectorContext): ConnectorRes
 function woodOf(m: Material, spec: DowelSpec): Ec5Wood {
   if (isPanel(m)) return spec.ec5.panel === "plywood" ? "plywood" : "osb";
   if (m.family === "engineered-wood") return "lvl";
-  return (m.characteristicDensity ?? 0) > 500 ? "hardwood" : "softwood";
+  return exceeds(m.characteristicDensity ?? 0, 500) ? "hardwood" : "softwood";
 }
 
 function productOf(m: Material, spec: DowelSpec): Ec5Product {
@@ -386,7 +387,7 @@ function dowelWarnings(spec: DowelSpec, context: ConnectorContext): string[] {
   const limits = dowelDetailing(spec, context);
   for (const m of context.members) {
     const need = 2 * (limits.edgeDistance ?? 0) + (context.rows - 1) * (limits.rowSpacing ?? 0);
-    if (!isSteel(m.material) && need > m.width + 1e-9) {
+    if (!isSteel(m.material) && exceeds(need, m.width)) {
       out.push(`${context.rows} ${spec.noun}${context.rows > 1 ? "s" : ""} per row need ${inJobUnits(need, "length", u)} across part "${m.part}" (edge distances${context.rows > 1 ? " and row spacing" : ""}), which is only ${inJobUnits(m.width, "length", u)} wide: stagger or reduce the rows, or check splitting.`);
     }
   }
