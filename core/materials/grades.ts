@@ -1,6 +1,6 @@
 import { Material } from "../schema/job.js";
 import { rescale } from "../units/convert.js";
-import { convertNumber, withoutNoise } from "../units/convert-job.js";
+import { convertNumber, withoutNoise } from "../units/convert-number.js";
 import { fromCore, type UnitSystem } from "../units/quantity.js";
 
 export interface Grade {
