@@ -1,5 +1,4 @@
 import { z } from "zod";
-import { exceeds, fallsShort } from "../units/limits.js";
 import { Id, positive, Text } from "../schema/quantity.js";
 import { formatNumber, inJobUnits } from "../units/format.js";
 import type { ConnectorContext, JoinedMember, PlacementProblem, WeldDetailing, WeldKind, WeldResistance, WorkingStep } from "./connector-kind.js";
@@ -15,6 +14,7 @@ import {
   en1993FilletStrength,
 } from "./steel/fillet-weld-strength.js";
 import { steelStandards } from "./steel-bolt.js";
+import { exceeds, fallsShort } from "../units/limits.js";
 
 export const FilletWeld = z
   .strictObject({

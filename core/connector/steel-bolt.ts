@@ -1,5 +1,4 @@
 import { z } from "zod";
-import { exceeds, fallsShort } from "../units/limits.js";
 import { Id, positive, Text } from "../schema/quantity.js";
 import { formatNumber, inJobUnits } from "../units/format.js";
 import type { ConnectorContext, ConnectorResistance, DetailingLimits, DiscreteConnectorKind, JoinedMember, PlacementProblem, WorkingStep } from "./connector-kind.js";
@@ -8,6 +7,7 @@ import { aiscBolt, holeTypes, type AiscPly } from "./steel/aisc-bolt.js";
 import { aiscBoltGroup, inchBolt, knownAiscGrades, knownInchSizes, knownMetricSizes, metricBoltSize, propertyClasses, standardHoleIn, type InchBolt, type MetricBolt } from "./steel/bolt-sizes.js";
 import { en1993Bolt, EN1993_GAMMA_M2, type En1993Ply } from "./steel/en1993-bolt.js";
 import { inchSize } from "./timber/fastener-sizes.js";
+import { exceeds, fallsShort } from "../units/limits.js";
 
 export const steelStandards = ["AISC-360-16", "EN1993-1-8"] as const;
 

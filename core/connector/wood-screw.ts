@@ -9,6 +9,7 @@ import { ec5YieldMoment } from "./timber/ec5-embedment.js";
 import { knownScrewGauges, screwGauge } from "./timber/fastener-sizes.js";
 import { ndsNailBendingYield } from "./timber/nds-dowel-bearing.js";
 import { screwYieldDiameter } from "./timber/screw-yield-diameter.js";
+import { exceeds } from "../units/limits.js";
 
 export const WoodScrew = z
   .strictObject({
@@ -79,7 +80,7 @@ function specOf(c: WoodScrew, context: ConnectorContext | undefined): DowelSpec 
       ? { value: c.bendingYieldStrength, source: "given" }
       : { value: ndsNailBendingYield(yieldDiameter / MM_PER_IN) * MPA_PER_PSI, source: "diameter bands of the NDS nail and screw tables, at the diameter in the yield model [M]" },
     nds: conditions.nds,
-    ec5: { ...conditions.ec5Conditions, yieldMoment: { value: My.value, source: `${My.formula} at d_ef, f_u = ${formatNumber(fu)} MPa` }, nailEmbedment: d <= 6 },
+    ec5: { ...conditions.ec5Conditions, yieldMoment: { value: My.value, source: `${My.formula} at d_ef, f_u = ${formatNumber(fu)} MPa` }, nailEmbedment: !exceeds(d, 6) },
     groupAction: conditions.groupAction,
   };
 }

@@ -1,4 +1,5 @@
 import { fallsShort } from "../../units/limits.js";
+
 /**
  * Structural bolt data. Metric: tensile stress areas A_s (ISO 898-1), property classes (f_yb, f_ub
  * of EN 1993-1-8 Table 3.1) and normal round hole clearances (EN 1090-2). Inch: sizes with the AISC

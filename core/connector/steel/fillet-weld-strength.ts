@@ -1,4 +1,5 @@
 import { exceeds, fallsShort } from "../../units/limits.js";
+
 /**
  * Strength of a fillet weld per unit length loaded along its axis: AISC 360-16 §J2.4 (Table J2.5) in
  * kips and inches, and EN 1993-1-8:2005 §4.5.3.3 (the simplified method) in N and mm.

@@ -1,5 +1,4 @@
 import type { Material } from "../../schema/job.js";
-import { exceeds, fallsShort } from "../../units/limits.js";
 import type { ConnectorContext, ConnectorResistance, DetailingLimits, JoinedMember, ModeValue, PlacementProblem, SlipModuli, WorkingStep } from "../connector-kind.js";
 import { MM_PER_IN, MPA_PER_PSI, N_PER_LBF } from "../quantity-text.js";
 import { inJobUnits } from "../../units/format.js";
@@ -22,6 +21,7 @@ import {
 import { ndsSteelBearing, ndsWoodBearing, type NdsBearing } from "./nds-dowel-bearing.js";
 import { foldAngle, ndsYieldLimit } from "./nds-yield-limit.js";
 import { ec5Spacing, ndsSpacing, type DowelFamily, type MemberSpacing } from "./timber-spacing.js";
+import { exceeds, fallsShort } from "../../units/limits.js";
 
 export const timberStandards = ["NDS-2018", "EN1995-1-1"] as const;
 export type TimberStandard = (typeof timberStandards)[number];
@@ -200,7 +200,7 @@ function ndsResistance(spec: DowelSpec, context: ConnectorContext): ConnectorRes
   }
   factors.push({ symbol: "C_M", value: ndsWetServiceFactor(spec.nds.moisture, D), description: `wet service factor (${spec.nds.moisture})`, reference: "NDS-2018 Table 11.3.3" });
   factors.push({ symbol: "C_t", value: ndsTemperatureFactor(spec.nds.temperature, spec.nds.moisture), description: `temperature factor (${spec.nds.temperature})`, reference: "NDS-2018 Table 11.3.4" });
-  if (spec.groupAction && D >= 0.25) {
+  if (spec.groupAction && !fallsShort(D, 0.25)) {
     const area = (m: JoinedMember) => (m.thickness * m.width) / MM_PER_IN ** 2;
     const E = (m: JoinedMember) => m.material.E / MPA_PER_PSI;
     const cg = ndsGroupActionFactor({
@@ -256,7 +256,7 @@ function ec5Embedment(spec: DowelSpec, m: JoinedMember, angle: number): Embedmen
   const wood = woodOf(m.material, spec);
   const rho = m.material.characteristicDensity ?? 0;
   const d = spec.yieldDiameter;
-  const nailRules = spec.ec5.nailEmbedment && d <= 8;
+  const nailRules = spec.ec5.nailEmbedment && !exceeds(d, 8);
   return nailRules
     ? ec5NailEmbedment({ wood, characteristicDensity: rho, diameter: d, predrilled: spec.predrilled, thickness: m.thickness })
     : ec5BoltEmbedment({ wood, characteristicDensity: rho, diameter: d, angleDeg: foldAngle(angle), thickness: m.thickness });
@@ -361,7 +361,7 @@ function ec5Slip(spec: DowelSpec, context: ConnectorContext): (SlipModuli & { fo
 /** n_ef/n for a row along the grain: bolts and dowels eq. (8.34); nails eq. (8.17) with k_ef of Table 8.1. */
 function ec5EffectiveNumber(spec: DowelSpec, n: number, a1: number): { ratio: number; formula: string; reference: string } {
   const d = spec.diameter;
-  if (spec.family === "bolt" || spec.family === "dowel" || spec.family === "lag-screw" || (spec.family === "screw" && d > 6)) {
+  if (spec.family === "bolt" || spec.family === "dowel" || spec.family === "lag-screw" || (spec.family === "screw" && exceeds(d, 6))) {
     const nef = Math.min(n, n ** 0.9 * (a1 / (13 * d)) ** 0.25);
     return { ratio: nef / n, formula: "n_ef = min(n, n^0.9 (a₁/13d)^0.25)", reference: "EN 1995-1-1 eq. (8.34)" };
   }

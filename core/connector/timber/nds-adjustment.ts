@@ -1,4 +1,5 @@
 import type { DurationClass } from "../connector-kind.js";
+import { fallsShort } from "../../units/limits.js";
 
 /**
  * NDS-2018 adjustment factors for connections (Table 11.3.1): load duration C_D (ASD only, §2.3.2
@@ -46,7 +47,7 @@ export type NdsMoisture = (typeof ndsMoistureConditions)[number];
 export function ndsWetServiceFactor(moisture: NdsMoisture, diameterIn: number): number {
   if (moisture === "dry") return 1.0;
   if (moisture === "wet") return 0.7;
-  return diameterIn < 0.25 ? 1.0 : 0.4;
+  return fallsShort(diameterIn, 0.25) ? 1.0 : 0.4;
 }
 
 export const ndsTemperatureRanges = ["up-to-100F", "100-125F", "125-150F"] as const;

@@ -17,7 +17,7 @@ export interface NdsBearing {
  */
 export function ndsWoodBearing(specificGravity: number, diameterIn: number, angleDeg: number): NdsBearing {
   const G = specificGravity;
-  if (diameterIn < 0.25) {
+  if (fallsShort(diameterIn, 0.25)) {
     return { value: 16_600 * G ** 1.84, parallel: null, perpendicular: null, formula: "F_e = 16 600 G^1.84 (D < 1/4 in)" };
   }
   const parallel = 11_200 * G;

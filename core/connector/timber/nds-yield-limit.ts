@@ -1,3 +1,5 @@
+import { exceeds, fallsShort } from "../../units/limits.js";
+
 /**
  * NDS yield limit equations for one dowel-type fastener (ANSI/AWC NDS-2018 §12.3.1, Tables 12.3.1A
  * and 12.3.1B), in the standard's own units: inches, psi, pounds.
@@ -55,8 +57,8 @@ export function foldAngle(angleDeg: number): number {
 
 /** Reduction term R_d of NDS Table 12.3.1B for a mode. */
 export function ndsReductionTerm(diameterIn: number, mode: NdsYieldMode, maxAngleDeg: number): number {
-  if (diameterIn <= 0.17) return 2.2;
-  if (diameterIn < 0.25) return 10 * diameterIn + 0.5;
+  if (!exceeds(diameterIn, 0.17)) return 2.2;
+  if (fallsShort(diameterIn, 0.25)) return 10 * diameterIn + 0.5;
   const kt = kTheta(maxAngleDeg);
   if (mode === "Im" || mode === "Is") return 4 * kt;
   if (mode === "II") return 3.6 * kt;
