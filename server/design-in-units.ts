@@ -27,6 +27,6 @@ export function designInUnits(input: unknown, units?: UnitSystem): UnitsRun {
   const shown = units && units !== prepared.job.units ? { ...toDisplayUnits(DesignResult, core, units), units, unitLabels: unitLabels(units), fingerprint } : result;
   // A result with a number that is not finite is never served, as a pass or at all (core already fails it).
   const where = firstNonFinite(result) ?? (shown === result ? null : firstNonFinite(shown));
-  if (where !== null) throw new ApiError("ERR_RESULT_NOT_FINITE", undefined, [{ path: where, message: "is not a finite number" }]);
+  if (where !== null) throw new ApiError("ERR_RESULT_NOT_FINITE", undefined, [{ path: where, message: "is not a finite number: the job lies outside what this program can compute, and no result is given" }]);
   return { job: prepared.job, core: prepared.core, result, shown };
 }
