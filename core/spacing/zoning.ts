@@ -126,7 +126,8 @@ export function evaluateZone(p: ZoningProblem, a: number, b: number, first: bool
   const e = p.endDistance;
   const fullLength = p.mirrored && last ? L - 2 * a : b - a;
   const wholeMember = first && last;
-  if (!wholeMember && fullLength < p.minZoneLength - 1e-9) return null;
+  // Relative tolerance: a shortest zone converted from the other unit system may sit a rounding error above a grid length.
+  if (!wholeMember && fullLength < p.minZoneLength * (1 - 1e-9) - 1e-9) return null;
   const start = first ? e : a;
   if (!last && b <= start) return null;
   const spacing = zoneSpacing(p, a, b, first, last);
@@ -174,9 +175,10 @@ function zoneCarries(p: ZoningProblem, a: number, b: number, first: boolean, las
   const e = p.endDistance;
   const reachLeft = first ? 0 : a - s / 2;
   const reachRight = last ? (p.mirrored ? b : L) : b + s / 2;
-  if (s * p.demand(reachLeft, reachRight) > 1 + 1e-12) return false;
-  if (first && e > s / 2 && (e + s / 2) * p.demand(0, e + s / 2) > 1 + 1e-12) return false;
-  if (last && !p.mirrored && e > s / 2 && (e + s / 2) * p.demand(L - e - s / 2, L) > 1 + 1e-12) return false;
+  // The rows' verification tolerance (utilisation ≤ 1 + 1e-9): a zone exactly at capacity is designed alike in either unit system.
+  if (s * p.demand(reachLeft, reachRight) > 1 + 1e-9) return false;
+  if (first && e > s / 2 && (e + s / 2) * p.demand(0, e + s / 2) > 1 + 1e-9) return false;
+  if (last && !p.mirrored && e > s / 2 && (e + s / 2) * p.demand(L - e - s / 2, L) > 1 + 1e-9) return false;
   return true;
 }
 
