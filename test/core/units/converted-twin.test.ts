@@ -135,7 +135,7 @@ describe("a conversion never produces a job the service refuses", () => {
     node[path[path.length - 1]!] = value;
   };
 
-  test("property: an example with some numbers scaled by round factors, if valid, converts both ways, is accepted, and comes back as it was", () => {
+  test("property: an example with some numbers scaled by round factors, if valid, converts both ways, is accepted, designs the same, and comes back as it was", () => {
     fc.assert(
       fc.property(
         fc.constantFrom(...examples),
@@ -155,9 +155,10 @@ describe("a conversion never produces a job the service refuses", () => {
           const q = prepareJob(there);
           expect(q.ok ? [] : q.issues).toEqual([]);
           expect(convertJob(there, p.job.units)).toEqual(p.job);
+          if (q.ok) expectSameDesign(designMember(p.core), designMember(q.core), "scaled example");
         },
       ),
-      { numRuns: 60 },
+      { numRuns: 150 },
     );
   });
 
