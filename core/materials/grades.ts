@@ -100,6 +100,7 @@ export function materialFromGrade(grade: Grade, basis: "allowable" | "factored",
  * (1 600 000 psi, 11 000 MPa), and in the other system the numbers a conversion of the job takes back to them.
  */
 export function gradeMaterial(grade: Grade, basis: "allowable" | "factored", units: UnitSystem): Material {
-  const own = rescale(Material, materialFromGrade(grade, basis), (v, q) => withoutNoise(fromCore(v, q, grade.system)));
+  // Values derived from the source (k_mod·f_k/γ_M) are kept to 9 significant figures, which convert back exactly.
+  const own = rescale(Material, materialFromGrade(grade, basis), (v, q) => Number(withoutNoise(fromCore(v, q, grade.system)).toPrecision(9)));
   return units === grade.system ? own : rescale(Material, own, (v, q) => convertNumber(v, q, grade.system, units));
 }

@@ -126,16 +126,18 @@ export function evaluateZone(p: ZoningProblem, a: number, b: number, first: bool
   const e = p.endDistance;
   const fullLength = p.mirrored && last ? L - 2 * a : b - a;
   const wholeMember = first && last;
-  // Relative tolerance: a shortest zone converted from the other unit system may sit a rounding error above a grid length.
-  if (!wholeMember && fullLength < p.minZoneLength * (1 - 1e-9) - 1e-9) return null;
+  // Lengths compare to a tolerance relative to the member (as the rows are placed): a member length, end
+  // distance or shortest zone converted from the other unit system sits a rounding error off a grid length.
+  const tol = 1e-9 * Math.max(L, p.minZoneLength);
+  if (!wholeMember && fullLength < p.minZoneLength - tol) return null;
   const start = first ? e : a;
-  if (!last && b <= start) return null;
+  if (!last && b <= start + tol) return null;
   const spacing = zoneSpacing(p, a, b, first, last);
   const s = spacing ?? p.spacings[0]!;
   let rows: number;
-  if (p.mirrored && last) rows = (Math.ceil((L - 2 * start) / s - 1e-9) + 1) / 2;
-  else if (last) rows = Math.ceil((L - e - start) / s - 1e-9) + 1;
-  else rows = Math.ceil((b - start) / s - 1e-9);
+  if (p.mirrored && last) rows = (Math.ceil((L - 2 * start - tol) / s - 1e-9) + 1) / 2;
+  else if (last) rows = Math.ceil((L - e - start - tol) / s - 1e-9) + 1;
+  else rows = Math.ceil((b - start - tol) / s - 1e-9);
   const cost = spacing === undefined ? rows + INFEASIBLE_PENALTY * (b - a) : rows;
   return { cost, rows, spacing: s, feasible: spacing !== undefined };
 }

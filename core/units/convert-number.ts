@@ -1,4 +1,4 @@
-import { fromCore, toCore, type Quantity, type UnitSystem } from "./quantity.js";
+import { quantityUnits, type Quantity, type UnitSystem } from "./quantity.js";
 
 /**
  * Relative distance a converted number may keep from the exact conversion. Small enough that a
@@ -7,30 +7,59 @@ import { fromCore, toCore, type Quantity, type UnitSystem } from "./quantity.js"
  */
 const CONVERSION_TOLERANCE = 2e-10;
 
-/** The shortest decimal within the conversion tolerance of `exact` (both relative to the smaller). */
-function shortestNear(exact: number, accept: (candidate: number) => boolean = () => true): number | undefined {
-  for (let digits = 1; digits <= 17; digits++) {
-    const candidate = Number(exact.toPrecision(digits));
-    if (Math.abs(candidate - exact) <= CONVERSION_TOLERANCE * Math.min(Math.abs(candidate), Math.abs(exact)) && accept(candidate)) return candidate;
-  }
-  return undefined;
+/** A finite number's shortest decimal as an exact fraction m·10^e (m a BigInt). */
+function decimal(x: number): { m: bigint; e: number } {
+  const [mantissa, exponent] = Math.abs(x).toExponential().split("e") as [string, string];
+  const [whole, fraction = ""] = mantissa.split(".");
+  return { m: BigInt(whole + fraction), e: Number(exponent) - fraction.length };
 }
 
-/** `x` without the noise of a unit conversion: the shortest decimal within the conversion tolerance (1600000.0000000002 → 1600000). */
-export function withoutNoise(x: number): number {
-  if (x === 0 || !Number.isFinite(x)) return x;
-  return shortestNear(x) ?? x;
+/** a·10^ea and b·10^eb on a common exponent. */
+function aligned(a: { m: bigint; e: number }, b: { m: bigint; e: number }): [bigint, bigint] {
+  const e = Math.min(a.e, b.e);
+  return [a.m * 10n ** BigInt(a.e - e), b.m * 10n ** BigInt(b.e - e)];
+}
+
+const product = (a: { m: bigint; e: number }, b: { m: bigint; e: number }) => ({ m: a.m * b.m, e: a.e + b.e });
+
+/**
+ * Whether c (in the target system, factor toFactor) is within the tolerance of x (factor fromFactor),
+ * |c·f_to − x·f_from| ≤ tolerance × min(c·f_to, x·f_from), in exact decimal arithmetic: the test is
+ * then the same whichever way the conversion runs, so a round trip finds the number it started from.
+ */
+function near(c: number, toFactor: number, x: number, fromFactor: number): boolean {
+  const [p, q] = aligned(product(decimal(c), decimal(toFactor)), product(decimal(x), decimal(fromFactor)));
+  const difference = p > q ? p - q : q - p;
+  const smaller = p < q ? p : q;
+  // CONVERSION_TOLERANCE = 2e-10.
+  return difference * 10n ** 10n <= 2n * smaller;
 }
 
 /**
- * One number of `from` in `to`: the shortest decimal near the exact conversion whose conversion back
- * is the number given, so that a round trip returns every number as it was entered.
+ * One number of `from` in `to`: the shortest decimal within the conversion tolerance of the exact
+ * conversion. No two decimals of up to 9 significant figures are that close, and the test is exactly
+ * symmetric, so converting back returns every such number as it was entered, and a converted number
+ * converts back and forth to itself.
  */
 export function convertNumber(value: number, quantity: Quantity, from: UnitSystem, to: UnitSystem): number {
   if (from === to || value === 0 || !Number.isFinite(value)) return value;
-  const there = (x: number) => fromCore(toCore(x, quantity, from), quantity, to);
-  const back = (y: number) => fromCore(toCore(y, quantity, to), quantity, from);
-  const exact = there(value);
-  if (!Number.isFinite(exact)) return exact;
-  return shortestNear(exact, (y) => shortestNear(back(y)) === value) ?? shortestNear(exact) ?? exact;
+  const fromFactor = quantityUnits[quantity][from].factor;
+  const toFactor = quantityUnits[quantity][to].factor;
+  const exact = (value * fromFactor) / toFactor;
+  if (!Number.isFinite(exact) || exact === 0) return exact;
+  for (let digits = 1; digits <= 17; digits++) {
+    const candidate = Number(exact.toPrecision(digits));
+    if (candidate !== 0 && near(candidate, toFactor, value, fromFactor)) return candidate;
+  }
+  return exact;
+}
+
+/** `x` without the noise of binary arithmetic: the shortest decimal within the conversion tolerance (1600000.0000000002 → 1600000). */
+export function withoutNoise(x: number): number {
+  if (x === 0 || !Number.isFinite(x)) return x;
+  for (let digits = 1; digits <= 17; digits++) {
+    const candidate = Number(x.toPrecision(digits));
+    if (Math.abs(candidate - x) <= CONVERSION_TOLERANCE * Math.min(Math.abs(candidate), Math.abs(x))) return candidate;
+  }
+  return x;
 }
