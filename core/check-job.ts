@@ -3,6 +3,7 @@ import { checkConnectorPlacement } from "./connector/check-placement.js";
 import { kindOf } from "./connector/registry.js";
 import { layersFromSection } from "./composite/layers-from-section.js";
 import { multiPlyOf } from "./fastening/side-load-transfer.js";
+import { physicalRangeIssues } from "./physical-ranges.js";
 import { JobDocument } from "./schema/job.js";
 import { issuesFromZod, type JobIssue } from "./schema/job-issues.js";
 import { connectedGroups, findContacts, findOverlaps } from "./section/contacts.js";
@@ -23,9 +24,12 @@ export type PreparedJob = { ok: true; job: JobDocument; core: JobDocument } | { 
 export function prepareJob(input: unknown): PreparedJob {
   const parsed = JobDocument.safeParse(input, { reportInput: true });
   if (!parsed.success) return { ok: false, issues: issuesFromZod(parsed.error) };
+  const converted = toCoreUnits(JobDocument, parsed.data, parsed.data.units);
+  // Ranges first: a number outside them is the problem to report, not what other checks make of it.
+  const ranges = physicalRangeIssues(parsed.data, converted);
+  if (ranges.length > 0) return { ok: false, issues: ranges };
   const issues = checkJob(parsed.data);
   if (issues.length > 0) return { ok: false, issues };
-  const converted = toCoreUnits(JobDocument, parsed.data, parsed.data.units);
   const placement = resolvePlacement(converted.parts);
   if (placement.issues.length > 0) return { ok: false, issues: placement.issues };
   const core = { ...converted, parts: placement.parts };
@@ -88,8 +92,6 @@ export function checkGeometry(job: JobDocument): JobIssue[] {
   const add = (path: string, message: string) => issues.push({ path, message });
   const text = (value: number, quantity: Parameters<typeof inJobUnits>[1]) => inJobUnits(value, quantity, job.units);
   const L = job.beam.spans.reduce((s, l) => s + l, 0);
-  issues.push(...physicalRanges(job, text));
-  if (issues.length > 0) return issues;
   job.parts.forEach((p, i) => {
     if (!p.extent) return;
     const { from, to } = partExtent(p, L);
@@ -188,42 +190,5 @@ function checkProvidedSchedules(joints: MemberJoint[], L: number, span: (x: numb
       });
     }
   }
-  return issues;
-}
-
-/**
- * Ranges outside which a number cannot describe a built-up beam, core units: a modulus from 1 MPa
- * (soft foams) to 1 000 000 MPa (above any metal), a density up to 25 000 kg/m³ (above any metal),
- * part dimensions, spacings and connector distances from 0.05 mm to 20 m, and a member up to 500 m long. Inside them the analysis is
- * well conditioned; outside them the input is refused rather than computed.
- */
-function physicalRanges(job: JobDocument, text: (value: number, quantity: Parameters<typeof inJobUnits>[1]) => string): JobIssue[] {
-  const issues: JobIssue[] = [];
-  const outside = (path: string, value: number, quantity: Parameters<typeof inJobUnits>[1], lo: number, hi: number, what: string) => {
-    if (value < lo || value > hi) issues.push({ path, message: `${text(value, quantity)} is outside the range of ${what} (${text(lo, quantity)} to ${text(hi, quantity)})` });
-  };
-  job.materials.forEach((m, i) => {
-    outside(`materials[${i}].E`, m.E, "modulus", 1, 1e6, "structural materials");
-    outside(`materials[${i}].density`, m.density, "density", 0, 25_000, "structural materials");
-  });
-  job.parts.forEach((part, i) => {
-    for (const [key, value] of Object.entries(part.shape)) {
-      if (typeof value === "number") outside(`parts[${i}].shape.${key}`, value, "length", 0.05, 20_000, "part dimensions");
-    }
-  });
-  const L = job.beam.spans.reduce((s, l) => s + l, 0);
-  outside("beam.spans", L, "span", 1, 500_000, "member lengths");
-  const rules = job.spacing;
-  for (const key of ["module", "minimum", "maximum", "minZoneLength"] as const) {
-    const value = rules[key];
-    if (value !== undefined && value > 0) outside(`spacing.${key}`, value, "length", 0.05, 20_000, "spacings");
-  }
-  rules.preferred?.forEach((value, i) => outside(`spacing.preferred[${i}]`, value, "length", 0.05, 20_000, "spacings"));
-  job.connectors.forEach((c, i) => {
-    for (const key of ["minSpacing", "maxSpacing", "endDistance", "segmentLength", "pitch"] as const) {
-      const value = (c as Record<string, unknown>)[key];
-      if (typeof value === "number" && value > 0) outside(`connectors[${i}].${key}`, value, "length", 0.05, 20_000, "connector spacings and distances");
-    }
-  });
   return issues;
 }

@@ -27,6 +27,7 @@ import { sectionStretches } from "./section/stretches.js";
 import { inJobUnits } from "./units/format.js";
 import { unitLabels } from "./units/quantity.js";
 import { PROGRAM } from "./version.js";
+import { withFiniteVerdict } from "./finite-verdict.js";
 
 /**
  * The whole job: a valid job document in core units (see `prepareJob`) → the result in core units.
@@ -221,7 +222,7 @@ export function designMember(job: JobDocument): DesignResult {
     ...terminations.filter((t) => !t.passes).map((t) => `End of ${t.part} (${t.end}, joint ${t.joint}): ${t.note || "the connectors there do not develop the part's force"} (${t.utilisation === null ? "no connectors there to develop it" : `utilisation ${t.utilisation.toFixed(2)}`}).`),
   ];
 
-  return {
+  return withFiniteVerdict({
     format: RESULT_FORMAT,
     version: RESULT_VERSION,
     program: { ...PROGRAM },
@@ -257,7 +258,7 @@ export function designMember(job: JobDocument): DesignResult {
       ...standards,
     ],
     warnings: [...warnings],
-  };
+  });
 }
 
 /** The joints that fasten the other lines a joint's cut crosses, because their cuts load those lines more. */

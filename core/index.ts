@@ -1,5 +1,6 @@
 export { prepareJob, checkJob, type PreparedJob } from "./check-job.js";
 export { designMember } from "./design-member.js";
+export { firstNonFinite, withFiniteVerdict } from "./finite-verdict.js";
 export { JobDocument, JOB_FORMAT, JOB_VERSION, type JobInput } from "./schema/job.js";
 export { DesignResult, RESULT_FORMAT, RESULT_VERSION } from "./schema/result.js";
 export { issuesFromZod, formatPath, type JobIssue } from "./schema/job-issues.js";
@@ -14,5 +15,5 @@ export { sectionDrawing } from "./draw/section-drawing.js";
 export { lineDiagram } from "./draw/line-diagram.js";
 export { palette, type Drawing, type DrawItem } from "./draw/drawing.js";
 export { PROGRAM } from "./version.js";
-export { grades, materialFromGrade, type Grade } from "./materials/grades.js";
+export { grades, gradeMaterial, materialFromGrade, type Grade } from "./materials/grades.js";
 export { Material } from "./schema/job.js";

@@ -1,4 +1,4 @@
-import { designMember, DesignResult, prepareJob, toDisplayUnits, unitLabels, type JobDocument, type UnitSystem } from "../core/index.js";
+import { designMember, DesignResult, firstNonFinite, prepareJob, toDisplayUnits, unitLabels, type JobDocument, type UnitSystem } from "../core/index.js";
 import { fingerprintOf } from "./fingerprint.js";
 import { ApiError } from "./errors.js";
 
@@ -25,5 +25,8 @@ export function designInUnits(input: unknown, units?: UnitSystem): UnitsRun {
   const result = { ...toDisplayUnits(DesignResult, core, prepared.job.units), fingerprint };
   // The converter rescales numbers; the result's own statement of its units is set here.
   const shown = units && units !== prepared.job.units ? { ...toDisplayUnits(DesignResult, core, units), units, unitLabels: unitLabels(units), fingerprint } : result;
+  // A result with a number that is not finite is never served, as a pass or at all (core already fails it).
+  const where = firstNonFinite(result) ?? (shown === result ? null : firstNonFinite(shown));
+  if (where !== null) throw new ApiError("ERR_RESULT_NOT_FINITE", undefined, [{ path: where, message: "is not a finite number: the job lies outside what this program can compute, and no result is given" }]);
   return { job: prepared.job, core: prepared.core, result, shown };
 }

@@ -9,6 +9,7 @@ export const errors = {
   ERR_BODY_TOO_LARGE: { statusCode: 413, message: "The request body is larger than the limit." },
   ERR_DESIGN_TIME_LIMIT: { statusCode: 422, message: "The design took longer than the time limit and was stopped; nothing was stored or changed." },
   ERR_DESIGN_MEMORY_LIMIT: { statusCode: 422, message: "The design needed more than the memory limit and was stopped; nothing was stored or changed." },
+  ERR_RESULT_NOT_FINITE: { statusCode: 422, message: "The design gave a number that is not finite, so no result is given; the job lies outside what this program can compute." },
   ERR_HOST_NOT_ALLOWED: { statusCode: 403, message: "This service answers only requests addressed to this machine by a loopback name." },
   ERR_CROSS_SITE: { statusCode: 403, message: "This service takes changes only from its own page; the request came from another site." },
   ERR_NOT_FOUND: { statusCode: 404, message: "There is nothing at this address." },

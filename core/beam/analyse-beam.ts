@@ -260,13 +260,15 @@ function loadsByCategory(beam: Beam, selfWeight: RigidityStep[], length: number)
     return set;
   };
   for (const w of selfWeight) if (w.value !== 0) of("dead").lines.push({ x0: w.x0, x1: w.x1, w0: w.value, w1: w.value });
+  // Positions are accepted up to a relative 1e-9 past the end (a unit conversion's rounding): they act at the end.
+  const on = (x: number) => Math.min(x, length);
   for (const l of beam.loads) {
     const set = of(l.category);
-    if (l.type === "point") set.points.push({ x: l.at, P: l.P });
-    else if (l.type === "moment") set.moments.push({ x: l.at, M: l.M });
+    if (l.type === "point") set.points.push({ x: on(l.at), P: l.P });
+    else if (l.type === "moment") set.moments.push({ x: on(l.at), M: l.M });
     else {
       const [w0, w1] = l.type === "uniform" ? [l.w, l.w] : [l.wStart, l.wEnd];
-      set.lines.push({ x0: l.from ?? 0, x1: l.to ?? length, w0, w1 });
+      set.lines.push({ x0: on(l.from ?? 0), x1: on(l.to ?? length), w0, w1 });
     }
   }
   return out;

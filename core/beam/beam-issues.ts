@@ -11,6 +11,7 @@ export function beamIssues(job: JobDocument): JobIssue[] {
   const spanUnit = job.units === "si" ? "m" : "ft";
   const L = beam.spans.reduce((s, l) => s + l, 0);
   const round = (x: number) => Number(x.toPrecision(4));
+  // Positions are compared with the member's length to a relative 1e-9: a sum of converted spans may round below a position at its end.
 
   const longest = Math.max(...beam.spans);
   beam.spans.forEach((l, i) => {
@@ -43,12 +44,12 @@ export function beamIssues(job: JobDocument): JobIssue[] {
     checkCategory(`${path}.category`, load.category);
     const beyond = (x: number) => `${x} ${spanUnit} is beyond the end of the member (length ${round(L)} ${spanUnit})`;
     if (load.type === "point" || load.type === "moment") {
-      if (load.at > L * (1 + 1e-12)) add(`${path}.at`, beyond(load.at));
+      if (load.at > L * (1 + 1e-9)) add(`${path}.at`, beyond(load.at));
     } else {
       const from = load.from ?? 0;
       const to = load.to ?? L;
-      if (from > L * (1 + 1e-12)) add(`${path}.from`, beyond(from));
-      else if (to > L * (1 + 1e-12)) add(`${path}.to`, beyond(to));
+      if (from > L * (1 + 1e-9)) add(`${path}.from`, beyond(from));
+      else if (to > L * (1 + 1e-9)) add(`${path}.to`, beyond(to));
       else if (from >= to) add(`${path}.from`, `the loaded length must start before it ends (from ${from} to ${to} ${spanUnit})`);
     }
   });

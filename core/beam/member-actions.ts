@@ -220,19 +220,22 @@ function extremeOver(
   let bestValue = -Infinity;
   let bestX = a;
   const pieces = actions.pieces;
-  // The first piece that reaches a (pieces are in order along the member); then on until one starts past b.
+  // A piece ending within a relative 1e-9 of the interval counts as meeting it, so a load or support
+  // that a unit conversion moves by a rounding error stays on the same side of a zone boundary.
+  const tol = 1e-9 * actions.length;
+  // The first piece that reaches a − tol (pieces are in order along the member); then on until one starts past b + tol.
   let lo0 = 0;
   let hi0 = pieces.length;
   while (lo0 < hi0) {
     const mid = (lo0 + hi0) >> 1;
-    if (pieces[mid]!.x1 < a) lo0 = mid + 1;
+    if (pieces[mid]!.x1 < a - tol) lo0 = mid + 1;
     else hi0 = mid;
   }
   for (let k = lo0; k < pieces.length; k++) {
     const p = pieces[k]!;
-    if (p.x0 > b) break;
-    const lo = Math.max(a, p.x0);
-    const hi = Math.min(b, p.x1);
+    if (p.x0 > b + tol) break;
+    const lo = Math.max(a - tol, p.x0);
+    const hi = Math.min(b + tol, p.x1);
     if (hi < lo) continue;
     const c = coefficients(p);
     const ends = [lo, hi];

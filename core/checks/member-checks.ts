@@ -60,7 +60,8 @@ export function memberChecks(
     const fv = material.strength.shear;
     if (fv === undefined) notChecked.push(`Shear stress in ${material.name} (${names}): no shear strength given.`);
     else {
-      const factor = Math.max(0, ...profile.filter((pt) => parts.some((p) => p.rects.some((r) => occupies(r, pt)))).map((pt) => pt.factor));
+      const tol = 1e-9 * (section.bounds.y1 - section.bounds.y0);
+      const factor = Math.max(0, ...profile.filter((pt) => parts.some((p) => p.rects.some((r) => occupies(r, pt, tol)))).map((pt) => pt.factor));
       let worst = { demand: 0, combination: "", at: 0 as number | null };
       for (const r of beam.results) {
         const v = maxAbsShear(r.actions, a, b);
@@ -86,10 +87,10 @@ export function memberChecks(
   return { checks, notChecked };
 }
 
-function occupies(r: { y0: number; y1: number }, pt: ProfilePoint): boolean {
-  if (pt.side === "below") return r.y0 < pt.y && pt.y <= r.y1;
-  if (pt.side === "above") return r.y0 <= pt.y && pt.y < r.y1;
-  return r.y0 <= pt.y && pt.y <= r.y1;
+function occupies(r: { y0: number; y1: number }, pt: ProfilePoint, tol: number): boolean {
+  if (pt.side === "below") return r.y0 < pt.y - tol && pt.y <= r.y1 + tol;
+  if (pt.side === "above") return r.y0 <= pt.y + tol && pt.y < r.y1 - tol;
+  return r.y0 <= pt.y + tol && pt.y <= r.y1 + tol;
 }
 
 function stressCheck(id: string, title: string, worst: { demand: number; combination: string; at: number | null }, capacity: number, reference: string): MemberCheck {

@@ -6,7 +6,7 @@ import type { Combination } from "../schema/result.js";
 import { findContacts } from "../section/contacts.js";
 import { buildSection, positioned } from "../section/section-model.js";
 import { allowedSpacings } from "../spacing/allowed-spacings.js";
-import { spacingDefaults } from "../spacing/spacing-defaults.js";
+import { spacingPractice } from "../spacing/spacing-defaults.js";
 import { toCore } from "../units/quantity.js";
 import { governingLimits, type ConnectorContext } from "./connector-kind.js";
 import { inJobUnits } from "../units/format.js";
@@ -55,20 +55,20 @@ export function checkConnectorPlacement(job: JobDocument): JobIssue[] {
     }
     if (issues.length > 0 || kind.mechanism !== "discrete") return;
     const limits = governingLimits(contexts.map((c) => kind.detailing(connector, c)));
-    const defaults = spacingDefaults(job.units);
+    const defaults = spacingPractice(job);
     const rules = job.spacing;
     const min = Math.max(limits.minSpacing, rules.minimum ?? 0);
-    const max = Math.min(limits.maxSpacing ?? toCore(defaults.maxSpacing, "length", job.units), rules.maximum ?? Infinity);
+    const max = Math.min(limits.maxSpacing ?? defaults.maxSpacing, rules.maximum ?? Infinity);
     const len = (mm: number) => inJobUnits(mm, "length", job.units);
     if (min > max * (1 + 1e-9)) {
       add(rules.maximum !== undefined ? "spacing.maximum" : `connectors[${i}]`, `connector "${connector.id}" needs a spacing of at least ${len(min)} (${limits.sources[0] ?? "its minimum"}) but at most ${len(max)} is allowed at joint ${joint.id}`);
-    } else if (!rules.preferred && (max - min) / (rules.module ?? toCore(defaults.module, "length", job.units)) > MAX_SPACINGS) {
+    } else if (!rules.preferred && (max - min) / (rules.module ?? defaults.module) > MAX_SPACINGS) {
       add(
         rules.module !== undefined ? "spacing.module" : `connectors[${i}]`,
-        `a module of ${len(rules.module ?? toCore(defaults.module, "length", job.units))} gives more than ${MAX_SPACINGS} spacings between ${len(min)} and ${len(max)} for connector "${connector.id}"; choose a coarser module or a smaller maximum spacing`,
+        `a module of ${len(rules.module ?? defaults.module)} gives more than ${MAX_SPACINGS} spacings between ${len(min)} and ${len(max)} for connector "${connector.id}"; choose a coarser module or a smaller maximum spacing`,
       );
     } else if (
-      allowedSpacings({ module: rules.preferred ? null : rules.module ?? toCore(defaults.module, "length", job.units), preferred: rules.preferred ?? null, min, max }).length === 0
+      allowedSpacings({ module: rules.preferred ? null : rules.module ?? defaults.module, preferred: rules.preferred ?? null, min, max }).length === 0
     ) {
       add(rules.preferred ? "spacing.preferred" : "spacing.module", `no spacing on this module or list lies between ${len(min)} and ${len(max)} for connector "${connector.id}" at joint ${joint.id}`);
     }

@@ -15,6 +15,7 @@ import {
   en1993FilletStrength,
 } from "./steel/fillet-weld-strength.js";
 import { steelStandards } from "./steel-bolt.js";
+import { exceeds, fallsShort } from "../units/limits.js";
 
 export const FilletWeld = z
   .strictObject({
@@ -117,12 +118,12 @@ function problems(c: FilletWeld, context: ConnectorContext): PlacementProblem[] 
   if (out.length > 0) return out;
   const d = detailing(c, context);
   const field = c.leg !== undefined ? "leg" : "throat";
-  if (d.size > d.maxSize + 1e-9) out.push({ on: "connector", field, message: `a ${len(d.size)} fillet is larger than the thinner part allows here (at most ${len(d.maxSize)}; ${d.sources[1]})` });
-  if (d.size < d.minSize - 1e-9) out.push({ on: "connector", field, message: `a ${len(d.size)} fillet is below the least size ${len(d.minSize)} (${d.sources[0]})` });
+  if (exceeds(d.size, d.maxSize)) out.push({ on: "connector", field, message: `a ${len(d.size)} fillet is larger than the thinner part allows here (at most ${len(d.maxSize)}; ${d.sources[1]})` });
+  if (fallsShort(d.size, d.minSize)) out.push({ on: "connector", field, message: `a ${len(d.size)} fillet is below the least size ${len(d.minSize)} (${d.sources[0]})` });
   if (c.pattern === "intermittent") {
-    if (c.segmentLength! < d.minSegmentLength - 1e-9) out.push({ on: "connector", field: "segmentLength", message: `${len(c.segmentLength!)} is below the shortest segment ${len(d.minSegmentLength)} (${c.standard === "AISC-360-16" ? "AISC 360-16 §J2.2b: 4w and 1-1/2 in" : "EN 1993-1-8 §4.5.1(2): 6a and 30 mm"})` });
-    if (d.maxPitch !== null && c.pitch! > d.maxPitch + 1e-9) out.push({ on: "connector", field: "pitch", message: `${len(c.pitch!)} is above the largest pitch ${len(d.maxPitch)} (${d.sources[3]})` });
-    if (d.maxGap !== null && c.pitch! - c.segmentLength! > d.maxGap + 1e-9) out.push({ on: "connector", field: "pitch", message: `the gap ${len(c.pitch! - c.segmentLength!)} between segments is above the largest ${len(d.maxGap)} (EN 1993-1-8 §4.3.2.2)` });
+    if (fallsShort(c.segmentLength!, d.minSegmentLength)) out.push({ on: "connector", field: "segmentLength", message: `${len(c.segmentLength!)} is below the shortest segment ${len(d.minSegmentLength)} (${c.standard === "AISC-360-16" ? "AISC 360-16 §J2.2b: 4w and 1-1/2 in" : "EN 1993-1-8 §4.5.1(2): 6a and 30 mm"})` });
+    if (d.maxPitch !== null && exceeds(c.pitch!, d.maxPitch)) out.push({ on: "connector", field: "pitch", message: `${len(c.pitch!)} is above the largest pitch ${len(d.maxPitch)} (${d.sources[3]})` });
+    if (d.maxGap !== null && exceeds(c.pitch! - c.segmentLength!, d.maxGap)) out.push({ on: "connector", field: "pitch", message: `the gap ${len(c.pitch! - c.segmentLength!)} between segments is above the largest ${len(d.maxGap)} (EN 1993-1-8 §4.3.2.2)` });
   }
   return out;
 }

@@ -9,6 +9,7 @@ import { ec5YieldMoment } from "./timber/ec5-embedment.js";
 import { inchSize, lagScrewRoot, lagScrewTip } from "./timber/fastener-sizes.js";
 import { ndsLagScrewBendingYield } from "./timber/nds-dowel-bearing.js";
 import { screwYieldDiameter, threadBearing } from "./timber/screw-yield-diameter.js";
+import { exceeds } from "../units/limits.js";
 
 export const LagScrew = z
   .strictObject({
@@ -87,7 +88,7 @@ function specOf(c: LagScrew, context: ConnectorContext | undefined): DowelSpec {
       ? { value: c.bendingYieldStrength, source: "given" }
       : { value: ndsLagScrewBendingYield(d / MM_PER_IN) * MPA_PER_PSI, source: "NDS-2018 lag screw table footnote, by shank diameter [M]" },
     nds: conditions.nds,
-    ec5: { ...conditions.ec5Conditions, yieldMoment: { value: My.value, source: `${My.formula} at d_ef, f_u = ${formatNumber(fu)} MPa` }, nailEmbedment: d <= 6 },
+    ec5: { ...conditions.ec5Conditions, yieldMoment: { value: My.value, source: `${My.formula} at d_ef, f_u = ${formatNumber(fu)} MPa` }, nailEmbedment: !exceeds(d, 6) },
     groupAction: conditions.groupAction,
   };
 }

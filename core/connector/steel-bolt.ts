@@ -7,6 +7,7 @@ import { aiscBolt, holeTypes, type AiscPly } from "./steel/aisc-bolt.js";
 import { aiscBoltGroup, inchBolt, knownAiscGrades, knownInchSizes, knownMetricSizes, metricBoltSize, propertyClasses, standardHoleIn, type InchBolt, type MetricBolt } from "./steel/bolt-sizes.js";
 import { en1993Bolt, EN1993_GAMMA_M2, type En1993Ply } from "./steel/en1993-bolt.js";
 import { inchSize } from "./timber/fastener-sizes.js";
+import { exceeds, fallsShort } from "../units/limits.js";
 
 export const steelStandards = ["AISC-360-16", "EN1993-1-8"] as const;
 
@@ -358,17 +359,17 @@ function lineProblems(c: SteelBolt, context: ConnectorContext): PlacementProblem
     else if (m.material.tensileStrength === undefined) out.push({ on: "material", ...at, field: "tensileStrength", message: `is needed for bearing at the bolt holes of part "${m.part}" (${c.standard === "AISC-360-16" ? "AISC 360-16 §J3.10" : "EN 1993-1-8 Table 3.4"})` });
   }
   const g = geometry(c, r);
-  if (c.minSpacing !== undefined && c.minSpacing < g.minSpacing - 1e-9) out.push({ on: "connector", field: "minSpacing", message: `${len(c.minSpacing)} is below the least spacing ${len(g.minSpacing)} (${c.standard === "AISC-360-16" ? "AISC 360-16 §J3.3, 2-2/3 d" : "EN 1993-1-8 Table 3.3, 2.2d₀"})` });
+  if (c.minSpacing !== undefined && fallsShort(c.minSpacing, g.minSpacing)) out.push({ on: "connector", field: "minSpacing", message: `${len(c.minSpacing)} is below the least spacing ${len(g.minSpacing)} (${c.standard === "AISC-360-16" ? "AISC 360-16 §J3.3, 2-2/3 d" : "EN 1993-1-8 Table 3.3, 2.2d₀"})` });
   const aiscEdge = c.standard === "AISC-360-16" ? `AISC 360-16 Table J3.4${c.holeType !== "standard" ? ` with C₂ of Table J3.5 for ${c.holeType} holes` : ""}` : "EN 1993-1-8 Table 3.3";
-  if (c.endDistance !== undefined && c.endDistance < g.minEnd - 1e-9) out.push({ on: "connector", field: "endDistance", message: `${len(c.endDistance)} is below the least end distance ${len(g.minEnd)} (${aiscEdge})` });
-  if (c.edgeDistance !== undefined && c.edgeDistance < g.minEdge - 1e-9) out.push({ on: "connector", field: "edgeDistance", message: `${len(c.edgeDistance)} is below the least edge distance ${len(g.minEdge)} (${aiscEdge})` });
+  if (c.endDistance !== undefined && fallsShort(c.endDistance, g.minEnd)) out.push({ on: "connector", field: "endDistance", message: `${len(c.endDistance)} is below the least end distance ${len(g.minEnd)} (${aiscEdge})` });
+  if (c.edgeDistance !== undefined && fallsShort(c.edgeDistance, g.minEdge)) out.push({ on: "connector", field: "edgeDistance", message: `${len(c.edgeDistance)} is below the least edge distance ${len(g.minEdge)} (${aiscEdge})` });
   for (const m of crossed(c, context)) {
-    if (g.hole >= m.width - 1e-9) {
+    if (!fallsShort(g.hole, m.width)) {
       out.push({ on: "connector", field: c.size !== undefined ? "size" : "diameter", message: `a ${len(r.d)} bolt in a ${len(g.hole)} hole is larger than part "${m.part}" (${len(m.width)} wide across the contact line)` });
       continue;
     }
     const need = 2 * g.edgeDistance + (context.rows - 1) * g.rowSpacing;
-    if (need > m.width + 1e-9) {
+    if (exceeds(need, m.width)) {
       out.push(context.rows > 1
         ? { on: "fastening", field: "rows", message: `${context.rows} bolts per row need ${len(need)} across part "${m.part}" (edge distances and row spacing), which is only ${len(m.width)} wide` }
         : { on: "connector", field: c.edgeDistance !== undefined ? "edgeDistance" : c.size !== undefined ? "size" : "diameter", message: `the bolt needs ${len(need)} across part "${m.part}" for its edge distances, which is only ${len(m.width)} wide` });

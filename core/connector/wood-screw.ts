@@ -9,6 +9,7 @@ import { ec5YieldMoment } from "./timber/ec5-embedment.js";
 import { knownScrewGauges, screwGauge } from "./timber/fastener-sizes.js";
 import { NDS_NAIL_FYB_RANGE_IN, ndsNailBendingYield } from "./timber/nds-dowel-bearing.js";
 import { screwYieldDiameter, threadBearing } from "./timber/screw-yield-diameter.js";
+import { exceeds } from "../units/limits.js";
 
 export const WoodScrew = z
   .strictObject({
@@ -92,7 +93,7 @@ function specOf(c: WoodScrew, context: ConnectorContext | undefined): DowelSpec 
       ? { value: c.bendingYieldStrength, source: "given" }
       : tabulatedBendingYield(yieldDiameter),
     nds: conditions.nds,
-    ec5: { ...conditions.ec5Conditions, yieldMoment: { value: My.value, source: `${My.formula} at d_ef, f_u = ${formatNumber(fu)} MPa` }, nailEmbedment: d <= 6 },
+    ec5: { ...conditions.ec5Conditions, yieldMoment: { value: My.value, source: `${My.formula} at d_ef, f_u = ${formatNumber(fu)} MPa` }, nailEmbedment: !exceeds(d, 6) },
     groupAction: conditions.groupAction,
   };
 }

@@ -10,7 +10,7 @@ import { rowFit } from "./row-fit.js";
 import { allowedSpacings } from "../spacing/allowed-spacings.js";
 import { checkSchedule } from "../spacing/check-schedule.js";
 import { demandCurve, designSchedule, type ZoneReason } from "../spacing/design-schedule.js";
-import { spacingDefaults } from "../spacing/spacing-defaults.js";
+import { spacingPractice } from "../spacing/spacing-defaults.js";
 import { inJobUnits } from "../units/format.js";
 import { toCore } from "../units/quantity.js";
 
@@ -64,15 +64,14 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
   const resistances: ConnectorResistance[] = contexts.map((lines) => leastOf(lines.map((c) => kind.resistance(connector, c))));
   const warnings = [...new Set(resistances.flatMap((r) => r.warnings ?? []))];
   const limits = governingLimits(contexts[0]!.map((c) => kind.detailing(connector, c)));
-  const defaults = spacingDefaults(job.units);
-  const coreDefault = (v: number) => toCore(v, "length", job.units);
+  const defaults = spacingPractice(job);
   const minSpacing = Math.max(limits.minSpacing, job.spacing.minimum ?? 0);
-  const maxSpacing = Math.max(minSpacing, Math.min(limits.maxSpacing ?? coreDefault(defaults.maxSpacing), job.spacing.maximum ?? Infinity, input.maxSpacingCap ?? Infinity));
-  const module = job.spacing.preferred ? null : job.spacing.module ?? coreDefault(defaults.module);
-  const minZoneLength = job.spacing.minZoneLength ?? coreDefault(defaults.minZoneLength);
+  const maxSpacing = Math.max(minSpacing, Math.min(limits.maxSpacing ?? defaults.maxSpacing, job.spacing.maximum ?? Infinity, input.maxSpacingCap ?? Infinity));
+  const module = job.spacing.preferred ? null : job.spacing.module ?? defaults.module;
+  const minZoneLength = job.spacing.minZoneLength ?? defaults.minZoneLength;
   const sources = [...limits.sources];
   if (input.maxSpacingCap !== undefined && input.maxSpacingCap < (limits.maxSpacing ?? Infinity)) sources.push(`maximum spacing ${inJobUnits(input.maxSpacingCap, "length", job.units)}: at most 4 × the smallest, for the effective spacing of EN 1995-1-1 Annex B`);
-  if (limits.maxSpacing === null && job.spacing.maximum === undefined) sources.push(`maximum spacing ${inJobUnits(coreDefault(defaults.maxSpacing), "length", job.units)} (common practice; the connector sets none)`);
+  if (limits.maxSpacing === null && job.spacing.maximum === undefined) sources.push(`maximum spacing ${inJobUnits(defaults.maxSpacing, "length", job.units)} (common practice; the connector sets none)`);
   const actions = demandActionsOf(input);
   const problem = {
     length: beam.length,
@@ -162,7 +161,7 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
     minZoneLength,
     maxZones: job.spacing.maxZonesPerSpan * beam.spans.length,
     symmetric: job.spacing.symmetric,
-    system: job.units,
+    system: defaults.system,
   };
   const design = designedAlike(beam, actions, problem, settings, () => designSchedule({ ...problem, ...settings }));
   const worst = design.rowChecks.reduce((w, r) => (r.utilisation > w.utilisation ? r : w));

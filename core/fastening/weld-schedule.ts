@@ -8,7 +8,7 @@ import { staggeredSide } from "../spacing/place-rows.js";
 import type { RowUtilisation } from "../spacing/verify-rows.js";
 import type { DemandCurve } from "../spacing/demand.js";
 import { demandCurve, designSchedule } from "../spacing/design-schedule.js";
-import { spacingDefaults } from "../spacing/spacing-defaults.js";
+import { spacingPractice } from "../spacing/spacing-defaults.js";
 import { inJobUnits } from "../units/format.js";
 import { toCore } from "../units/quantity.js";
 import { demandActionsOf, lineFlow, type JointInput } from "./discrete-schedule.js";
@@ -39,14 +39,14 @@ export function weldSchedule(input: JointInput, kind: WeldKind<Connector>): { we
   const continuousRatio = Math.max(
     ...actions.map((a, i) => (maxAbsShear(a, 0, beam.length).value * flowFactor) / lineCount / (fillets * strengths[i]!.value)),
   );
-  const sizeStep = job.units === "us" ? 25.4 / 16 : 1;
+  const defaults = spacingPractice(job);
+  const sizeStep = defaults.system === "us" ? 25.4 / 16 : 1;
   const sizeNeeded = continuousRatio > 1 + 1e-9 ? Math.ceil((limits.size * continuousRatio) / sizeStep - 1e-9) * sizeStep : null;
 
   const segment = layout.pattern === "intermittent" ? layout.segmentLength! : Math.max(limits.minSegmentLength, sizeStep);
-  const defaults = spacingDefaults(job.units);
-  const module = job.spacing.module ?? toCore(defaults.module, "length", job.units);
+  const module = job.spacing.module ?? defaults.module;
   const pitchLimits = [limits.maxPitch, limits.maxGap !== null ? limits.maxGap + segment : null, layout.pattern === "intermittent" ? layout.pitch : null].filter((v): v is number => v !== null);
-  const maxPitch = Math.max(segment, Math.min(...pitchLimits, toCore(defaults.maxSpacing, "length", job.units)));
+  const maxPitch = Math.max(segment, Math.min(...pitchLimits, defaults.maxSpacing));
   const pitches = [...new Set([segment, ...allowedSpacings({ module, preferred: null, min: segment, max: maxPitch })])].sort((a, b) => a - b);
   const problem = {
     length: beam.length,
@@ -125,10 +125,10 @@ export function weldSchedule(input: JointInput, kind: WeldKind<Connector>): { we
       module: null,
       preferred: pitches,
       endDistance: segment / 2,
-      minZoneLength: job.spacing.minZoneLength ?? toCore(defaults.minZoneLength, "length", job.units),
+      minZoneLength: job.spacing.minZoneLength ?? defaults.minZoneLength,
       maxZones: job.spacing.maxZonesPerSpan * beam.spans.length,
       symmetric: job.spacing.symmetric,
-      system: job.units,
+      system: defaults.system,
     });
     const checked = withOtherSide(design, design.demand);
     ({ utilisation, at, combination } = checked.worst);

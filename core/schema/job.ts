@@ -126,6 +126,13 @@ export const SpacingRules = z.strictObject({
   maxZonesPerSpan: z.number().int("must be a whole number").min(1).max(9).default(5),
   /** Mirror the zones about midspan when the demand is symmetric. */
   symmetric: z.boolean().default(true),
+  /**
+   * Whose everyday layout the schedule follows where the job leaves it open: the module (5 mm or 1/4 in),
+   * the shortest zone (300 mm or 12 in), the largest spacing when the connector sets none (600 mm or
+   * 24 in) and round zone boundaries (in mm or in). The job's units when absent; a conversion keeps the
+   * practice of the system it came from, so the converted job designs the same schedules.
+   */
+  practice: z.enum(unitSystems).optional(),
 });
 export type SpacingRules = z.infer<typeof SpacingRules>;
 

@@ -91,10 +91,11 @@ export function firstMomentAbove(section: SectionModel, y: number): number {
 }
 
 /** Real width of material cut by a horizontal line at y, mm. At a level shared by two parts, the narrower contact governs the cut. */
-export function widthAt(section: SectionModel, y: number, side: "below" | "above" | "at" = "at"): number {
+export function widthAt(section: SectionModel, y: number, side: "below" | "above" | "at" = "at", tol = 0): number {
   let w = 0;
   for (const p of section.parts) for (const r of p.rects) {
-    const inside = side === "below" ? r.y0 < y && y <= r.y1 : side === "above" ? r.y0 <= y && y < r.y1 : r.y0 < y && y < r.y1;
+    // A rectangle edge within `tol` of y counts as at y: below takes the parts ending there, above those starting there.
+    const inside = side === "below" ? r.y0 < y - tol && y <= r.y1 + tol : side === "above" ? r.y0 <= y + tol && y < r.y1 - tol : r.y0 < y && y < r.y1;
     if (inside) w += r.x1 - r.x0;
   }
   return w;

@@ -19,14 +19,19 @@ export interface ProfilePoint {
 export function stressProfile(section: SectionModel, samples = 40): ProfilePoint[] {
   const { y0, y1 } = section.bounds;
   const edges = section.parts.flatMap((p) => p.rects.flatMap((r) => [r.y0, r.y1]));
+  const tol = 1e-9 * (y1 - y0);
+  // A level within the tolerance of a part's edge is that edge, so the width on each side is the same
+  // whether a sample falls a rounding error above or below it (a job and its unit-converted twin alike).
+  const atEdge = (y: number) => edges.find((e) => Math.abs(e - y) <= tol) ?? y;
   const levels = [...edges, section.centroidY, ...Array.from({ length: samples + 1 }, (_, i) => y0 + ((y1 - y0) * i) / samples)]
+    .map(atEdge)
     .sort((a, b) => a - b)
-    .filter((y, i, all) => i === 0 || y - all[i - 1]! > 1e-9 * (y1 - y0));
+    .filter((y, i, all) => i === 0 || y - all[i - 1]! > tol);
   const edgeSet = edges.filter((y) => y > y0 && y < y1);
   const out: ProfilePoint[] = [];
   const push = (y: number, side: ProfilePoint["side"]) => {
     const q = Math.abs(firstMomentAbove(section, y));
-    const width = widthAt(section, y, side);
+    const width = widthAt(section, y, side, tol);
     out.push({ y, firstMoment: q, width, factor: width > 0 ? q / (section.secondMoment * width) : 0, side });
   };
   for (const y of levels) {
@@ -34,7 +39,7 @@ export function stressProfile(section: SectionModel, samples = 40): ProfilePoint
       push(y, y <= y0 ? "above" : "below");
       continue;
     }
-    const isEdge = edgeSet.some((e) => Math.abs(e - y) <= 1e-9 * (y1 - y0));
+    const isEdge = edgeSet.some((e) => Math.abs(e - y) <= tol);
     if (isEdge) {
       push(y, "below");
       push(y, "above");

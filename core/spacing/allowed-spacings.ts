@@ -29,7 +29,7 @@ export function indexAtMost(spacings: number[], s: number): number {
   let found = -1;
   while (lo <= hi) {
     const mid = (lo + hi) >> 1;
-    if (spacings[mid]! <= s * (1 + 1e-12)) {
+    if (spacings[mid]! <= s * (1 + 1e-9)) {
       found = mid;
       lo = mid + 1;
     } else hi = mid - 1;

@@ -1,4 +1,4 @@
-import type { UnitSystem } from "../units/quantity.js";
+import { toCore, type UnitSystem } from "../units/quantity.js";
 
 /**
  * Spacing settings used when the job leaves them out, in the job's own units (mm or in).
@@ -7,4 +7,12 @@ import type { UnitSystem } from "../units/quantity.js";
  */
 export function spacingDefaults(system: UnitSystem): { module: number; minZoneLength: number; maxSpacing: number } {
   return system === "si" ? { module: 5, minZoneLength: 300, maxSpacing: 600 } : { module: 0.25, minZoneLength: 12, maxSpacing: 24 };
+}
+
+/** The spacing practice a job follows (`spacing.practice`, else its units) and its defaults in core units (mm). */
+export function spacingPractice(job: { units: UnitSystem; spacing: { practice?: UnitSystem | undefined } }): { system: UnitSystem; module: number; minZoneLength: number; maxSpacing: number } {
+  const system = job.spacing.practice ?? job.units;
+  const d = spacingDefaults(system);
+  const mm = (v: number) => toCore(v, "length", system);
+  return { system, module: mm(d.module), minZoneLength: mm(d.minZoneLength), maxSpacing: mm(d.maxSpacing) };
 }

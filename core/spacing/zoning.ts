@@ -126,15 +126,18 @@ export function evaluateZone(p: ZoningProblem, a: number, b: number, first: bool
   const e = p.endDistance;
   const fullLength = p.mirrored && last ? L - 2 * a : b - a;
   const wholeMember = first && last;
-  if (!wholeMember && fullLength < p.minZoneLength - 1e-9) return null;
+  // Lengths compare to a tolerance relative to the member (as the rows are placed): a member length, end
+  // distance or shortest zone converted from the other unit system sits a rounding error off a grid length.
+  const tol = 1e-9 * Math.max(L, p.minZoneLength);
+  if (!wholeMember && fullLength < p.minZoneLength - tol) return null;
   const start = first ? e : a;
-  if (!last && b <= start) return null;
+  if (!last && b <= start + tol) return null;
   const spacing = zoneSpacing(p, a, b, first, last);
   const s = spacing ?? p.spacings[0]!;
   let rows: number;
-  if (p.mirrored && last) rows = (Math.ceil((L - 2 * start) / s - 1e-9) + 1) / 2;
-  else if (last) rows = Math.ceil((L - e - start) / s - 1e-9) + 1;
-  else rows = Math.ceil((b - start) / s - 1e-9);
+  if (p.mirrored && last) rows = (Math.ceil((L - 2 * start - tol) / s - 1e-9) + 1) / 2;
+  else if (last) rows = Math.ceil((L - e - start - tol) / s - 1e-9) + 1;
+  else rows = Math.ceil((b - start - tol) / s - 1e-9);
   const cost = spacing === undefined ? rows + INFEASIBLE_PENALTY * (b - a) : rows;
   return { cost, rows, spacing: s, feasible: spacing !== undefined };
 }
@@ -182,10 +185,11 @@ function zoneCarries(p: ZoningProblem, a: number, b: number, first: boolean, las
   const e = p.endDistance;
   const reachLeft = first ? 0 : a - s / 2;
   const reachRight = last ? (p.mirrored ? b : L) : b + s / 2;
-  if (s * p.demand(reachLeft, reachRight) > 1 + 1e-12) return false;
+  // The rows' verification tolerance (utilisation ≤ 1 + 1e-9): a zone exactly at capacity is designed alike in either unit system.
+  if (s * p.demand(reachLeft, reachRight) > 1 + 1e-9) return false;
   if (!endRow) return true;
-  if (first && e > s / 2 && (e + s / 2) * p.demand(0, e + s / 2) > 1 + 1e-12) return false;
-  if (last && !p.mirrored && e > s / 2 && (e + s / 2) * p.demand(L - e - s / 2, L) > 1 + 1e-12) return false;
+  if (first && e > s / 2 && (e + s / 2) * p.demand(0, e + s / 2) > 1 + 1e-9) return false;
+  if (last && !p.mirrored && e > s / 2 && (e + s / 2) * p.demand(L - e - s / 2, L) > 1 + 1e-9) return false;
   return true;
 }
 
@@ -200,7 +204,8 @@ export function boundaryGrid(end: number, step: number): number[] {
 /** A round step for zone boundaries giving at most `cells` cells over `end`, mm. */
 export function roundStep(end: number, system: "si" | "us", cells = 48): number {
   const steps = system === "si" ? [10, 20, 25, 50, 100, 200, 250, 500, 1000, 2000] : [0.5, 1, 2, 3, 6, 12, 24, 48, 96].map((s) => s * 25.4);
-  return steps.find((s) => end / s <= cells) ?? steps[steps.length - 1]!;
+  // Relative tolerance: the same member converted to the other unit system keeps its grid.
+  return steps.find((s) => end / s <= cells * (1 + 1e-9)) ?? steps[steps.length - 1]!;
 }
 
 /** Range maximum over grid cells by a sparse table; queries widen to whole cells (conservative). */

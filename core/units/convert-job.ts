@@ -1,16 +1,21 @@
 import { JobDocument } from "../schema/job.js";
 import { rescale } from "./convert.js";
-import { fromCore, toCore, type UnitSystem } from "./quantity.js";
+import { convertNumber } from "./convert-number.js";
+import type { UnitSystem } from "./quantity.js";
+
+export { convertNumber, withoutNoise } from "./convert-number.js";
 
 /**
  * A parsed job rewritten in the other unit system: every number that declares a quantity kind is
- * converted and rounded to 9 significant figures: no visible noise, and parts that touch still touch.
+ * converted to the shortest decimal that converts back to it (no visible noise, and a round trip
+ * returns the numbers entered). The spacing practice of the job (its module, shortest zone and
+ * round zone boundaries when the job leaves them out) stays that of the system it came from, so the
+ * converted job designs the same schedules; taking up the other system's practice is the user's choice.
  */
 export function convertJob(job: JobDocument, to: UnitSystem): JobDocument {
   if (job.units === to) return job;
-  const converted = rescale(JobDocument, job, (v, q) => {
-    const out = fromCore(toCore(v, q, job.units), q, to);
-    return out === 0 || !Number.isFinite(out) ? out : Number(out.toPrecision(9));
-  });
-  return { ...converted, units: to };
+  const converted = rescale(JobDocument, job, (v, q) => convertNumber(v, q, job.units, to));
+  const practice = job.spacing.practice ?? job.units;
+  const { practice: _dropped, ...spacing } = converted.spacing;
+  return { ...converted, units: to, spacing: practice === to ? spacing : { ...spacing, practice } };
 }

@@ -1,6 +1,6 @@
 import type { FastifyInstance } from "fastify";
 import { z } from "zod";
-import { convertJob, grades, JobDocument, Material, materialFromGrade, prepareJob, PROGRAM, quantityOf, toDisplayUnits } from "../../core/index.js";
+import { convertJob, gradeMaterial, grades, JobDocument, prepareJob, PROGRAM, quantityOf } from "../../core/index.js";
 import type { TaskRunner } from "../design-threads.js";
 import { ApiError } from "../errors.js";
 import type { Example } from "../examples.js";
@@ -29,7 +29,7 @@ export async function apiRoutes(app: FastifyInstance, options: { examples: Examp
     const basis = request.query.basis ?? "allowable";
     if (units !== "si" && units !== "us") throw new ApiError("ERR_INPUT_INVALID", undefined, [{ path: "units", message: `must be "si" or "us", not ${JSON.stringify(units)}` }]);
     if (basis !== "allowable" && basis !== "factored") throw new ApiError("ERR_INPUT_INVALID", undefined, [{ path: "basis", message: `must be "allowable" or "factored", not ${JSON.stringify(basis)}` }]);
-    return grades.map((g) => ({ grade: g.id, name: g.name, family: g.family, material: toDisplayUnits(Material, materialFromGrade(g, basis), units) }));
+    return grades.map((g) => ({ grade: g.id, name: g.name, family: g.family, material: gradeMaterial(g, basis, units) }));
   });
 
   app.post("/api/designs", async (request, reply) => {

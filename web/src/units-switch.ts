@@ -1,4 +1,5 @@
-import { quantityUnits, type UnitSystem } from "../../core/units/quantity.js";
+import { convertNumber } from "../../core/units/convert-number.js";
+import type { UnitSystem } from "../../core/units/quantity.js";
 import { requestConversion } from "./api.js";
 import type { DesignSession } from "./design-session.js";
 import { el } from "./dom.js";
@@ -22,10 +23,13 @@ export function convertDraft(job: JobDraft, schema: JobSchema, to: UnitSystem): 
     for (const key of path.slice(0, -1)) node = (node as Record<string | number, unknown>)[key];
     const last = path[path.length - 1]!;
     const holder = node as Record<string | number, unknown>;
-    const value = holder[last] as number;
-    const converted = (value * quantityUnits[quantity][from].factor) / quantityUnits[quantity][to].factor;
-    holder[last] = converted === 0 || !Number.isFinite(converted) ? converted : Number(converted.toPrecision(9));
+    holder[last] = convertNumber(holder[last] as number, quantity, from, to);
   }
+  // As the service does: the spacing practice stays that of the system the job came from.
+  const spacing = (out.spacing ?? {}) as Record<string, unknown>;
+  const practice = spacing.practice === "si" || spacing.practice === "us" ? spacing.practice : from;
+  if (practice === to) delete spacing.practice;
+  else out.spacing = { ...spacing, practice };
   out.units = to;
   return out;
 }
@@ -50,7 +54,7 @@ export function unitsSwitch(session: DesignSession, schema: JobSchema, say: Say)
     const answer = await requestConversion(job, to);
     if (answer.kind === "converted") {
       session.replaceJob(answer.job, { keepResults: true });
-      say(`The whole job is now in ${names[to]} units: every value was converted (to 9 significant figures) and the results are computed again.`);
+      say(`The whole job is now in ${names[to]} units: every value was converted (switching back gives the values entered; the spacing module and zone practice stay as they were) and the results are computed again.`);
       return;
     }
     if (answer.kind === "unreachable") return say(`${answer.message} The units were not changed.`, "problem");

@@ -1,3 +1,5 @@
+import { fallsShort } from "../../units/limits.js";
+
 /**
  * Structural bolt data. Metric: tensile stress areas A_s (ISO 898-1), property classes (f_yb, f_ub
  * of EN 1993-1-8 Table 3.1) and normal round hole clearances (EN 1090-2). Inch: sizes with the AISC
@@ -80,7 +82,7 @@ export function inchBolt(diameterIn: number): InchBolt | null {
 export const knownInchSizes = () => inch.map((r) => r[0]);
 
 /** Standard hole diameter, in (Table J3.3): d + 1/16 below 1 in, d + 1/8 from 1 in. */
-export const standardHoleIn = (diameterIn: number) => diameterIn + (diameterIn < 1 - 1e-9 ? 1 / 16 : 1 / 8);
+export const standardHoleIn = (diameterIn: number) => diameterIn + (fallsShort(diameterIn, 1) ? 1 / 16 : 1 / 8);
 
 export type BoltGroup = "A" | "B" | "A307";
 

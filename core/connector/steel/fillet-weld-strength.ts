@@ -1,3 +1,5 @@
+import { exceeds, fallsShort } from "../../units/limits.js";
+
 /**
  * Strength of a fillet weld per unit length loaded along its axis: AISC 360-16 §J2.4 (Table J2.5) in
  * kips and inches, and EN 1993-1-8:2005 §4.5.3.3 (the simplified method) in N and mm.
@@ -40,23 +42,23 @@ export function aiscFusionFaceStrength(p: { legIn: number; tensileStrengthKsi: n
 
 /** Least fillet size by the thinner part joined, in (AISC 360-16 Table J2.4). */
 export function aiscMinimumFilletIn(thinnerIn: number): number {
-  if (thinnerIn <= 0.25 + 1e-9) return 1 / 8;
-  if (thinnerIn <= 0.5 + 1e-9) return 3 / 16;
-  if (thinnerIn <= 0.75 + 1e-9) return 1 / 4;
+  if (!exceeds(thinnerIn, 0.25)) return 1 / 8;
+  if (!exceeds(thinnerIn, 0.5)) return 3 / 16;
+  if (!exceeds(thinnerIn, 0.75)) return 1 / 4;
   return 5 / 16;
 }
 
 /** Largest fillet along the edge of a part of thickness t, in (AISC 360-16 §J2.2b): t below 1/4 in, t − 1/16 in otherwise. */
-export const aiscMaximumEdgeFilletIn = (tIn: number) => (tIn < 0.25 - 1e-9 ? tIn : tIn - 1 / 16);
+export const aiscMaximumEdgeFilletIn = (tIn: number) => (fallsShort(tIn, 0.25) ? tIn : tIn - 1 / 16);
 
 /** Shortest intermittent fillet segment, in (AISC 360-16 §J2.2b): 4w and 1-1/2 in. */
 export const aiscMinimumSegmentIn = (legIn: number) => Math.max(4 * legIn, 1.5);
 
 /** Correlation factor β_w of EN 1993-1-8 Table 4.1 by the weaker part's yield strength (S235 0.8, S275 0.85, S355 0.9, S420 and S460 1.0). */
 export function correlationFactor(yieldStrength: number): { betaW: number; grade: string } {
-  if (yieldStrength <= 235 + 1e-9) return { betaW: 0.8, grade: "S235" };
-  if (yieldStrength <= 275 + 1e-9) return { betaW: 0.85, grade: "S275" };
-  if (yieldStrength <= 355 + 1e-9) return { betaW: 0.9, grade: "S355" };
+  if (!exceeds(yieldStrength, 235)) return { betaW: 0.8, grade: "S235" };
+  if (!exceeds(yieldStrength, 275)) return { betaW: 0.85, grade: "S275" };
+  if (!exceeds(yieldStrength, 355)) return { betaW: 0.9, grade: "S355" };
   return { betaW: 1.0, grade: "S420/S460" };
 }
 

@@ -22,6 +22,7 @@ import {
 import { ndsSteelBearing, ndsWoodBearing, type NdsBearing } from "./nds-dowel-bearing.js";
 import { foldAngle, ndsYieldLimit } from "./nds-yield-limit.js";
 import { ec5Spacing, ndsSpacing, type DowelFamily, type MemberSpacing } from "./timber-spacing.js";
+import { exceeds, fallsShort } from "../../units/limits.js";
 
 export const timberStandards = ["NDS-2018", "EN1995-1-1"] as const;
 export type TimberStandard = (typeof timberStandards)[number];
@@ -229,7 +230,7 @@ function lineProblems(spec: DowelSpec, context: ConnectorContext): PlacementProb
       out.push({ on: "material", ...at, field: "characteristicDensity", message: `is needed for the embedment strength of part "${m.part}" under EN 1995-1-1 (§8.3.1, §8.5.1: from ρ_k)` });
     }
   }
-  if (spec.standard === "NDS-2018" && spec.yieldDiameter > MM_PER_IN + 1e-9) {
+  if (spec.standard === "NDS-2018" && exceeds(spec.yieldDiameter, MM_PER_IN)) {
     out.push({ on: "connector", field: "diameter", message: `${len(spec.diameter)} is beyond the NDS-2018 yield limit equations, which cover diameters up to 1 in (§12.3.3)` });
   }
   if (g.penetration !== null) {
@@ -238,7 +239,7 @@ function lineProblems(spec: DowelSpec, context: ConnectorContext): PlacementProb
       : `part "${g.penetratedMember.part}"`;
     if (g.penetration <= 0) {
       out.push({ on: "connector", field: "length", message: `a ${len(spec.length!)} ${spec.noun} does not reach ${where}: it must be longer than ${len(spec.length! - g.penetration)}` });
-    } else if (spec.minPenetration && g.penetration < spec.minPenetration.multiple * spec.diameter - 1e-9) {
+    } else if (spec.minPenetration && fallsShort(g.penetration, spec.minPenetration.multiple * spec.diameter)) {
       out.push({
         on: "connector",
         field: "length",
@@ -247,19 +248,19 @@ function lineProblems(spec: DowelSpec, context: ConnectorContext): PlacementProb
     }
   }
   for (const m of members) {
-    if (spec.diameter >= m.width - 1e-9) out.push({ on: "connector", field: "diameter", message: `a ${len(spec.diameter)} ${spec.noun} is as large as part "${m.part}" is wide (${len(m.width)}) across the contact line` });
+    if (!fallsShort(spec.diameter, m.width)) out.push({ on: "connector", field: "diameter", message: `a ${len(spec.diameter)} ${spec.noun} is as large as part "${m.part}" is wide (${len(m.width)}) across the contact line` });
   }
   if (spec.standard === "EN1995-1-1" && spec.family === "nail" && !spec.predrilled) {
-    if (spec.diameter > 6 + 1e-9) out.push({ on: "connector", field: "predrilled", message: `nails over 6 mm in diameter must be predrilled (EN 1995-1-1 §8.3.1.2(2), as amended by A1)` });
+    if (exceeds(spec.diameter, 6)) out.push({ on: "connector", field: "predrilled", message: `nails over 6 mm in diameter must be predrilled (EN 1995-1-1 §8.3.1.2(2), as amended by A1)` });
     for (const m of members) {
       if (isSteel(m.material) || isPanel(m.material)) continue;
       const rho = m.material.characteristicDensity;
-      if (rho !== undefined && rho > 500) out.push({ on: "connector", field: "predrilled", message: `part "${m.part}" has ρ_k = ${rho} kg/m³ > 500: nails must be predrilled (EN 1995-1-1 §8.3.1.2(2))` });
+      if (rho !== undefined && exceeds(rho, 500)) out.push({ on: "connector", field: "predrilled", message: `part "${m.part}" has ρ_k = ${rho} kg/m³ > 500: nails must be predrilled (EN 1995-1-1 §8.3.1.2(2))` });
       if (rho !== undefined) {
         const d = spec.diameter;
         const tMin = Math.max(7 * d, ((13 * d - 30) * rho) / 400);
         // Eq. (8.18) limits the timber member's thickness (splitting), not the fastener's bearing length in it.
-        if (m.thickness < tMin - 1e-9) out.push({ on: "connector", field: "predrilled", message: `part "${m.part}" is ${len(m.thickness)} thick; without predrilling EN 1995-1-1 eq. (8.18) needs at least ${len(tMin)}: predrill or use a thicker part` });
+        if (fallsShort(m.thickness, tMin)) out.push({ on: "connector", field: "predrilled", message: `part "${m.part}" is ${len(m.thickness)} thick; without predrilling EN 1995-1-1 eq. (8.18) needs at least ${len(tMin)}: predrill or use a thicker part` });
       }
     }
   }
@@ -352,7 +353,7 @@ function ndsResistance(spec: DowelSpec, context: ConnectorContext, g: DowelGeome
   const CM = ndsWetServiceFactor(spec.nds.moisture, nominalD, { singleRowParallelToGrain });
   factors.push({ symbol: "C_M", value: CM.value, description: `wet service factor (${CM.why})`, reference: "NDS-2018 Table 11.3.3 and footnotes [M]" });
   factors.push({ symbol: "C_t", value: ndsTemperatureFactor(spec.nds.temperature, spec.nds.moisture), description: `temperature factor (${spec.nds.temperature})`, reference: "NDS-2018 Table 11.3.4" });
-  if (spec.groupAction && nominalD >= 0.25) {
+  if (spec.groupAction && !fallsShort(nominalD, 0.25)) {
     const area = (m: JoinedMember) => (m.thickness * m.width) / MM_PER_IN ** 2;
     const E = (m: JoinedMember) => m.material.E / MPA_PER_PSI;
     // Double shear: the outer members' E·A add up (NDS-2018 §11.3.6 [M]); a hand-built context without the
@@ -401,7 +402,7 @@ function ndsResistance(spec: DowelSpec, context: ConnectorContext, g: DowelGeome
 function woodOf(m: Material, spec: DowelSpec): Ec5Wood {
   if (isPanel(m)) return spec.ec5.panel === "plywood" ? "plywood" : "osb";
   if (m.family === "engineered-wood") return "lvl";
-  return (m.characteristicDensity ?? 0) > 500 ? "hardwood" : "softwood";
+  return exceeds(m.characteristicDensity ?? 0, 500) ? "hardwood" : "softwood";
 }
 
 function productOf(m: Material, spec: DowelSpec): Ec5Product {
@@ -412,7 +413,7 @@ function ec5Embedment(spec: DowelSpec, m: JoinedMember, angle: number): Embedmen
   const wood = woodOf(m.material, spec);
   const rho = m.material.characteristicDensity ?? 0;
   const d = spec.yieldDiameter;
-  const nailRules = spec.ec5.nailEmbedment && d <= 8;
+  const nailRules = spec.ec5.nailEmbedment && !exceeds(d, 8);
   return nailRules
     ? ec5NailEmbedment({ wood, characteristicDensity: rho, diameter: d, predrilled: spec.predrilled, thickness: m.thickness })
     : ec5BoltEmbedment({ wood, characteristicDensity: rho, diameter: d, angleDeg: foldAngle(angle), thickness: m.thickness });
@@ -518,7 +519,7 @@ function ec5Slip(spec: DowelSpec, plane: readonly JoinedMember[]): (SlipModuli &
 /** n_ef/n for a row along the grain: bolts and dowels eq. (8.34); nails eq. (8.17) with k_ef of Table 8.1. */
 function ec5EffectiveNumber(spec: DowelSpec, n: number, a1: number): { ratio: number; formula: string; reference: string } {
   const d = spec.diameter;
-  if (spec.family === "bolt" || spec.family === "dowel" || spec.family === "lag-screw" || (spec.family === "screw" && d > 6)) {
+  if (spec.family === "bolt" || spec.family === "dowel" || spec.family === "lag-screw" || (spec.family === "screw" && exceeds(d, 6))) {
     const nef = Math.min(n, n ** 0.9 * (a1 / (13 * d)) ** 0.25);
     return { ratio: nef / n, formula: "n_ef = min(n, n^0.9 (a₁/13d)^0.25)", reference: "EN 1995-1-1 eq. (8.34)" };
   }

@@ -1,4 +1,5 @@
 import type { DurationClass } from "../connector-kind.js";
+import { fallsShort } from "../../units/limits.js";
 
 /**
  * NDS-2018 adjustment factors for connections (Table 11.3.1): load duration C_D (ASD only, §2.3.2
@@ -111,7 +112,7 @@ export function ndsWetServiceFactor(moisture: NdsMoisture, diameterIn: number, l
   if (moisture === "dry") return { value: 1.0, why: "dry" };
   if (moisture === "wet") return { value: 0.7, why: "wet in service" };
   if (layout.singleRowParallelToGrain) return { value: 1.0, why: "fabricated wet, used dry; a single row of fasteners parallel to grain" };
-  return diameterIn < 0.25 ? { value: 0.7, why: "fabricated wet, used dry; D < 1/4 in" } : { value: 0.4, why: "fabricated wet, used dry; more than one row, D ≥ 1/4 in" };
+  return fallsShort(diameterIn, 0.25) ? { value: 0.7, why: "fabricated wet, used dry; D < 1/4 in" } : { value: 0.4, why: "fabricated wet, used dry; more than one row, D ≥ 1/4 in" };
 }
 
 export const ndsTemperatureRanges = ["up-to-100F", "100-125F", "125-150F"] as const;

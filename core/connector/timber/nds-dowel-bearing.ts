@@ -1,4 +1,5 @@
 import { foldAngle } from "./nds-yield-limit.js";
+import { fallsShort } from "../../units/limits.js";
 
 /** Dowel bearing strength of a wood member, psi (NDS-2018 §12.3.3, Table 12.3.3 footnotes). */
 export interface NdsBearing {
@@ -18,7 +19,7 @@ export interface NdsBearing {
  */
 export function ndsWoodBearing(specificGravity: number, diameterIn: number, angleDeg: number, nominalDiameterIn = diameterIn): NdsBearing {
   const G = specificGravity;
-  if (diameterIn < 0.25) {
+  if (fallsShort(diameterIn, 0.25)) {
     return { value: 16_600 * G ** 1.84, parallel: null, perpendicular: null, formula: "F_e = 16 600 G^1.84 (D < 1/4 in)" };
   }
   const Dperp = Math.max(diameterIn, nominalDiameterIn);
@@ -39,7 +40,7 @@ export function hankinson(parallel: number, perpendicular: number, thetaRad: num
 
 /** F_e of a steel side or main plate: 1.5 F_u hot-rolled (t ≥ 1/4 in), 1.375 F_u cold-formed (t < 1/4 in). */
 export function ndsSteelBearing(tensileStrengthPsi: number, thicknessIn: number): NdsBearing {
-  const hotRolled = thicknessIn >= 0.25 - 1e-9;
+  const hotRolled = !fallsShort(thicknessIn, 0.25);
   return {
     value: (hotRolled ? 1.5 : 1.375) * tensileStrengthPsi,
     parallel: null,

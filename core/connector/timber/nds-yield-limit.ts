@@ -1,3 +1,5 @@
+import { exceeds, fallsShort } from "../../units/limits.js";
+
 /**
  * NDS yield limit equations for one dowel-type fastener (ANSI/AWC NDS-2018 §12.3.1, Tables 12.3.1A
  * and 12.3.1B), in the standard's own units: inches, psi, pounds.
@@ -62,9 +64,9 @@ export function foldAngle(angleDeg: number): number {
  */
 export function ndsReductionTerm(diameterIn: number, mode: NdsYieldMode, maxAngleDeg: number, nominalDiameterIn = diameterIn): number {
   const kt = kTheta(maxAngleDeg);
-  if (diameterIn < 0.25) {
-    const KD = diameterIn <= 0.17 ? 2.2 : 10 * diameterIn + 0.5;
-    return nominalDiameterIn >= 0.25 - 1e-9 ? KD * kt : KD;
+  if (fallsShort(diameterIn, 0.25)) {
+    const KD = !exceeds(diameterIn, 0.17) ? 2.2 : 10 * diameterIn + 0.5;
+    return !fallsShort(nominalDiameterIn, 0.25) ? KD * kt : KD;
   }
   if (mode === "Im" || mode === "Is") return 4 * kt;
   if (mode === "II") return 3.6 * kt;

@@ -1,4 +1,5 @@
 import { foldAngle } from "./nds-yield-limit.js";
+import { exceeds, fallsShort } from "../../units/limits.js";
 
 /**
  * Spacings and distances of dowel-type fasteners in one wood member, mm, expressed along the
@@ -67,23 +68,23 @@ export function ec5Spacing(p: { family: DowelFamily; d: number; angleDeg: number
   const a = (foldAngle(p.angleDeg) * Math.PI) / 180;
   const cos = Math.abs(Math.cos(a));
   const sin = Math.abs(Math.sin(a));
-  const nailRules = p.family === "nail" || (p.family === "screw" && d <= 6) || (p.family === "lag-screw" && d <= 6);
+  const nailRules = p.family === "nail" || (p.family === "screw" && !exceeds(d, 6)) || (p.family === "lag-screw" && !exceeds(d, 6));
   let a1: number, a2: number, a3t: number, a3c: number, a4t: number, a4c: number;
   let source: string;
   if (nailRules) {
     if (p.predrilled) {
       [a1, a2, a3t, a3c] = [(4 + cos) * d, (3 + sin) * d, (7 + 5 * cos) * d, 7 * d];
-      a4t = (d < 5 ? 3 + 2 * sin : 3 + 4 * sin) * d;
+      a4t = (fallsShort(d, 5) ? 3 + 2 * sin : 3 + 4 * sin) * d;
       a4c = 3 * d;
       source = "EN 1995-1-1 Table 8.2 (predrilled)";
-    } else if (p.characteristicDensity <= 420) {
-      [a1, a2, a3t, a3c] = [(d < 5 ? 5 + 5 * cos : 5 + 7 * cos) * d, 5 * d, (10 + 5 * cos) * d, 10 * d];
-      a4t = (d < 5 ? 5 + 2 * sin : 5 + 5 * sin) * d;
+    } else if (!exceeds(p.characteristicDensity, 420)) {
+      [a1, a2, a3t, a3c] = [(fallsShort(d, 5) ? 5 + 5 * cos : 5 + 7 * cos) * d, 5 * d, (10 + 5 * cos) * d, 10 * d];
+      a4t = (fallsShort(d, 5) ? 5 + 2 * sin : 5 + 5 * sin) * d;
       a4c = 5 * d;
       source = "EN 1995-1-1 Table 8.2 (not predrilled, ρ_k ≤ 420 kg/m³)";
     } else {
       [a1, a2, a3t, a3c] = [(7 + 8 * cos) * d, 7 * d, (15 + 5 * cos) * d, 15 * d];
-      a4t = (d < 5 ? 7 + 2 * sin : 7 + 5 * sin) * d;
+      a4t = (fallsShort(d, 5) ? 7 + 2 * sin : 7 + 5 * sin) * d;
       a4c = 7 * d;
       source = "EN 1995-1-1 Table 8.2 (not predrilled, 420 < ρ_k ≤ 500 kg/m³)";
     }

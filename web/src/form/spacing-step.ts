@@ -1,5 +1,5 @@
 import { spacingDefaults } from "../../../core/spacing/spacing-defaults.js";
-import { unitLabel } from "../../../core/units/quantity.js";
+import { toCore, unitLabel } from "../../../core/units/quantity.js";
 import { formatNumber } from "../../../core/units/format.js";
 import { el } from "../dom.js";
 import { checkboxControl, field, numberControl, type FormContext } from "./controls.js";
@@ -9,7 +9,11 @@ import { fieldGrid, step } from "./step.js";
 export function spacingStep(ctx: FormContext, number: number): HTMLElement {
   const { state } = ctx;
   const length = unitLabel("length", state.units);
-  const defaults = spacingDefaults(state.units);
+  // A converted job keeps the practice of the system it came from (spacing.practice); its defaults are shown in the job's units.
+  const practice = state.read("spacing.practice") === "si" || state.read("spacing.practice") === "us" ? (state.read("spacing.practice") as "si" | "us") : state.units;
+  const inJob = (v: number) => Number((toCore(v, "length", practice) / toCore(1, "length", state.units)).toPrecision(4));
+  const own = spacingDefaults(practice);
+  const defaults = { module: inJob(own.module), minZoneLength: inJob(own.minZoneLength) };
   const num = (key: string, label: string, placeholder: string, hint?: string) =>
     field(ctx, `spacing.${key}`, label, numberControl(ctx, `spacing.${key}`, label, { placeholder }), { unit: length, ...(hint ? { hint } : {}) });
   const issues = el("div", { className: "row-issues" });

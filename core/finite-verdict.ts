@@ -1,0 +1,38 @@
+import type { DesignResult } from "./schema/result.js";
+
+/** Path of the first number in `value` that is not finite ("beam.perCombination[0].shear[3]"), or null. */
+export function firstNonFinite(value: unknown): string | null {
+  const keys = walk(value);
+  if (keys === null) return null;
+  return keys.reverse().map((k, i) => (typeof k === "number" ? `[${k}]` : i === 0 ? k : `.${k}`)).join("") || "(result)";
+}
+
+/** Keys leading to the first non-finite number, innermost first; null when every number is finite. */
+function walk(x: unknown): (string | number)[] | null {
+  if (typeof x === "number") return Number.isFinite(x) ? null : [];
+  if (Array.isArray(x)) {
+    for (let i = 0; i < x.length; i++) {
+      const found = walk(x[i]);
+      if (found) return (found.push(i), found);
+    }
+    return null;
+  }
+  if (x !== null && typeof x === "object") {
+    for (const k in x) {
+      const found = walk((x as Record<string, unknown>)[k]);
+      if (found) return (found.push(k), found);
+    }
+  }
+  return null;
+}
+
+/**
+ * The invariant at the end of the design: a result with a number that is not finite (an overflow, a
+ * division by zero) cannot pass, whatever its checks say; it fails with the place of that number.
+ */
+export function withFiniteVerdict<R extends Pick<DesignResult, "status">>(result: R): R {
+  const where = firstNonFinite(result);
+  if (where === null) return result;
+  const failure = `The result holds a number that is not finite (${where}): the job lies outside what this program can compute, and no part of the result can be relied on.`;
+  return { ...result, status: { passes: false, summary: `${result.status.failures.length + 1} item(s) fail: see below.`, failures: [...result.status.failures, failure] } };
+}

@@ -1,0 +1,169 @@
+import type { JobIssue } from "./schema/job-issues.js";
+import type { JobDocument } from "./schema/job.js";
+import { formatNumber, inJobUnits } from "./units/format.js";
+import { exceeds, fallsShort } from "./units/limits.js";
+import { fromCore, unitLabel, type Quantity } from "./units/quantity.js";
+
+/**
+ * A range outside which a number cannot describe a built-up beam, core units, for the size of a
+ * number that is not zero (the schema says where zero or a sign is allowed). Inside the ranges every
+ * step of the design stays finite; outside them the job is refused at the field rather than computed.
+ * README "Performance and limits" lists them.
+ */
+export interface PhysicalRange {
+  quantity: Quantity | null;
+  lo: number;
+  hi: number;
+  what: string;
+}
+
+const range = (quantity: Quantity | null, lo: number, hi: number, what: string): PhysicalRange => ({ quantity, lo, hi, what });
+
+const partDimension = range("length", 0.05, 20_000, "part dimensions");
+const spacing = range("length", 0.05, 20_000, "spacings");
+const connectorSize = range("length", 0.05, 20_000, "connector sizes and distances");
+const partPosition = range("length", 0, 100_000, "part positions");
+const alongMember = range("span", 0, 500_000, "positions along the member");
+const strength = range("stress", 0.01, 10_000, "strengths of structural materials");
+const resistance = range("connectorForce", 1, 1e7, "connector resistances");
+const slipModulus = range("slipModulus", 1, 1e8, "slip moduli of connectors");
+const density = range("density", 1, 25_000, "densities of structural materials");
+
+/** Every number of the job by its field, with the indices of arrays written `[]` and record keys `*`. */
+export const physicalRanges: Record<string, PhysicalRange> = {
+  "materials[].E": range("modulus", 1, 1e6, "moduli of structural materials"),
+  "materials[].density": density,
+  "materials[].characteristicDensity": density,
+  "materials[].meanDensity": density,
+  "materials[].specificGravity": range(null, 0.1, 1.2, "specific gravities of wood"),
+  "materials[].strength.bending": strength,
+  "materials[].strength.shear": strength,
+  "materials[].strength.rollingShear": strength,
+  "materials[].yieldStrength": strength,
+  "materials[].tensileStrength": strength,
+  "parts[].x": partPosition,
+  "parts[].y": partPosition,
+  "parts[].shape.b": partDimension,
+  "parts[].shape.h": partDimension,
+  "parts[].shape.d": partDimension,
+  "parts[].shape.t": partDimension,
+  "parts[].shape.bf": partDimension,
+  "parts[].shape.tf": partDimension,
+  "parts[].shape.tw": partDimension,
+  "parts[].shape.bfBottom": partDimension,
+  "parts[].shape.tfBottom": partDimension,
+  "parts[].extent.from": alongMember,
+  "parts[].extent.to": alongMember,
+  "connectors[].diameter": connectorSize,
+  "connectors[].rootDiameter": connectorSize,
+  "connectors[].length": connectorSize,
+  "connectors[].threadLength": connectorSize,
+  "connectors[].tipLength": connectorSize,
+  "connectors[].leg": connectorSize,
+  "connectors[].throat": connectorSize,
+  "connectors[].segmentLength": connectorSize,
+  "connectors[].pitch": connectorSize,
+  "connectors[].minSpacing": connectorSize,
+  "connectors[].maxSpacing": connectorSize,
+  "connectors[].endDistance": connectorSize,
+  "connectors[].edgeDistance": connectorSize,
+  "connectors[].groupAction.spacing": connectorSize,
+  "connectors[].resistance": resistance,
+  "connectors[].withdrawalCapacity": resistance,
+  "connectors[].bendingYieldStrength": strength,
+  "connectors[].shearStrength": strength,
+  "connectors[].tensileStrength": strength,
+  "connectors[].slipModulus": slipModulus,
+  "connectors[].ultimateSlipModulus": slipModulus,
+  "connectors[].modificationFactor": range(null, 0.01, 2, "modification factors"),
+  "fastening.default.provided.zones[].from": alongMember,
+  "fastening.default.provided.zones[].to": alongMember,
+  "fastening.default.provided.zones[].spacing": spacing,
+  "fastening.default.provided.positions[]": alongMember,
+  "fastening.joints[].provided.zones[].from": alongMember,
+  "fastening.joints[].provided.zones[].to": alongMember,
+  "fastening.joints[].provided.zones[].spacing": spacing,
+  "fastening.joints[].provided.positions[]": alongMember,
+  "beam.spans[]": range("span", 1, 500_000, "spans"),
+  "beam.loads[].w": range("lineLoad", 0, 1e5, "line loads"),
+  "beam.loads[].wStart": range("lineLoad", 0, 1e5, "line loads"),
+  "beam.loads[].wEnd": range("lineLoad", 0, 1e5, "line loads"),
+  "beam.loads[].P": range("force", 0, 1e8, "point loads"),
+  "beam.loads[].M": range("moment", 0, 1e11, "applied couples"),
+  "beam.loads[].at": alongMember,
+  "beam.loads[].from": alongMember,
+  "beam.loads[].to": alongMember,
+  "beam.deflectionLimits.total": range(null, 1, 100_000, "deflection limits (span ÷ ratio)"),
+  "beam.deflectionLimits.live": range(null, 1, 100_000, "deflection limits (span ÷ ratio)"),
+  "spacing.module": spacing,
+  "spacing.preferred[]": spacing,
+  "spacing.minimum": spacing,
+  "spacing.maximum": spacing,
+  "spacing.minZoneLength": range("length", 0, 20_000, "spacings"),
+};
+
+/**
+ * Fields whose whole range the schema itself states (integers, factors between 0 and 1, angles …),
+ * so that every number of the job is covered by one or the other (a test checks it).
+ */
+export const rangesInSchema = [
+  "version",
+  "fastening.default.rows",
+  "fastening.joints[].rows",
+  "spacing.maxZonesPerSpan",
+  "beam.categories[].psi0",
+  "combinations.psi0.*",
+  "combinations.custom[].factors.*",
+  "compositeAction.longTerm.psi2",
+  "compositeAction.longTerm.kdef",
+  "connectors[].fillers",
+  "connectors[].groupAction.fasteners",
+  "connectors[].mainAngleToGrainDeg",
+  "connectors[].sideAngleToGrainDeg",
+  "connectors[].partialFactor",
+  "connectors[].serviceClass",
+];
+
+/** Most rows a provided zone schedule may ask for on one joint, as for a list of positions. */
+export const MAX_PROVIDED_ROWS = 5000;
+
+/**
+ * The job's numbers against their physical ranges: `job` as written (compared in its own units, so a
+ * number too small to survive conversion is still seen) and `core`, the same job in core units. Each
+ * issue names the field and the range in the job's units. Sizes are compared with a relative
+ * tolerance, so a value on a limit converted from the other unit system stays within it.
+ */
+export function physicalRangeIssues(job: JobDocument, core: JobDocument): JobIssue[] {
+  const issues: JobIssue[] = [];
+  const text = (value: number, quantity: Quantity | null) => (quantity ? inJobUnits(value, quantity, core.units) : String(value));
+  const inJob = (value: number, quantity: Quantity | null) => (quantity ? fromCore(value, quantity, job.units) : value);
+  const visit = (x: unknown, path: string, pattern: string) => {
+    if (typeof x === "number") {
+      const r = physicalRanges[pattern];
+      const size = Math.abs(x);
+      if (!r || size === 0) return;
+      if (fallsShort(size, inJob(r.lo, r.quantity)) || exceeds(size, inJob(r.hi, r.quantity))) {
+        issues.push({ path, message: `${r.quantity ? `${formatNumber(x)} ${unitLabel(r.quantity, job.units)}` : formatNumber(x)} is outside the range of ${r.what} (${r.lo === 0 ? "up to" : `${text(r.lo, r.quantity)} to`} ${text(r.hi, r.quantity)}${r.lo === 0 && r.quantity !== "span" && r.quantity !== "length" ? " either way" : ""})` });
+      }
+    } else if (Array.isArray(x)) x.forEach((v, i) => visit(v, `${path}[${i}]`, `${pattern}[]`));
+    else if (x && typeof x === "object") for (const [k, v] of Object.entries(x)) visit(v, path ? `${path}.${k}` : k, pattern ? `${pattern}.${k}` : k);
+  };
+  visit(job, "", "");
+  const L = core.beam.spans.reduce((s, l) => s + l, 0);
+  if (fallsShort(L, 1) || exceeds(L, 500_000)) issues.push({ path: "beam.spans", message: `${text(L, "span")} is outside the range of member lengths (${text(1, "span")} to ${text(500_000, "span")})` });
+  if (issues.length > 0) return issues;
+  const provided = [
+    { path: "fastening.default", fastening: core.fastening.default },
+    ...core.fastening.joints.map((j, k) => ({ path: `fastening.joints[${k}]`, fastening: j })),
+  ];
+  for (const { path, fastening } of provided) {
+    const p = fastening.provided;
+    if (p?.type !== "zones") continue;
+    const rows = p.zones.reduce((n, z) => n + Math.max(0, z.to - z.from) / z.spacing, 0);
+    if (rows > MAX_PROVIDED_ROWS) {
+      const i = p.zones.reduce((best, z, k) => (z.spacing < p.zones[best]!.spacing ? k : best), 0);
+      issues.push({ path: `${path}.provided.zones[${i}].spacing`, message: `${text(p.zones[i]!.spacing, "length")} gives about ${Math.round(rows)} rows on this joint; a schedule to check has at most ${MAX_PROVIDED_ROWS} rows (as a list of positions)` });
+    }
+  }
+  return issues;
+}
