@@ -23,6 +23,32 @@ export function plankIJob(): JobInput {
 }
 
 /**
+ * A 100 × 400 core with 20 × 240 plates on its upper sides and a 140 × 40 cap over all three (issue 16 §1):
+ * the plates touch the core by a vertical face and the cap by a horizontal one.
+ */
+export function platedCoreJob(): JobInput {
+  return {
+    format: "stitchplan-job",
+    version: 1,
+    units: "si",
+    basis: "allowable",
+    project: { name: "Plated core" },
+    member: { mark: "PC-1" },
+    materials: [{ id: "W", name: "Timber", E: 10_000, density: 0 }],
+    parts: [
+      { id: "core", material: "W", shape: { type: "rectangle", b: 100, h: 400 }, x: 20, y: 0 },
+      { id: "left", material: "W", shape: { type: "rectangle", b: 20, h: 240 }, x: 0, y: 160 },
+      { id: "right", material: "W", shape: { type: "rectangle", b: 20, h: 240 }, x: 120, y: 160 },
+      { id: "cap", material: "W", shape: { type: "rectangle", b: 140, h: 40 }, x: 0, y: 400 },
+    ],
+    connectors: [{ id: "N", kind: "rated", label: "rated nail", resistance: 1000, minSpacing: 20, maxSpacing: 600 }],
+    fastening: { default: { connector: "N", rows: 1 } },
+    beam: { spans: [4], loads: [{ type: "uniform", category: "dead", w: 10 }], selfWeight: false },
+    spacing: { module: 1, minZoneLength: 100, maxZonesPerSpan: 5, symmetric: true },
+  };
+}
+
+/**
  * REFERENCES §6.6 worked case, a symmetric nailed I: flanges 120 × 45, web 45 × 200, all E = 11 000 MPa,
  * span 5000 mm, nails with K_ser = 709.32 N/mm (d = 3.1, ρ_m = 420, not predrilled; EN 1995-1-1 Table 7.1 [M]),
  * w = 4 N/mm (V = 10 kN, M = 12.5 kN·m). Values [D]. In check mode one nail per flange joint per row at s = 50 mm.

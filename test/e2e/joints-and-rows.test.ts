@@ -3,6 +3,7 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import type { Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { platedCoreJob } from "../job-builders.js";
 import { startHarness, toolbarMessage, untilText, upToDate, type Harness } from "./page-harness.js";
 
 // Issue 16 §1 and §2 through the page: every contact line fastened, and a row that does not fit shown as failing.
@@ -32,25 +33,7 @@ async function open(job: unknown): Promise<void> {
 
 describe("joints and rows on the page (issue 16)", () => {
   test("a core with plates on its upper sides under a cap: the plates' lines to the core get a schedule of their own", async () => {
-    await open({
-      format: "stitchplan-job",
-      version: 1,
-      units: "si",
-      basis: "allowable",
-      project: { name: "Plated core" },
-      member: { mark: "PC-1" },
-      materials: [{ id: "W", name: "Timber", E: 10_000, density: 0 }],
-      parts: [
-        { id: "core", material: "W", shape: { type: "rectangle", b: 100, h: 400 }, x: 20, y: 0 },
-        { id: "left", material: "W", shape: { type: "rectangle", b: 20, h: 240 }, x: 0, y: 160 },
-        { id: "right", material: "W", shape: { type: "rectangle", b: 20, h: 240 }, x: 120, y: 160 },
-        { id: "cap", material: "W", shape: { type: "rectangle", b: 140, h: 40 }, x: 0, y: 400 },
-      ],
-      connectors: [{ id: "N", kind: "rated", label: "rated nail", resistance: 1000, minSpacing: 20, maxSpacing: 600 }],
-      fastening: { default: { connector: "N", rows: 1 } },
-      beam: { spans: [4], loads: [{ type: "uniform", category: "dead", w: 10 }], selfWeight: false },
-      spacing: { module: 1, minZoneLength: 100, maxZonesPerSpan: 5, symmetric: true },
-    });
+    await open(platedCoreJob());
     for (const joint of ["cap", "left+right+cap"]) await expect(page.locator(`[aria-label="Schedule for joint ${joint}"]`).count()).resolves.toBe(1);
     expect(h.errors).toEqual([]);
   });

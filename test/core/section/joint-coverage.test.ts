@@ -8,6 +8,7 @@ import { searchJoints } from "../../../core/section/joints.js";
 import type { PositionedPart } from "../../../core/section/rectangles.js";
 import { buildSection } from "../../../core/section/section-model.js";
 import { expectClose } from "../../expect-close.js";
+import { platedCoreJob } from "../../job-builders.js";
 import { material } from "../../section-builders.js";
 
 // Issue 16 §1: every contact line belongs to the joint that governs it, whatever the orientation of the lines.
@@ -201,25 +202,7 @@ describe("joint coverage (issue 16 §1)", () => {
   });
 
   test("through designMember: the plates are scheduled, each line of the governing cut at V·Q/(3·I) [D]", () => {
-    const job: JobInput = {
-      format: "stitchplan-job",
-      version: 1,
-      units: "si",
-      basis: "allowable",
-      project: { name: "Plated core" },
-      member: { mark: "PC-1" },
-      materials: [{ id: "W", name: "Timber", E: 10_000, density: 0 }],
-      parts: [
-        { id: "core", material: "W", shape: { type: "rectangle", b: 100, h: 400 }, x: 20, y: 0 },
-        { id: "left", material: "W", shape: { type: "rectangle", b: 20, h: 240 }, x: 0, y: 160 },
-        { id: "right", material: "W", shape: { type: "rectangle", b: 20, h: 240 }, x: 120, y: 160 },
-        { id: "cap", material: "W", shape: { type: "rectangle", b: 140, h: 40 }, x: 0, y: 400 },
-      ],
-      connectors: [{ id: "N", kind: "rated", label: "rated nail", resistance: 1000, minSpacing: 20, maxSpacing: 600 }],
-      fastening: { default: { connector: "N", rows: 1 } },
-      beam: { spans: [4], loads: [{ type: "uniform", category: "dead", w: 10 }], selfWeight: false },
-      spacing: { module: 1, minZoneLength: 100, maxZonesPerSpan: 5, symmetric: true },
-    };
+    const job = platedCoreJob();
     const p = prepareJob(job);
     if (!p.ok) throw new Error(JSON.stringify(p.issues));
     const result = designMember(p.core);
@@ -240,21 +223,7 @@ describe("joint coverage (issue 16 §1)", () => {
   });
 
   test("a named held group that leaves a cut short fails the member with its reason", () => {
-    const parts = [rectangle("core", 100, 400, 20, 0), rectangle("left", 20, 240, 0, 160), rectangle("right", 20, 240, 120, 160), rectangle("cap", 140, 40, 0, 400)];
-    const job: JobInput = {
-      format: "stitchplan-job",
-      version: 1,
-      units: "si",
-      basis: "allowable",
-      project: { name: "Plated core" },
-      member: { mark: "PC-2" },
-      materials: [{ id: "W", name: "Timber", E: 10_000, density: 0 }],
-      parts: parts.map((p) => ({ id: p.id, material: "W", shape: p.shape, x: p.x, y: p.y })),
-      connectors: [{ id: "N", kind: "rated", label: "rated nail", resistance: 1000, minSpacing: 20, maxSpacing: 600 }],
-      fastening: { default: { connector: "N", rows: 1 }, joints: [{ held: ["cap"], connector: "N", rows: 1 }] },
-      beam: { spans: [4], loads: [{ type: "uniform", category: "dead", w: 10 }], selfWeight: false },
-      spacing: { module: 1, minZoneLength: 100, maxZonesPerSpan: 5, symmetric: true },
-    };
+    const job: JobInput = { ...platedCoreJob(), member: { mark: "PC-2" }, fastening: { default: { connector: "N", rows: 1 }, joints: [{ held: ["cap"], connector: "N", rows: 1 }] } };
     const p = prepareJob(job);
     if (!p.ok) throw new Error(JSON.stringify(p.issues));
     const result = designMember(p.core);
