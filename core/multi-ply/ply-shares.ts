@@ -17,6 +17,8 @@ export interface Ply {
   depth: number;
   /** I about the bending axis, mm⁴; thickness·depth³/12 when not given. */
   secondMoment?: number;
+  /** The ply reaches the top of the member, so a load on top bears on it; true when not given. */
+  bearsOnTop?: boolean;
 }
 
 /** Where a load arrives: hung on the left face (ply 1), on the right face (ply n), or bearing on top of every ply. */
@@ -44,14 +46,17 @@ export function plyShares(plies: Ply[]): number[] {
 
 /**
  * How a load arrives across the plies, as fractions per ply: all on ply 1 (left face), all on ply n
- * (right face), or bearing on top in proportion to each ply's thickness [CP].
+ * (right face), or bearing on top of the plies that reach the top (a shallower ply, such as a flitch
+ * plate set within the depth of the timber, takes none of it), in proportion to their thicknesses [CP].
  */
 export function arrivalFractions(plies: Ply[], face: LoadFace): number[] {
   const n = plies.length;
   if (face === "left") return plies.map((_, j) => (j === 0 ? 1 : 0));
   if (face === "right") return plies.map((_, j) => (j === n - 1 ? 1 : 0));
-  const width = plies.reduce((s, p) => s + p.thickness, 0);
-  return plies.map((p) => p.thickness / width);
+  const bearing = (p: Ply) => p.bearsOnTop !== false;
+  const width = plies.filter(bearing).reduce((s, p) => s + p.thickness, 0);
+  if (!(width > 0)) throw new RangeError("no ply reaches the top of the member to take a load on top");
+  return plies.map((p) => (bearing(p) ? p.thickness / width : 0));
 }
 
 export interface InterfaceTransfer {

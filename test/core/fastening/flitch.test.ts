@@ -1,0 +1,176 @@
+import fc from "fast-check";
+import { describe, expect, test } from "vitest";
+import { prepareJob } from "../../../core/check-job.js";
+import { designMember } from "../../../core/design-member.js";
+import type { JobInput } from "../../../core/schema/job.js";
+import { expectClose } from "../../expect-close.js";
+
+// Flitch beams: side-by-side plies of different materials and depths, through designMember.
+// Shares by E·I [D]: plies with one curvature carry M_j = E_j I_j κ, so share_j = E_j I_j / Σ E I
+// (any mechanics-of-materials text on composite beams, e.g. Gere & Goodno ch. 6).
+// 2x12 dressed 1.5 × 11.25 in (PS 20 [V], REFERENCES §10); A36 plate E = 29 000 ksi, F_u = 58 ksi (ASTM A36 [M]).
+
+const run = (job: JobInput) => {
+  const p = prepareJob(job);
+  if (!p.ok) throw new Error(JSON.stringify(p.issues));
+  return designMember(p.core);
+};
+
+/** Two 2x12 DF-L plies with a 1/2 × 11 in plate centred between them, 3/4 in bolts in double shear through all three. */
+function flitchUs(loads: JobInput["beam"]["loads"], opts: { namedJoint?: boolean } = {}): JobInput {
+  return {
+    format: "stitchplan-job",
+    version: 1,
+    units: "us",
+    basis: "allowable",
+    project: { name: "Flitch test" },
+    member: { mark: "FH-T" },
+    materials: [
+      { id: "DF", name: "DF-L No. 1", family: "sawn-timber", E: 1_700_000, density: 0, specificGravity: 0.5, strength: { bending: 1000, shear: 180 } },
+      { id: "PL", name: "A36 plate", family: "steel", E: 29_000_000, density: 0, yieldStrength: 36_000, tensileStrength: 58_000, strength: { bending: 21_600, shear: 12_900 } },
+    ],
+    parts: [
+      { id: "left", material: "DF", shape: { type: "lumber", nominal: "2x12", orientation: "edge" }, x: 0, y: 0 },
+      { id: "plate", material: "PL", shape: { type: "rectangle", b: 0.5, h: 11 }, place: { on: "left", side: "right" } },
+      { id: "right", material: "DF", shape: { type: "lumber", nominal: "2x12", orientation: "edge" }, place: { on: "plate", side: "right" } },
+    ],
+    connectors: [{ id: "B", kind: "timber-bolt", standard: "NDS-2018", shear: "double", size: "3/4" }],
+    fastening: { default: { connector: "B", rows: 1 }, joints: opts.namedJoint === false ? [] : [{ held: ["plate"], connector: "B", rows: 1 }] },
+    beam: { spans: [14], loads, selfWeight: false },
+    combinations: { set: "asce7-22-allowable" },
+    spacing: { module: 1, minZoneLength: 24, maxZonesPerSpan: 3, symmetric: true },
+  };
+}
+
+// Hand values of the flitch [D]: I_timber = 1.5 · 11.25³/12 = 177.979 in⁴, I_plate = 0.5 · 11³/12 = 55.458 in⁴.
+const EIt = 1.7e6 * ((1.5 * 11.25 ** 3) / 12);
+const EIp = 29e6 * ((0.5 * 11 ** 3) / 12);
+const plateShare = EIp / (EIp + 2 * EIt); // 1.60829e9 / 2.21342e9 = 0.72661
+
+describe("flitch beam: two 2x12 plies and a 1/2 × 11 in plate, 3/4 in bolts, 14 ft span, load on top", () => {
+  test("the plate's share is E_p I_p / Σ E I = 0.7266; the top load bears on the timber only; each line passes s_p/2 of it [D]", () => {
+    expectClose(plateShare, 0.72661, { rel: 1e-4 }, "share of the plate [D]");
+    const result = run(flitchUs([{ type: "uniform", category: "dead", w: 600 }]));
+    const plies = result.multiPly!.plies;
+    expectClose(plies.find((p) => p.part === "plate")!.share, plateShare, { rel: 1e-9 });
+    expectClose(plies.find((p) => p.part === "left")!.share, EIt / (EIp + 2 * EIt), { rel: 1e-9 });
+    expect(plies.map((p) => p.bearsTopLoad)).toEqual([true, false, true]);
+    const s = result.schedules.find((x) => x.joint === "plate")!;
+    expect(result.joints.find((j) => j.id === "plate")!.demand).toBe("side-load");
+    expect(s.lineCount).toBe(2);
+    // 600 plf = 50 lb/in; each timber ply takes 1/2 of it on top and keeps (1 − s_p)/2: it passes s_p/2 · 50 lb/in to the plate.
+    const perLineLbIn = (plateShare / 2) * 50;
+    expectClose(Math.max(...s.shearFlow), perLineLbIn * 4.4482216152605 / 25.4, { rel: 1e-9 }, "per-line transfer, N/mm");
+    expect(result.warnings.some((w) => w.includes("spacing limits only"))).toBe(false);
+  });
+
+  test("the bolts' resistance takes the load perpendicular to the grain by itself, with the plate's F_e = 1.5 F_u (NDS-2018 Table 12.3.1A double shear, §12.3.3) [D]", () => {
+    const result = run(flitchUs([{ type: "uniform", category: "dead", w: 200 }, { type: "uniform", category: "live", w: 400 }]));
+    const s = result.schedules.find((x) => x.joint === "plate")!;
+    // Yield limit equations written out (NDS-2018 Table 12.3.1A, double shear [M]); D = 0.75 in, ℓ_s = 1.5 in (each 2x12),
+    // ℓ_m = 0.5 in (plate), F_yb = 45 000 psi (bolts [M]), θ = 90° in the timber: K_θ = 1 + 0.25 · 90/90 = 1.25,
+    // R_d = 4 K_θ = 5 (modes I), 3.2 K_θ = 4 (modes III, IV) (Table 12.3.1B [M]).
+    const D = 0.75, ls = 1.5, lm = 0.5, Fyb = 45_000;
+    const Fes = (6100 * 0.5 ** 1.45) / Math.sqrt(D); // F_e⊥ = 6100 G^1.45/√D = 2578 psi (§12.3.3 [M])
+    const Fem = 1.5 * 58_000; // steel plate t ≥ 1/4 in: 1.5 F_u = 87 000 psi (§12.3.3 [M])
+    const Re = Fem / Fes;
+    const k3 = -1 + Math.sqrt((2 * (1 + Re)) / Re + (2 * Fyb * (2 + Re) * D ** 2) / (3 * Fem * ls ** 2));
+    const Zim = (D * lm * Fem) / 5;
+    const Zis = (2 * D * ls * Fes) / 5;
+    const Ziiis = (2 * k3 * D * ls * Fem) / ((2 + Re) * 4);
+    const Ziv = ((2 * D ** 2) / 4) * Math.sqrt((2 * Fem * Fyb) / (3 * (1 + Re)));
+    const Z = Math.min(Zim, Zis, Ziiis, Ziv);
+    expectClose(Fes, 2578.1, { rel: 1e-4 }, "F_e⊥ [D]");
+    expectClose(Z, Zis, { rel: 0 }, "mode Is governs");
+    expectClose(Z, 1160.1, { rel: 1e-4 }, "Z = 2 D ℓ_s F_es / R_d = 1160 lb [D]");
+    // Per contact line: Z/2; C_D = 0.9 for dead only (ASD-1), 1.0 for D + L (NDS-2018 §2.3.2 [M]).
+    const lbToN = 4.4482216152605;
+    const byCombination = new Map(s.resistance.map((r) => [r.combination, r.value]));
+    expect(result.beam.combinations.find((c) => c.id === "ASD-1")!.categories).toEqual(["dead"]);
+    expectClose(byCombination.get("ASD-1")!, (Z / 2) * 0.9 * lbToN, { rel: 1e-6 }, "ASD-1 per line");
+    expectClose(byCombination.get("ASD-2")!, (Z / 2) * 1.0 * lbToN, { rel: 1e-6 }, "ASD-2 per line");
+    expect(s.resistance[0]!.steps.some((st) => st.symbol === "θ" && st.value === 90)).toBe(true);
+    // Load perpendicular to grain: bolts along the member are rows side by side, 2.5D apart for ℓ/D ≤ 2 (ℓ = 0.5 in of plate
+    // here; NDS-2018 Table 12.5.1D, spacing between rows, perpendicular to grain loading [M]); along the grain that would be 4D.
+    expectClose(s.limits.minSpacing, 2.5 * D * 25.4, { rel: 1e-9 }, "2.5D");
+  });
+
+  test("bending and shear of each ply on its own share: the plate's shear is 1.5 · s_p · V/(t_p d_p) [D]", () => {
+    const result = run(flitchUs([{ type: "uniform", category: "dead", w: 600 }]));
+    const V = (600 * 14) / 2; // lb, simple span
+    const M = (600 * 14 ** 2) / 8 * 12; // lb·in
+    const plate = result.checks.find((c) => c.id === "shear-ply-plate")!;
+    expectClose(plate.demand, ((1.5 * plateShare * V) / (0.5 * 11)) * 0.0068947572932, { rel: 1e-6 }, "τ_plate, MPa");
+    const timber = result.checks.find((c) => c.id === "shear-ply-left")!;
+    expectClose(timber.demand, ((1.5 * (EIt / (EIp + 2 * EIt)) * V) / (1.5 * 11.25)) * 0.0068947572932, { rel: 1e-6 }, "τ_timber, MPa");
+    const plateBending = result.checks.find((c) => c.id === "bending-ply-plate")!;
+    expectClose(plateBending.demand, ((plateShare * M * 5.5) / ((0.5 * 11 ** 3) / 12)) * 0.0068947572932, { rel: 1e-6 }, "σ_plate = s_p M c/I_p, MPa");
+    expect(result.assumptions.some((a) => a.includes("held laterally by the bolts"))).toBe(true);
+  });
+});
+
+describe("invariant: the force passed across the interfaces over the span equals the share the plies that do not bear take from those that do", () => {
+  test("property (fast-check, fixed seed): Σ over interfaces of ∫ transfer dx = |s_p − a_p| · W for any timber and plate sizes, single or double shear [D]", () => {
+    fc.assert(
+      fc.property(
+        fc.record({
+          t: fc.double({ min: 30, max: 80, noNaN: true }),
+          d: fc.double({ min: 180, max: 400, noNaN: true }),
+          Et: fc.double({ min: 7000, max: 14_000, noNaN: true }),
+          tp: fc.double({ min: 6, max: 25, noNaN: true }),
+          depthRatio: fc.oneof(fc.double({ min: 0.5, max: 0.97, noNaN: true }), fc.double({ min: 1.03, max: 1.3, noNaN: true })),
+          Ep: fc.double({ min: 190_000, max: 210_000, noNaN: true }),
+          w: fc.double({ min: 0.5, max: 20, noNaN: true }),
+          // Partial loads on a 0.25 m grid, so that their ends fall on the analysis stations (the integral below is then exact).
+          partial: fc.option(fc.record({ from: fc.integer({ min: 0, max: 6 }).map((k) => k / 4), len: fc.integer({ min: 2, max: 8 }).map((k) => k / 4), w: fc.double({ min: 0.5, max: 10, noNaN: true }) }), { nil: undefined }),
+          span: fc.double({ min: 2.5, max: 6, noNaN: true }),
+          named: fc.boolean(),
+        }),
+        (g) => {
+          const dp = g.d * g.depthRatio;
+          const loads: JobInput["beam"]["loads"] = [{ type: "uniform", category: "dead", w: g.w }];
+          if (g.partial) loads.push({ type: "uniform", category: "dead", w: g.partial.w, from: g.partial.from, to: Math.min(g.span, g.partial.from + g.partial.len) });
+          const job: JobInput = {
+            format: "stitchplan-job",
+            version: 1,
+            units: "si",
+            basis: "allowable",
+            project: { name: "invariant" },
+            member: { mark: "P" },
+            materials: [
+              { id: "T", name: "timber", E: g.Et, density: 0 },
+              { id: "S", name: "steel", family: "steel", E: g.Ep, density: 0 },
+            ],
+            parts: [
+              { id: "a", material: "T", shape: { type: "rectangle", b: g.t, h: g.d }, x: 0, y: 0 },
+              { id: "plate", material: "S", shape: { type: "rectangle", b: g.tp, h: dp }, place: { on: "a", side: "right" } },
+              { id: "b", material: "T", shape: { type: "rectangle", b: g.t, h: g.d }, place: { on: "plate", side: "right" } },
+            ],
+            connectors: [{ id: "R", kind: "rated", label: "rated (invented)", resistance: 5000, minSpacing: 50, maxSpacing: 600, endDistance: 50 }],
+            fastening: { default: { connector: "R", rows: 1 }, joints: g.named ? [{ held: ["plate"], connector: "R", rows: 1 }] : [] },
+            beam: { spans: [g.span], loads, selfWeight: false },
+            spacing: { module: 5, minZoneLength: 200, maxZonesPerSpan: 5, symmetric: false },
+          };
+          const result = run(job);
+          // Closed form in the core's units (MPa, mm): shares by E·I; the plate bears a load on top only when it is the deeper.
+          const EIt = g.Et * ((g.t * g.d ** 3) / 12);
+          const EIp = g.Ep * ((g.tp * dp ** 3) / 12);
+          const sp = EIp / (EIp + 2 * EIt);
+          const ap = g.depthRatio > 1 ? 1 : 0;
+          const L = g.span * 1000;
+          const W = g.w * L + (g.partial ? g.partial.w * (Math.min(g.span, g.partial.from + g.partial.len) - g.partial.from) * 1000 : 0);
+          const expected = Math.abs(sp - ap) * W;
+          // ∫ of the per-line transfer over the span, summed over every contact line (trapezoids between stations, exact for piecewise-constant transfer).
+          const x = result.beam.stations;
+          let passed = 0;
+          for (const s of result.schedules) {
+            for (let i = 0; i + 1 < x.length; i++) passed += ((s.shearFlow[i]! + s.shearFlow[i + 1]!) / 2) * (x[i + 1]! - x[i]!) * s.lineCount;
+          }
+          expectClose(passed, expected, { rel: 1e-6 }, "force passed across the interfaces");
+          expect(result.multiPly!.plies.find((p) => p.part === "plate")!.bearsTopLoad).toBe(ap === 1);
+        },
+      ),
+      { numRuns: 40 },
+    );
+  });
+});
