@@ -2,6 +2,7 @@ import fc from "fast-check";
 import { describe, expect, test } from "vitest";
 import { prepareJob } from "../../../core/check-job.js";
 import { designMember } from "../../../core/design-member.js";
+import { arrivalFractions, interfaceTransfer } from "../../../core/multi-ply/ply-shares.js";
 import type { JobInput } from "../../../core/schema/job.js";
 import { expectClose } from "../../expect-close.js";
 
@@ -172,5 +173,92 @@ describe("invariant: the force passed across the interfaces over the span equals
       ),
       { numRuns: 40 },
     );
+  });
+});
+
+describe("EN 1995-1-1: timber, steel plate, timber with bolts in double shear (the plate the central member)", () => {
+  // Two C24 75 × 300 (ρ_k = 350 kg/m³, EN 338 [M]) either side of a 12 × 280 mm plate, M16 bolts of class 8.8 (f_u,k = 800 MPa, EN ISO 898-1 [M]).
+  const job = (): JobInput => ({
+    format: "stitchplan-job",
+    version: 1,
+    units: "si",
+    basis: "factored",
+    project: { name: "EC5 flitch test" },
+    member: { mark: "FB-T" },
+    materials: [
+      { id: "C24", name: "C24", family: "sawn-timber", E: 11_000, density: 0, characteristicDensity: 350, meanDensity: 420, strength: { bending: 14.7, shear: 1.65 } },
+      { id: "S", name: "S235", family: "steel", E: 210_000, density: 0, yieldStrength: 235, strength: { bending: 235, shear: 135 } },
+    ],
+    parts: [
+      { id: "left", material: "C24", shape: { type: "rectangle", b: 75, h: 300 }, x: 0, y: 0 },
+      { id: "plate", material: "S", shape: { type: "rectangle", b: 12, h: 280 }, place: { on: "left", side: "right" } },
+      { id: "right", material: "C24", shape: { type: "rectangle", b: 75, h: 300 }, place: { on: "plate", side: "right" } },
+    ],
+    connectors: [{ id: "M16", kind: "timber-bolt", standard: "EN1995-1-1", shear: "double", size: "M16", grade: "8.8", serviceClass: 1 }],
+    fastening: { default: { connector: "M16", rows: 1 }, joints: [{ held: ["plate"], connector: "M16", rows: 1 }] },
+    beam: { spans: [5.4], loads: [{ type: "uniform", category: "dead", w: 3 }, { type: "uniform", category: "live", w: 4.5 }], selfWeight: false },
+    combinations: { set: "en1990-6.10" },
+    spacing: { module: 25, minZoneLength: 600, maxZonesPerSpan: 3, symmetric: true },
+  });
+
+  test("F_v,Rk by eq. (8.11) with f_h,90,k, θ = 90° taken by itself; F_v,Rd = k_mod F_v,Rk/γ_M per shear plane [D]", () => {
+    const result = run(job());
+    const s = result.schedules.find((x) => x.joint === "plate")!;
+    const d = 16, t1 = 75, rhoK = 350, fu = 800;
+    const fh0 = 0.082 * (1 - 0.01 * d) * rhoK; // eq. (8.32): 24.11 MPa [M]
+    const k90 = 1.35 + 0.015 * d; // eq. (8.33), softwood: 1.59 [M]
+    const fh90 = fh0 / (k90 * 1 + 0); // eq. (8.31) at α = 90°: 15.16 MPa [D]
+    const My = 0.3 * fu * d ** 2.6; // eq. (8.30): 324 300 N·mm [M]
+    const f = fh90 * t1 * d; // eq. (8.11f) [M]
+    const g = fh90 * t1 * d * (Math.sqrt(2 + (4 * My) / (fh90 * d * t1 ** 2)) - 1); // eq. (8.11g), no rope effect (no F_ax,Rk given) [M]
+    const h = 2.3 * Math.sqrt(My * fh90 * d); // eq. (8.11h) [M]
+    const Rk = Math.min(f, g, h);
+    expectClose(fh90, 15.162, { rel: 1e-4 }, "f_h,90,k");
+    expectClose(Rk, g, { rel: 0 }, "mode g governs");
+    expectClose(Rk, 13_058, { rel: 1e-3 }, "F_v,Rk = 13.06 kN per shear plane [D]");
+    // k_mod = 0.6 permanent, 0.8 medium-term, service class 1 (Table 3.1 [M]); γ_M = 1.3 (Table 2.3 [M]).
+    const byCombination = new Map(s.resistance.map((r) => [r.combination, r.value]));
+    expectClose(byCombination.get("EN-1a")!, (0.6 * Rk) / 1.3, { rel: 1e-6 }, "EN-1a (1.35G)");
+    expectClose(byCombination.get("EN-2a")!, (0.8 * Rk) / 1.3, { rel: 1e-6 }, "EN-2a (1.35G + 1.5Q)");
+    expect(s.resistance[0]!.reference).toContain("eq. (8.11)");
+    // The transfer each line passes: s_p/2 of the factored top load, EN-2a: (1.35 · 3 + 1.5 · 4.5) N/mm [D].
+    const EIt = 11_000 * ((75 * 300 ** 3) / 12);
+    const EIp = 210_000 * ((12 * 280 ** 3) / 12);
+    const sp = EIp / (EIp + 2 * EIt);
+    expectClose(sp, 0.55392, { rel: 1e-4 }, "plate share [D]");
+    expectClose(Math.max(...s.shearFlow), (sp / 2) * (1.35 * 3 + 1.5 * 4.5), { rel: 1e-9 }, "per-line transfer, N/mm");
+    expect(result.status.passes).toBe(true);
+  });
+
+  test("the connector's angles as entered do not change the transfer across plies: 0° (the default) and 90° give the same resistance", () => {
+    const a = run(job());
+    const j = job();
+    (j.connectors[0] as Record<string, unknown>).sideAngleToGrainDeg = 90;
+    (j.connectors[0] as Record<string, unknown>).mainAngleToGrainDeg = 90;
+    const b = run(j);
+    expect(a.schedules[0]!.resistance.map((r) => r.value)).toEqual(b.schedules[0]!.resistance.map((r) => r.value));
+  });
+});
+
+describe("plies of different depths", () => {
+  test("a load on top bears on the plies that reach the top, by thickness [CP]; the shallower plate gets none and takes its share through the interfaces [D]", () => {
+    const plies = [
+      { modulus: 11_000, thickness: 38, depth: 286 },
+      { modulus: 200_000, thickness: 12, depth: 279, bearsOnTop: false },
+      { modulus: 11_000, thickness: 38, depth: 286 },
+    ];
+    expect(arrivalFractions(plies, "top")).toEqual([0.5, 0, 0.5]);
+    const t = interfaceTransfer(plies, [{ face: "top", magnitude: 1 }]);
+    const sp = (200_000 * 12 * 279 ** 3) / (200_000 * 12 * 279 ** 3 + 2 * 11_000 * 38 * 286 ** 3);
+    expectClose(t.interfaces[0]!.force, sp / 2, { rel: 1e-12 }, "T_1 = s_p/2");
+    expectClose(t.interfaces[1]!.force, -sp / 2, { rel: 1e-12 }, "T_2 = −s_p/2");
+  });
+
+  test("a plate flush with the top of the timber (mid-depths not at one level) is not taken as plies sharing by E·I: the transfer is listed as not checked", () => {
+    const job = flitchUs([{ type: "uniform", category: "dead", w: 600 }]);
+    (job.parts[1] as { place: Record<string, unknown> }).place.align = "end";
+    const result = run(job);
+    expect(result.multiPly).toBeNull();
+    expect(result.notChecked.some((n) => n.includes("mid-depths are not at one level"))).toBe(true);
   });
 });
