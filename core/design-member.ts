@@ -137,8 +137,8 @@ export function designMember(job: JobDocument): DesignResult {
     assumptions.add("Side-by-side plies deflect together, so each carries a share of the load in proportion to its E·I (each ply about its own centroid, all on the member's neutral axis); connectors at each interface pass what arrives on one side beyond its share, across the member (perpendicular to the grain of timber plies).");
     assumptions.add(
       plies.plies.every((p) => p.bearsOnTop !== false)
-        ? "A load on top bears on each ply in proportion to its thickness (common practice); the self-weight of each ply is carried by that ply."
-        : `A load on top bears on the plies that reach the top (${plies.parts.filter((_, i) => plies.plies[i]!.bearsOnTop !== false).join(", ")}) in proportion to their thicknesses (common practice), not on the shallower ones (${plies.parts.filter((_, i) => plies.plies[i]!.bearsOnTop === false).join(", ")}); the self-weight of each ply is carried by that ply.`,
+        ? "A load on top bears on each ply in proportion to its thickness (common practice); each ply's self-weight arrives on that ply, and what it weighs beyond its E·I share passes across the interfaces like any other load."
+        : `A load on top bears on the plies that reach the top (${plies.parts.filter((_, i) => plies.plies[i]!.bearsOnTop !== false).join(", ")}) in proportion to their thicknesses (common practice), not on the shallower ones (${plies.parts.filter((_, i) => plies.plies[i]!.bearsOnTop === false).join(", ")}); each ply's self-weight arrives on that ply, and what it weighs beyond its E·I share passes across the interfaces like any other load.`,
     );
     assumptions.add("Each ply is checked in bending and shear on its own share of the moment and shear; deflection is that of the combined E·I (Σ E·I of the plies).");
     if (plies.plies.some((_, i) => section.parts.find((p) => p.id === plies.parts[i])!.material.family === "steel")) {

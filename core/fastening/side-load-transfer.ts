@@ -1,6 +1,7 @@
 import type { BeamAnalysis } from "../beam/analyse-beam.js";
 import { memberActions, type LoadSet, type MemberActions } from "../beam/member-actions.js";
-import { interfaceTransfer, type LoadFace, type Ply } from "../multi-ply/ply-shares.js";
+import { interfaceTransfer, plyShares, type LoadFace, type Ply } from "../multi-ply/ply-shares.js";
+import { GRAVITY } from "../units/quantity.js";
 import type { JobDocument } from "../schema/job.js";
 import type { Combination } from "../schema/result.js";
 import { geometricTolerance } from "../section/contacts.js";
@@ -13,6 +14,8 @@ export interface MultiPly {
   plies: Ply[];
   /** The member's overall depth, mm. */
   depth: number;
+  /** Self-weight of each ply, N/mm: each ply's own weight arrives on it, and it keeps its E·I share of the whole. */
+  selfWeights: number[];
 }
 
 /** The parts as plies standing side by side, touching face to face, left to right; null when they are not. */
@@ -46,6 +49,7 @@ export function multiPlyOf(section: SectionModel): MultiPly | null {
       return { name: p.name || p.id, modulus: p.material.E, thickness: r.x1 - r.x0, depth: r.y1 - r.y0, bearsOnTop: Math.abs(r.y1 - top) <= tol };
     }),
     depth: top - bottom,
+    selfWeights: ordered.map((p) => p.material.density * GRAVITY * p.area * 1e-9),
   };
 }
 
@@ -107,6 +111,14 @@ export function interfaceDemand(job: JobDocument, beam: BeamAnalysis, plies: Mul
         intensity.push({ x0, x1: xz, t0: Math.abs(t0), t1: 0 }, { x0: xz, x1, t0: 0, t1: Math.abs(t1) });
       }
     };
+    if (job.beam.selfWeight) {
+      // A ply heavier than its share (a steel plate) passes the rest of its weight to the others: T_k = Σ_{j≤k} (w_j − s_j·Σw).
+      const shares = plyShares(plies.plies);
+      const total = plies.selfWeights.reduce((a, b) => a + b, 0);
+      const passed = at.map((k) => plies.selfWeights.slice(0, k + 1).reduce((sum, w, j) => sum + w - shares[j]! * total, 0));
+      const f = factorOf(combination, "dead") * (single ? passed[0]! : Math.max(...passed.map(Math.abs)));
+      if (f !== 0) push(0, L, f, f);
+    }
     for (const load of job.beam.loads) {
       if (load.type === "moment") continue;
       const f = factorOf(combination, load.category) * fraction(load.face ?? "top");
