@@ -140,6 +140,9 @@ export function designMember(job: JobDocument): DesignResult {
         ? "A load on top bears on each ply in proportion to its thickness (common practice); each ply's self-weight arrives on that ply, and what it weighs beyond its E·I share passes across the interfaces like any other load."
         : `A load on top bears on the plies that reach the top (${plies.parts.filter((_, i) => plies.plies[i]!.bearsOnTop !== false).join(", ")}) in proportion to their thicknesses (common practice), not on the shallower ones (${plies.parts.filter((_, i) => plies.plies[i]!.bearsOnTop === false).join(", ")}); each ply's self-weight arrives on that ply, and what it weighs beyond its E·I share passes across the interfaces like any other load.`,
     );
+    if (plies.plies.some((p) => p.bearsAtBottom === false)) {
+      assumptions.add(`A ply that does not reach the bottom (${plies.parts.filter((_, i) => plies.plies[i]!.bearsAtBottom === false).join(", ")}) does not bear on the supports: its E·I share of each reaction is handed to the plies that do through the connectors within half the member depth of the support (the concentrated-load rule); the plies that reach the bottom each take their own share there.`);
+    }
     assumptions.add("Each ply is checked in bending and shear on its own share of the moment and shear; deflection is that of the combined E·I (Σ E·I of the plies).");
     if (plies.plies.some((_, i) => section.parts.find((p) => p.id === plies.parts[i])!.material.family === "steel")) {
       assumptions.add("A steel plate between the plies is held laterally by the bolts through the timber plies on either side, so its lateral-torsional buckling alone is not checked; the bolts must be placed as scheduled for this to hold.");
@@ -223,6 +226,9 @@ export function designMember(job: JobDocument): DesignResult {
 
   if (terminations.length > 0) {
     assumptions.add("A part that stops short of the member's ends is developed at its theoretical cut-off: the point where the section without it first reaches its elastic bending strength under the largest moment of any combination; its force there is M·Q/I of the section with it (AISC 360-16 §F13.3 [M]).");
+  }
+  if (plies && plies.parts.some((id) => section.parts.find((p) => p.id === id)!.material.family === "steel")) {
+    notChecked.push("Bearing of the bolts on the steel plate and the plate's own edge and end distances (AISC 360-16 §J3.10, §J3.4; EN 1993-1-8 Table 3.4); bearing of each ply at the supports.");
   }
   if (offset) {
     notChecked.push(`The load passed across the interfaces of the side-by-side plies (${offset.join(", ")}): their mid-depths are not at one level, so the plies do not share the load simply by E·I; set each ply's mid-depth at one level (plates centred on the depth of the timber) to have the transfer designed.`);

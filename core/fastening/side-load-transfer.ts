@@ -46,7 +46,7 @@ export function multiPlyOf(section: SectionModel): MultiPly | null {
     parts: ordered.map((p) => p.id),
     plies: ordered.map((p) => {
       const r = p.rects[0]!;
-      return { name: p.name || p.id, modulus: p.material.E, thickness: r.x1 - r.x0, depth: r.y1 - r.y0, bearsOnTop: Math.abs(r.y1 - top) <= tol };
+      return { name: p.name || p.id, modulus: p.material.E, thickness: r.x1 - r.x0, depth: r.y1 - r.y0, bearsOnTop: Math.abs(r.y1 - top) <= tol, bearsAtBottom: Math.abs(r.y0 - bottom) <= tol };
     }),
     depth: top - bottom,
     selfWeights: ordered.map((p) => p.material.density * GRAVITY * p.area * 1e-9),
@@ -100,7 +100,7 @@ export function interfaceDemand(job: JobDocument, beam: BeamAnalysis, plies: Mul
   const fractions = (face: LoadFace) => at.map((k) => interfaceTransfer(plies.plies, [{ face, magnitude: 1 }]).interfaces[k]!.force);
   const fraction = (face: LoadFace) => (single ? fractions(face)[0]! : Math.max(...fractions(face).map(Math.abs)));
   const L = beam.length;
-  return beam.results.map(({ combination }) => {
+  return beam.results.map(({ combination, reactions }) => {
     const intensity: { x0: number; x1: number; t0: number; t1: number }[] = [];
     const push = (x0: number, x1: number, t0: number, t1: number) => {
       if (single || (t0 >= 0 && t1 >= 0)) intensity.push({ x0, x1, t0, t1 });
@@ -111,6 +111,16 @@ export function interfaceDemand(job: JobDocument, beam: BeamAnalysis, plies: Mul
         intensity.push({ x0, x1: xz, t0: Math.abs(t0), t1: 0 }, { x0: xz, x1, t0: 0, t1: Math.abs(t1) });
       }
     };
+    // A support pushes up on the plies that reach the bottom; a ply that does not reach it (a shallower plate) hands
+    // its share of the reaction to them through the connectors within d/2 of the support, the concentrated-load rule
+    // above. As a load, the reaction is −R on the bottom face.
+    const bottom = fraction("bottom");
+    if (bottom !== 0) {
+      for (const r of reactions) {
+        const [a, b] = [Math.max(0, r.x - plies.depth / 2), Math.min(L, r.x + plies.depth / 2)];
+        if (b > a && r.R !== 0) push(a, b, (-bottom * r.R) / (b - a), (-bottom * r.R) / (b - a));
+      }
+    }
     if (job.beam.selfWeight) {
       // A ply heavier than its share (a steel plate) passes the rest of its weight to the others: T_k = Σ_{j≤k} (w_j − s_j·Σw).
       const shares = plyShares(plies.plies);

@@ -60,8 +60,13 @@ describe("flitch beam: two 2x12 plies and a 1/2 × 11 in plate, 3/4 in bolts, 14
     expect(result.joints.find((j) => j.id === "plate")!.demand).toBe("side-load");
     expect(s.lineCount).toBe(2);
     // 600 plf = 50 lb/in; each timber ply takes 1/2 of it on top and keeps (1 − s_p)/2: it passes s_p/2 · 50 lb/in to the plate.
-    const perLineLbIn = (plateShare / 2) * 50;
-    expectClose(Math.max(...s.shearFlow), perLineLbIn * 4.4482216152605 / 25.4, { rel: 1e-9 }, "per-line transfer, N/mm");
+    const toNmm = 4.4482216152605 / 25.4;
+    const mid = result.beam.stations.findIndex((x) => x > 2000 && x < 2200);
+    expectClose(s.shearFlow[mid]!, (plateShare / 2) * 50 * toNmm, { rel: 1e-9 }, "per-line transfer along the span, N/mm");
+    // The plate does not reach the supports: its share of each reaction, s_p · R = s_p · 600 · 7 lb, goes back to the timber
+    // through the bolts within d/2 = 5.625 in of the end (the concentrated-load rule [CP]), on top of the load passed in there.
+    const reactionLb = 600 * 7;
+    expectClose(Math.max(...s.shearFlow), (plateShare / 2) * (50 + reactionLb / 5.625) * toNmm, { rel: 1e-9 }, "per-line transfer next to a support, N/mm");
     expect(result.warnings.some((w) => w.includes("spacing limits only"))).toBe(false);
   });
 
@@ -111,7 +116,7 @@ describe("flitch beam: two 2x12 plies and a 1/2 × 11 in plate, 3/4 in bolts, 14
 });
 
 describe("invariant: the force passed across the interfaces over the span equals the share the plies that do not bear take from those that do", () => {
-  test("property (fast-check, fixed seed): Σ over interfaces of ∫ transfer dx = |s_p·ΣW − W_on plate| for any timber and plate sizes and self-weights, single or double shear [D]", () => {
+  test("property (fast-check, fixed seed): Σ over interfaces of ∫ transfer dx = ∫ |s_p·q − q_on plate| dx, reactions and self-weight included, for any timber and plate sizes, single or double shear [D]", () => {
     fc.assert(
       fc.property(
         fc.record({
@@ -165,21 +170,27 @@ describe("invariant: the force passed across the interfaces over the span equals
           const ap = g.depthRatio > 1 ? 1 : 0;
           const L = g.span * 1000;
           const W = g.w * L + (g.partial ? g.partial.w * (Math.min(g.span, g.partial.from + g.partial.len) - g.partial.from) * 1000 : 0);
-          const L_W = (2 * wt + wp) * L;
-          // What the plate takes from (or gives to) the timber per unit length: its share of all the load less what arrives
-          // on it; integrated stretch by stretch (with and without the partial load), since its sign may change between them.
-          const perLength = (w: number) => Math.abs(sp * (w + 2 * wt + wp) - ap * w - wp);
-          const partialLength = g.partial ? (Math.min(g.span, g.partial.from + g.partial.len) - g.partial.from) * 1000 : 0;
-          const exact = perLength(g.w + (g.partial?.w ?? 0)) * partialLength + perLength(g.w) * (L - partialLength);
+          const wsw = 2 * wt + wp;
+          const [pa, pb] = g.partial ? [g.partial.from * 1000, Math.min(g.span, g.partial.from + g.partial.len) * 1000] : [0, 0];
+          const q = (x: number) => g.w + (g.partial && x > pa && x < pb ? g.partial.w : 0);
+          // Support reactions by statics (simple span), and each spread over the d/2 of the member next to its support.
+          const Wall = W + wsw * L;
+          const Rright = (((g.w + wsw) * L * L) / 2 + (g.partial ? g.partial.w * (pb - pa) * ((pa + pb) / 2) : 0)) / L;
+          const Rleft = Wall - Rright;
+          const half = Math.max(g.d, dp) / 2;
+          // What the plate takes in per unit length (positive) or hands out: its share of everything on the member less what
+          // arrives on it; a support's reaction arrives on the plies that reach the bottom (the plate, when it is the deeper).
+          const bp = ap;
+          const P = (x: number) => sp * (q(x) + wsw) - ap * q(x) - wp + (bp - sp) * ((x < half ? Rleft : 0) + (x > L - half ? Rright : 0)) / half;
+          const cuts = [...new Set([0, L, pa, pb, half, L - half])].filter((c) => c >= 0 && c <= L).sort((a, b) => a - b);
+          let exact = 0;
+          for (let i = 0; i + 1 < cuts.length; i++) exact += Math.abs(P((cuts[i]! + cuts[i + 1]!) / 2)) * (cuts[i + 1]! - cuts[i]!);
           // A bolt through timber, plate, timber (named joint) is designed for each load's transfer without relief between them.
-          const expected = g.named ? Math.abs(sp - ap) * W + Math.abs(sp * L_W - wp * L) : exact;
+          const expected = g.named ? Math.abs(sp - ap) * W + Math.abs(sp * wsw - wp) * L + Math.abs(bp - sp) * (Rleft + Rright) : exact;
           expect(expected).toBeGreaterThanOrEqual(exact * (1 - 1e-12));
-          // ∫ of the per-line transfer over the span, summed over every contact line (trapezoids between stations, exact for piecewise-constant transfer).
-          const x = result.beam.stations;
-          let passed = 0;
-          for (const s of result.schedules) {
-            for (let i = 0; i + 1 < x.length; i++) passed += ((s.shearFlow[i]! + s.shearFlow[i + 1]!) / 2) * (x[i + 1]! - x[i]!) * s.lineCount;
-          }
+          // Σ over the lines of ∫ transfer dx, from the schedules' own integral of the demand (∫ q/R dx · lines, R = 5000 N, one combination).
+          expect(result.beam.combinations).toHaveLength(1);
+          const passed = result.schedules.reduce((sum, sch) => sum + sch.efficiency.demandIntegral * 5000, 0);
           expectClose(passed, expected, { rel: 1e-6 }, "force passed across the interfaces");
           expect(result.multiPly!.plies.find((p) => p.part === "plate")!.bearsTopLoad).toBe(ap === 1);
         },
@@ -239,7 +250,10 @@ describe("EN 1995-1-1: timber, steel plate, timber with bolts in double shear (t
     const EIp = 210_000 * ((12 * 280 ** 3) / 12);
     const sp = EIp / (EIp + 2 * EIt);
     expectClose(sp, 0.55392, { rel: 1e-4 }, "plate share [D]");
-    expectClose(Math.max(...s.shearFlow), (sp / 2) * (1.35 * 3 + 1.5 * 4.5), { rel: 1e-9 }, "per-line transfer, N/mm");
+    const mid = result.beam.stations.findIndex((x) => x > 2000 && x < 2500);
+    expectClose(s.shearFlow[mid]!, (sp / 2) * (1.35 * 3 + 1.5 * 4.5), { rel: 1e-9 }, "per-line transfer along the span, N/mm");
+    // Next to a support: the plate's share of the reaction, R = 10.8 N/mm · 2700 mm, handed back over d/2 = 150 mm [CP].
+    expectClose(Math.max(...s.shearFlow), (sp / 2) * (1.35 * 3 + 1.5 * 4.5) * (1 + 2700 / 150), { rel: 1e-9 }, "per-line transfer next to a support, N/mm");
     expect(result.status.passes).toBe(true);
   });
 
