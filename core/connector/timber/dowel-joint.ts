@@ -575,7 +575,7 @@ export function dowelDetailing(given: DowelSpec, context?: ConnectorContext): De
       per.push(ndsSpacing({ family: spec.family, diameterIn: spec.diameter / MM_PER_IN, angleDeg: angle, prebored: spec.predrilled || spec.family === "screw", slenderness: bearing / spec.diameter }));
     } else {
       const placement = isPanel(m.material) ? (spec.ec5.panel === "plywood" ? "plywood" : "osb") : "timber";
-      per.push(ec5Spacing({ family: spec.family, d: spec.diameter, angleDeg: angle, characteristicDensity: m.material.characteristicDensity ?? 0, predrilled: spec.predrilled, placement, steelToTimber }));
+      per.push(ec5Spacing({ family: spec.family, d: spec.diameter, angleDeg: angle, characteristicDensity: m.material.characteristicDensity ?? 0, predrilled: spec.predrilled, placement, steelToTimber, ...(context.direction === "across" ? { grainAlongLine: true } : {}) }));
     }
   });
   const max = (pick: (s: MemberSpacing) => number) => Math.max(0, ...per.map(pick));

@@ -219,7 +219,8 @@ describe("EN 1995-1-1: timber, steel plate, timber with bolts in double shear (t
       { id: "right", material: "C24", shape: { type: "rectangle", b: 75, h: 300 }, place: { on: "plate", side: "right" } },
     ],
     connectors: [{ id: "M16", kind: "timber-bolt", standard: "EN1995-1-1", shear: "double", size: "M16", grade: "8.8", serviceClass: 1 }],
-    fastening: { default: { connector: "M16", rows: 1 }, joints: [{ held: ["plate"], connector: "M16", rows: 1 }] },
+    // Bolts in pairs: one per row cannot hand the plate's reaction back within d/2 = 150 mm of a support, the first at a₃,t = 112 mm.
+    fastening: { default: { connector: "M16", rows: 2 }, joints: [{ held: ["plate"], connector: "M16", rows: 2 }] },
     beam: { spans: [5.4], loads: [{ type: "uniform", category: "dead", w: 3 }, { type: "uniform", category: "live", w: 4.5 }], selfWeight: false },
     combinations: { set: "en1990-6.10" },
     spacing: { module: 25, minZoneLength: 600, maxZonesPerSpan: 3, symmetric: true },
@@ -245,6 +246,13 @@ describe("EN 1995-1-1: timber, steel plate, timber with bolts in double shear (t
     expectClose(byCombination.get("EN-1a")!, (0.6 * Rk) / 1.3, { rel: 1e-6 }, "EN-1a (1.35G)");
     expectClose(byCombination.get("EN-2a")!, (0.8 * Rk) / 1.3, { rel: 1e-6 }, "EN-2a (1.35G + 1.5Q)");
     expect(s.resistance[0]!.reference).toContain("eq. (8.11)");
+    // Distances for a force across the member, grain along it, α = 90° (EN 1995-1-1 Table 8.4, bolts [M]): along the member
+    // a₁ = (4 + |cos α|)d = 64 mm; from the member ends a₃,t = max(7d, 80) = 112 mm; from the loaded edge
+    // a₄,t = max((2 + 2 sin α)d, 3d) = 64 mm; between rows a₂ = 4d = 64 mm.
+    expectClose(s.limits.minSpacing, 64, { rel: 1e-9 }, "a₁");
+    expectClose(s.limits.endDistance, 112, { rel: 1e-9 }, "a₃,t");
+    expectClose(s.limits.edgeDistance!, 64, { rel: 1e-9 }, "a₄,t");
+    expectClose(s.limits.rowSpacing!, 64, { rel: 1e-9 }, "a₂");
     // The transfer each line passes: s_p/2 of the factored top load, EN-2a: (1.35 · 3 + 1.5 · 4.5) N/mm [D].
     const EIt = 11_000 * ((75 * 300 ** 3) / 12);
     const EIp = 210_000 * ((12 * 280 ** 3) / 12);
