@@ -13,7 +13,7 @@ import { discreteSchedule, type JointInput } from "./fastening/discrete-schedule
 import { globalise, jointDemand, localView, memberJointsOf, type MemberJoint } from "./fastening/member-joints.js";
 import { partTerminations } from "./fastening/part-terminations.js";
 import { rowFit, rowFitProblem } from "./fastening/row-fit.js";
-import { interfaceDemand, interfaceOf, multiPlyOf, type MultiPly } from "./fastening/side-load-transfer.js";
+import { interfaceDemand, interfacesOf, multiPlyOf, offsetPlies, type MultiPly } from "./fastening/side-load-transfer.js";
 import { weldSchedule } from "./fastening/weld-schedule.js";
 import { fastenerReach } from "./multi-ply/ply-detailing.js";
 import { interfaceTransfer, plyShares } from "./multi-ply/ply-shares.js";
@@ -46,6 +46,7 @@ export function designMember(job: JobDocument): DesignResult {
   const stations = stationsFor(beam.length, [...new Set(beam.results.flatMap((r) => r.actions.breaks))]);
   const profile = stressProfile(section);
   const plies = stepped ? null : multiPlyOf(section);
+  const offset = stepped ? null : offsetPlies(section);
 
   const assumptions = new Set<string>();
   const standards = new Set<string>();
@@ -63,8 +64,9 @@ export function designMember(job: JobDocument): DesignResult {
     const flowFactor = Math.max(...mj.stretches.map((x) => x.flowFactor));
     const stressFactor = Math.max(...mj.stretches.map((x) => x.stressFactor));
     const inPlaneOfBending = !stepped && joint.firstMoment <= 1e-9 * section.transformedArea * (section.bounds.y1 - section.bounds.y0);
-    const plyInterface = inPlaneOfBending && plies ? interfaceOf(plies, joint) : null;
-    if (inPlaneOfBending && plyInterface === null) {
+    const plyInterfaces = inPlaneOfBending && plies ? interfacesOf(plies, joint) : null;
+    const plyInterface = plyInterfaces && plyInterfaces.length === 1 ? plyInterfaces[0]! : null;
+    if (inPlaneOfBending && plyInterfaces === null) {
       warnings.add(
         `Joint ${joint.id}: its held parts are balanced about the neutral axis (Q = 0), so bending in the plane of the member puts no shear flow on it; its connectors are placed by the spacing limits only.`,
       );
@@ -82,7 +84,7 @@ export function designMember(job: JobDocument): DesignResult {
       connectorLabel: kind.describe(connector),
       mechanism: kind.mechanism,
       rows: fastening.rows,
-      demand: plyInterface === null ? "shear-flow" : "side-load",
+      demand: plyInterfaces === null ? "shear-flow" : "side-load",
       extent: mj.extent,
       stretches: stepped ? mj.stretches.map((x) => ({ from: x.from, to: x.to, firstMoment: x.firstMoment, flowFactor: x.flowFactor })) : [],
       sharing:
@@ -90,18 +92,21 @@ export function designMember(job: JobDocument): DesignResult {
           ? `The cut that holds ${joint.held.join(" + ")} crosses ${joint.crossed.length} contact lines; ${
               kind.mechanism === "bond-line" ? "q = V·Q/I is shared by them in proportion to their widths (one stress τ = V·Q/(I·t))" : "q = V·Q/I is shared equally by them (the same connector on each, so equal stiffness)"
             }. This joint fastens ${lineCount} of them; ${fastenedElsewhere(joint, joints)}.`
-          : plyInterface !== null
-          ? `Interface ${plyInterface + 1} of side-by-side plies: its connectors pass the loads that arrive on one face (or on top of plies of unequal stiffness) to the plies beyond, in proportion to each ply's E·I; q = V·Q/I is zero here.`
+          : plyInterfaces !== null
+          ? `${plyInterfaces.length === 1 ? `Interface ${plyInterfaces[0]! + 1}` : `Interfaces ${plyInterfaces.map((k) => k + 1).join(" and ")}`} of side-by-side plies: ${plyInterfaces.length === 1 ? "its connectors pass" : "its connectors, through the held ply and both its neighbours, pass at each contact line the most either interface passes of"} the loads that arrive on one face (or on top of the plies that reach the top, beyond their share) to the plies beyond, in proportion to each ply's E·I; q = V·Q/I is zero here.`
           : lineCount > 1
             ? `q is shared equally by the ${lineCount} contact lines (the same connector on each, so equal stiffness).`
             : "One contact line carries the whole shear flow.",
     });
     // One context per combination and contact line; a combination's resistance is the least over the lines.
-    const contexts = beam.results.map((r) => joint.lines.map((line) => contextFor(r.combination, job, joint, line, fastening.headSide, fastening.rows, mj.section)));
+    // Across side-by-side plies the connectors pass the load across the member (perpendicular to the grain of timber plies).
+    const direction = plyInterfaces !== null ? "across" : "along";
+    const contexts = beam.results.map((r) => joint.lines.map((line) => contextFor(r.combination, job, joint, line, fastening.headSide, fastening.rows, mj.section, direction)));
     const common = { job, joint, connector, fastening, contexts };
     let input: JointInput;
-    if (plyInterface !== null) {
-      input = { ...common, beam, stations, flowFactor: 1, stressFactor: 1 / joint.contactWidth, demandActions: interfaceDemand(job, beam, plies!, plyInterface) };
+    if (plyInterfaces !== null) {
+      // The demand is per contact line; the schedule divides by the lines, so the factor restores it.
+      input = { ...common, beam, stations, flowFactor: joint.lines.length, stressFactor: 1 / joint.contactWidth, demandActions: interfaceDemand(job, beam, plies!, plyInterfaces) };
     } else if (!stepped) {
       input = { ...common, beam, stations, flowFactor: flowFactor * share, stressFactor };
     } else {
@@ -129,12 +134,23 @@ export function designMember(job: JobDocument): DesignResult {
   composite.assumptions.forEach((a) => assumptions.add(a));
 
   if (plies) {
-    assumptions.add("Side-by-side plies of one depth deflect together, so each carries a share of the load in proportion to its E·I; connectors at each interface pass what arrives on one side beyond its share.");
-    assumptions.add("A load on top bears on each ply in proportion to its thickness (common practice); the self-weight of each ply is carried by that ply.");
+    assumptions.add("Side-by-side plies deflect together, so each carries a share of the load in proportion to its E·I (each ply about its own centroid, all on the member's neutral axis); connectors at each interface pass what arrives on one side beyond its share, across the member (perpendicular to the grain of timber plies).");
+    assumptions.add(
+      plies.plies.every((p) => p.bearsOnTop !== false)
+        ? "A load on top bears on each ply in proportion to its thickness (common practice); each ply's self-weight arrives on that ply, and what it weighs beyond its E·I share passes across the interfaces like any other load."
+        : `A load on top bears on the plies that reach the top (${plies.parts.filter((_, i) => plies.plies[i]!.bearsOnTop !== false).join(", ")}) in proportion to their thicknesses (common practice), not on the shallower ones (${plies.parts.filter((_, i) => plies.plies[i]!.bearsOnTop === false).join(", ")}); each ply's self-weight arrives on that ply, and what it weighs beyond its E·I share passes across the interfaces like any other load.`,
+    );
+    if (plies.plies.some((p) => p.bearsAtBottom === false)) {
+      assumptions.add(`A ply that does not reach the bottom (${plies.parts.filter((_, i) => plies.plies[i]!.bearsAtBottom === false).join(", ")}) does not bear on the supports: its E·I share of each reaction is handed to the plies that do through the connectors within half the member depth of the support (the concentrated-load rule); the plies that reach the bottom each take their own share there.`);
+    }
+    assumptions.add("Each ply is checked in bending and shear on its own share of the moment and shear; deflection is that of the combined E·I (Σ E·I of the plies).");
+    if (plies.plies.some((_, i) => section.parts.find((p) => p.id === plies.parts[i])!.material.family === "steel")) {
+      assumptions.add("A steel plate between the plies is held laterally by the bolts through the timber plies on either side, so its lateral-torsional buckling alone is not checked; the bolts must be placed as scheduled for this to hold.");
+    }
     assumptions.add("A concentrated load hung on a face is passed by the connectors within half the member depth each side of it (common practice).");
     assumptions.add("A nail or screw at an interface between plies is driven from an outer face: it must pass the plies on that side and still reach its least penetration into the next one; its resistance is taken between the two plies at the interface.");
   }
-  const { checks, notChecked } = stepped ? steppedChecks(job, stretches, beam, composite.stiffness) : memberChecks(job, section, beam, profile, composite.stiffness);
+  const { checks, notChecked } = stepped ? steppedChecks(job, stretches, beam, composite.stiffness) : memberChecks(job, section, beam, profile, composite.stiffness, null, true, plies);
   checks.push(...composite.checks);
   const terminationsNow = () =>
     partTerminations({
@@ -211,6 +227,12 @@ export function designMember(job: JobDocument): DesignResult {
   if (terminations.length > 0) {
     assumptions.add("A part that stops short of the member's ends is developed at its theoretical cut-off: the point where the section without it first reaches its elastic bending strength under the largest moment of any combination; its force there is M·Q/I of the section with it (AISC 360-16 §F13.3 [M]).");
   }
+  if (plies && plies.parts.some((id) => section.parts.find((p) => p.id === id)!.material.family === "steel")) {
+    notChecked.push("Bearing of the bolts on the steel plate and the plate's own edge and end distances (AISC 360-16 §J3.10, §J3.4; EN 1993-1-8 Table 3.4); bearing of each ply at the supports.");
+  }
+  if (offset) {
+    notChecked.push(`The load passed across the interfaces of the side-by-side plies (${offset.join(", ")}): their mid-depths are not at one level, so the plies do not share the load simply by E·I; set each ply's mid-depth at one level (plates centred on the depth of the timber) to have the transfer designed.`);
+  }
   if (section.parts.length > 1 && joints.length === 0) warnings.add("No joint was found between the parts; check that the parts touch face to face.");
   const failures = [
     ...uncovered.map((u) => `Contact line between ${u.line.a} and ${u.line.b} (${u.line.orientation} at ${inJobUnits(u.line.level, "length", job.units)}${stepped ? `, ${inJobUnits(u.from, "span", job.units)}–${inJobUnits(u.to, "span", job.units)} along the member` : ""}): ${uncoveredReason(u, job.units)}`),
@@ -282,7 +304,7 @@ function multiPlyResult(plies: MultiPly, joints: JointResult[]): DesignResult["m
   const transfer = (face: "left" | "right" | "top") => interfaceTransfer(plies.plies, [{ face, magnitude: 1 }]);
   const shares = plyShares(plies.plies);
   return {
-    plies: plies.parts.map((part, i) => ({ part, share: shares[i]! })),
+    plies: plies.parts.map((part, i) => ({ part, share: shares[i]!, bearsTopLoad: plies.plies[i]!.bearsOnTop !== false })),
     interfaces: plies.parts.slice(0, -1).map((left, k) => ({
       between: [left, plies.parts[k + 1]!] as [string, string],
       joint: joints.find((j) => j.lines.length === 1 && j.lines[0]!.between[0] === left && j.lines[0]!.between[1] === plies.parts[k + 1])?.id ?? null,

@@ -7,6 +7,8 @@ import type { SectionModel } from "../section/section-model.js";
 import { fromCore, unitLabel } from "../units/quantity.js";
 import type { ProfilePoint } from "../section/stress-profile.js";
 import type { StiffnessFactor } from "../fastening/composite-design.js";
+import type { MultiPly } from "../fastening/side-load-transfer.js";
+import { plyShares } from "../multi-ply/ply-shares.js";
 
 export interface MemberChecks {
   checks: MemberCheck[];
@@ -15,6 +17,8 @@ export interface MemberChecks {
 
 const BENDING = "σ = n·M·y/I (elastic bending of the transformed section)";
 const SHEAR = "τ = V·Q/(I·t) (elastic shear stress, averaged over the width at each level)";
+const PLY_BENDING = "σ_j = s_j·M·c_j/I_j, s_j = E_j I_j/Σ E I (each side-by-side ply on its share of the moment)";
+const PLY_SHEAR = "τ_j = 1.5·s_j·V/(t_j·d_j) (each side-by-side ply on its share of the shear, rectangular ply)";
 
 /**
  * Bending and shear stress per material and deflection, for every combination. Where the section
@@ -29,6 +33,7 @@ export function memberChecks(
   stiffness: StiffnessFactor | null = null,
   range: { from: number; to: number; label: string } | null = null,
   withDeflection = true,
+  plies: MultiPly | null = null,
 ): MemberChecks {
   const a = range?.from ?? 0;
   const b = range?.to ?? beam.length;
@@ -38,7 +43,10 @@ export function memberChecks(
   const materials = [...new Map(section.parts.map((p) => [p.material.id, p.material])).values()];
   const I = section.secondMoment;
 
-  for (const material of materials) {
+  // Side-by-side plies: each ply on its own share (the transformed section's shear, averaged over the
+  // whole width at a level, would understate a stiff plate's shear and overstate the timber's).
+  if (plies) plyChecks(plies, section, beam, a, b, where, checks, notChecked);
+  for (const material of plies ? [] : materials) {
     const parts = section.parts.filter((p) => p.material.id === material.id);
     const names = parts.map((p) => p.name || p.id).join(", ");
     const fb = material.strength.bending;
@@ -85,6 +93,40 @@ export function memberChecks(
     "Withdrawal, pull-through and head capacity of connectors, and splitting of the parts.",
   );
   return { checks, notChecked };
+}
+
+function plyChecks(plies: MultiPly, section: SectionModel, beam: BeamAnalysis, a: number, b: number, where: string, checks: MemberCheck[], notChecked: string[]): void {
+  const shares = plyShares(plies.plies);
+  plies.parts.forEach((id, j) => {
+    const part = section.parts.find((p) => p.id === id)!;
+    const ply = plies.plies[j]!;
+    const name = `${part.name || part.id} (${part.material.name})`;
+    const I = (ply.thickness * ply.depth ** 3) / 12;
+    const fb = part.material.strength.bending;
+    if (fb === undefined) notChecked.push(`Bending stress in ${name}: no bending strength given.`);
+    else {
+      let worst = { demand: 0, combination: "", at: 0 as number | null };
+      for (const r of beam.results) {
+        const { max, min } = momentExtremes(r.actions, a, b);
+        for (const m of [max, min]) {
+          const sigma = (shares[j]! * Math.abs(m.value) * (ply.depth / 2)) / I;
+          if (sigma > worst.demand) worst = { demand: sigma, combination: r.combination.id, at: m.x };
+        }
+      }
+      checks.push(stressCheck(`bending-ply-${id}`, `Bending stress, ${name}${where}`, worst, fb, PLY_BENDING));
+    }
+    const fv = part.material.strength.shear;
+    if (fv === undefined) notChecked.push(`Shear stress in ${name}: no shear strength given.`);
+    else {
+      let worst = { demand: 0, combination: "", at: 0 as number | null };
+      for (const r of beam.results) {
+        const v = maxAbsShear(r.actions, a, b);
+        const tau = (1.5 * shares[j]! * v.value) / (ply.thickness * ply.depth);
+        if (tau > worst.demand) worst = { demand: tau, combination: r.combination.id, at: v.x };
+      }
+      checks.push(stressCheck(`shear-ply-${id}`, `Shear stress, ${name}${where}`, worst, fv, PLY_SHEAR));
+    }
+  });
 }
 
 function occupies(r: { y0: number; y1: number }, pt: ProfilePoint, tol: number): boolean {

@@ -58,6 +58,12 @@ export interface ConnectorContext {
   rows: number;
   /** The job's unit system, for messages a person reads (numbers in the context are in core units). */
   units: UnitSystem;
+  /**
+   * Which way the connector is loaded: along the member (shear flow; the kind's own grain angles apply),
+   * or across it (a load passed between side-by-side plies: perpendicular to the grain of timber parts,
+   * whatever angles the connector gives). Along when absent.
+   */
+  direction?: "along" | "across";
 }
 
 /**

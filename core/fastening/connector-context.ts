@@ -6,7 +6,7 @@ import type { JointPlane } from "../section/joints.js";
 import type { SectionModel } from "../section/section-model.js";
 
 /** Context of a connector at one contact line of a joint, for one combination. */
-export function contextFor(combination: Combination, job: Pick<JobDocument, "basis" | "units">, joint: JointPlane, line: ContactLine, headSide: "auto" | "held" | "other", rows: number, section: SectionModel): ConnectorContext {
+export function contextFor(combination: Combination, job: Pick<JobDocument, "basis" | "units">, joint: JointPlane, line: ContactLine, headSide: "auto" | "held" | "other", rows: number, section: SectionModel, direction: "along" | "across" = "along"): ConnectorContext {
   const member = memberAt(section);
   const held = new Set(joint.held);
   const inside = member(held.has(line.a) ? line.a : line.b, line);
@@ -22,6 +22,7 @@ export function contextFor(combination: Combination, job: Pick<JobDocument, "bas
     basis: job.basis,
     rows,
     units: job.units,
+    direction,
     members: headIsHeld ? [inside, outside] : [outside, inside],
     double: doubleShearAt(joint, line, section, member),
     adherends: [...materials.values()].map((m) => ({ material: m.name, shearStrength: m.strength.shear, rollingShear: m.strength.rollingShear })),

@@ -17,10 +17,17 @@ export interface Ply {
   depth: number;
   /** I about the bending axis, mm⁴; thickness·depth³/12 when not given. */
   secondMoment?: number;
+  /** The ply reaches the top of the member, so a load on top bears on it; true when not given. */
+  bearsOnTop?: boolean;
+  /** The ply reaches the bottom of the member, so it bears on the supports; true when not given. */
+  bearsAtBottom?: boolean;
 }
 
-/** Where a load arrives: hung on the left face (ply 1), on the right face (ply n), or bearing on top of every ply. */
-export type LoadFace = "left" | "right" | "top";
+/**
+ * Where a load arrives: hung on the left face (ply 1), on the right face (ply n), bearing on top of the
+ * plies that reach the top, or (a support's reaction, upward as a negative load) under the plies that reach the bottom.
+ */
+export type LoadFace = "left" | "right" | "top" | "bottom";
 
 export interface SideLoad {
   face: LoadFace;
@@ -44,14 +51,21 @@ export function plyShares(plies: Ply[]): number[] {
 
 /**
  * How a load arrives across the plies, as fractions per ply: all on ply 1 (left face), all on ply n
- * (right face), or bearing on top in proportion to each ply's thickness [CP].
+ * (right face), or bearing on top of the plies that reach the top (a shallower ply, such as a flitch
+ * plate set within the depth of the timber, takes none of it), in proportion to their thicknesses [CP];
+ * or (a support's reaction) under the plies that reach the bottom, in proportion to their E·I.
  */
 export function arrivalFractions(plies: Ply[], face: LoadFace): number[] {
   const n = plies.length;
   if (face === "left") return plies.map((_, j) => (j === 0 ? 1 : 0));
   if (face === "right") return plies.map((_, j) => (j === n - 1 ? 1 : 0));
-  const width = plies.reduce((s, p) => s + p.thickness, 0);
-  return plies.map((p) => p.thickness / width);
+  const bearing = (p: Ply) => (face === "top" ? p.bearsOnTop : p.bearsAtBottom) !== false;
+  // At the bottom (a support), the plies that reach it each take their own share: each carries its share of the
+  // load to the support, so only a ply that does not reach it hands its share to the others [D].
+  const weight = face === "top" ? (p: Ply) => p.thickness : plyStiffness;
+  const width = plies.filter(bearing).reduce((s, p) => s + weight(p), 0);
+  if (!(width > 0)) throw new RangeError(`no ply reaches the ${face} of the member`);
+  return plies.map((p) => (bearing(p) ? weight(p) / width : 0));
 }
 
 export interface InterfaceTransfer {

@@ -413,10 +413,11 @@ export const DesignResult = z.object({
   member: z.object({ mark: z.string(), description: z.string(), revision: z.string(), date: z.string().optional() }),
   status: z.object({ passes: z.boolean(), summary: z.string(), failures: z.array(z.string()) }),
   section: SectionResult,
-  /** Side-by-side plies of equal depth: each ply's share of a load by E·I, and the fraction of a unit load each interface passes, by the face it arrives on. */
+  /** Side-by-side plies (any depths, mid-depths at one level): each ply's share of a load by E·I, and the fraction of a unit load each interface passes, by the face it arrives on. */
   multiPly: z
     .object({
-      plies: z.array(z.object({ part: z.string(), share: z.number() })),
+      /** bearsTopLoad: the ply reaches the top of the member, so loads on top bear on it (shallower plies, such as a flitch plate within the timber's depth, take theirs through the connectors). */
+      plies: z.array(z.object({ part: z.string(), share: z.number(), bearsTopLoad: z.boolean() })),
       interfaces: z.array(z.object({ between: z.tuple([z.string(), z.string()]), joint: z.string().nullable(), fromLeftFace: z.number(), fromRightFace: z.number(), fromTop: z.number() })),
     })
     .nullable(),

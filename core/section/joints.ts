@@ -90,7 +90,9 @@ export function searchJoints(
   const partMoment = section.parts.map((p) => firstMomentOfParts(section, new Set([p.id])));
   const full = (1 << n) - 1;
   const tol = geometricTolerance(section);
-  const qTol = 1e-9 * Math.max(...section.parts.map((_, i) => Math.abs(partMoment[i]!)), tol);
+  // Rounding of Q is relative to A·d, the scale of a first moment: parts balanced about the neutral axis
+  // (side-by-side plies centred on one level) have Q of rounding size only, which is no shear flow.
+  const qTol = 1e-9 * Math.max(...section.parts.map((_, i) => Math.abs(partMoment[i]!)), tol, section.transformedArea * (section.bounds.y1 - section.bounds.y0));
 
   interface Cut { mask: number; crossed: number[]; firstMoment: number; width: number; smallerArea: number; oneLevel: boolean }
   const cuts: Cut[] = [];

@@ -112,16 +112,17 @@ function pliesTable(c: WorksheetContext): void {
   const m = result.multiPly;
   if (!m) return;
   sheet.heading("Side-by-side plies: load shares and what each interface passes", 2, 60);
-  sheet.note("Plies of one depth deflect together, so each carries its E·I share of every load. A load that arrives on one face (or on top of plies of unequal stiffness) must be passed across the interfaces to the other plies: the fraction of a unit load each interface passes is below (positive from the left towards the right).");
+  sheet.note("Side-by-side plies deflect together, so each carries its E·I share of every load. A load that arrives on one face, or on top of the plies that reach the top beyond their share (a shallower plate takes none of it directly), must be passed across the interfaces to the other plies: the fraction of a unit load each interface passes is below (positive from the left towards the right).");
   const share = (v: number) => numberText(Math.abs(v) < 1e-9 ? 0 : v, 3);
   table(
     sheet,
     [
       { header: "Ply", weight: 1.4 },
       { header: "Share of each load (E·I)", weight: 1.2, align: "right" },
+      { header: "Load on top bears on it", weight: 1.1 },
     ],
-    m.plies.map((p) => [partNames(result, [p.part]), share(p.share)]),
-    { width: sheet.width * 0.5 },
+    m.plies.map((p) => [partNames(result, [p.part]), share(p.share), p.bearsTopLoad ? "yes" : "no (shallower)"]),
+    { width: sheet.width * 0.7 },
   );
   table(
     sheet,

@@ -179,7 +179,16 @@ function doubleShearGeometry(spec: DowelSpec, context: ConnectorContext): DowelG
   };
 }
 
-export function dowelProblems(spec: DowelSpec, context: ConnectorContext): PlacementProblem[] {
+/**
+ * The fastener as loaded at this context: a load passed across the member between side-by-side plies
+ * acts perpendicular to the grain of the timber parts (θ = 90°), whatever the connector's angles say.
+ */
+export function oriented(spec: DowelSpec, context: ConnectorContext): DowelSpec {
+  return context.direction === "across" ? { ...spec, angles: { side: 90, main: 90 } } : spec;
+}
+
+export function dowelProblems(given: DowelSpec, context: ConnectorContext): PlacementProblem[] {
+  const spec = oriented(given, context);
   const problems = lineProblems(spec, context);
   // A double-shear fastener's problems concern the joint's three parts, the same from either contact line.
   return spec.shear === "double" ? problems.map((p) => (p.on === "material" ? p : { ...p, wholeJoint: true })) : problems;
@@ -274,9 +283,16 @@ function lineProblems(spec: DowelSpec, context: ConnectorContext): PlacementProb
   return out;
 }
 
-export function dowelResistance(spec: DowelSpec, context: ConnectorContext): ConnectorResistance {
+export function dowelResistance(given: DowelSpec, context: ConnectorContext): ConnectorResistance {
+  const spec = oriented(given, context);
   const g = dowelGeometry(spec, context);
-  const each = g.cases.map((b) => (spec.standard === "NDS-2018" ? ndsResistance(spec, context, g, b) : ec5Resistance(spec, context, g, b)));
+  const across: WorkingStep[] =
+    context.direction === "across"
+      ? [{ symbol: "θ", description: "angle between load and grain in the timber parts: the load passes across the member between side-by-side plies, perpendicular to the grain", value: 90, quantity: "ratio" }]
+      : [];
+  const each = g.cases
+    .map((b) => (spec.standard === "NDS-2018" ? ndsResistance(spec, context, g, b) : ec5Resistance(spec, context, g, b)))
+    .map((r) => ({ ...r, steps: [...across, ...r.steps] }));
   if (!g.double) return each[0]!;
   // Double shear: every outer member (and driving direction) is checked with the central member; the weaker governs.
   const at = each.reduce((best, r, i) => (r.value < each[best]!.value * (1 - 1e-9) ? i : best), 0);
@@ -546,8 +562,9 @@ function dowelWarnings(spec: DowelSpec, context: ConnectorContext): string[] {
   return out;
 }
 
-export function dowelDetailing(spec: DowelSpec, context?: ConnectorContext): DetailingLimits {
+export function dowelDetailing(given: DowelSpec, context?: ConnectorContext): DetailingLimits {
   if (!context) return { minSpacing: 0, maxSpacing: null, endDistance: 0, sources: [] };
+  const spec = oriented(given, context);
   const g = dowelGeometry(spec, context);
   const per: MemberSpacing[] = [];
   const steelToTimber = g.parts.some((x) => isSteel(x.member.material));
@@ -558,7 +575,7 @@ export function dowelDetailing(spec: DowelSpec, context?: ConnectorContext): Det
       per.push(ndsSpacing({ family: spec.family, diameterIn: spec.diameter / MM_PER_IN, angleDeg: angle, prebored: spec.predrilled || spec.family === "screw", slenderness: bearing / spec.diameter }));
     } else {
       const placement = isPanel(m.material) ? (spec.ec5.panel === "plywood" ? "plywood" : "osb") : "timber";
-      per.push(ec5Spacing({ family: spec.family, d: spec.diameter, angleDeg: angle, characteristicDensity: m.material.characteristicDensity ?? 0, predrilled: spec.predrilled, placement, steelToTimber }));
+      per.push(ec5Spacing({ family: spec.family, d: spec.diameter, angleDeg: angle, characteristicDensity: m.material.characteristicDensity ?? 0, predrilled: spec.predrilled, placement, steelToTimber, ...(context.direction === "across" ? { grainAlongLine: true } : {}) }));
     }
   });
   const max = (pick: (s: MemberSpacing) => number) => Math.max(0, ...per.map(pick));

@@ -63,7 +63,7 @@ export type Ec5Placement = "timber" | "plywood" | "osb";
  * EN 1995-1-1 Tables 8.2 (nails; screws up to 6 mm), 8.4 (bolts; screws and lag screws over 6 mm)
  * and 8.5 (dowels). α is the angle between the force (along the member) and the grain.
  */
-export function ec5Spacing(p: { family: DowelFamily; d: number; angleDeg: number; characteristicDensity: number; predrilled: boolean; placement: Ec5Placement; steelToTimber: boolean }): MemberSpacing & { table: Ec5Distances } {
+export function ec5Spacing(p: { family: DowelFamily; d: number; angleDeg: number; characteristicDensity: number; predrilled: boolean; placement: Ec5Placement; steelToTimber: boolean; grainAlongLine?: boolean }): MemberSpacing & { table: Ec5Distances } {
   const { d } = p;
   const a = (foldAngle(p.angleDeg) * Math.PI) / 180;
   const cos = Math.abs(Math.cos(a));
@@ -115,9 +115,11 @@ export function ec5Spacing(p: { family: DowelFamily; d: number; angleDeg: number
     source = "EN 1995-1-1 Table 8.4 (bolts)";
   }
   const table = { a1, a2, a3t, a3c, a4t, a4c };
-  const alongGrain = foldAngle(p.angleDeg) <= 45;
+  // With the force along the line the grain lies along it when α is small; a force across the member (between
+  // side-by-side plies) says directly that the grain runs along the line, whatever α.
+  const alongGrain = p.grainAlongLine ?? foldAngle(p.angleDeg) <= 45;
   return alongGrain
-    ? { along: a1, across: a2, end: Math.max(a3t, a3c), edge: Math.max(a4t, a4c), table, source: `${source}: a₁ along the line, a₂ between rows, a₃,t at the ends, a₄ at the edges` }
+    ? { along: a1, across: a2, end: Math.max(a3t, a3c), edge: Math.max(a4t, a4c), table, source: `${source}: ${p.grainAlongLine ? `grain along the member, force across it (α = ${Number(foldAngle(p.angleDeg).toPrecision(3))}°), so ` : ""}a₁ along the line, a₂ between rows, a₃,t at the ends, a₄ at the edges` }
     : { along: a2, across: a1, end: Math.max(a4t, a4c), edge: Math.max(a3t, a3c), table, source: `${source}: grain across the member, so a₂ along the line, a₁ between rows, a₄ at the member ends, a₃ at the edges` };
 }
 

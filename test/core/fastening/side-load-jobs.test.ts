@@ -123,9 +123,11 @@ describe("a concentrated load hung on a face of the plies (moved from the stand-
 
 describe("rows of bolts across the depth of the plies (moved from the stand-alone rowsAcrossDepth onto whole members)", () => {
   // M12 bolts, EN 1995-1-1 Table 8.4 [V] at α = 90°: a₄,t = max((2 + 2 sin α)d; 3d) = 48 mm, a₂ = 4d = 48 mm,
-  // a₃,t = max(7d; 80 mm) = 84 mm [D]. Across the depth the bolt kind takes its edge distance as the larger of
-  // a₃,t and a₄ (84 mm, on the safe side of a₄,t = 48 mm) and a₁ = (4 + |cos α|)d = 48 mm between rows, so
-  // n rows need 2 × 84 + (n − 1) × 48 mm: 216 mm for two [D].
+  // a₃,t = max(7d; 80 mm) = 84 mm [D]. The force passes across the member and the grain runs along it, so across the
+  // depth the edges are the plies' edges, a₄,t = 48 mm from each, a₂ = 48 mm between rows, and along the member
+  // a₁ = (4 + |cos α|)d = 48 mm apart and a₃,t = 84 mm from its ends: n rows need 2 × 48 + (n − 1) × 48 mm [D].
+  // (Before the connector context carried the force's direction, the grain was taken across the member: 84 mm at the
+  // edges and 48 mm at the ends, short of a₃,t there.)
   function bolted(depth: number, rows: number): JobInput {
     const job = plies(3, [{ type: "uniform", w: 1, face: "left" }], {}, rows);
     job.basis = "factored";
@@ -135,18 +137,19 @@ describe("rows of bolts across the depth of the plies (moved from the stand-alon
     return job;
   }
   const acrossWarnings = (r: ReturnType<typeof designMember>) => r.warnings.filter((w) => /per row need .* across part/.test(w));
-  test("two rows of M12 in a 2x12 ply (286 mm): 216 mm needed, they fit, with the 48 mm row spacing of the standard", () => {
+  test("two rows of M12 in a 2x12 ply (286 mm): 144 mm needed, they fit, with the 48 mm row spacing of the standard and 84 mm from the member ends", () => {
     const r = run(bolted(286, 2));
     expect(acrossWarnings(r)).toEqual([]);
     for (const s of r.schedules) {
       expectClose(s.limits.rowSpacing!, 48, { rel: 1e-9 });
-      expectClose(s.limits.edgeDistance!, 84, { rel: 1e-9 });
+      expectClose(s.limits.edgeDistance!, 48, { rel: 1e-9 });
+      expectClose(s.limits.endDistance, 84, { rel: 1e-9 });
     }
   });
-  test("rows that do not fit the depth fail the joint with both widths: 2 rows need 216 mm and 3 rows 264 mm across an 89 mm ply [D]", () => {
+  test("rows that do not fit the depth fail the joint with both widths: 2 rows need 144 mm and 3 rows 192 mm across an 89 mm ply [D]", () => {
     // The fit across the contact is now checked for every kind by the pipeline (core/fastening/row-fit.ts): the
     // joint fails with both widths instead of passing with a warning.
-    for (const [rows, needed] of [[2, 216], [3, 264]] as const) {
+    for (const [rows, needed] of [[2, 144], [3, 192]] as const) {
       const r = run(bolted(89, rows));
       expect(r.schedules.length).toBeGreaterThan(0);
       for (const s of r.schedules) {
