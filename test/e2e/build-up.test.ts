@@ -1,0 +1,75 @@
+import { join } from "node:path";
+import type { Locator, Page } from "playwright-core";
+import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { shots, startHarness, toolbarMessage, untilText, upToDate, type Harness } from "./page-harness.js";
+
+let h: Harness;
+let page: Page;
+
+beforeAll(async () => {
+  h = await startHarness();
+  page = h.page;
+});
+
+afterAll(async () => {
+  await h?.close();
+});
+
+describe("a new member from a typical build-up", () => {
+  test("a nailed box beam reaches its first schedule in at most 12 inputs, and the form stays editable", async () => {
+    await page.goto(`${h.base}/?example=workshop-box-beam.si`);
+    await page.locator(".status-banner").waitFor();
+    let inputs = 0;
+    const click = async (target: Locator) => {
+      inputs++;
+      await target.click();
+    };
+    const fill = async (target: Locator, value: string) => {
+      inputs++;
+      await target.fill(value);
+    };
+
+    await click(page.locator("details.menu > summary", { hasText: "File" }));
+    await click(page.locator("details.menu[open] .menu-item", { hasText: "New member from a typical build-up" }));
+    const dialog = page.getByRole("dialog", { name: "New member from a typical build-up" });
+    await dialog.waitFor();
+    inputs++;
+    await dialog.getByLabel("Build-up").selectOption("nailed-box");
+    await fill(dialog.getByLabel("Flange width (mm)"), "95");
+    await fill(dialog.getByLabel("Flange depth (mm)"), "70");
+    await fill(dialog.getByLabel("Web panel thickness (mm)"), "18");
+    await fill(dialog.getByLabel("Overall depth (mm)"), "450");
+    await fill(dialog.getByLabel("Span (m)"), "5");
+    await page.screenshot({ path: join(shots, "build-up-dialog.png") });
+    await click(dialog.getByRole("button", { name: "Fill the form" }));
+    await expect(dialog.count()).resolves.toBe(0);
+
+    await upToDate(page);
+    await page.getByRole("table", { name: /Schedule, joint (bottom|top)/ }).first().waitFor();
+    expect(inputs).toBeLessThanOrEqual(12);
+    await untilText(page, toolbarMessage(page), (t) => t.includes("nailed box beam"), "no message after filling the form");
+
+    // The usual form, filled and editable.
+    await expect(page.getByLabel("Span (m)").inputValue()).resolves.toBe("5");
+    await expect(page.getByLabel("Part 1 h (mm)").inputValue()).resolves.toBe("450");
+    await page.getByLabel("Span (m)").fill("4.5");
+    await upToDate(page);
+    await expect(page.getByLabel("Span (m)").inputValue()).resolves.toBe("4.5");
+    await page.screenshot({ path: join(shots, "build-up-filled.png"), fullPage: true });
+    expect(h.errors).toEqual([]);
+  });
+
+  test("a bad size is refused in the dialog in its own words, and Cancel leaves the job alone", async () => {
+    await page.locator("details.menu > summary", { hasText: "File" }).click();
+    await page.locator("details.menu[open] .menu-item", { hasText: "New member from a typical build-up" }).click();
+    const dialog = page.getByRole("dialog", { name: "New member from a typical build-up" });
+    await dialog.getByLabel("Build-up").selectOption("welded-plate-girder");
+    await dialog.getByLabel("Web plate depth (mm)").fill("deep");
+    await dialog.getByRole("button", { name: "Fill the form" }).click();
+    await expect(dialog.getByRole("alert").textContent()).resolves.toBe("Web plate depth (mm): enter a number, 0 or more.");
+    await dialog.getByRole("button", { name: "Cancel" }).click();
+    await expect(dialog.count()).resolves.toBe(0);
+    await expect(page.getByLabel("Span (m)").inputValue()).resolves.toBe("4.5");
+    expect(h.errors).toEqual([]);
+  });
+});
