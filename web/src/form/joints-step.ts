@@ -1,3 +1,4 @@
+import { jointName, type NamedPart } from "../results/joint-names.js";
 import type { JointResult } from "../../../core/schema/result.js";
 import { el } from "../dom.js";
 import { addButton, field, numberControl, rowButton, selectControl, type FormContext } from "./controls.js";
@@ -108,7 +109,8 @@ function jointRow(ctx: FormContext, joint: JointResult, k: number): HTMLElement 
     el("div", { className: "joint-head" }, [
       el("span", { className: "joint-name" }, [
         el("strong", { text: name }),
-        el("span", { className: "sub", text: ` holds ${joint.held.join(", ")} · ${describeLines(joint, unit)}` }),
+        el("span", { className: "joint-words", text: ` ${jointName(joint, state.list("parts") as NamedPart[])}` }),
+        el("span", { className: "sub", text: ` · holds ${joint.held.join(", ")} · ${describeLines(joint, unit)}` }),
         own ? null : el("span", { className: "joint-default", text: `${joint.connectorLabel || joint.connector}, ${joint.rows} per row (the default)` }),
       ]),
       el("label", { className: "own-toggle" }, [toggle, el("span", { text: "its own connector and rows" })]),
