@@ -59,6 +59,11 @@ describe("a new member from a typical build-up", () => {
     await page.getByLabel("Span (m)").fill("4.5");
     await upToDate(page);
     await expect(page.getByLabel("Span (m)").inputValue()).resolves.toBe("4.5");
+    // The joints' "default" text follows the rows as they are typed, not the last result.
+    await expect(page.locator(".joint-default").first().textContent()).resolves.toMatch(/, 2 per row \(the default\)$/);
+    await page.getByLabel(/^Side by side in a row/).first().fill("1");
+    await untilText(page, page.locator(".joint-default").first(), (t) => t.endsWith(", 1 per row (the default)"), "the default's text did not follow the rows");
+    await upToDate(page);
     await page.screenshot({ path: join(shots, "build-up-filled.png"), fullPage: true });
     expect(h.errors).toEqual([]);
   });
