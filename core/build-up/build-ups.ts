@@ -316,7 +316,8 @@ export function buildUpJob(id: BuildUpId, units: UnitSystem, given: BuildUpSizes
       break;
     }
   }
-  return job as JobInput;
+  // Parts built from one shape must not share it (structuredClone keeps shared objects shared): editing one part's size in the form would change the other.
+  return JSON.parse(JSON.stringify(job)) as JobInput;
 }
 
 /** Dressed width of a nominal size in inches (PS 20 dry sizes), for a plate as deep as the plies. */

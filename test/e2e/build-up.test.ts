@@ -50,12 +50,16 @@ describe("a new member from a typical build-up", () => {
     await untilText(page, toolbarMessage(page), (t) => t.includes("nailed box beam"), "no message after filling the form");
 
     // Joints named by what they join, in the form's list and beside the section.
-    await expect(page.locator(".joint-item .joint-words").allTextContents()).resolves.toEqual(expect.arrayContaining([" Top flange to both webs", " Bottom flange to both webs"]));
+    await expect(page.locator(".joint-item .joint-words").allTextContents()).resolves.toEqual(expect.arrayContaining([": Top flange to both webs", ": Bottom flange to both webs"]));
     await expect(page.locator(".joint-chosen").textContent()).resolves.toMatch(/^Joint (top|bottom): (Top|Bottom) flange to both webs\.$/);
 
     // The usual form, filled and editable.
     await expect(page.getByLabel("Span (m)").inputValue()).resolves.toBe("5");
     await expect(page.getByLabel("Part 1 h (mm)").inputValue()).resolves.toBe("450");
+    // Each part has its own shape: the left web's depth is not the right web's.
+    await page.getByLabel("Part 1 h (mm)").fill("460");
+    await expect(page.getByLabel("Part 4 h (mm)").inputValue()).resolves.toBe("450");
+    await page.getByLabel("Part 1 h (mm)").fill("450");
     await page.getByLabel("Span (m)").fill("4.5");
     await upToDate(page);
     await expect(page.getByLabel("Span (m)").inputValue()).resolves.toBe("4.5");

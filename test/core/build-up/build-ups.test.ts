@@ -24,6 +24,13 @@ describe("jobs from a typical build-up", () => {
     expect(buildUpJob("nailed-box", "si", { depth: 500, span: 6 })).toEqual(a);
   });
 
+  test("no two parts share one shape object (an edit of one would change the other)", () => {
+    for (const b of buildUps) {
+      const shapes = buildUpJob(b.id, "si").parts.map((p) => p.shape);
+      expect(new Set(shapes).size).toBe(shapes.length);
+    }
+  });
+
   test("laminations and plies follow the count; a plate sits between the first two plies", () => {
     expect(buildUpJob("glued-laminations", "si", { count: 4 }).parts).toHaveLength(4);
     const plies = buildUpJob("side-by-side-plies", "us", { count: 3, plate: 0.5 });

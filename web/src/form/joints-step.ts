@@ -110,7 +110,7 @@ function jointRow(ctx: FormContext, joint: JointResult, k: number): HTMLElement 
     el("div", { className: "joint-head" }, [
       el("span", { className: "joint-name" }, [
         el("strong", { text: name }),
-        el("span", { className: "joint-words", text: ` ${jointName(joint, state.list("parts") as NamedPart[])}` }),
+        el("span", { className: "joint-words", text: `: ${jointName(joint, state.list("parts") as NamedPart[])}` }),
         el("span", { className: "sub", text: ` · holds ${joint.held.join(", ")} · ${describeLines(joint, unit)}` }),
         own ? null : el("span", { className: "joint-default", text: defaultFasteningText(ctx, joint), attrs: { "data-connector": joint.connector, "data-connector-label": joint.connectorLabel } }),
       ]),
