@@ -72,6 +72,24 @@ describe("a new member from a typical build-up", () => {
     expect(h.errors).toEqual([]);
   });
 
+  test("a new part takes the size of the part it goes against, is added at the end, and the 'against' list follows a renamed part", async () => {
+    await page.getByLabel("Part 2 id").fill("lower");
+    await page.getByLabel("Part 2 id").press("Tab");
+    const against = page.getByLabel("Part the new one goes against");
+    await against.focus();
+    await expect(against.locator("option").allTextContents()).resolves.toEqual(["web-left", "lower", "top", "web-right"]);
+    await against.selectOption({ label: "web-right" });
+    await page.getByLabel("Where the new part goes").selectOption("right");
+    await page.getByRole("button", { name: "Add part" }).click();
+    // The right web's own 18 × 450 mm, and parts 1–4 keep their numbers.
+    await expect(page.getByLabel("Part 5 b (mm)").inputValue()).resolves.toBe("18");
+    await expect(page.getByLabel("Part 5 h (mm)").inputValue()).resolves.toBe("450");
+    await expect(page.getByLabel("Part 2 id").inputValue()).resolves.toBe("lower");
+    await page.getByRole("button", { name: "Remove Part 5" }).click();
+    await upToDate(page);
+    expect(h.errors).toEqual([]);
+  });
+
   test("a bad size is refused in the dialog in its own words, and Cancel leaves the job alone", async () => {
     await page.locator("details.menu > summary", { hasText: "File" }).click();
     await page.locator("details.menu[open] .menu-item", { hasText: "New member from a typical build-up" }).click();
