@@ -90,7 +90,26 @@ describe("a new member from a typical build-up", () => {
     expect(h.errors).toEqual([]);
   });
 
+  test("a US nailed box beam from the build-up: lumber by nominal size, zone ends also in feet and inches", async () => {
+    await page.getByRole("button", { name: "US", exact: true }).click();
+    await untilText(page, page.locator(".units-value"), (t) => t.startsWith("US customary"), "the job did not switch to US units");
+    await page.locator("details.menu > summary", { hasText: "File" }).click();
+    await page.locator("details.menu[open] .menu-item", { hasText: "New member from a typical build-up" }).click();
+    const dialog = page.getByRole("dialog", { name: "New member from a typical build-up" });
+    await expect(dialog.getByLabel("Flange lumber (nominal)").inputValue()).resolves.toBe("2x4");
+    await dialog.getByLabel("Span (ft)").fill("14");
+    await dialog.getByRole("button", { name: "Fill the form" }).click();
+    await upToDate(page);
+    const first = page.getByRole("table", { name: /^Schedule, joint/ }).first().locator("tbody tr").first().locator("td").nth(1);
+    // Zone 1 starts at the member's end: 0 ft, and its end in feet and inches to the sixteenth.
+    await expect(first.textContent()).resolves.toMatch(/^0 – [\d.]+0 – \d+'-[\d /]+"$/);
+    await page.getByRole("button", { name: "SI", exact: true }).click();
+    await untilText(page, page.locator(".units-value"), (t) => t.startsWith("SI"), "the job did not switch back to SI");
+    expect(h.errors).toEqual([]);
+  });
+
   test("a bad size is refused in the dialog in its own words, and Cancel leaves the job alone", async () => {
+    const spanBefore = await page.getByLabel("Span (m)").inputValue();
     await page.locator("details.menu > summary", { hasText: "File" }).click();
     await page.locator("details.menu[open] .menu-item", { hasText: "New member from a typical build-up" }).click();
     const dialog = page.getByRole("dialog", { name: "New member from a typical build-up" });
@@ -100,7 +119,7 @@ describe("a new member from a typical build-up", () => {
     await expect(dialog.getByRole("alert").textContent()).resolves.toBe("Web plate depth (mm): enter a number, 0 or more.");
     await dialog.getByRole("button", { name: "Cancel" }).click();
     await expect(dialog.count()).resolves.toBe(0);
-    await expect(page.getByLabel("Span (m)").inputValue()).resolves.toBe("4.5");
+    await expect(page.getByLabel("Span (m)").inputValue()).resolves.toBe(spanBefore);
     expect(h.errors).toEqual([]);
   });
 });
