@@ -19,3 +19,18 @@ describe("issues in the form's own words", () => {
     expect(plainMessage("must be greater than 0 (got -3)")).toBe("must be greater than 0 (got -3)");
   });
 });
+
+describe("a job file that cannot be opened says why in the form's words", () => {
+  test("lists and groups named as the form names them, with the file's key beside", async () => {
+    const { openableJob } = await import("../../web/src/job-state.js");
+    const opened = openableJob({ format: "stitchplan-job", parts: {}, fastening: "x", beam: { loads: [3] } });
+    expect(opened.ok).toBe(false);
+    if (opened.ok) return;
+    expect(opened.problems).toEqual([
+      "Parts (“parts” in the file) must be a list of entries in brackets […]",
+      "each entry of Loads (“beam.loads” in the file) must be a group of fields in braces {…}, not a single value",
+      "Joints (“fastening” in the file) must be a group of fields in braces {…}, not a single value",
+    ]);
+    expect(opened.problems.join(" ")).not.toMatch(/an object|expected/);
+  });
+});
