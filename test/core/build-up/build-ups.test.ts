@@ -17,6 +17,15 @@ describe("jobs from a typical build-up", () => {
     }
   }
 
+  for (const units of ["si", "us"] as const) {
+    test(`side-by-side plies with a steel plate between (${units}) is a valid job that designs`, () => {
+      const prepared = prepareJob(buildUpJob("side-by-side-plies", units, { plate: units === "us" ? 0.375 : 10 }));
+      if (!prepared.ok) expect(prepared.issues).toEqual([]);
+      if (!prepared.ok) return;
+      expect(designMember(prepared.core).joints.length).toBeGreaterThan(0);
+    });
+  }
+
   test("the sizes given replace the defaults, and the same sizes give the same job", () => {
     const a = buildUpJob("nailed-box", "si", { depth: 500, span: 6 });
     expect(a.parts.map((p) => p.shape)).toContainEqual({ type: "rectangle", b: 18, h: 500 });
