@@ -105,4 +105,24 @@ describe("the job store on the page", () => {
     await upToDate(page);
     expect(h.errors).toEqual([]);
   });
+
+  test("an example saved again is not filed into another project, nor turned into a revision of the member with its mark", async () => {
+    await page.goto(`${h.base}/?example=workshop-box-beam.si`);
+    await upToDate(page);
+    await expect(page.locator(".store-chip").textContent()).resolves.toContain("Not saved in a project");
+    await saveMenu().locator("summary").click();
+    // The store holds "Harbour Lane"; the example names "Harbour Lane workshop mezzanine": a new project is offered.
+    await untilText(page, page.getByLabel("Project to save into").locator("option"), (t) => t.length > 0, "the projects were not listed");
+    await expect(page.getByLabel("Project to save into").inputValue()).resolves.toBe("new");
+    await expect(page.getByLabel("New project name").inputValue()).resolves.toBe("Harbour Lane workshop mezzanine");
+    // Chosen by hand, the project that already has an MB-2: nothing is stored and no revision of it is offered.
+    const harbourLane = await page.getByLabel("Project to save into").locator("option", { hasText: /(^|· )Harbour Lane$/ }).getAttribute("value");
+    await page.getByLabel("Project to save into").selectOption(harbourLane!);
+    await saveMenu().getByRole("button", { name: "Save", exact: true }).click();
+    const said = await untilText(page, toolbarMessage(page), (t) => t.startsWith("Nothing was stored"), "the taken mark was not reported");
+    expect(said).toContain("already has a member MB-2 (4 revisions)");
+    await expect(toolbarMessage(page).getByRole("button", { name: /Save as revision/ }).count()).resolves.toBe(0);
+    await expect(page.locator(".store-chip").textContent()).resolves.toContain("Not saved in a project");
+    expect(h.errors).toEqual([]);
+  });
 });
