@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { Id, positive, Text } from "../schema/quantity.js";
-import { formatNumber, inJobUnits } from "../units/format.js";
+import { comparedInJobUnits, formatNumber, inJobUnits } from "../units/format.js";
 import type { ConnectorContext, JoinedMember, PlacementProblem, WeldDetailing, WeldKind, WeldResistance, WorkingStep } from "./connector-kind.js";
 import { MM_PER_IN, N_PER_KIP, MPA_PER_KSI } from "./quantity-text.js";
 import { EN1993_GAMMA_M2 } from "./steel/en1993-bolt.js";
@@ -108,6 +108,7 @@ function detailing(c: FilletWeld, context: ConnectorContext): WeldDetailing {
 function problems(c: FilletWeld, context: ConnectorContext): PlacementProblem[] {
   const out: PlacementProblem[] = [];
   const len = (mm: number) => inJobUnits(mm, "length", context.units);
+  const pair = (a: number, b: number) => comparedInJobUnits(a, b, "length", context.units);
   if (c.standard === "EN1993-1-8" && context.basis === "allowable") out.push({ on: "connector", field: "standard", message: `EN 1993-1-8 gives design values for factored loads, but the job's basis is "allowable": set basis to "factored" or use AISC-360-16` });
   context.members.forEach((m, i) => {
     if (m.material.family !== "steel") out.push({ on: "connector", field: "kind", message: `part "${m.part}" is not steel (family "${m.material.family}"): a fillet weld joins steel parts` });
@@ -118,12 +119,12 @@ function problems(c: FilletWeld, context: ConnectorContext): PlacementProblem[] 
   if (out.length > 0) return out;
   const d = detailing(c, context);
   const field = c.leg !== undefined ? "leg" : "throat";
-  if (exceeds(d.size, d.maxSize)) out.push({ on: "connector", field, message: `a ${len(d.size)} fillet is larger than the thinner part allows here (at most ${len(d.maxSize)}; ${d.sources[1]})` });
-  if (fallsShort(d.size, d.minSize)) out.push({ on: "connector", field, message: `a ${len(d.size)} fillet is below the least size ${len(d.minSize)} (${d.sources[0]})` });
+  if (exceeds(d.size, d.maxSize)) out.push({ on: "connector", field, message: `a ${pair(d.size, d.maxSize)[0]} fillet is larger than the thinner part allows here (at most ${pair(d.size, d.maxSize)[1]}; ${d.sources[1]})` });
+  if (fallsShort(d.size, d.minSize)) out.push({ on: "connector", field, message: `a ${pair(d.size, d.minSize)[0]} fillet is below the least size ${pair(d.size, d.minSize)[1]} (${d.sources[0]})` });
   if (c.pattern === "intermittent") {
-    if (fallsShort(c.segmentLength!, d.minSegmentLength)) out.push({ on: "connector", field: "segmentLength", message: `${len(c.segmentLength!)} is below the shortest segment ${len(d.minSegmentLength)} (${c.standard === "AISC-360-16" ? "AISC 360-16 §J2.2b: 4w and 1-1/2 in" : "EN 1993-1-8 §4.5.1(2): 6a and 30 mm"})` });
-    if (d.maxPitch !== null && exceeds(c.pitch!, d.maxPitch)) out.push({ on: "connector", field: "pitch", message: `${len(c.pitch!)} is above the largest pitch ${len(d.maxPitch)} (${d.sources[3]})` });
-    if (d.maxGap !== null && exceeds(c.pitch! - c.segmentLength!, d.maxGap)) out.push({ on: "connector", field: "pitch", message: `the gap ${len(c.pitch! - c.segmentLength!)} between segments is above the largest ${len(d.maxGap)} (EN 1993-1-8 §4.3.2.2)` });
+    if (fallsShort(c.segmentLength!, d.minSegmentLength)) out.push({ on: "connector", field: "segmentLength", message: `${pair(c.segmentLength!, d.minSegmentLength).join(" is below the shortest segment ")} (${c.standard === "AISC-360-16" ? "AISC 360-16 §J2.2b: 4w and 1-1/2 in" : "EN 1993-1-8 §4.5.1(2): 6a and 30 mm"})` });
+    if (d.maxPitch !== null && exceeds(c.pitch!, d.maxPitch)) out.push({ on: "connector", field: "pitch", message: `${pair(c.pitch!, d.maxPitch).join(" is above the largest pitch ")} (${d.sources[3]})` });
+    if (d.maxGap !== null && exceeds(c.pitch! - c.segmentLength!, d.maxGap)) out.push({ on: "connector", field: "pitch", message: `the gap ${pair(c.pitch! - c.segmentLength!, d.maxGap)[0]} between segments is above the largest ${pair(c.pitch! - c.segmentLength!, d.maxGap)[1]} (EN 1993-1-8 §4.3.2.2)` });
   }
   return out;
 }

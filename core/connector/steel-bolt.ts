@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { Id, positive, Text } from "../schema/quantity.js";
-import { formatNumber, inJobUnits } from "../units/format.js";
+import { comparedInJobUnits, formatNumber, inJobUnits } from "../units/format.js";
 import { doubleShearMembers, doubleShearRefusal, type ConnectorContext, type ConnectorResistance, type DetailingLimits, type DiscreteConnectorKind, type JoinedMember, type PlacementProblem, type WorkingStep } from "./connector-kind.js";
 import { MM_PER_IN, MPA_PER_KSI, N_PER_KIP } from "./quantity-text.js";
 import { aiscBolt, holeTypes, type AiscPly } from "./steel/aisc-bolt.js";
@@ -341,6 +341,7 @@ function problems(c: SteelBolt, context: ConnectorContext): PlacementProblem[] {
 function lineProblems(c: SteelBolt, context: ConnectorContext): PlacementProblem[] {
   const out: PlacementProblem[] = [];
   const len = (mm: number) => inJobUnits(mm, "length", context.units);
+  const pair = (a: number, b: number) => comparedInJobUnits(a, b, "length", context.units);
   const r = resolve(c);
   if (!r) {
     out.push({ on: "connector", field: c.size !== undefined ? "size" : "diameter", message: c.standard === "AISC-360-16" ? `is not a bolt size of AISC 360-16 Table J3.1 (${knownInchSizes().join(", ")} in)` : `is not a metric bolt size this program knows (${knownMetricSizes().join(", ")})` });
@@ -359,10 +360,10 @@ function lineProblems(c: SteelBolt, context: ConnectorContext): PlacementProblem
     else if (m.material.tensileStrength === undefined) out.push({ on: "material", ...at, field: "tensileStrength", message: `is needed for bearing at the bolt holes of part "${m.part}" (${c.standard === "AISC-360-16" ? "AISC 360-16 §J3.10" : "EN 1993-1-8 Table 3.4"})` });
   }
   const g = geometry(c, r);
-  if (c.minSpacing !== undefined && fallsShort(c.minSpacing, g.minSpacing)) out.push({ on: "connector", field: "minSpacing", message: `${len(c.minSpacing)} is below the least spacing ${len(g.minSpacing)} (${c.standard === "AISC-360-16" ? "AISC 360-16 §J3.3, 2-2/3 d" : "EN 1993-1-8 Table 3.3, 2.2d₀"})` });
+  if (c.minSpacing !== undefined && fallsShort(c.minSpacing, g.minSpacing)) out.push({ on: "connector", field: "minSpacing", message: `${pair(c.minSpacing, g.minSpacing).join(" is below the least spacing ")} (${c.standard === "AISC-360-16" ? "AISC 360-16 §J3.3, 2-2/3 d" : "EN 1993-1-8 Table 3.3, 2.2d₀"})` });
   const aiscEdge = c.standard === "AISC-360-16" ? `AISC 360-16 Table J3.4${c.holeType !== "standard" ? ` with C₂ of Table J3.5 for ${c.holeType} holes` : ""}` : "EN 1993-1-8 Table 3.3";
-  if (c.endDistance !== undefined && fallsShort(c.endDistance, g.minEnd)) out.push({ on: "connector", field: "endDistance", message: `${len(c.endDistance)} is below the least end distance ${len(g.minEnd)} (${aiscEdge})` });
-  if (c.edgeDistance !== undefined && fallsShort(c.edgeDistance, g.minEdge)) out.push({ on: "connector", field: "edgeDistance", message: `${len(c.edgeDistance)} is below the least edge distance ${len(g.minEdge)} (${aiscEdge})` });
+  if (c.endDistance !== undefined && fallsShort(c.endDistance, g.minEnd)) out.push({ on: "connector", field: "endDistance", message: `${pair(c.endDistance, g.minEnd).join(" is below the least end distance ")} (${aiscEdge})` });
+  if (c.edgeDistance !== undefined && fallsShort(c.edgeDistance, g.minEdge)) out.push({ on: "connector", field: "edgeDistance", message: `${pair(c.edgeDistance, g.minEdge).join(" is below the least edge distance ")} (${aiscEdge})` });
   for (const m of crossed(c, context)) {
     if (!fallsShort(g.hole, m.width)) {
       out.push({ on: "connector", field: c.size !== undefined ? "size" : "diameter", message: `a ${len(r.d)} bolt in a ${len(g.hole)} hole is larger than part "${m.part}" (${len(m.width)} wide across the contact line)` });

@@ -81,7 +81,7 @@ describe("a cover plate over the middle half", () => {
     await expect(elevation.locator("[data-role^='cutoff-line plate']").count()).resolves.toBe(2);
     const stretches = page.getByRole("table", { name: "Section stretch by stretch" });
     await expect(stretches.locator("tbody tr").count()).resolves.toBe(3);
-    expect(await rowText(stretches, "6.5 – 19.5")).toContain("1058");
+    expect(await rowText(stretches, "6.5 – 19.5")).toContain("1,058");
     await expect(ends().locator("tbody tr").count()).resolves.toBe(2);
     expect(await rowText(ends(), "plate, left")).toContain("6.5");
     expect(await rowText(ends(), "plate, right")).toContain("19.5");

@@ -84,7 +84,13 @@ describe("the job store on the page", () => {
   });
 
   test("issues a worksheet, records it, and finds it by the fingerprint printed on it", async () => {
-    const [download] = await Promise.all([page.waitForEvent("download"), page.getByRole("button", { name: "Issue the worksheet of revision 2" }).click()]);
+    // Revision 2 (the longer span) may fail: then the page asks before it issues.
+    const fails = ((await page.getByRole("table", { name: "Revisions of MB-2" }).locator("tr[data-revision='2']").textContent()) ?? "").includes("fails");
+    const issue = async () => {
+      await page.getByRole("button", { name: "Issue the worksheet of revision 2" }).click();
+      if (fails) await storeMessage().getByRole("button", { name: /anyway/ }).click();
+    };
+    const [download] = await Promise.all([page.waitForEvent("download"), issue()]);
     expect(readFileSync((await download.path())!).subarray(0, 4).toString("latin1")).toBe("%PDF");
     const said = await untilText(page, storeMessage(), (t) => t.includes("Issued worksheet #1"), "the issue was not recorded");
     const fingerprint = /fingerprint ([0-9a-f]{64})/.exec(said)![1]!;
@@ -103,6 +109,48 @@ describe("the job store on the page", () => {
     await expect(page.getByLabel("Span (m)").inputValue()).resolves.toBe("4.8");
     await expect(page.locator(".store-chip").textContent()).resolves.toContain("saved revision 1");
     await upToDate(page);
+    expect(h.errors).toEqual([]);
+  });
+
+  test("an example saved again is not filed into another project, nor turned into a revision of the member with its mark", async () => {
+    await page.goto(`${h.base}/?example=workshop-box-beam.si`);
+    await upToDate(page);
+    await expect(page.locator(".store-chip").textContent()).resolves.toContain("Not saved in a project");
+    await saveMenu().locator("summary").click();
+    // The store holds "Harbour Lane"; the example names "Harbour Lane workshop mezzanine": a new project is offered.
+    await untilText(page, page.getByLabel("Project to save into").locator("option"), (t) => t.length > 0, "the projects were not listed");
+    await expect(page.getByLabel("Project to save into").inputValue()).resolves.toBe("new");
+    await expect(page.getByLabel("New project name").inputValue()).resolves.toBe("Harbour Lane workshop mezzanine");
+    // Chosen by hand, the project that already has an MB-2: nothing is stored and no revision of it is offered.
+    const harbourLane = await page.getByLabel("Project to save into").locator("option", { hasText: /(^|· )Harbour Lane$/ }).getAttribute("value");
+    await page.getByLabel("Project to save into").selectOption(harbourLane!);
+    await saveMenu().getByRole("button", { name: "Save", exact: true }).click();
+    const said = await untilText(page, toolbarMessage(page), (t) => t.startsWith("Nothing was stored"), "the taken mark was not reported");
+    expect(said).toContain("already has a member MB-2 (4 revisions)");
+    await expect(toolbarMessage(page).getByRole("button", { name: /Save as revision/ }).count()).resolves.toBe(0);
+    await expect(page.locator(".store-chip").textContent()).resolves.toContain("Not saved in a project");
+    expect(h.errors).toEqual([]);
+  });
+
+  test("issuing the worksheet of a revision that fails asks first", async () => {
+    await page.getByLabel("Member mark").fill("MB-9");
+    await page.getByLabel("Load 2 w (kN/m)").fill("40");
+    await upToDate(page);
+    await expect(page.locator(".status-banner h2").textContent()).resolves.toMatch(/Does not pass/);
+    await page.getByLabel("Project to save into").selectOption("new");
+    await page.getByLabel("New project name").fill("Failing members");
+    await saveMenu().getByRole("button", { name: "Save", exact: true }).click();
+    await untilText(page, toolbarMessage(page), (t) => t.includes("Saved as revision 1 of MB-9"), "MB-9 was not saved");
+    await page.getByRole("button", { name: "Projects and revisions" }).click();
+    await page.locator(".project-button", { hasText: "Failing members" }).click();
+    await page.getByRole("button", { name: "Revisions of MB-9" }).click();
+    await page.getByRole("button", { name: "Issue the worksheet of revision 1" }).click();
+    const said = await untilText(page, storeMessage(), (t) => t.includes("does not pass"), "no question before issuing a failing revision");
+    expect(said).toContain("nothing was issued yet");
+    const [download] = await Promise.all([page.waitForEvent("download"), storeMessage().getByRole("button", { name: /anyway/ }).click()]);
+    expect(download.suggestedFilename()).toMatch(/\.pdf$/);
+    await untilText(page, storeMessage(), (t) => t.includes("Issued worksheet"), "the worksheet was not issued");
+    await page.getByRole("button", { name: "Back to the member" }).click();
     expect(h.errors).toEqual([]);
   });
 });

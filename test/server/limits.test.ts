@@ -68,7 +68,7 @@ describe("size limits", () => {
     const job = example("workshop-box-beam.si");
     const checking = (spacing: number) => ({ ...job, mode: "check", fastening: { ...job.fastening, default: { ...job.fastening.default, provided: { type: "zones", zones: [{ from: 0, to: 4.8, spacing }] } } } });
     for (const spacing of [1e-300, 5e-324, 1e-6, 1e-4, 0.001]) {
-      expect(await refusedAt(checking(spacing), "fastening.default.provided.zones[0].spacing")).toMatch(/is outside the range of spacings \(0\.05 mm to 20000 mm\)/);
+      expect(await refusedAt(checking(spacing), "fastening.default.provided.zones[0].spacing")).toMatch(/is outside the range of spacings \(0\.05 mm to 20,000 mm\)/);
     }
     // 4800 mm at 0.25 mm: 19,200 rows on one joint, past the 5,000 a schedule to check may give.
     expect(await refusedAt(checking(0.25), "fastening.default.provided.zones[0].spacing")).toMatch(/gives about 19200 rows on this joint; a schedule to check has at most 5000 rows/);
@@ -83,10 +83,10 @@ describe("size limits", () => {
     const si = example("workshop-box-beam.si");
     si.beam.loads = [];
     expect(await refusedAt({ ...si, beam: { ...si.beam, spans: [1e300] } }, "beam.spans")).toMatch(new RegExp(`^(the member is )?1e\\+300 m .*${limit.source}`));
-    expect(await refusedAt({ ...si, beam: { ...si.beam, spans: [600, 600] } }, "beam.spans")).toMatch(new RegExp(`^(the member is )?1200 m .*${limit.source}`));
+    expect(await refusedAt({ ...si, beam: { ...si.beam, spans: [600, 600] } }, "beam.spans")).toMatch(new RegExp(`^(the member is )?1,200 m .*${limit.source}`));
     const us = example("loft-beam-16d.us");
     us.beam.loads = [];
-    expect(await refusedAt({ ...us, beam: { ...us.beam, spans: [4000] } }, "beam.spans")).toMatch(/^(the member is )?4000 ft .*(up to|to) (1640|3281) ft\b/);
+    expect(await refusedAt({ ...us, beam: { ...us.beam, spans: [4000] } }, "beam.spans")).toMatch(/^(the member is )?4,000 ft .*(up to|to) (1,640|3,281) ft\b/);
   });
 
   test("text fields have a length limit that the message states", async () => {

@@ -84,9 +84,9 @@ describe("builderDimensions(system): dimensions as a builder reads them", () => 
     expect(us.position(0)).toBe("0");
     expect(us.length(2.5)).toBe("2-1/2 in");
     const si = builderDimensions("si");
-    expect(si.position(2.1666666667)).toBe("2167");
+    expect(si.position(2.1666666667)).toBe("2,167");
     expect(si.length(55)).toBe("55 mm");
-    expect(si.run(8.1)).toBe("8100 mm");
+    expect(si.run(8.1)).toBe("8,100 mm");
   });
 
   test("placeInTiers(labels) keeps labels that would overlap in different tiers and clear of what is drawn", () => {
@@ -156,7 +156,7 @@ describe("the field sheet at the end of the worksheet", () => {
     // The point load is marked with what it is and where.
     const point = run.job.beam.loads.find((l) => l.type === "point");
     if (point && point.type === "point") expect(text).toContain(`(${dims.position(point.at)})`);
-    expect(text).toContain("4800 mm overall");
+    expect(text).toContain("4,800 mm overall");
     expect(inkOnPage(file, pages, "box-beam-ink").dark).toBeGreaterThan(2000);
     expect(inkOnPage(file, pages, "box-beam-red").red).toBe(0);
   });

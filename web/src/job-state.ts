@@ -1,4 +1,5 @@
 import type { UnitSystem } from "../../core/units/quantity.js";
+import { pathInWords } from "./form/issue-words.js";
 import { listAt, readAt, writeAt } from "./job-path.js";
 
 /** The job document as the user is editing it: it may be incomplete or wrong anywhere. */
@@ -85,14 +86,16 @@ export function openableJob(value: unknown): { ok: true; job: JobDraft } | { ok:
   const job = value as JobDraft;
   if (job.format !== "stitchplan-job") return { ok: false, problems: [`this is not a stitchplan job file (its "format" is ${JSON.stringify(job.format ?? null)}, not "stitchplan-job")`] };
   const problems: string[] = [];
+  // In the form's words, with the file's own key for whoever edits the file by hand.
+  const named = (path: string) => `${pathInWords(path)} (“${path}” in the file)`;
   for (const path of lists) {
     const v = readAt(job, path);
-    if (v !== undefined && !Array.isArray(v)) problems.push(`"${path}" must be a list`);
-    else if (path !== "beam.spans" && Array.isArray(v) && v.some((item) => typeof item !== "object" || item === null || Array.isArray(item))) problems.push(`every item of "${path}" must be an object`);
+    if (v !== undefined && !Array.isArray(v)) problems.push(`${named(path)} must be a list of entries in brackets […]`);
+    else if (path !== "beam.spans" && Array.isArray(v) && v.some((item) => typeof item !== "object" || item === null || Array.isArray(item))) problems.push(`each entry of ${named(path)} must be a group of fields in braces {…}, not a single value`);
   }
   for (const path of records) {
     const v = readAt(job, path);
-    if (v !== undefined && (typeof v !== "object" || v === null || Array.isArray(v))) problems.push(`"${path}" must be an object`);
+    if (v !== undefined && (typeof v !== "object" || v === null || Array.isArray(v))) problems.push(`${named(path)} must be a group of fields in braces {…}, not a single value`);
   }
   return problems.length ? { ok: false, problems } : { ok: true, job };
 }

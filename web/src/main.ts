@@ -1,3 +1,4 @@
+import "./strict-policy.js";
 import { fetchExample, fetchExamples, fetchJobSchema, type ExampleEntry } from "./api.js";
 import { DesignSession } from "./design-session.js";
 import { el } from "./dom.js";

@@ -1,5 +1,6 @@
 import { fetchExample, type ExampleEntry } from "./api.js";
 import type { DesignSession } from "./design-session.js";
+import { openBuildUpDialog } from "./build-up-dialog.js";
 import { el } from "./dom.js";
 import { emptyJob } from "./empty-job.js";
 import { downloadCsv, downloadWorksheet } from "./exports.js";
@@ -90,6 +91,11 @@ export function toolbar(options: ToolbarOptions): { element: HTMLElement; say: S
     menuItem("New member (empty form)", () => replaceWith(emptyJob(session.state.units), "Started an empty member. Enter materials, parts, a connector, a span and loads; results appear as soon as the input is complete."), {
       hint: "in the units now chosen",
     }),
+    menuItem(
+      "New member from a typical build-up…",
+      () => openBuildUpDialog(session.state.units, (job, buildUp) => replaceWith(job, `Filled the form for a ${buildUp.name.toLowerCase()} from its sizes, with common grades, a common connector and a dead and a live load. Every value is editable below.`)),
+      { hint: "box beam, I, laminations, plies, plate girder, cover plate" },
+    ),
     menuItem("Open job file…", () => fileInput.click()),
     menuItem("Save job file", saveJob, { hint: "the job document as JSON" }),
   ]);

@@ -1,7 +1,7 @@
 import type { Material } from "../../schema/job.js";
 import { doubleShearMembers, doubleShearRefusal, type ConnectorContext, type ConnectorResistance, type DetailingLimits, type DoubleShearMembers, type JoinedMember, type ModeValue, type PlacementProblem, type SlipModuli, type WorkingStep } from "../connector-kind.js";
 import { MM_PER_IN, MPA_PER_PSI, N_PER_LBF } from "../quantity-text.js";
-import { inJobUnits } from "../../units/format.js";
+import { comparedInJobUnits, inJobUnits } from "../../units/format.js";
 import { ec5DurationOf, ec5Kmod, ec5SlipModulus, EC5_GAMMA_M_CONNECTIONS, jointMeanDensity, type Ec5Product, type ServiceClass } from "./ec5-factors.js";
 import { ec5BoltEmbedment, ec5NailEmbedment, type Ec5Wood, type Embedment } from "./ec5-embedment.js";
 import { johansenSteelCentral, johansenSteelSides, johansenSteelSingle, johansenTimberDouble, johansenTimberSingle, type JohansenResult, type RopeEffect } from "./ec5-johansen.js";
@@ -252,7 +252,7 @@ function lineProblems(spec: DowelSpec, context: ConnectorContext): PlacementProb
       out.push({
         on: "connector",
         field: "length",
-        message: `penetration ${len(g.penetration)} into ${where} is below the minimum ${spec.minPenetration.multiple}d = ${len(spec.minPenetration.multiple * spec.diameter)} (${spec.minPenetration.source}); use a ${spec.noun} at least ${len(spec.length! - g.penetration + spec.minPenetration.multiple * spec.diameter)} long`,
+        message: `penetration ${comparedInJobUnits(g.penetration, spec.minPenetration.multiple * spec.diameter, "length", u)[0]} into ${where} is below the minimum ${spec.minPenetration.multiple}d = ${comparedInJobUnits(g.penetration, spec.minPenetration.multiple * spec.diameter, "length", u)[1]} (${spec.minPenetration.source}); use a ${spec.noun} at least ${len(spec.length! - g.penetration + spec.minPenetration.multiple * spec.diameter)} long`,
       });
     }
   }

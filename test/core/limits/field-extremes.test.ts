@@ -75,7 +75,7 @@ describe("the measured cases are refused at their field, with the limit in the j
     for (const spacing of [1e-6, 1e-4]) {
       const job = nailedIJob("rigid", "check");
       job.fastening.default.provided = { type: "zones", zones: [{ from: 0, to: 5, spacing }] };
-      expect(refused(job, "fastening.default.provided.zones[0].spacing")).toMatch(/outside the range of spacings \(0\.05 mm to 20000 mm\)/);
+      expect(refused(job, "fastening.default.provided.zones[0].spacing")).toMatch(/outside the range of spacings \(0\.05 mm to 20,000 mm\)/);
     }
   });
 
@@ -88,7 +88,7 @@ describe("the measured cases are refused at their field, with the limit in the j
   test("a load of 1e300 kN/m (answered 200, passes: true, deflection 0); a point load of 1e300 lbf in US units", () => {
     const job = nailedIJob("rigid", "design");
     job.beam.loads = [{ type: "uniform", category: "dead", w: 1e300 }];
-    expect(refused(job, "beam.loads[0].w")).toMatch(/kN\/m is outside the range of line loads \(up to 100000 kN\/m either way\)/);
+    expect(refused(job, "beam.loads[0].w")).toMatch(/kN\/m is outside the range of line loads \(up to 100,000 kN\/m either way\)/);
     const us = prepareJob({ ...nailedIJob("rigid", "design"), units: "us", beam: { spans: [16], loads: [{ type: "point", category: "dead", P: 1e300, at: 8 }], selfWeight: false } });
     expect(us.ok).toBe(false);
     expect((us as { issues: { path: string; message: string }[] }).issues[0]).toMatchObject({ path: "beam.loads[0].P", message: expect.stringMatching(/lbf is outside the range of point loads/) });
@@ -103,7 +103,7 @@ describe("the measured cases are refused at their field, with the limit in the j
     expect(refused(gravity, "materials[0].specificGravity")).toMatch(/outside the range of specific gravities of wood \(0\.1 to 1\.2\)/);
     const strength = nailedIJob("rigid", "design");
     strength.materials[0]!.strength = { bending: 1e-300, shear: 2.46 };
-    expect(refused(strength, "materials[0].strength.bending")).toMatch(/outside the range of strengths of structural materials \(0\.01 MPa to 10000 MPa\)/);
+    expect(refused(strength, "materials[0].strength.bending")).toMatch(/outside the range of strengths of structural materials \(0\.01 MPa to 10,000 MPa\)/);
   });
 
   test("a strength of 5e-324 psi, which converts to 0 MPa, is still seen and refused", () => {

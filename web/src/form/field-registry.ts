@@ -1,3 +1,4 @@
+import { plainMessage } from "./issue-words.js";
 import type { JobIssue } from "../../../core/schema/job-issues.js";
 import { el, nextId } from "../dom.js";
 import { parentPath } from "../job-path.js";
@@ -83,7 +84,7 @@ export class FieldRegistry {
     return issues.map((issue) => {
       const entry = this.find(issue.path);
       if (!entry) return { ...issue, fieldLabel: undefined };
-      const note = el("p", { className: "field-issue", text: entry.prefix ? `${entry.prefix}: ${issue.message}` : issue.message, attrs: { id: nextId("issue") } });
+      const note = el("p", { className: "field-issue", text: entry.prefix ? `${entry.prefix}: ${plainMessage(issue.message)}` : plainMessage(issue.message), attrs: { id: nextId("issue") } });
       entry.host.append(note);
       entry.marker.classList.add("has-issue");
       // A problem inside a closed fold must be seen: open it.

@@ -1,3 +1,4 @@
+import { jointName, type NamedPart } from "../results/joint-names.js";
 import type { JointResult } from "../../../core/schema/result.js";
 import { el } from "../dom.js";
 import { addButton, field, numberControl, rowButton, selectControl, type FormContext } from "./controls.js";
@@ -31,6 +32,7 @@ export const connectorChoices = (ctx: FormContext) => () =>
  */
 export function jointsStep(ctx: FormContext, number: number): HTMLElement {
   const { state } = ctx;
+  followDefaultFastening(ctx);
   const issues = el("div", { className: "row-issues" });
   const found = ctx.result()?.joints ?? [];
   const overrides = state.list("fastening.joints") as Item[];
@@ -46,7 +48,7 @@ export function jointsStep(ctx: FormContext, number: number): HTMLElement {
     el("h3", { text: "At every joint" }),
     fieldGrid([
       field(ctx, "fastening.default.connector", "Connector used at every joint", selectControl(ctx, "fastening.default.connector", "connector", connectorChoices(ctx)), { wide: true }),
-      field(ctx, "fastening.default.rows", "Side by side in a row", numberControl(ctx, "fastening.default.rows", "rows", { integer: true, placeholder: "1" }), { unit: "per row", hint: "On each contact line; fillets per line for a weld." }),
+      field(ctx, "fastening.default.rows", "Side by side in a row", numberControl(ctx, "fastening.default.rows", "rows", { integer: true, placeholder: "1" }), { unit: "per row", hint: "A row is one position along the member; this many connectors sit side by side across each contact line there, and rows repeat at the zone's spacing. For a weld: fillets per line." }),
       field(ctx, "fastening.default.headSide", "Driven from", selectControl(ctx, "fastening.default.headSide", "driven from", headSides, { whenAbsent: "auto" }), {
         wide: true,
         hint: "The part the head sits in, for resistance models that need it.",
@@ -108,8 +110,9 @@ function jointRow(ctx: FormContext, joint: JointResult, k: number): HTMLElement 
     el("div", { className: "joint-head" }, [
       el("span", { className: "joint-name" }, [
         el("strong", { text: name }),
-        el("span", { className: "sub", text: ` holds ${joint.held.join(", ")} · ${describeLines(joint, unit)}` }),
-        own ? null : el("span", { className: "joint-default", text: `${joint.connectorLabel || joint.connector}, ${joint.rows} per row (the default)` }),
+        el("span", { className: "joint-words", text: `: ${jointName(joint, state.list("parts") as NamedPart[])}` }),
+        el("span", { className: "sub", text: ` · holds ${joint.held.join(", ")} · ${describeLines(joint, unit)}` }),
+        own ? null : el("span", { className: "joint-default", text: defaultFasteningText(ctx, joint), attrs: { "data-connector": joint.connector, "data-connector-label": joint.connectorLabel } }),
       ]),
       el("label", { className: "own-toggle" }, [toggle, el("span", { text: "its own connector and rows" })]),
     ]),
@@ -151,4 +154,26 @@ function heldGroupCard(ctx: FormContext, override: Item, k: number): HTMLElement
   ]);
   ctx.registry.register({ path: `fastening.joints[${k}]`, label: name, marker: card, host: notes, prefix: name });
   return card;
+}
+
+/** What a joint without its own fastening takes, from the form as it stands (not from the last result). */
+function defaultFasteningText(ctx: FormContext, described?: { connector: string; connectorLabel: string }): string {
+  const id = String(ctx.state.read("fastening.default.connector") ?? "");
+  const connector = (ctx.state.list("connectors") as Item[]).find((c) => c.id === id);
+  // The trade description comes from the last result while the connector is the same one.
+  const label = typeof connector?.label === "string" && connector.label ? connector.label : described?.connector === id && described.connectorLabel ? described.connectorLabel : id || "no connector chosen";
+  const rows = Number(ctx.state.read("fastening.default.rows") ?? 1);
+  return `${label}, ${Number.isFinite(rows) && rows > 0 ? rows : 1} per row (the default)`;
+}
+
+const following = new WeakSet<object>();
+
+/** The joints' "the default" texts follow each edit of the default connector, its rows or the connectors. */
+function followDefaultFastening(ctx: FormContext): void {
+  if (following.has(ctx.state)) return;
+  following.add(ctx.state);
+  ctx.state.onChange((_change, path) => {
+    if (!path.startsWith("fastening") && !path.startsWith("connectors") && path !== "") return;
+    for (const span of document.querySelectorAll<HTMLElement>(".joint-default")) span.textContent = defaultFasteningText(ctx, { connector: span.dataset.connector ?? "", connectorLabel: span.dataset.connectorLabel ?? "" });
+  });
 }

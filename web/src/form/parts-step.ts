@@ -32,7 +32,8 @@ export function partsStep(ctx: FormContext, number: number): HTMLElement {
   const placeAgainst = (i: number, side: string, shape: Item) => {
     const source = (state.list("parts")[i] ?? {}) as Item;
     const item: Item = { id: uniqueId(state.list("parts"), `P${count + 1}`), name: "", material: source.material ?? "", shape, place: { on: partId(i), side, align: "centre" } };
-    const k = state.insert("parts", item, i + 1);
+    // Added at the end, so no other part is renumbered.
+    const k = state.insert("parts", item);
     ctx.rerender(at(k, "shape.type"));
   };
   const { table, issues } = recordTable(ctx, {
@@ -90,6 +91,8 @@ export function partsStep(ctx: FormContext, number: number): HTMLElement {
       .filter(([type]) => ctx.schema.kinds("parts[].shape", "type").includes(type) || !ctx.schema.known)
       .map(([type, label]) => el("option", { text: label, attrs: { value: type } })),
   );
+  const lastType = ((state.list("parts").at(-1) as Item | undefined)?.shape as Item | undefined)?.type;
+  if (typeof lastType === "string" && [...shapeChoice.options].some((o) => o.value === lastType)) shapeChoice.value = lastType;
   const sideChoice = el("select", { attrs: { id: "new-part-side", "aria-label": "Where the new part goes" } }, [
     ...(count ? sides.map((s) => el("option", { text: s.label, attrs: { value: s.value } })) : []),
     el("option", { text: "at x, y", attrs: { value: "xy" } }),
@@ -100,11 +103,22 @@ export function partsStep(ctx: FormContext, number: number): HTMLElement {
     state.list("parts").map((p, i) => el("option", { text: String((p as Item).id ?? `part ${i + 1}`), attrs: { value: String(i) } })),
   );
   againstChoice.value = String(count - 1);
+  // Ids may have been renamed since the step was drawn: the list is read again when it is opened.
+  const refreshAgainstNames = () => {
+    const chosen = againstChoice.value;
+    againstChoice.replaceChildren(...state.list("parts").map((p, i) => el("option", { text: String((p as Item).id ?? `part ${i + 1}`), attrs: { value: String(i) } })));
+    againstChoice.value = chosen;
+  };
+  againstChoice.addEventListener("focus", refreshAgainstNames);
+  againstChoice.addEventListener("mousedown", refreshAgainstNames);
   const refreshAgainst = () => (againstChoice.hidden = sideChoice.value === "xy");
   sideChoice.addEventListener("change", refreshAgainst);
   refreshAgainst();
   const addPart = () => {
-    const shape = shapePreset(shapeChoice.value, state.units);
+    // A new part of the same type takes the size and orientation of the part it goes against (or the last one).
+    const parts = state.list("parts") as Item[];
+    const model = parts[sideChoice.value !== "xy" ? Number(againstChoice.value) : parts.length - 1]?.shape as Item | undefined;
+    const shape = model?.type === shapeChoice.value ? (JSON.parse(JSON.stringify(model)) as Item) : shapePreset(shapeChoice.value, state.units);
     if (sideChoice.value !== "xy" && count > 0) return placeAgainst(Number(againstChoice.value), sideChoice.value, shape);
     const material = (state.list("materials")[0] as Item | undefined)?.id ?? "";
     const i = state.insert("parts", { id: uniqueId(state.list("parts"), "P1"), name: "", material, shape, x: 0, y: 0 });

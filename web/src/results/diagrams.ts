@@ -1,7 +1,7 @@
 import { palette } from "../../../core/draw/drawing.js";
 import { lineDiagram } from "../../../core/draw/line-diagram.js";
 import type { DesignResult, Schedule } from "../../../core/schema/result.js";
-import { formatNumber } from "../../../core/units/format.js";
+import { NOISE_FLOOR, formatNumber } from "../../../core/units/format.js";
 import { el } from "../dom.js";
 import { figure } from "./figure.js";
 import { demandName, demandSymbol, isSideLoad } from "./joint-demand.js";
@@ -42,14 +42,17 @@ export function shearAndMoment(result: DesignResult, width: number, chosen?: str
   const v = Math.abs(vMax.value) >= Math.abs(vMin.value) ? vMax : vMin;
   const mMax = extreme(beam.envelope.momentMax, g.momentMax, 1);
   const mMin = extreme(beam.envelope.momentMin, g.momentMin, -1);
-  const at = (e: { value: number; x: number; combination: string }, unit: string | undefined) =>
-    `${formatNumber(e.value)} ${unit ?? ""} at x = ${formatNumber(e.x)} ${u.span ?? ""} (${combinationLabel(result, e.combination)})`;
+  // A value within the noise floor of the largest of its kind is rounding: shown as 0, and no hogging moment.
+  const mScale = Math.max(Math.abs(mMax.value), Math.abs(mMin.value));
+  const vScale = Math.abs(v.value);
+  const at = (e: { value: number; x: number; combination: string }, unit: string | undefined, scale: number) =>
+    `${formatNumber(e.value, 4, scale)} ${unit ?? ""} at x = ${formatNumber(e.x)} ${u.span ?? ""} (${combinationLabel(result, e.combination)})`;
   return [
-    figure(lineDiagram({ ...common, title: "Shear force V", yUnit: u.force ?? "", role: "shear", series: curves((c) => c.shear, [beam.envelope.shearMax, beam.envelope.shearMin]) }), "diagram", `Largest |V|: ${at(v, u.force)}.`),
+    figure(lineDiagram({ ...common, title: "Shear force V", yUnit: u.force ?? "", role: "shear", series: curves((c) => c.shear, [beam.envelope.shearMax, beam.envelope.shearMin]) }), "diagram", `Largest |V|: ${at(v, u.force, vScale)}.`),
     figure(
       lineDiagram({ ...common, title: "Bending moment M", yUnit: u.moment ?? "", role: "moment", invert: true, series: curves((c) => c.moment, [beam.envelope.momentMax, beam.envelope.momentMin]) }),
       "diagram",
-      `Largest sagging M: ${at(mMax, u.moment)}.${mMin.value < 0 ? ` Largest hogging M: ${at(mMin, u.moment)}.` : ""}`,
+      `Largest sagging M: ${at(mMax, u.moment, mScale)}.${mMin.value < -NOISE_FLOOR * mScale ? ` Largest hogging M: ${at(mMin, u.moment, mScale)}.` : ""}`,
     ),
   ];
 }

@@ -1,3 +1,4 @@
+import { pathInWords, plainMessage } from "../form/issue-words.js";
 import type { DesignResult } from "../../../core/schema/result.js";
 import { el } from "../dom.js";
 import type { PlacedIssue } from "../form/field-registry.js";
@@ -141,7 +142,7 @@ export class ResultsView {
                     className: "issue-link",
                     attrs: { type: "button" },
                     on: { click: () => this.onIssue(issue.path) },
-                    text: `${issue.fieldLabel ?? issue.path}: ${issue.message}`,
+                    text: `${issue.fieldLabel ?? pathInWords(issue.path)}: ${plainMessage(issue.message)}`,
                   }),
                 ]),
               ),

@@ -1,3 +1,4 @@
+import { builderDimensions } from "../../../core/draw/builder-dimensions.js";
 import { scheduleElevation } from "../../../core/draw/schedule-elevation.js";
 import type { DesignResult, Schedule } from "../../../core/schema/result.js";
 import { formatNumber, formatRatio } from "../../../core/units/format.js";
@@ -13,6 +14,12 @@ export function scheduleBlock(result: DesignResult, schedule: Schedule, width: n
   const e = schedule.efficiency;
   const v = schedule.verification;
   const checked = schedule.mode === "check";
+  // In US units the zone ends also in feet and inches, as the field sheet gives them to the builder.
+  const tape = result.units === "us" ? builderDimensions("us") : null;
+  const zoneEnds = (from: number, to: number) => {
+    const decimal = range(result, from, to).replace(` ${u.span ?? ""}`, "");
+    return tape ? el("span", {}, [decimal, el("span", { className: "sub", text: `${tape.position(from)} – ${tape.position(to)}` })]) : decimal;
+  };
   const zones = table(
     `${checked ? "Checked schedule" : "Schedule"}, joint ${schedule.joint}`,
     ["Zone", header("From – to", u.span), header(checked ? "Spacing given" : "Spacing", u.length), "Per row", "Count", header("Required", u.length), "Utilisation"],
@@ -20,7 +27,7 @@ export function scheduleBlock(result: DesignResult, schedule: Schedule, width: n
       className: z.passes ? "" : "fails",
       cells: [
         String(k + 1),
-        range(result, z.from, z.to).replace(` ${u.span ?? ""}`, ""),
+        zoneEnds(z.from, z.to),
         z.note ? el("span", {}, [formatNumber(z.spacing), el("span", { className: "sub", text: `note ${k + 1}` })]) : formatNumber(z.spacing),
         String(z.rows),
         String(z.count),

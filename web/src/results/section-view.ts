@@ -6,6 +6,7 @@ import type { DesignResult, JointResult } from "../../../core/schema/result.js";
 import { formatNumber } from "../../../core/units/format.js";
 import { el } from "../dom.js";
 import { drawingWidth, figure } from "./figure.js";
+import { jointName } from "./joint-names.js";
 import { header, shown, table } from "./quantities.js";
 
 /** The section to scale with a joint chooser: the chosen joint's held area is shaded and its width t marked. */
@@ -31,14 +32,17 @@ export class SectionView {
     const picture = el("div", { className: "section-picture" }, [draw()]);
     const chooser = el("div", { className: "joint-chooser", attrs: { role: "group", "aria-label": "Joint shown on the section" } });
     const jointTable = el("div");
+    const words = el("p", { className: "joint-chosen" });
     const refresh = () => {
       picture.replaceChildren(draw());
+      const chosen = result.joints.find((j) => j.id === this.#joint);
+      words.textContent = chosen ? `Joint ${chosen.id}: ${jointName(chosen, result.section.parts)}.` : "";
       chooser.replaceChildren(
         ...result.joints.map((j) =>
           el("button", {
             className: "joint-button",
             text: `Joint ${j.id}`,
-            attrs: { type: "button", "aria-pressed": j.id === this.#joint ? "true" : "false" },
+            attrs: { title: jointName(j, result.section.parts), type: "button", "aria-pressed": j.id === this.#joint ? "true" : "false" },
             on: {
               click: () => {
                 this.#joint = j.id;
@@ -58,6 +62,7 @@ export class SectionView {
         picture,
         el("div", { className: "section-side" }, [
           chooser,
+          words,
           el("p", { className: "hint", text: "The shaded area is the part held by the chosen joint's connectors; Q is its first moment about the neutral axis, t the width of the joint plane." }),
           el("dl", { className: "properties" }, [
             ...property("Depth", shown(result, s.depth, "length")),

@@ -56,7 +56,8 @@ export function storeSaveControls(session: DesignSession, link: StoreLinkState, 
     );
     const jobProject = String((session.state.job.project as Record<string, unknown> | undefined)?.name ?? "");
     const same = projects.find((p) => p.name === jobProject);
-    projectChoice.value = same ? String(same.id) : projects.length ? String(projects[0]!.id) : "new";
+    // Only the project the job names is chosen for the user; any other would file the member in the wrong project.
+    projectChoice.value = same ? String(same.id) : "new";
     if (!newProject.value) newProject.value = jobProject;
     newProject.hidden = projectChoice.value !== "new";
   };
@@ -81,24 +82,16 @@ export function storeSaveControls(session: DesignSession, link: StoreLinkState, 
       return reportSaved(answer.value, projectName, say);
     }
     if (answer.problem.code !== "ERR_MEMBER_EXISTS") return reportSaveProblem(session, answer.problem, say);
-    // The mark is taken in that project: saving there means a new revision of that member.
+    // The mark is taken in that project by another member: a save here must not become a revision of it.
     const members = await listMembers(projectId);
     const existing = members.ok ? members.value.find((m) => m.mark === markOf(session)) : undefined;
     if (!existing) return reportSaveProblem(session, answer.problem, say);
-    const asRevision = el("button", {
-      className: "link-button",
-      text: `Save as revision ${existing.revisions + 1} of ${existing.mark} instead`,
-      attrs: { type: "button" },
-      on: {
-        click: async () => {
-          const saved = await saveRevision(projectId, existing.id, session.state.job, note.value);
-          if (!saved.ok) return reportSaveProblem(session, saved.problem, say);
-          link.set({ projectId, projectName, memberId: existing.id, mark: saved.value.mark, revision: saved.value.revision.revision });
-          reportSaved(saved.value, projectName, say);
-        },
-      },
-    });
-    say(`“${projectName}” already has a member ${existing.mark} (${existing.revisions} revision${existing.revisions === 1 ? "" : "s"}); nothing was stored.`, "caution", asRevision);
+    const toStore = el("button", { className: "link-button", text: "Open Projects and revisions", attrs: { type: "button" }, on: { click: () => openStore() } });
+    say(
+      `Nothing was stored: “${projectName}” already has a member ${existing.mark} (${existing.revisions} revision${existing.revisions === 1 ? "" : "s"}). To keep both, give this member another mark; to revise that one, open it from Projects and revisions and save it there.`,
+      "caution",
+      toStore,
+    );
   };
 
   const draw = () => {

@@ -1,3 +1,4 @@
+import { pathInWords, plainMessage } from "../form/issue-words.js";
 import { formatRatio } from "../../../core/units/format.js";
 import { el } from "../dom.js";
 import { saveBlob } from "../file-transfer.js";
@@ -81,13 +82,13 @@ export class StoreView {
     ]);
   }
 
-  #say(text: string, tone: "info" | "problem" | "caution" = "info"): void {
+  #say(text: string, tone: "info" | "problem" | "caution" = "info", action?: HTMLElement): void {
     this.#message.className = `store-message ${tone}`;
-    this.#message.textContent = text;
+    this.#message.replaceChildren(text, ...(action ? [" ", action] : []));
   }
 
   #problem(what: string, problem: StoreProblem): void {
-    const where = problem.issues.slice(0, 5).map((i) => `${i.path}: ${i.message}`).join("; ");
+    const where = problem.issues.slice(0, 5).map((i) => `${pathInWords(i.path)}: ${plainMessage(i.message)}`).join("; ");
     this.#say(`${what}: ${problem.message}${where ? ` (${where}${problem.issues.length > 5 ? "; …" : ""})` : ""}`, "problem");
   }
 
@@ -238,7 +239,7 @@ export class StoreView {
         el("td", {}, r.issues.length ? r.issues.map((i) => el("span", { className: "sub", text: `#${i.id} ${when(i.issuedAt)}` })) : ["—"]),
         el("td", { className: "actions" }, [
           el("button", { className: "row-button", text: "Open", attrs: { type: "button", "aria-label": `Open revision ${r.revision}` }, on: { click: () => void this.#openRevision(project.id, member.id, r.revision) } }),
-          el("button", { className: "row-button", text: "Issue worksheet", attrs: { type: "button", "aria-label": `Issue the worksheet of revision ${r.revision}` }, on: { click: () => void this.#issue(member, r.revision) } }),
+          el("button", { className: "row-button", text: "Issue worksheet", attrs: { type: "button", "aria-label": `Issue the worksheet of revision ${r.revision}` }, on: { click: () => void this.#issue(member, r.revision, r.summary) } }),
         ]),
       ]);
     });
@@ -269,8 +270,14 @@ export class StoreView {
     this.options.open(job, { projectId, projectName, memberId, mark: String((job.member as Record<string, unknown>)?.mark ?? ""), revision: answer.value.revision });
   }
 
-  async #issue(member: Member, revision: number): Promise<void> {
+  async #issue(member: Member, revision: number, summary?: RevisionListItem["summary"], confirmed = false): Promise<void> {
     const project = this.#project!;
+    if (summary && !summary.passes && !confirmed) {
+      // A worksheet of a member that fails is issued only on purpose.
+      const anyway = el("button", { className: "link-button", text: `Issue revision ${revision}'s worksheet anyway`, attrs: { type: "button" }, on: { click: () => void this.#issue(member, revision, summary, true) } });
+      const governing = summary.governing ? ` (${summary.governing.item}, utilisation ${formatRatio(summary.governing.utilisation)})` : "";
+      return this.#say(`Revision ${revision} of ${member.mark} does not pass${governing}. Its worksheet would be logged as issued; nothing was issued yet.`, "caution", anyway);
+    }
     this.#say(`Issuing the worksheet of revision ${revision}…`);
     const answer = await issueWorksheet(project.id, member.id, revision);
     if (!answer.ok) return this.#problem("No worksheet", answer.problem);
