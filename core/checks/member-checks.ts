@@ -84,6 +84,12 @@ export function memberChecks(
     checks.push(...deflection.checks);
     notChecked.push(...deflection.notChecked);
   }
+  const panelWebs = section.parts.filter(isPanelWeb);
+  if (panelWebs.length > 0) {
+    notChecked.push(
+      `Shear deformation of the panel webs (${panelWebs.map((p) => p.name || p.id).join(", ")}): the deflections are from bending alone (E·I); a panel web's low shear modulus can add materially to them, most for short, deep members and under heavy point loads near the supports.`,
+    );
+  }
   notChecked.push(
     "Lateral-torsional stability and lateral bracing of the compression edge.",
     "Bearing at the supports and under point loads, and the supports' own connections.",
@@ -127,6 +133,14 @@ function plyChecks(plies: MultiPly, section: SectionModel, beam: BeamAnalysis, a
       checks.push(stressCheck(`shear-ply-${id}`, `Shear stress, ${name}${where}`, worst, fv, PLY_SHEAR));
     }
   });
+}
+
+/** A web: a part of a panel material (plywood, OSB) standing deeper than it is thick. */
+function isPanelWeb(part: SectionModel["parts"][number]): boolean {
+  if (part.material.family !== "panel") return false;
+  const xs = part.rects.flatMap((r) => [r.x0, r.x1]);
+  const ys = part.rects.flatMap((r) => [r.y0, r.y1]);
+  return Math.max(...ys) - Math.min(...ys) > Math.max(...xs) - Math.min(...xs);
 }
 
 function occupies(r: { y0: number; y1: number }, pt: ProfilePoint, tol: number): boolean {
