@@ -209,7 +209,8 @@ export async function storeRoutes(app: FastifyInstance, options: StoreRoutesOpti
     const stored = store.revision(p, m, n);
     const sheet = await designStored(designs, { kind: "worksheet", input: stored.job, printDate: today() }, "job");
     const pdf = Buffer.from(sheet.pdf.buffer, sheet.pdf.byteOffset, sheet.pdf.byteLength);
-    const fileName = sheet.fileName;
+    // The store's revision number beside the title block's, so two issues of one title revision never share a name.
+    const fileName = sheet.fileName.replace(/\.pdf$/, `_store-rev-${stored.revision}.pdf`);
     const { issue, warnings } = store.recordWorksheet(p, m, stored.revision, { fingerprint: sheet.fingerprint, fileName, pdf, titleRevision: sheet.titleRevision });
     if (warnings.length > 0) reply.header("x-stitchplan-warning", encodeURIComponent(warnings.join(" ")));
     return reply

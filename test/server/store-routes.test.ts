@@ -196,7 +196,7 @@ describe("worksheets", () => {
     const res = await api().post(`/api/projects/${p}/members/${m}/revisions/1/worksheets`).send({}).buffer(true).parse(binary);
     expect(res.status).toBe(201);
     expect(res.headers["content-type"]).toBe("application/pdf");
-    expect(res.headers["content-disposition"]).toContain("DEMO-103_LB-1_rev-A.pdf");
+    expect(res.headers["content-disposition"]).toContain('filename="DEMO-103_LB-1_rev-A_store-rev-1.pdf"');
     expect((res.body as Buffer).subarray(0, 5).toString()).toBe("%PDF-");
     const fingerprint = res.headers["x-stitchplan-fingerprint"] as string;
     expect(fingerprint).toMatch(/^[0-9a-f]{64}$/);
@@ -213,6 +213,19 @@ describe("worksheets", () => {
     const again = await api().get(`/api/projects/${p}/members/${m}/worksheets/${log.body[0].id}/pdf`).buffer(true).parse(binary);
     expect(again.status).toBe(200);
     expect(Buffer.compare(again.body as Buffer, res.body as Buffer)).toBe(0);
+  });
+
+  test("the issued file name carries the store's revision beside the title block's, and the log and the re-download keep it", async () => {
+    const { p, m } = await projectWithMember("Issued twice");
+    const job = (await api().get(`/api/projects/${p}/members/${m}/revisions/1`)).body.job;
+    expect((await api().post(`/api/projects/${p}/members/${m}/revisions`).send({ job, note: "same title revision" })).status).toBe(201);
+    const res = await api().post(`/api/projects/${p}/members/${m}/revisions/2/worksheets`).send({}).buffer(true).parse(binary);
+    expect(res.status).toBe(201);
+    expect(res.headers["content-disposition"]).toBe('attachment; filename="DEMO-103_LB-1_rev-A_store-rev-2.pdf"');
+    const log = await api().get(`/api/projects/${p}/members/${m}/worksheets`);
+    expect(log.body).toMatchObject([{ revision: 2, titleRevision: "A", fileName: "DEMO-103_LB-1_rev-A_store-rev-2.pdf" }]);
+    const again = await api().get(`/api/projects/${p}/members/${m}/worksheets/${log.body[0].id}/pdf`).buffer(true).parse(binary);
+    expect(again.headers["content-disposition"]).toContain("DEMO-103_LB-1_rev-A_store-rev-2.pdf");
   });
 
   test("the look-up answers 400 for something that is not a fingerprint and 404 for one nobody issued", async () => {
