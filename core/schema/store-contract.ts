@@ -28,6 +28,8 @@ export const Project = z.object({
   members: z.number(),
   /** When a revision was last saved in the project; null when it has no members. */
   updatedAt: z.string().nullable(),
+  /** When the project was made from an imported project file; null for one created in this store. */
+  importedAt: z.string().nullable(),
 });
 export type Project = z.infer<typeof Project>;
 

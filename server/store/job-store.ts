@@ -489,7 +489,9 @@ export class JobStore {
         .transaction(() => {
           const now = this.now();
           const projectId = Number(
-            this.db.prepare("INSERT INTO projects (name, number, client, created_at) VALUES (?, ?, ?, ?)").run(file.project.name, file.project.number, file.project.client, file.project.createdAt ?? now).lastInsertRowid,
+            this.db
+              .prepare("INSERT INTO projects (name, number, client, created_at, imported_at) VALUES (?, ?, ?, ?, ?)")
+              .run(file.project.name, file.project.number, file.project.client, file.project.createdAt ?? now, now).lastInsertRowid,
           );
           for (const [mi, m] of members.entries()) {
             const revisions = m.revisions;
@@ -559,6 +561,7 @@ interface ProjectRow {
   created_at: string;
   members: number;
   updated_at: string | null;
+  imported_at: string | null;
 }
 
 interface MemberRow {
@@ -569,6 +572,6 @@ interface MemberRow {
   created_at: string;
 }
 
-const projectOf = (r: ProjectRow): Project => ({ id: r.id, name: showHidden(r.name), number: showHidden(r.number), client: showHidden(r.client), createdAt: r.created_at, members: r.members, updatedAt: r.updated_at });
+const projectOf = (r: ProjectRow): Project => ({ id: r.id, name: showHidden(r.name), number: showHidden(r.number), client: showHidden(r.client), createdAt: r.created_at, members: r.members, updatedAt: r.updated_at, importedAt: r.imported_at ?? null });
 
 const range = (a: number, b: number) => (a === b ? `${a}` : `${a} to ${b}`);

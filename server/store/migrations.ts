@@ -61,6 +61,13 @@ export const migrations: readonly { version: number; sql: string }[] = [
       CREATE INDEX members_by_project ON members (project_id);
     `,
   },
+  {
+    // v3: when a project was made from an imported project file (null for one created here), so the listing can say so.
+    version: 3,
+    sql: `
+      ALTER TABLE projects ADD COLUMN imported_at TEXT;
+    `,
+  },
 ];
 
 export const LATEST_SCHEMA_VERSION = migrations[migrations.length - 1]!.version;

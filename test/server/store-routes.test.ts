@@ -250,6 +250,21 @@ describe("export and import", () => {
     expect(copy.body.id).not.toBe(p);
   });
 
+  test("an imported project is marked with the date of its import; one created here is not", async () => {
+    const { p } = await projectWithMember("Original");
+    const file = await api().get(`/api/projects/${p}/export`);
+    const copy = await api().post("/api/projects/import").send(file.body);
+    expect(copy.status).toBe(201);
+    expect(copy.body.importedAt).toMatch(/^\d{4}-\d\d-\d\dT/);
+    // The store's clock is the test's stepping clock: the import is later than the original's creation.
+    expect(copy.body.importedAt > (await api().get(`/api/projects/${p}`)).body.createdAt).toBe(true);
+    const listed = (await api().get("/api/projects")).body as { id: number; importedAt: string | null }[];
+    expect(listed.find((x) => x.id === p)!.importedAt).toBeNull();
+    expect(listed.find((x) => x.id === copy.body.id)!.importedAt).toBe(copy.body.importedAt);
+    expect((await api().get(`/api/projects/${copy.body.id}`)).body.importedAt).toBe(copy.body.importedAt);
+    expect((await api().post("/api/projects").send({ name: "Fresh" })).body.importedAt).toBeNull();
+  });
+
   test("a bad project file is a 400 ERR_PROJECT_FILE_INVALID with each path, and no project is stored", async () => {
     const { p } = await projectWithMember("Bad import");
     const file = (await api().get(`/api/projects/${p}/export`)).body;
@@ -268,7 +283,7 @@ describe("export and import", () => {
 
 test("GET /api/store says where the database is and its schema version", async () => {
   const res = await api().get("/api/store");
-  expect(res.body).toMatchObject({ file: expect.stringContaining(folder.dir), schemaVersion: 2 });
+  expect(res.body).toMatchObject({ file: expect.stringContaining(folder.dir), schemaVersion: 3 });
 });
 
 test("an app built without a data folder serves no store routes", async () => {

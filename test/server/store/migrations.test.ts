@@ -26,7 +26,7 @@ describe("store migrations", () => {
     const store = JobStore.open(folder.dir);
     try {
       expect(store.info()).toMatchObject({ schemaVersion: LATEST_SCHEMA_VERSION, projects: 0, upgrade: { from: 0, backup: null } });
-      expect(LATEST_SCHEMA_VERSION).toBe(2);
+      expect(LATEST_SCHEMA_VERSION).toBe(3);
     } finally {
       store.close();
     }
@@ -36,7 +36,8 @@ describe("store migrations", () => {
     expect(migrations.map((m) => m.version)).toEqual(migrations.map((_, i) => i + 1));
     const db = new Database(":memory:");
     expect(migrate(db, 1)).toEqual([1]);
-    expect(migrate(db)).toEqual([2]);
+    expect(migrate(db, 2)).toEqual([2]);
+    expect(migrate(db)).toEqual([3]);
     expect(migrate(db)).toEqual([]);
     const opened = JobStore.open(folder.dir);
     try {
@@ -56,7 +57,7 @@ describe("store migrations", () => {
     fresh.close();
   });
 
-  test("the committed v1 file upgrades to v2: every row kept, new columns and indexes present, a backup taken first", () => {
+  test("the committed v1 file upgrades to the latest version: every row kept, new columns and indexes present, a backup taken first", () => {
     const file = join(folder.dir, DATABASE_FILE);
     copyFileSync(V1_FILE, file);
     const v1 = new Database(V1_FILE, { readonly: true });
@@ -66,7 +67,9 @@ describe("store migrations", () => {
 
     const store = JobStore.open(folder.dir);
     try {
-      expect(store.info()).toMatchObject({ schemaVersion: 2, projects: 1, members: 1, revisions: 2, worksheets: 1, upgrade: { from: 1 } });
+      expect(store.info()).toMatchObject({ schemaVersion: 3, projects: 1, members: 1, revisions: 2, worksheets: 1, upgrade: { from: 1 } });
+      // v3: a project that was in the store before is not marked as imported.
+      expect(store.listProjects()).toMatchObject([{ id: 1, importedAt: null }]);
       const backup = store.upgrade.backup!;
       expect(readdirSync(folder.dir)).toContain(backup.split("/").pop());
       const kept = new Database(backup, { readonly: true });
@@ -96,7 +99,7 @@ describe("store migrations", () => {
     }
     // Opening again changes nothing more.
     const again = JobStore.open(folder.dir);
-    expect(again.upgrade).toEqual({ from: 2, backup: null });
+    expect(again.upgrade).toEqual({ from: 3, backup: null });
     again.close();
   });
 
@@ -108,7 +111,7 @@ describe("store migrations", () => {
     db.close();
     const bytes = readFileSync(file);
     expect(() => JobStore.open(folder.dir)).toThrow(StoreOpenError);
-    expect(() => JobStore.open(folder.dir)).toThrow(/newer stitchplan \(schema version 3; this one knows up to 2\)/);
+    expect(() => JobStore.open(folder.dir)).toThrow(/newer stitchplan \(schema version 4; this one knows up to 3\)/);
     expect(readFileSync(file)).toEqual(bytes);
   });
 
