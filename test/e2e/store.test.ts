@@ -92,6 +92,8 @@ describe("the job store on the page", () => {
     };
     const [download] = await Promise.all([page.waitForEvent("download"), issue()]);
     expect(readFileSync((await download.path())!).subarray(0, 4).toString("latin1")).toBe("%PDF");
+    // The store's revision beside the title block's.
+    expect(download.suggestedFilename()).toBe("DEMO-101_MB-2_rev-A_store-rev-2.pdf");
     const said = await untilText(page, storeMessage(), (t) => t.includes("Issued worksheet #1"), "the issue was not recorded");
     const fingerprint = /fingerprint ([0-9a-f]{64})/.exec(said)![1]!;
     await untilText(page, page.getByRole("table", { name: "Revisions of MB-2" }).locator("tr[data-revision='2']"), (t) => t.includes("#1"), "the issue is not listed with revision 2");
@@ -150,6 +152,23 @@ describe("the job store on the page", () => {
     const [download] = await Promise.all([page.waitForEvent("download"), storeMessage().getByRole("button", { name: /anyway/ }).click()]);
     expect(download.suggestedFilename()).toMatch(/\.pdf$/);
     await untilText(page, storeMessage(), (t) => t.includes("Issued worksheet"), "the worksheet was not issued");
+    await page.getByRole("button", { name: "Back to the member" }).click();
+    expect(h.errors).toEqual([]);
+  });
+
+  test("an imported project is marked as imported, with its date, in the project list", async () => {
+    const projects = (await (await page.request.get(`${h.base}/api/projects`)).json()) as { id: number; name: string }[];
+    const failing = projects.find((p) => p.name === "Failing members")!;
+    const file = await (await page.request.get(`${h.base}/api/projects/${failing.id}/export`)).body();
+    await page.getByRole("button", { name: "Projects and revisions" }).click();
+    await page.getByLabel("Project file to import").setInputFiles({ name: "failing.stitchplan-project.json", mimeType: "application/json", buffer: file });
+    await untilText(page, storeMessage(), (t) => t.includes("Imported “Failing members”"), "the project file was not imported");
+    const buttons = page.locator(".project-button", { hasText: "Failing members" });
+    await untilText(page, buttons.nth(1), (t) => t.length > 0, "the imported copy is not listed");
+    const texts = await buttons.allTextContents();
+    expect(texts.filter((t) => /imported \d{4}-\d\d-\d\d \d\d:\d\d/.test(t))).toHaveLength(1);
+    await expect(page.locator(".project-button", { hasText: "Harbour Lane" }).first().textContent()).resolves.not.toContain("imported");
+    await page.screenshot({ path: join(shots, "store-imported-project.png"), fullPage: true });
     await page.getByRole("button", { name: "Back to the member" }).click();
     expect(h.errors).toEqual([]);
   });

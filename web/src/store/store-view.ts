@@ -122,7 +122,7 @@ export class StoreView {
                 el(
                   "button",
                   { className: "project-button", attrs: { type: "button", "aria-pressed": p.id === this.#project?.id ? "true" : "false" }, on: { click: () => void this.#selectProject(p) } },
-                  [el("strong", { text: p.name }), el("span", { className: "sub", text: `${p.number ? `${p.number} · ` : ""}${p.members} member${p.members === 1 ? "" : "s"}${p.updatedAt ? ` · ${when(p.updatedAt)}` : ""}` })],
+                  [el("strong", { text: p.name }), el("span", { className: "sub", text: `${p.number ? `${p.number} · ` : ""}${p.members} member${p.members === 1 ? "" : "s"}${p.updatedAt ? ` · ${when(p.updatedAt)}` : ""}${p.importedAt ? ` · imported ${when(p.importedAt)}` : ""}` })],
                 ),
               ]),
             ),
