@@ -42,6 +42,17 @@ const timberFlange = (what: string, si: [number, number], us: string): BuildUpFi
   { key: "flangeDepth", label: `${what} depth`, kind: "length", defaults: { si: si[1], us: 0 }, only: "si" },
 ];
 
+/** The fields of a timber I: a lumber flange on each edge of one web, 4 m or 12 ft, with its loads' defaults. */
+const timberI = (deadLoad: { si: number; us: number }, liveLoad: { si: number; us: number }): BuildUpField[] => [
+  ...timberFlange("Flange", [120, 45], "2x6"),
+  { key: "webLumber", label: "Web lumber (nominal)", kind: "lumber", defaults: { si: "", us: "2x8" }, only: "us" },
+  { key: "webThickness", label: "Web thickness", kind: "length", defaults: { si: 45, us: 0 }, only: "si" },
+  { key: "webDepth", label: "Web depth", kind: "length", defaults: { si: 200, us: 0 }, only: "si" },
+  { ...span, defaults: { si: 4, us: 12 } },
+  { ...dead, defaults: deadLoad },
+  { ...live, defaults: liveLoad },
+];
+
 export const buildUps: BuildUp[] = [
   {
     id: "nailed-box",
@@ -60,29 +71,13 @@ export const buildUps: BuildUp[] = [
     id: "nailed-i",
     name: "Nailed I",
     summary: "A lumber flange on each edge of a single web, nailed through the flanges into the web.",
-    fields: [
-      ...timberFlange("Flange", [120, 45], "2x6"),
-      { key: "webLumber", label: "Web lumber (nominal)", kind: "lumber", defaults: { si: "", us: "2x8" }, only: "us" },
-      { key: "webThickness", label: "Web thickness", kind: "length", defaults: { si: 45, us: 0 }, only: "si" },
-      { key: "webDepth", label: "Web depth", kind: "length", defaults: { si: 200, us: 0 }, only: "si" },
-      { ...span, defaults: { si: 4, us: 12 } },
-      { ...dead, defaults: { si: 0.3, us: 20 } },
-      { ...live, defaults: { si: 0.4, us: 30 } },
-    ],
+    fields: timberI({ si: 0.3, us: 20 }, { si: 0.4, us: 30 }),
   },
   {
     id: "glued-i",
     name: "Glued I",
     summary: "A lumber flange on each edge of a single web, glued.",
-    fields: [
-      ...timberFlange("Flange", [120, 45], "2x6"),
-      { key: "webLumber", label: "Web lumber (nominal)", kind: "lumber", defaults: { si: "", us: "2x8" }, only: "us" },
-      { key: "webThickness", label: "Web thickness", kind: "length", defaults: { si: 45, us: 0 }, only: "si" },
-      { key: "webDepth", label: "Web depth", kind: "length", defaults: { si: 200, us: 0 }, only: "si" },
-      { ...span, defaults: { si: 4, us: 12 } },
-      { ...dead, defaults: { si: 0.5, us: 40 } },
-      { ...live, defaults: { si: 0.8, us: 60 } },
-    ],
+    fields: timberI({ si: 0.5, us: 40 }, { si: 0.8, us: 60 }),
   },
   {
     id: "glued-laminations",
