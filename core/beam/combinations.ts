@@ -67,11 +67,6 @@ export interface CombinationSetResult {
   notes: string[];
 }
 
-/** The load combinations of the job's set. */
-export function combinationsOf(job: JobDocument): Combination[] {
-  return combinationSet(job.beam, job.combinations, job.beam.selfWeight ? 1 : 0).combinations;
-}
-
 /**
  * The combinations of a set for the categories present in the beam. A timber connector's resistance
  * follows the shortest-duration load of the combination (NDS C_D and λ, EN 1995 k_mod), and a variable

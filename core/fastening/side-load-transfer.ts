@@ -64,12 +64,6 @@ function offCentre(ordered: SectionModel["parts"], tol: number): boolean {
   return ordered.some((p) => Math.abs(mid(p) - mid(ordered[0]!)) > tol);
 }
 
-/** Index k (0-based) of the interface between ply k and ply k + 1 that a joint's single contact line lies on. */
-export function interfaceOf(plies: MultiPly, joint: JointPlane): number | null {
-  const all = interfacesOf(plies, joint);
-  return all && all.length === 1 ? all[0]! : null;
-}
-
 /**
  * The interfaces (0-based k, between ply k and ply k + 1) a joint's contact lines lie on: one for a
  * joint in single shear, two for one ply held between its neighbours (a bolt in double shear through
