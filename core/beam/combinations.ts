@@ -1,5 +1,4 @@
 import type { CombinationSettings, Beam, LoadCategory } from "../schema/beam.js";
-import type { JobDocument } from "../schema/job.js";
 import type { Combination } from "../schema/result.js";
 import { ndsLoadDurationFactor, ndsTimeEffectFactor } from "../connector/timber/nds-adjustment.js";
 import { beamModelOf } from "./beam-model.js";
