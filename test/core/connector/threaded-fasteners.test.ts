@@ -112,7 +112,7 @@ describe("NDS-2018 §12.3.7 [M]: the shank diameter only where the threads bear 
 });
 
 describe("§12.3.7 in double shear: the threads are held by the far outer member", () => {
-  test("#10 × 4.5 in through 1.5 + 1.5 in into a 1.5 in far member: 0.3 in of thread (≤ ¼ × 1.5 in) takes D = 0.19 in, 1 in takes D_r = 0.152 in", () => {
+  test("#10 × 4.5 in through 1.5 + 1.5 in into a 1.5 in far member: 0.3 in of thread (≤ ¼ × 1.5 in) takes D = 0.19 in, 1 in takes D_r = 0.152 in (root of a #10, ASME B18.6.1 [M]; NDS-2018 §12.3.7 [M])", () => {
     const screw = (threadLength: number) => WoodScrew.parse({ id: "s", kind: "wood-screw", standard: "NDS-2018", gauge: "#10", length: 4.5 * IN, threadLength: threadLength * IN, shear: "double" });
     expectClose(step(woodScrewKind.resistance(screw(0.3), us(1.5, 1.5)), "D") / IN, 0.19, { rel: 1e-9 });
     expectClose(step(woodScrewKind.resistance(screw(1), us(1.5, 1.5)), "D") / IN, 0.152, { rel: 1e-9 });

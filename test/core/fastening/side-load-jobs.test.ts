@@ -70,7 +70,7 @@ describe("uniform side loads across plies (moved from the stand-alone side-load 
     for (const { s } of [i1!, i2!, i3!]) expect(s.verification.maxUtilisation).toBeLessThanOrEqual(1 + 1e-9);
   });
 
-  test("a side load the smallest spacing cannot pass is reported with where it is: 60 N/mm on the left face needs 2·600/40 = 30 mm < 50 mm", () => {
+  test("a side load the smallest spacing cannot pass is reported with where it is: 60 N/mm on the left face needs 2·600/40 = 30 mm < 50 mm [D]", () => {
     const result = run(plies(3, [{ type: "uniform", w: 60, face: "left" }]));
     const [i1] = interfaces(result);
     expect(i1!.s.passes).toBe(false);
