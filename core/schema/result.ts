@@ -268,6 +268,21 @@ export const Schedule = z.object({
    * neither an edge distance nor, with more than one per row, a spacing across.
    */
   rowFit: z.object({ needed: q("length"), available: q("length"), between: z.tuple([z.string(), z.string()]), fits: z.boolean() }).nullable().optional(),
+  /**
+   * Where a row's connectors sit across the contact line, for the field sheet: offsets from a named edge
+   * (one per connector of a row, increasing), the stagger along the member between alternate connectors
+   * of successive rows (null when they stand in line) and the face they are driven from (null when either
+   * face will do, as for a through bolt). Absent where the schedule has no discrete connectors to lay out.
+   */
+  layoutAcross: z
+    .object({
+      edge: z.string(),
+      offsets: z.array(q("length")),
+      stagger: q("length").nullable(),
+      drivenFrom: z.string().nullable(),
+    })
+    .nullable()
+    .optional(),
   /** Check mode: spacings of the given schedule outside the detailing limits. */
   detailingProblems: z.array(z.string()),
   passes: z.boolean(),
