@@ -12,6 +12,7 @@ import { contextFor } from "./fastening/connector-context.js";
 import { discreteSchedule, type JointInput } from "./fastening/discrete-schedule.js";
 import { globalise, jointDemand, localView, memberJointsOf, type MemberJoint } from "./fastening/member-joints.js";
 import { partTerminations } from "./fastening/part-terminations.js";
+import { loadedEdgesOf } from "./fastening/loaded-edges.js";
 import { rowFit, rowFitProblem } from "./fastening/row-fit.js";
 import { interfaceDemand, interfacesOf, multiPlyOf, offsetPlies, type MultiPly } from "./fastening/side-load-transfer.js";
 import { weldSchedule } from "./fastening/weld-schedule.js";
@@ -106,7 +107,7 @@ export function designMember(job: JobDocument): DesignResult {
     let input: JointInput;
     if (plyInterfaces !== null) {
       // The demand is per contact line; the schedule divides by the lines, so the factor restores it.
-      input = { ...common, beam, stations, flowFactor: joint.lines.length, stressFactor: 1 / joint.contactWidth, demandActions: interfaceDemand(job, beam, plies!, plyInterfaces) };
+      input = { ...common, beam, stations, flowFactor: joint.lines.length, stressFactor: 1 / joint.contactWidth, demandActions: interfaceDemand(job, beam, plies!, plyInterfaces), loadedEdges: loadedEdgesOf(job, beam, plies!, plyInterfaces, mj.section) };
     } else if (!stepped) {
       input = { ...common, beam, stations, flowFactor: flowFactor * share, stressFactor };
     } else {

@@ -120,8 +120,10 @@ export interface DetailingLimits {
   maxSpacing: number | null;
   /** Least distance from a member end to the first row. */
   endDistance: number;
-  /** Least distance from a connector to the edge of a joined part across the line. */
+  /** Least distance from a connector to the edge of a joined part across the line (for a force across the grain, to the loaded edge). */
   edgeDistance?: number | null;
+  /** For a force across the grain: the least distance to an edge the connector does not push toward (unloaded), where it differs. */
+  unloadedEdgeDistance?: number | null;
   /** Least spacing between connectors of one row, across the line. */
   rowSpacing?: number | null;
   /** Penetration into the point-side member: least allowed and provided. */
@@ -248,6 +250,7 @@ export function governingLimits(limits: DetailingLimits[]): DetailingLimits {
     maxSpacing: maxima.length > 0 ? Math.min(...maxima) : null,
     endDistance: largest((l) => l.endDistance) ?? 0,
     edgeDistance: largest((l) => l.edgeDistance),
+    unloadedEdgeDistance: largest((l) => l.unloadedEdgeDistance),
     rowSpacing: largest((l) => l.rowSpacing),
     penetration: penetrations.length > 0 ? penetrations.reduce((a, b) => (b.provided - b.required < a.provided - a.required ? b : a)) : null,
     sources: [...new Set(limits.flatMap((l) => l.sources))],

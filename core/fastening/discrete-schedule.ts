@@ -6,6 +6,7 @@ import type { Connector } from "../connector/registry.js";
 import type { Fastening, JobDocument } from "../schema/job.js";
 import type { Schedule } from "../schema/result.js";
 import type { JointPlane } from "../section/joints.js";
+import type { LoadedEdge } from "./loaded-edges.js";
 import { rowFit } from "./row-fit.js";
 import { allowedSpacings } from "../spacing/allowed-spacings.js";
 import { checkSchedule } from "../spacing/check-schedule.js";
@@ -36,6 +37,8 @@ export interface JointInput {
   maxSpacingCap?: number;
   /** More demand the rows must meet besides the flow, as if further combinations (a part's force to develop at its end). */
   extraDemand?: { id: string; actions: MemberActions; resistance: number }[];
+  /** For a force across the grain (side-by-side plies): the edges the connectors push the timber toward, and why. */
+  loadedEdges?: { edges: LoadedEdge[]; note: string };
 }
 
 const VERIFICATION_METHOD =
@@ -70,6 +73,8 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
   const module = job.spacing.preferred ? null : job.spacing.module ?? defaults.module;
   const minZoneLength = job.spacing.minZoneLength ?? defaults.minZoneLength;
   const sources = [...limits.sources];
+  const unloadedEdgeDistance = limits.unloadedEdgeDistance ?? null;
+  if (unloadedEdgeDistance !== null && input.loadedEdges) sources.push(input.loadedEdges.note);
   if (input.maxSpacingCap !== undefined && input.maxSpacingCap < (limits.maxSpacing ?? Infinity)) sources.push(`maximum spacing ${inJobUnits(input.maxSpacingCap, "length", job.units)}: at most 4 × the smallest, for the effective spacing of EN 1995-1-1 Annex B`);
   if (limits.maxSpacing === null && job.spacing.maximum === undefined) sources.push(`maximum spacing ${inJobUnits(defaults.maxSpacing, "length", job.units)} (common practice; the connector sets none)`);
   const actions = demandActionsOf(input);
@@ -106,6 +111,7 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
       preferred: job.spacing.preferred ?? null,
       minZoneLength,
       edgeDistance: limits.edgeDistance ?? null,
+      ...(unloadedEdgeDistance !== null ? { unloadedEdgeDistance, ...(input.loadedEdges ? { loadedEdges: input.loadedEdges.edges } : {}) } : {}),
       rowSpacing: limits.rowSpacing ?? null,
       penetration: limits.penetration ?? null,
       sources,
@@ -269,7 +275,7 @@ function designedRemedies(
     const lines = contexts.map((ls) => ls.map((ctx) => ({ ...ctx, rows })));
     if (lines[0]!.some((ctx) => (kind.problems?.(c, ctx) ?? []).length > 0)) return null;
     const limits = governingLimits(lines[0]!.map((ctx) => kind.detailing(c, ctx)));
-    if (rowFit(limits, rows, joint.lines)?.fits === false) return null;
+    if (rowFit({ ...limits, ...(input.loadedEdges ? { loadedEdges: input.loadedEdges.edges } : {}) }, rows, joint.lines)?.fits === false) return null;
     if (beam.length < 2 * limits.endDistance * (1 - 1e-9)) return null;
     const r = lines.map((ls) => Math.min(...ls.map((ctx) => kind.resistance(c, ctx).value)) * factor);
     const scale = Math.min(...r) / leastNow;

@@ -231,8 +231,12 @@ export const Schedule = z.object({
     module: q("length").nullable(),
     preferred: z.array(q("length")).nullable(),
     minZoneLength: q("length"),
-    /** Least distance from a connector to an edge of a joined part, across the line. */
+    /** Least distance from a connector to an edge of a joined part, across the line (for a force across the grain, to the loaded edge). */
     edgeDistance: q("length").nullable().optional(),
+    /** For a force across the grain: the least distance to an unloaded edge (one the connectors do not push the wood toward). */
+    unloadedEdgeDistance: q("length").nullable().optional(),
+    /** Which edges of the contact (for side-by-side plies "top", "bottom") the connectors push a timber part toward, where the force is across the grain. */
+    loadedEdges: z.array(z.enum(["top", "bottom"])).optional(),
     /** Least spacing of the connectors of one row, across the line. */
     rowSpacing: q("length").nullable().optional(),
     /** Penetration into the point-side member: least allowed and provided. */

@@ -562,6 +562,27 @@ function dowelWarnings(spec: DowelSpec, context: ConnectorContext): string[] {
   return out;
 }
 
+/**
+ * ℓ/D of NDS-2018 Table 12.5.1D, footnote [M]: the smaller of the length in the wood main member and the
+ * total length in the wood side member(s), over D; a steel member's length does not count. Single shear:
+ * the head-side and point-side members; double shear: the central member and the two outer members together.
+ */
+function ndsSlenderness(spec: DowelSpec, g: DowelGeometry): number {
+  const wood = (m: JoinedMember) => !isSteel(m.material);
+  const lengths: number[] = [];
+  for (const b of g.cases) {
+    if (wood(b.main)) lengths.push(b.mainLength);
+    if (!wood(b.side)) continue;
+    if (spec.shear === "single") lengths.push(b.sideLength);
+    else {
+      // Both outer members: from the joint's roles where it has them, each taken like this one otherwise.
+      const other = g.double ? g.cases.find((c) => c.side.part !== b.side.part) : undefined;
+      lengths.push(b.sideLength + (other ? (wood(other.side) ? other.sideLength : 0) : b.sideLength));
+    }
+  }
+  return lengths.length > 0 ? Math.min(...lengths) / spec.diameter : 0;
+}
+
 export function dowelDetailing(given: DowelSpec, context?: ConnectorContext): DetailingLimits {
   if (!context) return { minSpacing: 0, maxSpacing: null, endDistance: 0, sources: [] };
   const spec = oriented(given, context);
@@ -571,8 +592,7 @@ export function dowelDetailing(given: DowelSpec, context?: ConnectorContext): De
   g.parts.forEach(({ member: m, angle }) => {
     if (isSteel(m.material)) return;
     if (spec.standard === "NDS-2018") {
-      const bearing = Math.min(...g.cases.map((b) => Math.min(b.sideLength, b.mainLength)));
-      per.push(ndsSpacing({ family: spec.family, diameterIn: spec.diameter / MM_PER_IN, angleDeg: angle, prebored: spec.predrilled || spec.family === "screw", slenderness: bearing / spec.diameter }));
+      per.push(ndsSpacing({ family: spec.family, diameterIn: spec.diameter / MM_PER_IN, angleDeg: angle, prebored: spec.predrilled || spec.family === "screw", slenderness: ndsSlenderness(spec, g), ...(context.direction === "across" ? { grainAlongLine: true } : {}) }));
     } else {
       const placement = isPanel(m.material) ? (spec.ec5.panel === "plywood" ? "plywood" : "osb") : "timber";
       per.push(ec5Spacing({ family: spec.family, d: spec.diameter, angleDeg: angle, characteristicDensity: m.material.characteristicDensity ?? 0, predrilled: spec.predrilled, placement, steelToTimber, ...(context.direction === "across" ? { grainAlongLine: true } : {}) }));
@@ -584,6 +604,8 @@ export function dowelDetailing(given: DowelSpec, context?: ConnectorContext): De
     maxSpacing: null,
     endDistance: max((s) => s.end),
     edgeDistance: max((s) => s.edge),
+    // A force across the grain: the edge it does not push toward may be closer (the pipeline tells which edge is loaded).
+    ...(per.some((s) => s.unloadedEdge !== undefined) ? { unloadedEdgeDistance: max((s) => s.unloadedEdge ?? s.edge) } : {}),
     rowSpacing: max((s) => s.across),
     penetration: g.penetration !== null && spec.minPenetration ? { required: spec.minPenetration.multiple * spec.diameter, provided: g.penetration } : null,
     sources: [...new Set(per.map((s) => s.source)), ...(spec.minPenetration && g.penetration !== null ? [`minimum penetration ${spec.minPenetration.multiple}d (${spec.minPenetration.source})`] : [])],

@@ -12,8 +12,10 @@ export interface MemberSpacing {
   across: number;
   /** Least distance from the member end. */
   end: number;
-  /** Least distance from an edge parallel to the line. */
+  /** Least distance from an edge parallel to the line (for a force across the grain, the loaded edge: the one the fastener pushes toward). */
   edge: number;
+  /** For a force across the grain only: the least distance from the unloaded edge. */
+  unloadedEdge?: number;
   source: string;
 }
 
@@ -24,19 +26,44 @@ export type DowelFamily = "nail" | "screw" | "lag-screw" | "bolt" | "dowel";
  * (C_Δ = 1.0). Nails and wood screws: the NDS asks only for spacing that prevents splitting (§12.1.6),
  * so common-practice values after the NDS Commentary's recommended nail spacings are used.
  */
-export function ndsSpacing(p: { family: DowelFamily; diameterIn: number; angleDeg: number; prebored: boolean; slenderness: number }): MemberSpacing {
+export function ndsSpacing(p: { family: DowelFamily; diameterIn: number; angleDeg: number; prebored: boolean; slenderness: number; grainAlongLine?: boolean }): MemberSpacing {
   const D = p.diameterIn * 25.4;
   const perpendicular = foldAngle(p.angleDeg) > 45;
   if (p.family === "nail" || p.family === "screw") {
     const k = p.prebored ? 10 : 15;
     const rows = p.prebored ? 3 : 5;
     const s = { along: k * D, across: rows * D, end: k * D, edge: 2.5 * D };
+    if (p.grainAlongLine && perpendicular) {
+      // A force across the member between side-by-side plies, the grain along it: the spacings along the grain stay
+      // those along the member; the edge the nails push the wood toward keeps the end distance, the other 2.5D [CP].
+      return {
+        ...s,
+        edge: k * D,
+        unloadedEdge: 2.5 * D,
+        source: `NDS-2018 §12.1.6: spacing to prevent splitting; common practice [CP]: ${k}D along the grain (along the member), ${rows}D across it, end ${k}D; force across the grain: loaded edge ${k}D, unloaded edge 2.5D`,
+      };
+    }
     return {
       ...(perpendicular ? { along: s.across, across: s.along, end: 4 * D, edge: s.end } : s),
       source: `NDS-2018 §12.1.6: spacing to prevent splitting; common practice [CP]: ${k}D along the grain, ${rows}D between rows, end ${perpendicular ? "4D (loaded edge)" : `${k}D`}, edge 2.5D`,
     };
   }
   const ratio = p.slenderness;
+  const betweenRows = ratio <= 2 ? 2.5 * D : ratio >= 6 ? 5 * D : ((5 * ratio + 10) / 8) * D;
+  if (p.grainAlongLine && perpendicular) {
+    // A force across the member between side-by-side plies, the grain along it. An NDS row is aligned with the load
+    // (§11.3.6.1), so here a row stands across the depth and rows follow one another along the grain: Table 12.5.1D
+    // (ℓ/D) sets the spacing along the member. Within a row (across the depth, across the grain) Table 12.5.1B asks
+    // for the spacing the attached member needs; 4D is taken, and never less than the ℓ/D spacing [CP].
+    return {
+      along: betweenRows,
+      across: Math.max(4 * D, betweenRows),
+      end: 4 * D,
+      edge: 4 * D,
+      unloadedEdge: 1.5 * D,
+      source: `NDS-2018 Tables 12.5.1A–D, load perpendicular to grain (a force across the member, grain along it) [M]: end 4D, loaded edge 4D, unloaded edge 1.5D (Table 12.5.1C); between rows along the grain ${round(betweenRows / D)}D at ℓ/D = ${round(ratio)} (Table 12.5.1D: 2.5D at ℓ/D ≤ 2, (5ℓ/D + 10)/8 · D between, 5D at ℓ/D ≥ 6); within a row across the grain ${round(Math.max(4 * D, betweenRows) / D)}D (Table 12.5.1B: as the attached member needs; 4D and at least the ℓ/D spacing [CP])`,
+    };
+  }
   if (!perpendicular) {
     const across = Math.min(1.5 * D, 5 * 25.4);
     return {
@@ -47,9 +74,8 @@ export function ndsSpacing(p: { family: DowelFamily; diameterIn: number; angleDe
       source: "NDS-2018 Tables 12.5.1A–D (load parallel to grain, full design value, C_Δ = 1.0): spacing 4D, end 7D (tension member, softwood), edge 1.5D, rows 1.5D ≤ 5 in [M]",
     };
   }
-  const rows = ratio <= 2 ? 2.5 * D : ratio >= 6 ? 5 * D : (2.5 + (2.5 * (ratio - 2)) / 4) * D;
   return {
-    along: rows,
+    along: betweenRows,
     across: 4 * D,
     end: 4 * D,
     edge: 4 * D,
@@ -119,7 +145,7 @@ export function ec5Spacing(p: { family: DowelFamily; d: number; angleDeg: number
   // side-by-side plies) says directly that the grain runs along the line, whatever α.
   const alongGrain = p.grainAlongLine ?? foldAngle(p.angleDeg) <= 45;
   return alongGrain
-    ? { along: a1, across: a2, end: Math.max(a3t, a3c), edge: Math.max(a4t, a4c), table, source: `${source}: ${p.grainAlongLine ? `grain along the member, force across it (α = ${Number(foldAngle(p.angleDeg).toPrecision(3))}°), so ` : ""}a₁ along the line, a₂ between rows, a₃,t at the ends, a₄ at the edges` }
+    ? { along: a1, across: a2, end: Math.max(a3t, a3c), edge: p.grainAlongLine ? a4t : Math.max(a4t, a4c), ...(p.grainAlongLine ? { unloadedEdge: a4c } : {}), table, source: `${source}: ${p.grainAlongLine ? `grain along the member, force across it (α = ${Number(foldAngle(p.angleDeg).toPrecision(3))}°), so ` : ""}a₁ along the line, a₂ between rows, a₃,t at the ends, ${p.grainAlongLine ? `a₄,t = ${round(a4t / d)}d at the loaded edge, a₄,c = ${round(a4c / d)}d at the unloaded edge` : "a₄ at the edges"}` }
     : { along: a2, across: a1, end: Math.max(a4t, a4c), edge: Math.max(a3t, a3c), table, source: `${source}: grain across the member, so a₂ along the line, a₁ between rows, a₄ at the member ends, a₃ at the edges` };
 }
 
@@ -132,3 +158,5 @@ export interface Ec5Distances {
   a4t: number;
   a4c: number;
 }
+
+const round = (x: number) => Number(x.toPrecision(3));

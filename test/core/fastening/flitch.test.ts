@@ -96,9 +96,11 @@ describe("flitch beam: two 2x12 plies and a 1/2 × 11 in plate, 3/4 in bolts, 14
     expectClose(byCombination.get("ASD-1")!, (Z / 2) * 0.9 * lbToN, { rel: 1e-6 }, "ASD-1 per line");
     expectClose(byCombination.get("ASD-2")!, (Z / 2) * 1.0 * lbToN, { rel: 1e-6 }, "ASD-2 per line");
     expect(s.resistance[0]!.steps.some((st) => st.symbol === "θ" && st.value === 90)).toBe(true);
-    // Load perpendicular to grain: bolts along the member are rows side by side, 2.5D apart for ℓ/D ≤ 2 (ℓ = 0.5 in of plate
-    // here; NDS-2018 Table 12.5.1D, spacing between rows, perpendicular to grain loading [M]); along the grain that would be 4D.
-    expectClose(s.limits.minSpacing, 2.5 * D * 25.4, { rel: 1e-9 }, "2.5D");
+    // Load perpendicular to grain: an NDS row is aligned with the load (§11.3.6.1), so rows stand across the depth and follow
+    // one another along the member, (5ℓ/D + 10)/8 · D apart for 2 < ℓ/D < 6 (NDS-2018 Table 12.5.1D [M]). ℓ/D is the smaller of
+    // the length in the wood main member and the total length in the wood side members (its footnote [M]): the plate does not
+    // count, so ℓ = 2 × 1.5 = 3 in, ℓ/D = 4, spacing (20 + 10)/8 = 3.75D = 2.81 in [D]. (Taking the plate's 0.5 in gave 2.5D.)
+    expectClose(s.limits.minSpacing, 3.75 * D * 25.4, { rel: 1e-9 }, "3.75D");
   });
 
   test("bending and shear of each ply on its own share: the plate's shear is 1.5 · s_p · V/(t_p d_p) [D]", () => {
