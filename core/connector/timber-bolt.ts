@@ -68,6 +68,7 @@ function specOf(c: TimberBolt): DowelSpec {
     predrilled: true,
     minPenetration: null,
     angles: conditions.angles,
+    ...(c.tensileStrength !== undefined || (c.grade && propertyClasses[c.grade]) ? { ultimateStrength: fu } : {}),
     bendingYield: c.bendingYieldStrength !== undefined ? { value: c.bendingYieldStrength, source: "given" } : { value: NDS_BOLT_BENDING_YIELD_PSI * MPA_PER_PSI, source: "45 000 psi, the value behind the NDS bolt tables" },
     nds: conditions.nds,
     ec5: { ...conditions.ec5Conditions, yieldMoment: { value: My.value, source: `${My.formula}, f_u,k = ${formatNumber(fu)} MPa${c.grade ? ` (property class ${c.grade})` : ""}` }, nailEmbedment: false },

@@ -21,6 +21,7 @@ import {
 } from "./nds-adjustment.js";
 import { ndsSteelBearing, ndsWoodBearing, type NdsBearing } from "./nds-dowel-bearing.js";
 import { foldAngle, ndsYieldLimit } from "./nds-yield-limit.js";
+import { plateBearing } from "./plate-bearing.js";
 import { ec5Spacing, ndsSpacing, type DowelFamily, type MemberSpacing } from "./timber-spacing.js";
 import { exceeds, fallsShort } from "../../units/limits.js";
 
@@ -48,6 +49,8 @@ export interface DowelSpec {
   minPenetration: { multiple: number; source: string } | null;
   /** Angle between load (along the member) and grain in the head-side and point-side members, degrees. */
   angles: { side: number; main: number };
+  /** Ultimate tensile strength of the bolt steel f_ub, where given (EN 1993-1-8 α_b of a plate's bearing), MPa. */
+  ultimateStrength?: number;
   /** Fastener bending yield strength F_yb (NDS), MPa. */
   bendingYield: { value: number; source: string };
   nds: { moisture: NdsMoisture; temperature: NdsTemperature; endGrain: boolean; toeNailed: boolean };
@@ -293,7 +296,27 @@ export function dowelResistance(given: DowelSpec, context: ConnectorContext): Co
   const each = g.cases
     .map((b) => (spec.standard === "NDS-2018" ? ndsResistance(spec, context, g, b) : ec5Resistance(spec, context, g, b)))
     .map((r) => ({ ...r, steps: [...across, ...r.steps] }));
-  if (!g.double) return each[0]!;
+  return withPlateBearing(g.double ? doubleShearResistance(each, { ...g, double: g.double }, context) : each[0]!, plateBearing(spec, context, g));
+}
+
+/** The timber's yield modes and the plate's bearing together: the least of all governs. */
+function withPlateBearing(r: ConnectorResistance, plate: ReturnType<typeof plateBearing>): ConnectorResistance {
+  if (!plate) return r;
+  const modes = [...(r.modes ?? []), ...plate.modes];
+  const least = plate.modes.reduce<ModeValue | null>((a, m) => (a === null || m.value < a.value ? m : a), null);
+  const governs = least !== null && least.value < r.value;
+  return {
+    ...r,
+    value: governs ? least.value : r.value,
+    governing: governs ? least.mode : r.governing,
+    reference: governs ? least.reference ?? r.reference : r.reference,
+    steps: [...r.steps, ...plate.steps, ...(governs ? [{ symbol: "R", description: `the plate governs: ${least.mode}`, value: least.value, quantity: "connectorForce" as const }] : [])],
+    modes,
+    warnings: [...(r.warnings ?? []), ...plate.warnings],
+  };
+}
+
+function doubleShearResistance(each: ConnectorResistance[], g: DowelGeometry & { double: DoubleShearMembers }, context: ConnectorContext): ConnectorResistance {
   // Double shear: every outer member (and driving direction) is checked with the central member; the weaker governs.
   const at = each.reduce((best, r, i) => (r.value < each[best]!.value * (1 - 1e-9) ? i : best), 0);
   const r = each[at]!;
