@@ -12,6 +12,7 @@ import { contextFor } from "./fastening/connector-context.js";
 import { discreteSchedule, type JointInput } from "./fastening/discrete-schedule.js";
 import { globalise, jointDemand, localView, memberJointsOf, type MemberJoint } from "./fastening/member-joints.js";
 import { partTerminations } from "./fastening/part-terminations.js";
+import { layoutAcross } from "./fastening/layout-across.js";
 import { loadedEdgesOf } from "./fastening/loaded-edges.js";
 import { rowFit, rowFitProblem } from "./fastening/row-fit.js";
 import { interfaceDemand, interfacesOf, multiPlyOf, offsetPlies, type MultiPly } from "./fastening/side-load-transfer.js";
@@ -115,7 +116,7 @@ export function designMember(job: JobDocument): DesignResult {
       const local = mj.extent ? { ...common, fastening: shiftProvided(fastening, -mj.extent.from) } : common;
       input = { ...local, ...view, flowFactor: share, stressFactor: 1 / joint.contactWidth, demandActions: jointDemand(beam, mj) };
     }
-    return { joint, kind, input, extent: mj.extent, plyInterface, share };
+    return { joint, kind, input, extent: mj.extent, plyInterface, share, section: mj.section, across: plyInterfaces !== null };
   });
 
   type Run = { schedule?: Schedule; bondLine?: BondLineResult; weld?: WeldResult; warnings: string[]; mirrored: boolean };
@@ -217,6 +218,7 @@ export function designMember(job: JobDocument): DesignResult {
         notChecked.push(`Joint ${p.joint.id}: whether ${r.schedule.rows === 1 ? "a connector" : `${r.schedule.rows} connectors side by side`} fit${r.schedule.rows === 1 ? "s" : ""} across the contact (${inJobUnits(narrowest, "length", job.units)} wide at its narrowest): connector ${r.schedule.connector} gives no edge distance${r.schedule.rows > 1 ? " or spacing across" : ""}.`);
       }
       if (fit && !fit.fits) r.schedule = { ...r.schedule, detailingProblems: [...r.schedule.detailingProblems, rowFitProblem(fit, r.schedule.limits, r.schedule.rows, r.schedule.connectorLabel, job.units)], passes: false };
+      r.schedule = { ...r.schedule, layoutAcross: layoutAcross(r.schedule, p.joint.lines, p.section, p.input.contexts[0]?.[0]?.members[0].part ?? null, p.across) };
       schedules.push(r.schedule);
     }
     if (r.bondLine) bondLines.push(r.bondLine);
