@@ -10,9 +10,10 @@ export type LayoutAcross = NonNullable<Schedule["layoutAcross"]>;
  * one per connector of a row, increasing. The row is placed on the longest unbroken stretch of the
  * narrowest contact line, the edge distances kept at both ends of the stretch (for a force across the
  * grain the loaded edge's at each loaded edge) and the spacing across between connectors, the group
- * centred in the room left. A vertical contact (side-by-side plies) is dimensioned from the top edge of
- * the deepest timber part of the joint (the deepest part where none is timber), a horizontal one from the
- * left end of the stretch. Null when the row does not fit across the contact (the schedule fails).
+ * centred in the room left. Between side-by-side plies (a force across the member) the offsets are from
+ * the top edge of the deepest timber part of the joint (the deepest part where none is timber); any other
+ * contact is dimensioned from its own top edge (vertical) or left edge (horizontal) of the stretch. Null
+ * when the row does not fit across the contact (the schedule fails).
  *
  * Stagger: with two or more connectors per row and a force across the grain, alternate rows are offset
  * along the member by half the least spacing between rows, so that connectors of neighbouring rows do not
@@ -44,7 +45,7 @@ export function layoutAcross(schedule: Pick<Schedule, "rows" | "limits" | "rowFi
   const names = new Map(section.parts.map((p) => [p.id, p.name || p.id]));
   let edge: string;
   let offsets: number[];
-  if (vertical) {
+  if (vertical && across) {
     const joined = section.parts.filter((p) => p.id === line.a || p.id === line.b || lines.some((l) => l.a === p.id || l.b === p.id));
     const timber = joined.filter((p) => p.material.family !== "steel");
     const pool = timber.length > 0 ? timber : joined;
@@ -56,7 +57,8 @@ export function layoutAcross(schedule: Pick<Schedule, "rows" | "limits" | "rowFi
     edge = `top edge of "${names.get(deepest.id)}"`;
     offsets = fromStart.map((u) => top - (stretch.to - u));
   } else {
-    edge = `left end of the contact between "${names.get(line.a)}" and "${names.get(line.b)}"`;
+    // The joint's own contact, named without its parts, so that joints built alike (a box beam's top and bottom) lay out alike.
+    edge = vertical ? "top edge of the contact" : "left edge of the contact";
     offsets = fromStart;
   }
   const gaps = schedule.positions.slice(1).map((x, i) => x - schedule.positions[i]!);
