@@ -218,7 +218,12 @@ export function designMember(job: JobDocument): DesignResult {
         notChecked.push(`Joint ${p.joint.id}: whether ${r.schedule.rows === 1 ? "a connector" : `${r.schedule.rows} connectors side by side`} fit${r.schedule.rows === 1 ? "s" : ""} across the contact (${inJobUnits(narrowest, "length", job.units)} wide at its narrowest): connector ${r.schedule.connector} gives no edge distance${r.schedule.rows > 1 ? " or spacing across" : ""}.`);
       }
       if (fit && !fit.fits) r.schedule = { ...r.schedule, detailingProblems: [...r.schedule.detailingProblems, rowFitProblem(fit, r.schedule.limits, r.schedule.rows, r.schedule.connectorLabel, job.units)], passes: false };
-      r.schedule = { ...r.schedule, layoutAcross: layoutAcross(r.schedule, p.joint.lines, p.section, p.input.contexts[0]?.[0]?.members[0].part ?? null, p.across) };
+      const layout = layoutAcross(r.schedule, p.joint.lines, p.section, p.input.contexts[0]?.[0]?.members[0].part ?? null, p.across);
+      r.schedule = { ...r.schedule, layoutAcross: layout };
+      if (layout?.stagger != null) {
+        const stagger = `Across the grain with ${r.schedule.rows} per row: alternate connectors of each row are set ${inJobUnits(layout.stagger, "length", job.units)} (half the least spacing between rows) along the member toward midspan, so that the holes of a row do not all stand in one cross-section of the member [CP].`;
+        r.schedule = { ...r.schedule, limits: { ...r.schedule.limits, sources: [...r.schedule.limits.sources, stagger] } };
+      }
       schedules.push(r.schedule);
     }
     if (r.bondLine) bondLines.push(r.bondLine);

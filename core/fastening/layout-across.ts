@@ -15,9 +15,9 @@ export type LayoutAcross = NonNullable<Schedule["layoutAcross"]>;
  * contact is dimensioned from its own top edge (vertical) or left edge (horizontal) of the stretch. Null
  * when the row does not fit across the contact (the schedule fails).
  *
- * Stagger: with two or more connectors per row and a force across the grain, alternate rows are offset
- * along the member by half the least spacing between rows, so that connectors of neighbouring rows do not
- * stand on one grain line [CP]. Driven from: the part the heads bear on, for a connector driven from one
+ * Stagger: with two or more connectors per row and a force across the grain, alternate connectors of each
+ * row are set along the member (toward midspan) by half the least spacing between rows, so that the holes
+ * of a row do not all stand in one cross-section [CP]. Driven from: the part the heads bear on, for a connector driven from one
  * face (one with a penetration); null for a through bolt.
  */
 export function layoutAcross(schedule: Pick<Schedule, "rows" | "limits" | "rowFit" | "positions">, lines: ContactLine[], section: SectionModel, headPart: string | null, across: boolean): LayoutAcross | null {
