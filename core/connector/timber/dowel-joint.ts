@@ -582,6 +582,13 @@ function dowelWarnings(spec: DowelSpec, context: ConnectorContext): string[] {
     out.push(`The ${spec.noun} point passes through part "${g.through.member.part}" (penetration ${inJobUnits(g.through.penetration, "length", u)}); only the part's thickness is counted and the protruding point is not credited.`);
   }
   // Whether a row fits across the contact is checked for every kind by the pipeline (core/fastening/row-fit.ts).
+  if (spec.standard === "NDS-2018" && context.rows > 1 && g.parts.some((p) => isSteel(p.member.material)) && g.parts.some((p) => !isSteel(p.member.material))) {
+    // A steel plate restrains the wood's shrinkage across the grain between the outer connectors of a row.
+    const spread = (context.rows - 1) * (dowelDetailing(spec, context).rowSpacing ?? 0);
+    if (exceeds(spread, 5 * MM_PER_IN)) {
+      out.push(`${context.rows} ${spec.noun}s side by side through a steel plate spread at least ${inJobUnits(spread, "length", u)} across the grain, more than 5 in: NDS-2018 limits the spacing between the outer rows on a single steel plate to 5 in, as the plate restrains the wood's shrinkage (Table 12.5.1D footnote [M]); confirm the wood is dry at installation or use slotted holes or separate plates.`);
+    }
+  }
   return out;
 }
 

@@ -22,7 +22,7 @@ const run = (job: JobInput) => {
 const example = (name: string): JobInput => JSON.parse(readFileSync(new URL(`../../../fixtures/examples/${name}`, import.meta.url), "utf8")) as JobInput;
 
 /** Two 2x12 DF-L plies, a 1/2 in plate of depth h between them (centred), 3/4 in bolts in double shear, 14 ft, load on top. */
-function flitchUs(plateDepth: number, opts: { rows?: number; basis?: "allowable" | "factored"; w?: number } = {}): JobInput {
+function flitchUs(plateDepth: number, opts: { rows?: number; basis?: "allowable" | "factored"; w?: number; size?: string } = {}): JobInput {
   return {
     format: "stitchplan-job",
     version: 1,
@@ -39,7 +39,7 @@ function flitchUs(plateDepth: number, opts: { rows?: number; basis?: "allowable"
       { id: "plate", material: "PL", shape: { type: "rectangle", b: 0.5, h: plateDepth }, place: { on: "left", side: "right" } },
       { id: "right", name: "Right 2x12", material: "DF", shape: { type: "lumber", nominal: "2x12", orientation: "edge" }, place: { on: "plate", side: "right" } },
     ],
-    connectors: [{ id: "B", kind: "timber-bolt", standard: "NDS-2018", shear: "double", size: "3/4" }],
+    connectors: [{ id: "B", kind: "timber-bolt", standard: "NDS-2018", shear: "double", size: opts.size ?? "3/4" }],
     fastening: { default: { connector: "B", rows: opts.rows ?? 2 }, joints: [{ held: ["plate"], connector: "B", rows: opts.rows ?? 2 }] },
     beam: { spans: [14], loads: [{ type: "uniform", category: "dead", w: opts.w ?? 600 }], selfWeight: false },
     combinations: { set: opts.basis === "factored" ? "asce7-22-strength" : "asce7-22-allowable" },
@@ -105,6 +105,17 @@ describe("edge distances for a force across the grain (NDS-2018 Table 12.5.1C; E
     expect(s.passes).toBe(false);
     expect(s.layoutAcross).toBeNull();
     expect(s.detailingProblems.join(" ")).toMatch(/At most 2 per row fit across it/);
+  });
+});
+
+describe("the outer bolts of a row on one steel plate at most 5 in apart (NDS-2018 Table 12.5.1D footnote [M])", () => {
+  test("5/8 in bolts: ℓ/D = 3/0.625 = 4.8, so (5 × 4.8 + 10)/8 = 4.25D = 2.656 in apart across the grain; two per row spread 2.66 in, no warning; three spread 5.31 in, a warning for the reviewer [D]", () => {
+    const two = run(flitchUs(11, { size: "5/8", rows: 2 }));
+    expect(two.warnings.some((w) => /more than 5 in/.test(w))).toBe(false);
+    const three = run(flitchUs(11, { size: "5/8", rows: 3 }));
+    expectClose(plateJoint(three).limits.rowSpacing!, 4.25 * 0.625 * IN, { rel: 1e-9 }, "4.25D across");
+    expect(plateJoint(three).rowFit!.fits).toBe(true); // 4D + 4D + 2 × 4.25D = 16.5D = 10.3 in ≤ 11 in
+    expect(three.warnings.some((w) => /3 bolts side by side through a steel plate spread at least 5\.3\d* in across the grain, more than 5 in/.test(w))).toBe(true);
   });
 });
 
