@@ -108,6 +108,21 @@ describe("edge distances for a force across the grain (NDS-2018 Table 12.5.1C; E
   });
 });
 
+describe("nails between side-by-side plies: the grain runs along the member, the force across it (NDS-2018 §12.1.6, common practice)", () => {
+  test("10d common (D = 0.148 in): 15D along the grain (along the member), 5D across it; loaded edge 15D, unloaded 2.5D [CP]", () => {
+    const D = 0.148 * IN; // 10d common nail, NDS-2018 Table L4 [M]
+    for (const s of run(example("three-ply-header.us.json")).schedules) {
+      expectClose(s.limits.minSpacing, 15 * D, { rel: 1e-9 }, "15D along the grain");
+      expectClose(s.limits.rowSpacing!, 5 * D, { rel: 1e-9 }, "5D across the grain");
+      expectClose(s.limits.edgeDistance!, 15 * D, { rel: 1e-9 }, "loaded edge");
+      expectClose(s.limits.unloadedEdgeDistance!, 2.5 * D, { rel: 1e-9 }, "unloaded edge");
+      // One ply hands load on (pushed up), the next takes it (pushed down): both edges of the contact are loaded.
+      expect(s.limits.loadedEdges).toEqual(["top", "bottom"]);
+      expectClose(s.rowFit!.needed, (15 + 15 + 2 * 5) * D, { rel: 1e-9 });
+    }
+  });
+});
+
 describe("the outer bolts of a row on one steel plate at most 5 in apart (NDS-2018 Table 12.5.1D footnote [M])", () => {
   test("5/8 in bolts: ℓ/D = 3/0.625 = 4.8, so (5 × 4.8 + 10)/8 = 4.25D = 2.656 in apart across the grain; two per row spread 2.66 in, no warning; three spread 5.31 in, a warning for the reviewer [D]", () => {
     const two = run(flitchUs(11, { size: "5/8", rows: 2 }));
