@@ -61,3 +61,19 @@ describe("US units on the page: steel in kips and ksi, timber in pounds and psi"
     expect(h.errors).toEqual([]);
   });
 });
+
+describe("feet and inches on the page's schedule tables, as on the field sheet", () => {
+  test("zone ends, the worst row, a weld's zones and the cut-offs carry feet and inches in US units", { timeout: 60_000 }, async () => {
+    await open("cover-plate-retrofit.us");
+    const block = await textOf(".schedule-block");
+    // 6.5 ft = 6'-6" and 10.17 ft ≈ 10'-2" [D] (12 in to the foot).
+    expect(block).toContain(`6'-6" – 10'-2"`);
+    expect(block).toMatch(/Row check passes: largest utilisation [\d.]+ at x = [\d.]+ ft \(\d+'-[\d /]+"\)/);
+    expect(await textOf(".terminations")).toContain(`6'-6"`);
+    await open("girder-intermittent-welds.us");
+    expect(await textOf(".schedule-block, .weld-block, #schedules")).toContain(`7'-0" – 14'-0"`);
+    await open("workshop-box-beam.si");
+    expect(await textOf("#schedules")).not.toMatch(/\d'-\d/);
+    expect(h.errors).toEqual([]);
+  });
+});
