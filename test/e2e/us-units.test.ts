@@ -77,3 +77,13 @@ describe("feet and inches on the page's schedule tables, as on the field sheet",
     expect(h.errors).toEqual([]);
   });
 });
+
+describe("across the contact on the page", () => {
+  test("without a layout across in the result, the schedule says what the limits give and draws nothing", { timeout: 60_000 }, async () => {
+    await open("flitch-door-header.us");
+    const block = await textOf(".schedule-block");
+    expect(block).toContain("Across the contact2 per row across the contact of 11 in, at least 3 in from each edge and at least 3 in apart.");
+    expect(await page.locator(".schedule-block figure.row-across").count()).toBe(0);
+    expect(h.errors).toEqual([]);
+  });
+});

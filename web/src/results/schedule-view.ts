@@ -1,3 +1,5 @@
+import { builderDimensions } from "../../../core/draw/builder-dimensions.js";
+import { rowAcrossDrawing, rowAcrossLines, rowAcrossOf } from "../../../core/draw/row-across.js";
 import { scheduleElevation } from "../../../core/draw/schedule-elevation.js";
 import type { DesignResult, Schedule } from "../../../core/schema/result.js";
 import { formatNumber, formatRatio } from "../../../core/units/format.js";
@@ -53,6 +55,10 @@ export function scheduleBlock(result: DesignResult, schedule: Schedule, width: n
     `shortest zone ${shown(result, l.minZoneLength, "length")}`,
   ].filter(Boolean);
   const fails = !schedule.passes;
+  // Where the connectors of a row sit across the contact, as the field sheet gives it to the builder.
+  const dims = builderDimensions(result.units);
+  const across = rowAcrossOf([schedule.joint], schedule);
+  const acrossDrawing = rowAcrossDrawing(across, dims, { width: Math.min(width, 320), height: 110 });
   return el("article", { className: `schedule-block${fails ? " fails" : ""}`, attrs: { "aria-label": `${checked ? "Checked schedule" : "Schedule"} for joint ${schedule.joint}` } }, [
     el("h3", {}, [
       `${checked ? "Checked: joint" : "Joint"} ${schedule.joint}: ${schedule.connectorLabel}, ${schedule.rows} per row on ${schedule.lineCount} line${schedule.lineCount === 1 ? "" : "s"}`,
@@ -77,7 +83,9 @@ export function scheduleBlock(result: DesignResult, schedule: Schedule, width: n
           )),
       ...term("Resistance per connector", resistance),
       ...term("Limits", limits.join(", ")),
+      ...term("Across the contact", rowAcrossLines(across, dims).join(" ")),
     ]),
+    acrossDrawing ? figure(acrossDrawing, "diagram row-across") : null,
     el("p", { className: `verification${v.passes ? "" : " fails"}` }, [
       el("strong", { text: v.passes ? "Row check passes: " : "Row check fails: " }),
       `largest utilisation ${formatRatio(v.maxUtilisation)} at x = ${along(result, v.at)} (${v.combination}). Method: ${v.method}.`,
