@@ -1,7 +1,8 @@
 import type { DesignResult, MemberCheck } from "../schema/result.js";
 import { DesignResult as DesignResultSchema, Schedule, WeldResult } from "../schema/result.js";
 import { rescale } from "./convert.js";
-import { unitLabel, quantities, type Quantity, type UnitSystem } from "./quantity.js";
+import { formatNumber } from "./format.js";
+import { fromCore, unitLabel, quantities, type Quantity, type UnitSystem } from "./quantity.js";
 
 /**
  * What a shown quantity belongs to. US practice writes steel in kips and ksi (AISC 360 and its manual)
@@ -46,6 +47,11 @@ export function shownUnit(quantity: Quantity, system: UnitSystem, owner: Owner):
 
 /** A value in the job's units → the shown unit (kips from lbf for steel in US units). */
 export const shownValue = (value: number, quantity: Quantity, system: UnitSystem, owner: Owner) => value / shownUnit(quantity, system, owner).per;
+
+/** A core-unit value in a sentence, in the unit shown for what it belongs to: "9.492 kips" for a steel bolt in a US job. */
+export function inShownUnits(value: number, quantity: Quantity, system: UnitSystem, owner: Owner): string {
+  return `${formatNumber(shownValue(fromCore(value, quantity, system), quantity, system, owner))} ${shownUnit(quantity, system, owner).label}`;
+}
 
 /** Unit labels keyed by quantity kind, as shown for `owner`. */
 export function shownLabels(system: UnitSystem, owner: Owner): Record<Quantity, string> {

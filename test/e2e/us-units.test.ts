@@ -32,6 +32,9 @@ describe("US units on the page: steel in kips and ksi, timber in pounds and psi"
     const schedules = await textOf(".schedule-block");
     expect(schedules).toMatch(/\d kips/);
     expect(schedules).not.toMatch(/lbf/);
+    // The cut-offs' sentence on the connectors there too.
+    expect(await textOf(".terminations")).toMatch(/× \d+(\.\d+)? kips between the end and the cut-off/);
+    expect(await textOf("#schedules")).not.toMatch(/lbf/);
     const diagrams = await textOf("#diagrams");
     expect(diagrams).toMatch(/kips at x/);
     expect(diagrams).toMatch(/kip·ft/);
