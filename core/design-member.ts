@@ -323,7 +323,8 @@ function multiPlyResult(plies: MultiPly, joints: JointResult[]): DesignResult["m
     plies: plies.parts.map((part, i) => ({ part, share: shares[i]!, bearsTopLoad: plies.plies[i]!.bearsOnTop !== false })),
     interfaces: plies.parts.slice(0, -1).map((left, k) => ({
       between: [left, plies.parts[k + 1]!] as [string, string],
-      joint: joints.find((j) => j.lines.length === 1 && j.lines[0]!.between[0] === left && j.lines[0]!.between[1] === plies.parts[k + 1])?.id ?? null,
+      // A joint may fasten several interfaces (a plate held between two plies, bolted through both): any of its lines on this one.
+      joint: joints.find((j) => j.lines.some((l) => l.between.includes(left) && l.between.includes(plies.parts[k + 1]!)))?.id ?? null,
       fromLeftFace: transfer("left").interfaces[k]!.force,
       fromRightFace: transfer("right").interfaces[k]!.force,
       fromTop: transfer("top").interfaces[k]!.force,

@@ -93,13 +93,14 @@ export const buildUps: BuildUp[] = [
   {
     id: "side-by-side-plies",
     name: "Side-by-side plies",
-    summary: "Plies of one size on edge, side by side, nailed; optionally a steel plate between the first two.",
+    summary: "Plies of one size on edge, side by side, nailed; optionally a steel plate between the first two (a flitch beam), bolted, centred on the plies' depth.",
     fields: [
       { key: "plyLumber", label: "Ply lumber (nominal)", kind: "lumber", defaults: { si: "", us: "2x12" }, only: "us" },
       { key: "plyThickness", label: "Ply thickness", kind: "length", defaults: { si: 45, us: 0 }, only: "si" },
       { key: "plyDepth", label: "Ply depth", kind: "length", defaults: { si: 220, us: 0 }, only: "si" },
       { key: "count", label: "Number of plies", kind: "count", defaults: { si: 3, us: 3 } },
       { key: "plate", label: "Steel plate thickness between plies 1 and 2 (0 for none)", kind: "length", defaults: { si: 0, us: 0 } },
+      { key: "plateDepth", label: "Steel plate depth (0: as deep as the plies)", kind: "length", defaults: { si: 0, us: 0 } },
       { ...span, defaults: { si: 5, us: 12 } },
       dead,
       live,
@@ -258,19 +259,23 @@ export function buildUpJob(id: BuildUpId, units: UnitSystem, given: BuildUpSizes
       let last = "ply-1";
       if (plate > 0) {
         job.materials.push({ ...material(steelGrade(units), units), id: "ST" });
-        // The plate is as deep as the plies: a nominal size's depth comes from its dressed width.
+        // Unless its depth is given, the plate is as deep as the plies: a nominal size's depth comes from its dressed width.
         const plyDepth = units === "us" ? dressedDepthIn(text(sizes, "plyLumber")) : num(sizes, "plyDepth");
-        parts.push({ id: "plate", name: "Steel plate", material: "ST", shape: { type: "rectangle", b: plate, h: plyDepth }, place: { on: last, side: "right", align: "start" } });
+        const plateDepth = num(sizes, "plateDepth") > 0 ? num(sizes, "plateDepth") : plyDepth;
+        // Centred on the plies' depth (a flitch plate shallower than the timber keeps clear of the top and bottom).
+        parts.push({ id: "plate", name: "Steel plate", material: "ST", shape: { type: "rectangle", b: plate, h: plateDepth }, place: { on: last, side: "right", align: "centre" } });
         last = "plate";
       }
       for (let i = 2; i <= count; i++) {
-        parts.push({ id: `ply-${i}`, name: `Ply ${i}`, material: "W", shape, place: { on: last, side: "right", align: "start" } });
+        parts.push({ id: `ply-${i}`, name: `Ply ${i}`, material: "W", shape, place: { on: last, side: "right", align: plate > 0 ? "centre" : "start" } });
         last = `ply-${i}`;
       }
       job.parts = parts;
       if (plate > 0) {
-        job.connectors = [units === "us" ? { id: "B", kind: "timber-bolt", standard: "NDS-2018", size: "5/8", source: "" } : { id: "B", kind: "timber-bolt", standard: "EN1995-1-1", size: "M16", grade: "4.6", source: "" }];
-        job.fastening = { default: { connector: "B", rows: 2 } };
+        const bolt = units === "us" ? { kind: "timber-bolt", standard: "NDS-2018", size: "5/8", source: "" } : { kind: "timber-bolt", standard: "EN1995-1-1", size: "M16", grade: "4.6", source: "" };
+        // One bolt passes through ply, plate and ply: a joint holding the plate, in double shear (not one joint per face).
+        job.connectors = [{ id: "B", ...bolt, shear: "double" }, ...(count > 2 ? [{ id: "B1", ...bolt }] : [])];
+        job.fastening = { default: { connector: count > 2 ? "B1" : "B", rows: 2 }, joints: [{ held: ["plate"], connector: "B", rows: 2 }] };
       } else {
         job.connectors = [nail(units)];
         job.fastening = { default: { connector: "N", rows: 3 } };

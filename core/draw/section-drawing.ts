@@ -14,7 +14,7 @@ export interface SectionDrawingOptions {
  * The cross-section to scale: parts by material, every joint line, the area held by the selected
  * joint shaded, its contact width t marked, and the neutral axis. Input numbers are in the result's units.
  */
-export function sectionDrawing(result: Pick<DesignResult, "section" | "joints" | "unitLabels">, options: SectionDrawingOptions): Drawing {
+export function sectionDrawing(result: Pick<DesignResult, "section" | "joints" | "unitLabels"> & { multiPly?: DesignResult["multiPly"] }, options: SectionDrawingOptions): Drawing {
   const { section, joints } = result;
   const unit = result.unitLabels.length ?? "";
   const { x0, x1, y0, y1 } = section.bounds;
@@ -63,8 +63,38 @@ export function sectionDrawing(result: Pick<DesignResult, "section" | "joints" |
   items.push({ type: "path", d: `${moveTo(X(x0) - 8, na)}${lineTo(X(x1) + 8, na)}`, stroke: palette.neutral, strokeWidth: 1, dash: [6, 3], role: "neutral-axis" });
   items.push({ type: "text", x: X(x1) + 8, y: na - 4, text: "N.A.", size: 10, anchor: "start", fill: palette.neutral, role: "neutral-axis-label" });
 
+  items.push(...shallowPlies(result, frame, unit));
+
   items.push({ type: "text", x: (X(x0) + X(x1)) / 2, y: Y(y0) + 18, text: `${formatNumber(x1 - x0)} ${unit}`, size: 10, anchor: "middle", fill: palette.faint });
   items.push({ type: "text", x: X(x0) - 4, y: Y(y1) - 8, text: `depth ${formatNumber(y1 - y0)} ${unit}`, size: 10, anchor: "start", fill: palette.faint });
   return { width: options.width, height: options.height, items, title: `Cross-section${selected ? `, joint ${selected.id} shaded` : ""}` };
 }
 
+
+/**
+ * Side-by-side plies not as deep as the section (a flitch plate within the timber's depth): each
+ * dimensioned on the right with its depth and where it sits, its top below the section's top.
+ */
+function shallowPlies(result: Pick<DesignResult, "section"> & { multiPly?: DesignResult["multiPly"] }, frame: ReturnType<typeof fitSection>, unit: string): DrawItem[] {
+  const { section } = result;
+  const { X, Y } = frame;
+  const { x1, y0, y1 } = section.bounds;
+  const depth = y1 - y0;
+  const items: DrawItem[] = [];
+  const plies = (result.multiPly?.plies ?? []).map((p) => section.parts.find((k) => k.id === p.part)).filter((p) => p !== undefined);
+  let row = 0;
+  for (const part of plies) {
+    const top = Math.max(...part.rects.map((r) => r.y1));
+    const bottom = Math.min(...part.rects.map((r) => r.y0));
+    if (top - bottom >= depth * (1 - 1e-9) || row >= 2) continue;
+    const x = X(x1) + 4 + row * 4;
+    const tick = (y: number) => `${moveTo(x - 3, Y(y))}${lineTo(x + 3, Y(y))}`;
+    items.push({ type: "path", d: `${moveTo(x, Y(top))}${lineTo(x, Y(bottom))}${tick(top)}${tick(bottom)}`, stroke: palette.ink, strokeWidth: 0.8, role: `ply-depth ${part.id}` });
+    const below = y1 - top;
+    const textY = Y(top) + 10 + row * 26;
+    items.push({ type: "text", x: x + 5, y: textY, text: `${part.id} ${formatNumber(top - bottom)} ${unit} deep`, size: 9, anchor: "start", fill: palette.ink, bold: true, role: `ply-depth-label ${part.id}` });
+    items.push({ type: "text", x: x + 5, y: textY + 11, text: below > depth * 1e-9 ? `top ${formatNumber(below)} ${unit} below` : "flush with the top", size: 9, anchor: "start", fill: palette.ink, role: `ply-position-label ${part.id}` });
+    row++;
+  }
+  return items;
+}

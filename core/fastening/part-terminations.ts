@@ -4,6 +4,7 @@ import type { JobDocument } from "../schema/job.js";
 import type { DesignResult, Schedule, WeldResult } from "../schema/result.js";
 import { kindOf } from "../connector/registry.js";
 import { inJobUnits } from "../units/format.js";
+import { inShownUnits, ownerOfFamilies } from "../units/shown-units.js";
 import type { MemberJoint } from "./member-joints.js";
 
 type Termination = DesignResult["terminations"][number];
@@ -107,7 +108,10 @@ export function partTerminations(p: {
         attachment = kind.mechanism === "discrete" ? kind.plateEndAttachment?.(joint.connector) : undefined;
         const rows = schedule.positions.filter((x) => (x - at) * inward >= -1e-9 && (forceAt - x) * inward >= -1e-9).length;
         provided = rows * rowResistance;
-        connectors = `${rows} row(s) × ${schedule.rows * schedule.lineCount} × ${inJobUnits(rowResistance / (schedule.rows * schedule.lineCount), "connectorForce", p.job.units)} between the end and the cut-off`;
+        // Per connector in the unit the page and worksheet show it in (kips for steel joined to steel in US units).
+        const family = (id: string) => p.job.materials.find((m) => m.id === p.job.parts.find((x) => x.id === id)?.material)?.family ?? "other";
+        const owner = ownerOfFamilies(joint.joint.lines.flatMap((l) => [l.a, l.b]).map(family));
+        connectors = `${rows} row(s) × ${schedule.rows * schedule.lineCount} × ${inShownUnits(rowResistance / (schedule.rows * schedule.lineCount), "connectorForce", p.job.units, owner)} between the end and the cut-off`;
       } else if (weld && weldResistance !== null) {
         required = 2 * width;
         const reach = Math.min(required, Math.abs(far - at));

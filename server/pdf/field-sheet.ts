@@ -2,6 +2,7 @@ import { builderDimensions, type BuilderDimensions } from "../../core/draw/build
 import { fieldElevation } from "../../core/draw/field-elevation.js";
 import { fieldLayout, type FieldJoint } from "../../core/draw/field-layout.js";
 import { jointNames, zoneCallOut } from "../../core/draw/joint-strip.js";
+import { rowAcrossDrawing, rowAcrossLines, rowAcrossOf } from "../../core/draw/row-across.js";
 import { sectionSketch } from "../../core/draw/section-sketch.js";
 import { paintDrawing } from "./paint-drawing.js";
 import { ink, type TextStyle } from "./sheet.js";
@@ -63,6 +64,7 @@ export function fieldSheet(c: WorksheetContext): number[] {
       font: "bold",
       colour: ink.fail,
     });
+  acrossTheContact(c, joints, dims);
   zonesTable(c, joints, dims);
   const last = sheet.doc.bufferedPageRange().count - 1;
   return Array.from({ length: last - page + 1 }, (_, i) => page + i);
@@ -133,7 +135,10 @@ function introWithSketch(c: WorksheetContext, joints: FieldJoint[], dims: Builde
           ],
         ] as [string, "body"][])
       : []),
-    ["Any change of connector, size, spacing, end or edge distance needs the engineer of record's approval.", "body"],
+    // Where the result gives no layout across the contact, the engineer of record sets it.
+    withoutLayoutAcross(c, joints).length > 0
+      ? ["The engineer of record sets where rows sit across the contact and approves any change of connector, size, spacing, end or edge distance.", "body"]
+      : ["Any change of connector, size, spacing, end or edge distance needs the engineer of record's approval.", "body"],
   ];
   const width = sheet.width - SKETCH.width - 12;
   const style = (font: TextStyle["font"]): TextStyle & { width: number } => ({ size: 8.5, width, font });
@@ -149,6 +154,43 @@ function introWithSketch(c: WorksheetContext, joints: FieldJoint[], dims: Builde
   sheet.doc.save().rect(x, sheet.y, SKETCH.width, SKETCH.height).lineWidth(0.5).strokeColor(ink.light).stroke().restore();
   paintDrawing(sheet.doc, sectionSketch(result, SKETCH), x, sheet.y);
   sheet.y += height + 6;
+}
+
+const ACROSS = { width: 200, height: 96 };
+
+/** Joints laid out with connectors whose result gives no layout across the contact (the intro says what to do). */
+const withoutLayoutAcross = (c: WorksheetContext, joints: FieldJoint[]) =>
+  joints.filter((j) => j.kind === "connectors" && !c.result.schedules.find((s) => s.joint === j.joints[0])?.layoutAcross);
+
+/**
+ * Where each joint's connectors sit across the contact, where the result gives it: drawn and dimensioned
+ * from the named edge, with the stagger and the driving face beside it. Joints that read the same are said once.
+ */
+function acrossTheContact(c: WorksheetContext, joints: FieldJoint[], dims: BuilderDimensions): void {
+  const { sheet, result } = c;
+  const said = new Map<string, { lines: string[]; joints: string[] }>();
+  for (const j of joints.filter((k) => k.kind === "connectors")) {
+    const s = result.schedules.find((k) => k.joint === j.joints[0]);
+    if (!s?.layoutAcross) continue;
+    const lines = rowAcrossLines(rowAcrossOf(j.joints, s), dims);
+    const key = JSON.stringify(lines);
+    const entry = said.get(key) ?? { lines, joints: [] };
+    entry.joints.push(...j.joints);
+    said.set(key, entry);
+  }
+  if (said.size === 0) return;
+  sheet.heading("Across the contact", 2, ACROSS.height + 20);
+  for (const { lines, joints: ids } of said.values()) {
+    const s = result.schedules.find((k) => k.joint === ids[0])!;
+    const drawing = rowAcrossDrawing(rowAcrossOf(ids, s), dims, ACROSS);
+    const text = `${jointNames(ids)}: ${lines.join(" ")}`;
+    const width = sheet.width - ACROSS.width - 12;
+    const height = Math.max(drawing ? ACROSS.height : 0, sheet.textHeight(text, { size: 8.5, width }));
+    sheet.ensure(height + 6);
+    if (drawing) paintDrawing(sheet.doc, drawing, sheet.left, sheet.y);
+    sheet.textAt(text, sheet.left + ACROSS.width + 12, sheet.y + 4, { size: 8.5, width });
+    sheet.y += height + 6;
+  }
 }
 
 /** The zones of every joint as numbers to lay out from, under the drawing; two columns when there are many. */

@@ -1,5 +1,6 @@
 import { connectorFields, fasteningFields, loadFields, materialFields, shapeFields } from "./schema-fields.js";
-import { numberText, type QuantityText } from "./quantity-text.js";
+import { ownerOfFamilies } from "../../core/units/shown-units.js";
+import { numberText, ownedText, type QuantityText } from "./quantity-text.js";
 import { ink } from "./sheet.js";
 import { keyValueTable, table } from "./table.js";
 import { combinationsSummary, inFull, type WorksheetContext } from "./worksheet-context.js";
@@ -39,16 +40,20 @@ export function inputsSection(c: WorksheetContext): void {
       { header: "Shear strength", weight: 1, align: "right" },
       { header: "Source", weight: 1.5 },
     ],
-    job.materials.map((m) => [
+    job.materials.map((m) => {
+      // A steel grade's moduli and strengths in ksi, timber's in psi (US units).
+      const own = ownedText(job.units, ownerOfFamilies([m.family]));
+      return [
       { text: m.id, bold: true },
-      { text: m.name, note: materialFields(m, text) || undefined },
+      { text: m.name, note: materialFields(m, own) || undefined },
       m.family,
-      text.of(m.E, "modulus"),
-      text.of(m.density, "density"),
-      m.strength.bending !== undefined ? text.of(m.strength.bending, "stress") : { text: "not given", colour: ink.faint },
-      m.strength.shear !== undefined ? text.of(m.strength.shear, "stress") : { text: "not given", colour: ink.faint },
+      own.of(m.E, "modulus"),
+      own.of(m.density, "density"),
+      m.strength.bending !== undefined ? own.of(m.strength.bending, "stress") : { text: "not given", colour: ink.faint },
+      m.strength.shear !== undefined ? own.of(m.strength.shear, "stress") : { text: "not given", colour: ink.faint },
       m.source || "—",
-    ]),
+      ];
+    }),
   );
 
   sheet.heading("Parts", 2, 40);

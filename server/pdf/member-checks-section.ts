@@ -1,10 +1,11 @@
 import { formatRatio } from "../../core/index.js";
+import type { QuantityText } from "./quantity-text.js";
 import { ink } from "./sheet.js";
 import { table } from "./table.js";
 import type { WorksheetContext } from "./worksheet-context.js";
 
 /** Stresses and deflection of the member: demand against capacity, each with its utilisation. */
-export function memberChecksSection(c: WorksheetContext): void {
+export function memberChecksSection(c: WorksheetContext, textOf: (check: WorksheetContext["result"]["checks"][number]) => QuantityText = () => c.text): void {
   const { sheet, result, text } = c;
   sheet.heading("Member checks", 1, 60);
   if (result.checks.length === 0) {
@@ -24,9 +25,9 @@ export function memberChecksSection(c: WorksheetContext): void {
     ],
     result.checks.map((k) => [
       { text: k.title, note: k.reference },
-      text.of(k.demand, k.quantity),
+      textOf(k).of(k.demand, k.quantity),
       k.passes ? "≤" : ">",
-      text.of(k.capacity, k.quantity),
+      textOf(k).of(k.capacity, k.quantity),
       formatRatio(k.utilisation),
       `${k.at === null ? "" : `x = ${text.of(k.at, "span")}, `}${k.combination}`,
       k.passes ? { text: "passes", colour: ink.pass } : { text: "FAILS", bold: true, colour: ink.fail },

@@ -1,5 +1,7 @@
 import { formatNumber } from "../../core/index.js";
 import { superscript } from "../../core/units/format.js";
+import type { Quantity, UnitSystem } from "../../core/units/quantity.js";
+import { shownLabels, shownValue, type Owner } from "../../core/units/shown-units.js";
 
 /**
  * A number as printed on the worksheet, to `digits` significant figures: `formatNumber` for everyday
@@ -41,4 +43,13 @@ export function quantityText(labels: UnitLabels) {
   };
 }
 export type QuantityText = ReturnType<typeof quantityText>;
+
+/** Like `quantityText`, for values in the job's own units shown in the units of what they belong to (a steel grade's strengths in ksi). */
+export function ownedText(system: UnitSystem, owner: Owner): QuantityText {
+  const text = quantityText(shownLabels(system, owner));
+  return {
+    ...text,
+    of: (value, kind, digits) => text.of(kind === "ratio" ? value : shownValue(value, kind as Quantity, system, owner), kind, digits),
+  };
+}
 

@@ -70,8 +70,8 @@ export function sectionPropertiesSection(c: WorksheetContext): void {
       { header: "Connector", weight: 1.4 },
     ],
     result.joints.map((j) => [
-      j.found
-        ? { text: j.id, bold: true, note: j.extent ? `runs ${text.range(j.extent.from, j.extent.to)}` : undefined }
+      j.found || j.lines.length > 0
+        ? { text: j.id, bold: true, note: [j.found ? "" : "held group named in the job", j.extent ? `runs ${text.range(j.extent.from, j.extent.to)}` : ""].filter(Boolean).join("; ") || undefined }
         : { text: j.id, bold: true, note: "not found in the section", colour: ink.fail },
       partNames(result, j.held),
       j.lines.map((l) => `${l.between.join(" / ")}: ${l.orientation}, ${text.of(l.length, "length")}`).join("\n"),

@@ -7,6 +7,7 @@ import { compositeSection } from "./composite-section.js";
 import { FIELD_SHEET_HEADING, fieldSheet } from "./field-sheet.js";
 import { inputsSection } from "./inputs-section.js";
 import { memberChecksSection } from "./member-checks-section.js";
+import { shownResult, type ShownResult } from "../../core/units/shown-units.js";
 import { quantityText } from "./quantity-text.js";
 import { reviewBox } from "./review-box.js";
 import { identicalSchedules, scheduleSection } from "./schedule-section.js";
@@ -34,19 +35,25 @@ export const today = () => new Date().toISOString().slice(0, 10);
 
 /** The worksheet as a PDF: A4 for SI jobs, Letter for US jobs; its last page is the field sheet for the builder. */
 export function renderWorksheet(job: JobDocument, result: DesignResult, options: WorksheetOptions = {}): Promise<Buffer> {
-  return renderPages(job, result, options, "connector spacing worksheet", (context) => {
+  return renderPages(job, result, options, "connector spacing worksheet", (context, shown) => {
     reviewBox(context.sheet);
     statusSection(context);
     glanceSection(context);
-    inputsSection(context);
+    // The inputs as entered, in the job's own units.
+    inputsSection({ ...context, result, text: quantityText(result.unitLabels) });
     sectionPropertiesSection(context);
     actionsSection(context);
     compositeSection(context);
-    for (const group of identicalSchedules(result.schedules)) scheduleSection(context, group);
-    for (const bondLine of result.bondLines) bondLineSection(context, bondLine);
-    for (const weld of weldsOf(context)) weldSection(context, weld);
+    // A schedule or weld in the units of what its joint joins (kips for steel to steel in US units).
+    const ofJoint = (joint: string): WorksheetContext => {
+      const unitLabels = shown.labels(shown.owners.joint(joint));
+      return { ...context, result: { ...context.result, unitLabels }, text: quantityText(unitLabels) };
+    };
+    for (const group of identicalSchedules(context.result.schedules)) scheduleSection(ofJoint(group[0]!.joint), group);
+    for (const bondLine of context.result.bondLines) bondLineSection(context, bondLine);
+    for (const weld of weldsOf(context)) weldSection(ofJoint(weld.joint), weld);
     terminationsSection(context);
-    memberChecksSection(context);
+    memberChecksSection(context, (check) => quantityText(shown.labels(shown.owners.check(check))));
     closingSection(context);
     return new Map(fieldSheet(context).map((page) => [page, FIELD_SHEET_HEADING]));
   });
@@ -58,7 +65,7 @@ export function renderFieldSheet(job: JobDocument, result: DesignResult, options
 }
 
 /** A document of the job's page size; `body` sets the pages and names those with their own heading; every page is then stamped. */
-function renderPages(job: JobDocument, result: DesignResult, options: WorksheetOptions, title: string, body: (context: WorksheetContext) => Map<number, string>): Promise<Buffer> {
+function renderPages(job: JobDocument, result: DesignResult, options: WorksheetOptions, title: string, body: (context: WorksheetContext, shown: ShownResult) => Map<number, string>): Promise<Buffer> {
   const printed = options.printDate ?? today();
   const size = PAGE_SIZES[job.units];
   const frame = pageFrame(size);
@@ -81,8 +88,10 @@ function renderPages(job: JobDocument, result: DesignResult, options: WorksheetO
     doc.on("error", reject);
   });
 
-  const context: WorksheetContext = { sheet: new Sheet(doc, frame), job, result, text: quantityText(result.unitLabels) };
-  const pageHeadings = body(context);
+  // Every result number in the unit of what it belongs to: kips and ksi for steel, pounds and psi for timber in US units.
+  const shown = shownResult(result, job.materials);
+  const context: WorksheetContext = { sheet: new Sheet(doc, frame), job, result: shown.result, text: quantityText(shown.result.unitLabels) };
+  const pageHeadings = body(context, shown);
 
   stampPages(doc, frame, {
     projectName: job.project.name,

@@ -1,3 +1,4 @@
+import type { MaterialFamily } from "../../core/units/shown-units.js";
 import type { JobIssue } from "../../core/schema/job-issues.js";
 import type { DesignResult } from "../../core/schema/result.js";
 import { requestDesign } from "./api.js";
@@ -87,13 +88,14 @@ export class DesignSession {
   }
 
   async #compute(signal: AbortSignal): Promise<void> {
-    const answer = await requestDesign(this.state.job, signal);
+    const job = this.state.job;
+    const answer = await requestDesign(job, signal);
     if (signal.aborted) return;
     if (answer.kind === "designed") {
       this.#serviceIssues = [];
       this.#issues = [];
       this.registry.show([]);
-      this.#results.showResult(answer.result);
+      this.#results.showResult(answer.result, Array.isArray(job.materials) ? (job.materials as MaterialFamily[]) : []);
       this.#results.showNotice({ freshness: "current", issues: [] });
       // Whether the section is side-by-side plies decides whether the loads table offers the face a load arrives on.
       const joints = JSON.stringify([answer.result.multiPly !== null, answer.result.joints.map((j) => [j.id, j.connector, j.connectorLabel, j.rows, j.mechanism, j.contactWidth])]);

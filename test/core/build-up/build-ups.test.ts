@@ -48,4 +48,22 @@ describe("jobs from a typical build-up", () => {
     expect(plies.parts[1]!.shape).toEqual({ type: "rectangle", b: 0.5, h: 11.25 });
     expect(Object.keys(defaultSizes(buildUps[0]!, "us"))).toContain("flangeLumber");
   });
+
+  test("a flitch beam: a plate shallower than the plies sits centred on their depth, held by one joint of bolts in double shear", () => {
+    const job = buildUpJob("side-by-side-plies", "us", { count: 2, plate: 0.5, plateDepth: 11 });
+    expect(job.parts.map((p) => p.id)).toEqual(["ply-1", "plate", "ply-2"]);
+    expect(job.parts[1]!.shape).toEqual({ type: "rectangle", b: 0.5, h: 11 });
+    expect(job.parts[1]!.place).toMatchObject({ on: "ply-1", side: "right", align: "centre" });
+    expect(job.fastening.joints).toEqual([{ held: ["plate"], connector: "B", rows: 2 }]);
+    expect(job.connectors).toEqual([expect.objectContaining({ id: "B", shear: "double" })]);
+    const prepared = prepareJob(job);
+    if (!prepared.ok) expect(prepared.issues).toEqual([]);
+    if (!prepared.ok) return;
+    const plate = prepared.core.parts.find((p) => p.id === "plate") as { y?: number } | undefined;
+    // 2x12 dressed 11.25 in (PS 20 [M]): the 11 in plate's bottom (11.25 − 11)/2 = 0.125 in up [D].
+    expect((plate?.y ?? NaN) / 25.4).toBeCloseTo(0.125, 9);
+    const result = designMember(prepared.core);
+    expect(result.joints.map((j) => j.id)).toEqual(["plate"]);
+    expect(result.multiPly?.interfaces.map((i) => i.joint)).toEqual(["plate", "plate"]);
+  });
 });

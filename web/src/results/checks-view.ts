@@ -7,7 +7,7 @@ import { figure } from "./figure.js";
 import { header, shown, table, utilisation } from "./quantities.js";
 
 /** Member checks: demand against capacity, each with its utilisation. */
-export function memberChecks(result: DesignResult): HTMLElement {
+export function memberChecks(result: DesignResult, labelsOf: (check: DesignResult["checks"][number]) => Record<string, string> = () => result.unitLabels): HTMLElement {
   return table(
     "Member checks",
     ["Check", "Demand", "Capacity", "Utilisation", "Where"],
@@ -15,8 +15,8 @@ export function memberChecks(result: DesignResult): HTMLElement {
       className: c.passes ? "" : "fails",
       cells: [
         el("span", {}, [c.title, el("span", { className: "sub", text: c.reference })]),
-        c.quantity === "ratio" ? formatNumber(c.demand) : shown(result, c.demand, c.quantity),
-        c.quantity === "ratio" ? formatNumber(c.capacity) : shown(result, c.capacity, c.quantity),
+        c.quantity === "ratio" ? formatNumber(c.demand) : shown({ unitLabels: labelsOf(c) }, c.demand, c.quantity),
+        c.quantity === "ratio" ? formatNumber(c.capacity) : shown({ unitLabels: labelsOf(c) }, c.capacity, c.quantity),
         utilisation(c.utilisation, c.passes),
         el("span", {}, [c.at === null ? "" : `x = ${shown(result, c.at, "span")}`, el("span", { className: "sub", text: c.combination })]),
       ],

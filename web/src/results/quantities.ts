@@ -1,4 +1,5 @@
 import type { DesignResult } from "../../../core/schema/result.js";
+import { builderDimensions } from "../../../core/draw/builder-dimensions.js";
 import { formatNumber, formatRatio } from "../../../core/units/format.js";
 import { el } from "../dom.js";
 
@@ -11,6 +12,26 @@ export function shown(result: Pick<DesignResult, "unitLabels">, value: number | 
 
 /** From–to along the member, e.g. "0.7 – 1.4 m". */
 export const range = (result: Pick<DesignResult, "unitLabels">, from: number, to: number) => `${formatNumber(from)} – ${formatNumber(to)} ${result.unitLabels.span ?? ""}`.trim();
+
+/** In US units a position along the member also in feet and inches, with the field sheet's formatter (builderDimensions). */
+const tapeOf = (result: Pick<DesignResult, "units">) => (result.units === "us" ? builderDimensions("us") : null);
+
+/** Feet and inches of a position along the member in US units ("6'-6""); null in SI. */
+export const tapeAt = (result: Pick<DesignResult, "units">, x: number): string | null => tapeOf(result)?.position(x) ?? null;
+
+/** A position along the member in words: "x = 7.875 ft (7'-10 1/2")" in US units, "x = 2.4 m" in SI. */
+export function along(result: Pick<DesignResult, "unitLabels" | "units">, x: number): string {
+  const tape = tapeOf(result);
+  return `${shown(result, x, "span")}${tape ? ` (${tape.position(x)})` : ""}`;
+}
+
+/** A table cell of a position (or a from–to) along the member: the decimal in the column's unit, and in US units feet and inches under it. */
+export function alongCell(result: Pick<DesignResult, "unitLabels" | "units">, from: number, to?: number): string | HTMLElement {
+  const tape = tapeOf(result);
+  const decimal = to === undefined ? formatNumber(from) : `${formatNumber(from)} – ${formatNumber(to)}`;
+  if (!tape) return decimal;
+  return el("span", {}, [decimal, el("span", { className: "sub", text: to === undefined ? tape.position(from) : `${tape.position(from)} – ${tape.position(to)}` })]);
+}
 
 /** Utilisation as a figure with a small bar; over 1 the bar is full and red. */
 export function utilisation(value: number, passes: boolean): HTMLElement {

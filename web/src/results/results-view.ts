@@ -1,5 +1,6 @@
 import { pathInWords, plainMessage } from "../form/issue-words.js";
 import type { DesignResult } from "../../../core/schema/result.js";
+import { shownResult, type MaterialFamily, type ShownResult } from "../../../core/units/shown-units.js";
 import { el } from "../dom.js";
 import type { PlacedIssue } from "../form/field-registry.js";
 import { alongMemberPanel } from "./along-member-view.js";
@@ -35,6 +36,8 @@ export class ResultsView {
   readonly #section = new SectionView();
   readonly #nav = el("nav", { className: "results-nav", attrs: { "aria-label": "Results sections" } });
   #result: DesignResult | null = null;
+  /** The result in the units it is shown in (kips and ksi for steel in US units, pounds and psi for timber). */
+  #shown: ShownResult | null = null;
   #freshness: Freshness = "updating";
   #drawnWidth = 0;
   /** Combination drawn over the envelope, kept across recomputes. */
@@ -97,13 +100,16 @@ export class ResultsView {
   /** A different job was opened: results of the one before must not be shown as if they were its own. */
   clear(): void {
     this.#result = null;
+    this.#shown = null;
     this.#renderNav(null);
     this.#body.classList.remove("stale");
     this.#body.replaceChildren(el("p", { className: "hint", text: "Computing the job just opened…" }));
   }
 
-  showResult(result: DesignResult): void {
+  /** `materials` are the job's, for what each quantity belongs to (steel or timber). */
+  showResult(result: DesignResult, materials: readonly MaterialFamily[] = []): void {
     this.#result = result;
+    this.#shown = shownResult(result, materials);
     this.#renderBody();
   }
 
@@ -198,8 +204,10 @@ export class ResultsView {
   }
 
   #renderBody(): void {
-    const result = this.#result;
-    if (!result) return;
+    const shown = this.#shown;
+    if (!shown) return;
+    const result = shown.result;
+    const joint = (id: string) => ({ ...result, unitLabels: shown.labels(shown.owners.joint(id)) });
     this.#renderNav(result);
     const width = drawingWidth(this.#body);
     this.#drawnWidth = width;
@@ -208,8 +216,8 @@ export class ResultsView {
     const schedules = el("section", { className: `panel${checked ? " checked-mode" : ""}`, attrs: { id: "schedules", "aria-labelledby": "schedules-title" } }, [
       el("h2", { text: checked ? "Checked schedule (given in the job)" : "Connector schedule", attrs: { id: "schedules-title" } }),
       checked ? el("p", { className: "hint", text: "Check mode: the zones below are the ones entered in step 8, checked against the shear flow; nothing was laid out by stitchplan." }) : null,
-      ...result.schedules.map((s) => scheduleBlock(result, s, width)),
-      ...result.welds.map((w) => weldBlock(result, w, width)),
+      ...result.schedules.map((s) => scheduleBlock(joint(s.joint), s, width)),
+      ...result.welds.map((w) => weldBlock(joint(w.joint), w, width)),
       terminationsBlock(result),
       fastened ? null : el("p", { className: "hint", text: "No joint is fastened with discrete connectors or welds." }),
     ]);
@@ -228,7 +236,7 @@ export class ResultsView {
       ]),
       schedules,
       bond.length ? el("section", { className: "panel", attrs: { "aria-labelledby": "bond-title" } }, [el("h2", { text: "Bond lines", attrs: { id: "bond-title" } }), ...bond]) : "",
-      el("section", { className: "panel", attrs: { id: "checks", "aria-labelledby": "checks-title" } }, [el("h2", { text: "Member checks", attrs: { id: "checks-title" } }), memberChecks(result)]),
+      el("section", { className: "panel", attrs: { id: "checks", "aria-labelledby": "checks-title" } }, [el("h2", { text: "Member checks", attrs: { id: "checks-title" } }), memberChecks(result, (c) => shown.labels(shown.owners.check(c)))]),
       ...notes(result),
     );
     this.#body.classList.toggle("stale", this.#freshness === "invalid" || this.#freshness === "unreachable");

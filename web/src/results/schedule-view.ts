@@ -1,4 +1,5 @@
 import { builderDimensions } from "../../../core/draw/builder-dimensions.js";
+import { rowAcrossDrawing, rowAcrossLines, rowAcrossOf } from "../../../core/draw/row-across.js";
 import { scheduleElevation } from "../../../core/draw/schedule-elevation.js";
 import type { DesignResult, Schedule } from "../../../core/schema/result.js";
 import { formatNumber, formatRatio } from "../../../core/units/format.js";
@@ -6,7 +7,7 @@ import { el } from "../dom.js";
 import { spacingDiagram } from "./diagrams.js";
 import { figure } from "./figure.js";
 import { isSideLoad, partName } from "./joint-demand.js";
-import { header, range, shown, table, utilisation } from "./quantities.js";
+import { along, alongCell, header, range, shown, table, tapeAt, utilisation } from "./quantities.js";
 
 /** One joint's schedule: the zones a builder follows, how economical they are, and the row-by-row check. */
 export function scheduleBlock(result: DesignResult, schedule: Schedule, width: number): HTMLElement {
@@ -15,11 +16,7 @@ export function scheduleBlock(result: DesignResult, schedule: Schedule, width: n
   const v = schedule.verification;
   const checked = schedule.mode === "check";
   // In US units the zone ends also in feet and inches, as the field sheet gives them to the builder.
-  const tape = result.units === "us" ? builderDimensions("us") : null;
-  const zoneEnds = (from: number, to: number) => {
-    const decimal = range(result, from, to).replace(` ${u.span ?? ""}`, "");
-    return tape ? el("span", {}, [decimal, el("span", { className: "sub", text: `${tape.position(from)} – ${tape.position(to)}` })]) : decimal;
-  };
+  const zoneEnds = (from: number, to: number) => alongCell(result, from, to);
   const zones = table(
     `${checked ? "Checked schedule" : "Schedule"}, joint ${schedule.joint}`,
     ["Zone", header("From – to", u.span), header(checked ? "Spacing given" : "Spacing", u.length), "Per row", "Count", header("Required", u.length), "Utilisation"],
@@ -58,6 +55,10 @@ export function scheduleBlock(result: DesignResult, schedule: Schedule, width: n
     `shortest zone ${shown(result, l.minZoneLength, "length")}`,
   ].filter(Boolean);
   const fails = !schedule.passes;
+  // Where the connectors of a row sit across the contact, as the field sheet gives it to the builder.
+  const dims = builderDimensions(result.units);
+  const across = rowAcrossOf([schedule.joint], schedule);
+  const acrossDrawing = rowAcrossDrawing(across, dims, { width: Math.min(width, 320), height: 110 });
   return el("article", { className: `schedule-block${fails ? " fails" : ""}`, attrs: { "aria-label": `${checked ? "Checked schedule" : "Schedule"} for joint ${schedule.joint}` } }, [
     el("h3", {}, [
       `${checked ? "Checked: joint" : "Joint"} ${schedule.joint}: ${schedule.connectorLabel}, ${schedule.rows} per row on ${schedule.lineCount} line${schedule.lineCount === 1 ? "" : "s"}`,
@@ -82,10 +83,12 @@ export function scheduleBlock(result: DesignResult, schedule: Schedule, width: n
           )),
       ...term("Resistance per connector", resistance),
       ...term("Limits", limits.join(", ")),
+      ...term("Across the contact", rowAcrossLines(across, dims).join(" ")),
     ]),
+    acrossDrawing ? figure(acrossDrawing, "diagram row-across") : null,
     el("p", { className: `verification${v.passes ? "" : " fails"}` }, [
       el("strong", { text: v.passes ? "Row check passes: " : "Row check fails: " }),
-      `largest utilisation ${formatRatio(v.maxUtilisation)} at x = ${shown(result, v.at, "span")} (${v.combination}). Method: ${v.method}.`,
+      `largest utilisation ${formatRatio(v.maxUtilisation)} at x = ${along(result, v.at)} (${v.combination}). Method: ${v.method}.`,
     ]),
     perCombination(result, schedule),
     resistanceDetails(result, schedule),
@@ -110,7 +113,10 @@ function demandNote(result: DesignResult, schedule: Schedule): HTMLElement | nul
     const between = joint.lines[0]?.between.map((id) => partName(result, id)).join(" and ");
     notes.push(`Force passed across the interface${between ? ` between ${between}` : ""}, not shear flow: ${joint.sharing}`);
   }
-  if (joint.extent) notes.push(`Rows only over the part's run, ${range(result, joint.extent.from, joint.extent.to)}.`);
+  if (joint.extent) {
+    const { from, to } = joint.extent;
+    notes.push(`Rows only over the part's run, ${range(result, from, to)}${tapeAt(result, from) ? ` (${tapeAt(result, from)} – ${tapeAt(result, to)})` : ""}.`);
+  }
   return notes.length ? el("p", { className: "demand-note", text: notes.join(" ") }) : null;
 }
 
@@ -120,7 +126,7 @@ function perCombination(result: DesignResult, schedule: Schedule): HTMLElement |
   const rows = table(
     `Worst row per combination, joint ${schedule.joint}`,
     ["Combination", header("At", result.unitLabels.span), "Utilisation"],
-    schedule.perCombination.map((c) => ({ className: c.maxUtilisation > 1 ? "fails" : "", cells: [c.combination, formatNumber(c.at), utilisation(c.maxUtilisation, c.maxUtilisation <= 1)] })),
+    schedule.perCombination.map((c) => ({ className: c.maxUtilisation > 1 ? "fails" : "", cells: [c.combination, alongCell(result, c.at), utilisation(c.maxUtilisation, c.maxUtilisation <= 1)] })),
     { numeric: [1], captionHidden: true },
   );
   return el("details", { className: "result-fold" }, [el("summary", { text: `Worst row under each of the ${schedule.perCombination.length} combinations` }), rows]);

@@ -118,7 +118,8 @@ function jointsTable(result: DesignResult, selected: string | undefined): HTMLEl
       cells: [
         el("span", {}, [el("strong", { text: j.id }), el("span", { className: "sub", text: `holds ${j.held.join(", ")}` })]),
         el("span", {}, [
-          j.found ? lines(j) : "no contact found",
+          // A held group named in the job (found: false) has its lines all the same; only a joint with none touches nothing.
+          j.lines.length > 0 ? `${lines(j)}${j.found ? "" : " (held group named in the job)"}` : "no contact found",
           el("span", { className: "sub", text: `${j.connectorLabel}${j.mechanism === "discrete" ? `, ${j.rows} per row` : " (bond line)"}` }),
         ]),
         formatNumber(j.contactWidth),

@@ -1,7 +1,7 @@
 import type { DesignResult } from "../../../core/schema/result.js";
 import { formatNumber } from "../../../core/units/format.js";
 import { el } from "../dom.js";
-import { header, table, utilisation } from "./quantities.js";
+import { alongCell, header, table, utilisation } from "./quantities.js";
 
 /** Where a part stops short of the member's ends: the force it must take up by then, and what the connectors there develop. */
 export function terminationsBlock(result: DesignResult): HTMLElement | null {
@@ -17,8 +17,8 @@ export function terminationsBlock(result: DesignResult): HTMLElement | null {
         className: t.passes ? "" : "fails",
         cells: [
           `${t.part}, ${t.end}`,
-          formatNumber(t.at),
-          t.cutoff === null ? "—" : formatNumber(t.cutoff),
+          alongCell(result, t.at),
+          t.cutoff === null ? "—" : alongCell(result, t.cutoff),
           formatNumber(t.force),
           `${formatNumber(t.available)}${t.required === null ? "" : ` / ${formatNumber(t.required)}`}`,
           formatNumber(t.capacity),

@@ -4,7 +4,7 @@ import type { DesignResult, WeldResult } from "../../../core/schema/result.js";
 import { formatNumber } from "../../../core/units/format.js";
 import { el } from "../dom.js";
 import { figure } from "./figure.js";
-import { header, range, shown, table, utilisation } from "./quantities.js";
+import { along, alongCell, header, shown, table, utilisation } from "./quantities.js";
 
 type WeldZone = WeldResult["zones"][number];
 
@@ -25,7 +25,7 @@ export function weldBlock(result: DesignResult, w: WeldResult, width: number): H
       className: z.passes ? "" : "fails",
       cells: [
         String(k + 1),
-        range(result, z.from, z.to).replace(` ${u.span ?? ""}`, ""),
+        alongCell(result, z.from, z.to),
         zoneWeld(result, z),
         el("span", {}, [utilisation(z.utilisation, z.passes), z.failingCombinations.length ? el("span", { className: "sub", text: `fails under ${z.failingCombinations.join(", ")}` }) : null]),
       ],
@@ -63,7 +63,7 @@ export function weldBlock(result: DesignResult, w: WeldResult, width: number): H
     el("dl", { className: "figures" }, [
       ...term("Weld deposited", `${shown(result, w.weldLength, "span")} of fillet in all (every fillet on every line)`),
       ...(w.pattern === "intermittent" ? term("Both sides of a web", w.arrangement === "chain" ? "chain: segments opposite each other" : "staggered: segments alternate, with one at each end on both sides") : []),
-      ...term("Largest shear flow", `${shown(result, w.maxShearFlow, "shearFlow")} per line at x = ${shown(result, w.at, "span")} (${w.combination}), utilisation ${formatNumber(w.utilisation, 3)}`),
+      ...term("Largest shear flow", `${shown(result, w.maxShearFlow, "shearFlow")} per line at x = ${along(result, w.at)} (${w.combination}), utilisation ${formatNumber(w.utilisation, 3)}`),
       ...term("Resistance", resistance),
       ...term("Limits", limits.join(", ")),
     ]),

@@ -1,0 +1,59 @@
+import { describe, expect, test } from "vitest";
+import { builderDimensions } from "../../../core/draw/builder-dimensions.js";
+import type { TextItem } from "../../../core/draw/drawing.js";
+import { renderSvg } from "../../../core/draw/render-svg.js";
+import { rowAcrossDrawing, rowAcrossLines, rowAcrossOf } from "../../../core/draw/row-across.js";
+import type { Schedule } from "../../../core/schema/result.js";
+
+// A flitch joint's schedule as a result gives it in US units (lengths in inches), made by hand: two 3/4 in
+// bolts per row across an 11 in plate, 3 in from the top edge and 8-1/4 in from it, alternate bolts 2 in apart.
+const schedule = (layoutAcross: Schedule["layoutAcross"]): Pick<Schedule, "rows" | "layoutAcross" | "rowFit" | "limits"> => ({
+  rows: 2,
+  layoutAcross,
+  rowFit: { needed: 9, available: 11, between: ["ply-left", "plate"], fits: true },
+  limits: { minSpacing: 1.875, maxSpacing: 24, endDistance: 3, module: 1, preferred: null, minZoneLength: 24, edgeDistance: 3, rowSpacing: 3, penetration: null, sources: [] },
+});
+const us = builderDimensions("us");
+const texts = (items: { type: string }[], role: string) => (items.filter((i) => i.type === "text" && (i as TextItem).role === role) as TextItem[]).map((i) => i.text);
+
+describe("a row across the contact, for the field sheet and the page", () => {
+  test("with the result's layout: each connector dimensioned from the named edge, the stagger and the face", () => {
+    const across = rowAcrossOf(["plate"], schedule({ edge: "top edge of the plies", offsets: [3, 8.25], stagger: 2, drivenFrom: null }));
+    const drawing = rowAcrossDrawing(across, us, { width: 200, height: 96 })!;
+    expect(drawing).not.toBeNull();
+    expect(texts(drawing.items, "offset-from-edge")).toEqual(["3 in", "8-1/4 in"]);
+    expect(texts(drawing.items, "edge-name")).toEqual(["top edge of the plies"]);
+    expect(texts(drawing.items, "stagger")).toEqual(["stagger 2 in"]);
+    expect(texts(drawing.items, "driving-face")).toEqual(["through bolts, either face"]);
+    // Three rows drawn, each with its two connectors: six dots.
+    const dots = drawing.items.find((i) => i.type === "path" && i.role === "connectors-across")!;
+    expect(((dots as { d: string }).d.match(/M/g) ?? []).length).toBe(6);
+    // Across the contact to scale: 8-1/4 in sits 2.75 times as far from the edge as 3 in.
+    const y = drawing.items.filter((i): i is TextItem => i.type === "text" && i.role === "offset-from-edge").map((t) => t.y - 2.5);
+    const edgeY = 14;
+    expect((y[1]! - edgeY) / (y[0]! - edgeY)).toBeCloseTo(8.25 / 3, 6);
+    expect(renderSvg(drawing)).toContain("top edge of the plies");
+    expect(rowAcrossLines(across, us)).toEqual([
+      "Connectors across the contact at 3 in, 8-1/4 in from the top edge of the plies (contact 11 in).",
+      "Staggered: alternate connectors 2 in apart along the member.",
+      "Through bolts, either face.",
+    ]);
+  });
+
+  test("rows in line, driven from a named part", () => {
+    const across = rowAcrossOf(["top"], { ...schedule({ edge: "outer face of the flange", offsets: [20, 45], stagger: null, drivenFrom: "top flange" }), rows: 2 });
+    const si = builderDimensions("si");
+    const drawing = rowAcrossDrawing(across, si, { width: 200, height: 96 })!;
+    expect(texts(drawing.items, "driving-face")).toEqual(["driven from top flange"]);
+    expect(texts(drawing.items, "stagger")).toEqual([]);
+    expect(rowAcrossLines(across, si)[1]).toBe("Rows in line: no stagger.");
+  });
+
+  test("without a layout: what the limits say, no drawing and no invented position", () => {
+    const across = rowAcrossOf(["plate"], schedule(undefined));
+    expect(rowAcrossDrawing(across, us, { width: 200, height: 96 })).toBeNull();
+    const lines = rowAcrossLines(across, us);
+    expect(lines[0]).toBe("2 per row across the contact of 11 in, at least 3 in from each edge and at least 3 in apart.");
+    expect(lines[1]).toMatch(/gives no positions across the contact/);
+  });
+});
