@@ -1,7 +1,7 @@
 import { analyseBeam, selfWeightOf, type BeamAnalysis } from "./beam/analyse-beam.js";
 import { beamAssumptions } from "./beam/beam-assumptions.js";
 import { beamResult } from "./beam/beam-result.js";
-import { memberActions } from "./beam/member-actions.js";
+import { memberActions, momentAt } from "./beam/member-actions.js";
 import { combinationSet } from "./beam/combinations.js";
 import { stationsFor } from "./beam/stations.js";
 import { memberChecks } from "./checks/member-checks.js";
@@ -13,10 +13,10 @@ import { discreteSchedule, type JointInput } from "./fastening/discrete-schedule
 import { globalise, jointDemand, localView, memberJointsOf, type MemberJoint } from "./fastening/member-joints.js";
 import { partTerminations } from "./fastening/part-terminations.js";
 import { rowFit, rowFitProblem } from "./fastening/row-fit.js";
-import { interfaceDemand, interfacesOf, multiPlyOf, offsetPlies, type MultiPly } from "./fastening/side-load-transfer.js";
+import { interfaceDemand, interfacesOf, offsetPlies, plyStretchesOf, type MultiPly, type PlyStretch } from "./fastening/side-load-transfer.js";
 import { weldSchedule } from "./fastening/weld-schedule.js";
 import { fastenerReach } from "./multi-ply/ply-detailing.js";
-import { interfaceTransfer, plyShares } from "./multi-ply/ply-shares.js";
+import { arrivalFractions, interfaceTransfer, plyShares } from "./multi-ply/ply-shares.js";
 import type { JobDocument } from "./schema/job.js";
 import { RESULT_FORMAT, RESULT_VERSION, type BondLineResult, type DesignResult, type JointResult, type MemberCheck, type Schedule, type WeldResult } from "./schema/result.js";
 import { MAX_PARTS_FOR_JOINT_SEARCH, type UncoveredContact } from "./section/joints.js";
@@ -45,10 +45,14 @@ export function designMember(job: JobDocument): DesignResult {
   const beam = analyseBeam(job, stretches, combinationList.combinations);
   const stations = stationsFor(beam.length, [...new Set(beam.results.flatMap((r) => r.actions.breaks))]);
   const profile = stressProfile(section);
-  const plies = stepped ? null : multiPlyOf(section);
+  // Side-by-side plies stretch by stretch (a plate shorter than the member changes the shares where it stops);
+  // \`plies\` is the stretch with the most of them, for what is said of the member as a whole.
+  const plyStretches = plyStretchesOf(stretches);
+  const plies = plyStretches ? plyStretches.reduce((a, b) => (b.plies.parts.length > a.plies.parts.length || (b.plies.parts.length === a.plies.parts.length && b.x1 - b.x0 > a.x1 - a.x0) ? b : a)).plies : null;
   const offset = stepped ? null : offsetPlies(section);
 
   const assumptions = new Set<string>();
+  const notChecked: string[] = [];
   const standards = new Set<string>();
   const warnings = new Set<string>();
   const jointResults: JointResult[] = [];
@@ -63,8 +67,10 @@ export function designMember(job: JobDocument): DesignResult {
     const share = kind.mechanism === "bond-line" ? 1 : lineCount / joint.crossed.length;
     const flowFactor = Math.max(...mj.stretches.map((x) => x.flowFactor));
     const stressFactor = Math.max(...mj.stretches.map((x) => x.stressFactor));
-    const inPlaneOfBending = !stepped && joint.firstMoment <= 1e-9 * section.transformedArea * (section.bounds.y1 - section.bounds.y0);
-    const plyInterfaces = inPlaneOfBending && plies ? interfacesOf(plies, joint) : null;
+    const balanced = (m: number) => m <= 1e-9 * mj.section.transformedArea * (mj.section.bounds.y1 - mj.section.bounds.y0);
+    const inPlaneOfBending = stepped ? !!plyStretches && mj.stretches.every((x) => balanced(x.firstMoment)) : balanced(joint.firstMoment);
+    const jointPlies = plyStretches ? plyStretchAt(plyStretches, mj.stretches[0]!.from).plies : null;
+    const plyInterfaces = inPlaneOfBending && jointPlies ? interfacesOf(jointPlies, joint) : null;
     const plyInterface = plyInterfaces && plyInterfaces.length === 1 ? plyInterfaces[0]! : null;
     if (inPlaneOfBending && plyInterfaces === null) {
       warnings.add(
@@ -106,7 +112,9 @@ export function designMember(job: JobDocument): DesignResult {
     let input: JointInput;
     if (plyInterfaces !== null) {
       // The demand is per contact line; the schedule divides by the lines, so the factor restores it.
-      input = { ...common, beam, stations, flowFactor: joint.lines.length, stressFactor: 1 / joint.contactWidth, demandActions: interfaceDemand(job, beam, plies!, plyInterfaces) };
+      const view = mj.extent ? localView(beam, stations, mj.extent) : { beam, stations };
+      const local = mj.extent ? { ...common, fastening: shiftProvided(fastening, -mj.extent.from) } : common;
+      input = { ...local, ...view, flowFactor: joint.lines.length, stressFactor: 1 / joint.contactWidth, demandActions: interfaceDemand(job, beam, plyStretches!, joint.lines, mj.extent) };
     } else if (!stepped) {
       input = { ...common, beam, stations, flowFactor: flowFactor * share, stressFactor };
     } else {
@@ -114,7 +122,7 @@ export function designMember(job: JobDocument): DesignResult {
       const local = mj.extent ? { ...common, fastening: shiftProvided(fastening, -mj.extent.from) } : common;
       input = { ...local, ...view, flowFactor: share, stressFactor: 1 / joint.contactWidth, demandActions: jointDemand(beam, mj) };
     }
-    return { joint, kind, input, extent: mj.extent, plyInterface, share };
+    return { joint, kind, input, extent: mj.extent, plyInterface, plyJoint: plyInterfaces !== null, jointPlies, share };
   });
 
   type Run = { schedule?: Schedule; bondLine?: BondLineResult; weld?: WeldResult; warnings: string[]; mirrored: boolean };
@@ -148,16 +156,34 @@ export function designMember(job: JobDocument): DesignResult {
       assumptions.add("A steel plate between the plies is held laterally by the bolts through the timber plies on either side, so its lateral-torsional buckling alone is not checked; the bolts must be placed as scheduled for this to hold.");
     }
     assumptions.add("A concentrated load hung on a face is passed by the connectors within half the member depth each side of it (common practice).");
+    if (plyStretches && plyStretches.length > 1) {
+      assumptions.add("Where a ply starts or stops along the member the E·I shares change stretch by stretch: a ply that stops hands its share of the shear there (its end reaction, s_j·V) to the plies that continue, and one that starts takes its share from them, through the connectors within half the member depth of its end on the side where it runs (the concentrated-load rule).");
+      for (let i = 0; i + 1 < plyStretches.length; i++) {
+        const [left, right] = [plyStretches[i]!, plyStretches[i + 1]!];
+        const x = left.x1;
+        const moment = Math.max(...beam.results.flatMap((r) => [Math.abs(momentAt(r.actions, x, "left")), Math.abs(momentAt(r.actions, x, "right"))]));
+        for (const [side, other] of [[left, right], [right, left]] as const) {
+          const shares = plyShares(side.plies.plies);
+          side.plies.parts.forEach((id, j) => {
+            if (other.plies.parts.includes(id) || moment * shares[j]! <= 1e-9 * moment) return;
+            notChecked.push(`The end of ply ${id} at ${inJobUnits(x, "span", job.units)}: its share of the moment there, s·M = ${inJobUnits(shares[j]! * moment, "moment", job.units)}, must fall to zero over the connectors near its end; they are designed for its end reaction (share of the shear) only. End the ply where the moment is small, or check that couple.`);
+          });
+        }
+      }
+    }
     assumptions.add("A nail or screw at an interface between plies is driven from an outer face: it must pass the plies on that side and still reach its least penetration into the next one; its resistance is taken between the two plies at the interface.");
   }
-  const { checks, notChecked } = stepped ? steppedChecks(job, stretches, beam, composite.stiffness) : memberChecks(job, section, beam, profile, composite.stiffness, null, true, plies);
+  const { checks, notChecked: memberNotChecked } = stepped ? steppedChecks(job, stretches, beam, composite.stiffness, plyStretches) : memberChecks(job, section, beam, profile, composite.stiffness, null, true, plies);
+  notChecked.push(...memberNotChecked);
   checks.push(...composite.checks);
   const terminationsNow = () =>
     partTerminations({
       job,
       beam,
       stretches,
-      joints: joints.map((mj) => {
+      // Between side-by-side plies a ply's end hands its reaction back through the connectors there (interfaceDemand); no
+      // shear flow develops it.
+      joints: joints.filter((mj) => !prepared.find((p) => p.joint.id === mj.joint.id)!.plyJoint).map((mj) => {
         const r = runs.get(mj.joint.id)!;
         const rowResistance = r.schedule ? Math.min(...r.schedule.resistance.map((x) => x.value)) * r.schedule.rows * r.schedule.lineCount : null;
         const weldResistance = r.weld ? Math.min(...r.weld.resistance.map((x) => x.value)) * r.weld.fillets * r.weld.lineCount : null;
@@ -203,8 +229,8 @@ export function designMember(job: JobDocument): DesignResult {
     const r = runs.get(p.joint.id)!;
     // Single shear only: there the penetration provided is the length past the head-side ply.
     const singleShear = (p.input.connector as { shear?: string }).shear !== "double";
-    if (r.schedule && plies && p.plyInterface !== null && singleShear) {
-      const problem = reachProblem(r.schedule, plies, p.plyInterface, p.input.contexts[0]![0]!.members[0].thickness, job.units);
+    if (r.schedule && p.jointPlies && p.plyInterface !== null && singleShear) {
+      const problem = reachProblem(r.schedule, p.jointPlies, p.plyInterface, p.input.contexts[0]![0]!.members[0].thickness, job.units);
       if (problem) r.schedule = { ...r.schedule, detailingProblems: [...r.schedule.detailingProblems, problem], passes: false };
     }
     if (r.schedule) {
@@ -260,7 +286,7 @@ export function designMember(job: JobDocument): DesignResult {
       failures,
     },
     section: sectionResult(section, profile),
-    multiPly: plies ? multiPlyResult(plies, jointResults) : null,
+    multiPly: plies ? multiPlyResult(plies, jointResults, plyStretches!, job, length) : null,
     composite: composite.result,
     stretches: stepped
       ? stretches.map((x) => ({ from: x.x0, to: x.x1, parts: x.parts, area: x.section.area, centroidY: x.section.centroidY, secondMoment: x.section.secondMoment }))
@@ -300,7 +326,7 @@ function uncoveredReason(u: UncoveredContact, units: JobDocument["units"]): stri
   return `the cut that holds ${u.held.join(" + ")} has Q = ${q(u.firstMoment)}, but the joints named in the fastening fasten its ${u.lines} contact lines for ${q(u.carried)} in all. Name that held group in the fastening, or fasten its lines for it.`;
 }
 
-function multiPlyResult(plies: MultiPly, joints: JointResult[]): DesignResult["multiPly"] {
+function multiPlyResult(plies: MultiPly, joints: JointResult[], stretches: PlyStretch[], job: JobDocument, length: number): DesignResult["multiPly"] {
   const transfer = (face: "left" | "right" | "top") => interfaceTransfer(plies.plies, [{ face, magnitude: 1 }]);
   const shares = plyShares(plies.plies);
   return {
@@ -312,7 +338,21 @@ function multiPlyResult(plies: MultiPly, joints: JointResult[]): DesignResult["m
       fromRightFace: transfer("right").interfaces[k]!.force,
       fromTop: transfer("top").interfaces[k]!.force,
     })),
+    stretches: stretches.length > 1 ? stretches.map((s) => ({ from: s.x0, to: s.x1, plies: s.plies.parts.map((part, j) => ({ part, share: plyShares(s.plies.plies)[j]! })) })) : [],
+    loads: job.beam.loads.flatMap((load, i) => {
+      if (load.type === "moment") return [];
+      const face = load.face ?? "top";
+      const [a, b] = load.type === "point" ? [load.at, load.at] : [load.from ?? 0, load.to ?? length];
+      const on = stretches.filter((s) => s.x1 >= a && s.x0 <= b && (a === b || (s.x1 > a && s.x0 < b)));
+      const parts = on.flatMap((s) => arrivalFractions(s.plies.plies, face).flatMap((f, j) => (f > 0 ? [s.plies.parts[j]!] : [])));
+      return [{ load: i, face, plies: [...new Set(parts)] }];
+    }),
   };
+}
+
+/** The plies of the stretch at x. */
+function plyStretchAt(stretches: PlyStretch[], x: number): PlyStretch {
+  return stretches.find((s) => x >= s.x0 && x < s.x1) ?? stretches[stretches.length - 1]!;
 }
 
 /** A fastening's provided schedule moved along the member by dx (into a joint's own coordinate). */
@@ -326,12 +366,12 @@ function shiftProvided(fastening: JobDocument["fastening"]["default"], dx: numbe
 }
 
 /** Member checks stretch by stretch, where the section changes along the member; the worst stretch of each check stands. */
-function steppedChecks(job: JobDocument, stretches: ReturnType<typeof sectionStretches>, beam: BeamAnalysis, stiffness: Parameters<typeof memberChecks>[4]) {
+function steppedChecks(job: JobDocument, stretches: ReturnType<typeof sectionStretches>, beam: BeamAnalysis, stiffness: Parameters<typeof memberChecks>[4], plyStretches: PlyStretch[] | null) {
   const worst = new Map<string, MemberCheck>();
   const notChecked = new Set<string>();
   stretches.forEach((s, i) => {
     const label = `${inJobUnits(s.x0, "span", job.units)}–${inJobUnits(s.x1, "span", job.units)}`;
-    const part = memberChecks(job, s.section, beam, stressProfile(s.section), stiffness, { from: s.x0, to: s.x1, label }, i === 0);
+    const part = memberChecks(job, s.section, beam, stressProfile(s.section), stiffness, { from: s.x0, to: s.x1, label }, i === 0, plyStretches?.[i]!.plies ?? null);
     for (const c of part.checks) {
       const before = worst.get(c.id);
       if (!before || c.utilisation > before.utilisation) worst.set(c.id, c);

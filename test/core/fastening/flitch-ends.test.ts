@@ -1,0 +1,156 @@
+import fc from "fast-check";
+import { describe, expect, test } from "vitest";
+import { prepareJob } from "../../../core/check-job.js";
+import { designMember } from "../../../core/design-member.js";
+import type { JobInput } from "../../../core/schema/job.js";
+import { expectClose } from "../../expect-close.js";
+
+// Flitch beams whose plate stops short of the member's ends, through designMember. Shares by E·I [D]: plies with one
+// curvature carry M_j = E_j I_j κ, so share_j = E_j I_j / Σ E I (Gere & Goodno, Mechanics of Materials, ch. 6); where a
+// ply stops, its shear s_j·V there (its end reaction) passes back to the plies that continue [D]. Closed forms below are
+// the test's own; nothing is taken from core for an expected value.
+
+const run = (job: JobInput) => {
+  const p = prepareJob(job);
+  if (!p.ok) throw new Error(JSON.stringify(p.issues));
+  return designMember(p.core);
+};
+
+interface Flitch {
+  t: number;
+  d: number;
+  Et: number;
+  tp: number;
+  dp: number;
+  Ep: number;
+  Ef: number;
+  span: number;
+  /** The plate's extent, m; timber packing pieces of the plate's size fill the rest. */
+  pa: number;
+  pb: number;
+  w: number;
+  densities?: { timber: number; steel: number };
+  loads?: JobInput["beam"]["loads"];
+}
+
+/** Timber, plate (packing beyond its ends), timber; bolts through the plate named as one joint in double shear, rated R = 5000 N. */
+function flitch(g: Flitch): JobInput {
+  const packing = (id: string, from: number, to: number) => ({ id, material: "F", shape: { type: "rectangle" as const, b: g.tp, h: g.dp }, place: { on: "a", side: "right" as const }, extent: { from, to } });
+  return {
+    format: "stitchplan-job",
+    version: 1,
+    units: "si",
+    basis: "allowable",
+    project: { name: "flitch ends" },
+    member: { mark: "FE" },
+    materials: [
+      { id: "T", name: "timber", E: g.Et, density: g.densities?.timber ?? 0 },
+      { id: "F", name: "packing", E: g.Ef, density: g.densities?.timber ?? 0 },
+      { id: "S", name: "steel", family: "steel", E: g.Ep, density: g.densities?.steel ?? 0 },
+    ],
+    parts: [
+      { id: "a", material: "T", shape: { type: "rectangle", b: g.t, h: g.d }, x: 0, y: 0 },
+      { id: "plate", material: "S", shape: { type: "rectangle", b: g.tp, h: g.dp }, place: { on: "a", side: "right" }, extent: { from: g.pa, to: g.pb } },
+      packing("f1", 0, g.pa),
+      packing("f2", g.pb, g.span),
+      { id: "b", material: "T", shape: { type: "rectangle", b: g.t, h: g.d }, place: { on: "plate", side: "right" } },
+    ],
+    connectors: [{ id: "R", kind: "rated", label: "rated (invented)", resistance: 5000, minSpacing: 50, maxSpacing: 600, endDistance: 50 }],
+    fastening: { default: { connector: "R", rows: 1 }, joints: [{ held: ["plate"], connector: "R", rows: 1 }] },
+    beam: { spans: [g.span], loads: g.loads ?? [{ type: "uniform", category: "dead", w: g.w }], selfWeight: g.densities !== undefined },
+    spacing: { module: 5, minZoneLength: 200, maxZonesPerSpan: 5, symmetric: false },
+  };
+}
+
+const base: Flitch = { t: 38, d: 286, Et: 11_000, tp: 12, dp: 279, Ep: 200_000, Ef: 11_000, span: 4, pa: 0.5, pb: 3.5, w: 5 };
+
+describe("a plate shorter than the member: its end reactions go back through the bolts within d/2 of its ends", () => {
+  test("2 × 38 × 286 timber, 12 × 279 plate over 0.5–3.5 m of a 4 m span, 5 N/mm on top: along the plate each line passes s_p/2·q, at its ends s_p·V/2 over d/2 [D]", () => {
+    const result = run(flitch(base));
+    const EIt = 11_000 * ((38 * 286 ** 3) / 12);
+    const EIp = 200_000 * ((12 * 279 ** 3) / 12);
+    const sp = EIp / (EIp + 2 * EIt);
+    expectClose(sp, 0.72716, { rel: 1e-4 }, "s_p = 4.3435e12 / (4.3435e12 + 2 · 8.1488e11) [D]");
+    const s = result.schedules.find((x) => x.joint === "plate")!;
+    expect(s.lineCount).toBe(2);
+    const stations = result.beam.stations;
+    const flowAt = (x: number) => s.shearFlow[stations.findIndex((y) => Math.abs(y - x) < 1e-6)]!;
+    // Midspan: each line passes s_p/2 · 5 N/mm.
+    expectClose(flowAt(2000), (sp / 2) * 5, { rel: 1e-9 }, "per-line transfer at midspan, N/mm");
+    // At the plate's left end V = R − q·0.5 m = 10 000 − 2500 = 7500 N; s_p·V handed back over d/2 = 143 mm, half on each line.
+    const V = 5 * 2000 - 5 * 500;
+    expectClose(Math.max(...s.shearFlow), (sp / 2) * (5 + V / 143), { rel: 1e-9 }, "per-line transfer at the plate's end, N/mm");
+    // The rows within d/2 = 143 mm of the left end carry at least s_p·V/2 = 2727 N on each line (5000 N per row and line).
+    const near = s.positions.filter((x) => x >= 500 - 1e-6 && x <= 643 + 1e-6).length;
+    expect(near * 5000).toBeGreaterThanOrEqual(((sp * V) / 2) * (1 - 1e-9));
+    expect(result.multiPly!.stretches!.map((x) => x.plies.map((p) => p.part))).toEqual([["a", "f1", "b"], ["a", "plate", "b"], ["a", "f2", "b"]]);
+    expectClose(result.multiPly!.stretches![1]!.plies[1]!.share, sp, { rel: 1e-12 });
+    expect(result.terminations).toEqual([]);
+    expect(result.assumptions.some((a) => a.includes("a ply that stops hands its share of the shear"))).toBe(true);
+    // The plate carries s_p·M at its end in this model; the couple that brings it to zero is stated as not checked.
+    expect(result.notChecked.some((n) => n.startsWith("The end of ply plate at 0.5 m"))).toBe(true);
+  });
+
+  test("property (fast-check, fixed seed): over the plate the bolts pass in its share of the load, s_p·∫q, and hand back its end reactions, s_p·(|V(a)| + |V(b)|), self-weight included [D]", () => {
+    fc.assert(
+      fc.property(
+        fc.record({
+          t: fc.double({ min: 30, max: 80, noNaN: true }),
+          d: fc.double({ min: 180, max: 400, noNaN: true }),
+          Et: fc.double({ min: 7000, max: 14_000, noNaN: true }),
+          Ef: fc.double({ min: 7000, max: 14_000, noNaN: true }),
+          tp: fc.double({ min: 6, max: 25, noNaN: true }),
+          ratio: fc.double({ min: 0.5, max: 0.97, noNaN: true }),
+          Ep: fc.double({ min: 190_000, max: 210_000, noNaN: true }),
+          w: fc.double({ min: 0.5, max: 20, noNaN: true }),
+          // On a 0.25 m grid: the plate's ends and a partial load's ends on stations, so that the integral is exact.
+          quarters: fc.integer({ min: 10, max: 24 }),
+          left: fc.integer({ min: 1, max: 4 }),
+          right: fc.integer({ min: 1, max: 4 }),
+          partial: fc.option(fc.record({ from: fc.integer({ min: 0, max: 8 }), len: fc.integer({ min: 1, max: 8 }), w: fc.double({ min: 0.5, max: 10, noNaN: true }) }), { nil: undefined }),
+          densities: fc.option(fc.record({ timber: fc.double({ min: 300, max: 700, noNaN: true }), steel: fc.double({ min: 7000, max: 8000, noNaN: true }) }), { nil: undefined }),
+        }),
+        (g) => {
+          const span = g.quarters / 4;
+          const [pa, pb] = [g.left / 4, span - g.right / 4];
+          const dp = g.d * g.ratio;
+          const loads: JobInput["beam"]["loads"] = [{ type: "uniform", category: "dead", w: g.w }];
+          const [qa, qb] = g.partial ? [g.partial.from / 4, Math.min(span, (g.partial.from + g.partial.len) / 4)] : [0, 0];
+          if (g.partial && qb > qa) loads.push({ type: "uniform", category: "dead", w: g.partial.w, from: qa, to: qb });
+          const result = run(flitch({ ...g, dp, span, pa, pb, densities: g.densities, loads }));
+          // Closed form, mm and N: q(x) on top, self-weight ρ g A per ply; shares by E·I over the plate's stretch.
+          const L = span * 1000;
+          const [A, B, QA, QB] = [pa * 1000, pb * 1000, qa * 1000, qb * 1000];
+          const pw = g.partial && qb > qa ? g.partial.w : 0;
+          const g0 = 9.80665e-9;
+          const wt = (g.densities?.timber ?? 0) * g0 * g.t * g.d;
+          const wf = (g.densities?.timber ?? 0) * g0 * g.tp * dp;
+          const wp = (g.densities?.steel ?? 0) * g0 * g.tp * dp;
+          const EIt = g.Et * ((g.t * g.d ** 3) / 12);
+          const EIp = g.Ep * ((g.tp * dp ** 3) / 12);
+          const sp = EIp / (EIp + 2 * EIt);
+          // ∫ of the load on top over [x0, x1], and the member's weight per length at x (packing outside the plate).
+          const topOver = (x0: number, x1: number) => g.w * (x1 - x0) + pw * Math.max(0, Math.min(x1, QB) - Math.max(x0, QA));
+          const weightOver = (x0: number, x1: number) => 2 * wt * (x1 - x0) + wp * Math.max(0, Math.min(x1, B) - Math.max(x0, A)) + wf * ((x1 - x0) - Math.max(0, Math.min(x1, B) - Math.max(x0, A)));
+          const total = topOver(0, L) + weightOver(0, L);
+          // Simple span: R_left from moments about the right support (each load's resultant at its centroid).
+          const moment = g.w * L * (L / 2) + pw * (QB - QA) * ((QA + QB) / 2) + 2 * wt * L * (L / 2) + wp * (B - A) * ((A + B) / 2) + wf * (A * (A / 2) + (L - B) * ((L + B) / 2));
+          const Rright = moment / L;
+          const Rleft = total - Rright;
+          const V = (x: number) => Rleft - topOver(0, x) - weightOver(0, x);
+          // The brief's invariant, signed: what the plate takes in over its length, s_p·∫(q + w) − ∫w_p, plus its own weight,
+          // equals what its ends hand back, s_p·(V(a) − V(b)) [D, statics].
+          const inbound = sp * (topOver(A, B) + weightOver(A, B)) - wp * (B - A);
+          expectClose(inbound + wp * (B - A), sp * (V(A) - V(B)), { rel: 1e-9 }, "plate's share in = its end reactions out");
+          // A bolt through timber, plate, timber is designed for each load's transfer on its own, with no relief between them:
+          // the load on top s_p·∫q, the self-weight |s_p·w − w_p| over the plate, and each end's reaction s_p·|V|.
+          const expected = sp * topOver(A, B) + Math.abs(sp * (2 * wt + wp) - wp) * (B - A) + sp * (Math.abs(V(A)) + Math.abs(V(B)));
+          const s = result.schedules.find((x) => x.joint === "plate")!;
+          expect(result.beam.combinations).toHaveLength(1);
+          expectClose(s.efficiency.demandIntegral * 5000, expected, { rel: 1e-6 }, "force passed across the plate's interfaces");
+        },
+      ),
+      { numRuns: 25 },
+    );
+  });
+});
