@@ -154,3 +154,23 @@ describe("a plate shorter than the member: its end reactions go back through the
     );
   });
 });
+
+describe("a hanger on one timber ply of a flitch beam", () => {
+  test("P = 10 kN hung on the left ply at midspan passes on by E·I: across the plate's lines the most either passes, (1 − s_a)·P, over d = 286 mm [D, rule CP]; the result names the ply it was applied on", () => {
+    const result = run(flitch({ ...base, pa: 0.5, pb: 3.5, loads: [{ type: "point", category: "dead", P: 10, at: 2, face: "left" }] }));
+    const EIt = 11_000 * ((38 * 286 ** 3) / 12);
+    const EIp = 200_000 * ((12 * 279 ** 3) / 12);
+    const sa = EIt / (EIp + 2 * EIt);
+    expectClose(sa, 0.13642, { rel: 1e-4 }, "s_a = 8.1488e11 / 5.9733e12 [D]");
+    // T₁ = P − s_a·P (ply a keeps its share), T₂ = T₁ − s_p·P = s_b·P; a bolt through all three takes the larger on each line.
+    const s = result.schedules.find((x) => x.joint === "plate")!;
+    const at = result.beam.stations.findIndex((x) => Math.abs(x - 2000) < 1e-6);
+    expectClose(s.shearFlow[at]!, ((1 - sa) * 10_000) / 286, { rel: 1e-9 }, "per-line transfer under the hanger, N/mm");
+    expect(result.multiPly!.loads).toEqual([{ load: 0, face: "left", plies: ["a"] }]);
+  });
+
+  test("a load on top of a flitch whose plate is shallower bears on the timber plies only, and the result says so", () => {
+    const result = run(flitch(base));
+    expect(result.multiPly!.loads).toEqual([{ load: 0, face: "top", plies: ["a", "b"] }]);
+  });
+});
