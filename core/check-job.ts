@@ -137,7 +137,7 @@ export function checkGeometry(job: JobDocument): JobIssue[] {
   if (!plyStretchesOf(sectionStretches(job, L))) {
     job.beam.loads.forEach((load, i) => {
       if (load.type !== "moment" && load.face !== "top") {
-        add(`beam.loads[${i}].face`, `a load on the ${load.face} face applies to members of side-by-side plies (of any depths, their mid-depths at one level); this section is not one, so the load must act on top`);
+        add(`beam.loads[${i}].face`, `a load on the ${load.face} face applies to members of side-by-side plies (of any depths and levels, standing face to face); this section is not one, so the load must act on top`);
       }
     });
   }

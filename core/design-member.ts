@@ -13,7 +13,7 @@ import { discreteSchedule, type JointInput } from "./fastening/discrete-schedule
 import { globalise, jointDemand, localView, memberJointsOf, type MemberJoint } from "./fastening/member-joints.js";
 import { partTerminations } from "./fastening/part-terminations.js";
 import { rowFit, rowFitProblem } from "./fastening/row-fit.js";
-import { interfaceDemand, interfacesOf, offsetPlies, plyStretchesOf, type MultiPly, type PlyStretch } from "./fastening/side-load-transfer.js";
+import { interfaceDemand, interfacesOf, plyStretchesOf, type MultiPly, type PlyStretch } from "./fastening/side-load-transfer.js";
 import { weldSchedule } from "./fastening/weld-schedule.js";
 import { fastenerReach } from "./multi-ply/ply-detailing.js";
 import { arrivalFractions, interfaceTransfer, plyShares } from "./multi-ply/ply-shares.js";
@@ -39,17 +39,22 @@ export function designMember(job: JobDocument): DesignResult {
   const stepped = stretches.length > 1;
   // The section drawn and reported: every part, wherever along the member it runs.
   const section = stepped ? buildSection(positioned(job.parts), job.materials) : stretches[0]!.section;
-  const { joints, uncovered } = memberJointsOf(job, stretches, length);
+  const { joints, uncovered: uncoveredCuts } = memberJointsOf(job, stretches, length);
   // The same self-weight as the analysis and the assumptions take, so that all three see the same categories.
   const combinationList = combinationSet(job.beam, job.combinations, job.beam.selfWeight ? Math.max(...stretches.map((s) => selfWeightOf(s.section))) : 0);
-  const beam = analyseBeam(job, stretches, combinationList.combinations);
-  const stations = stationsFor(beam.length, [...new Set(beam.results.flatMap((r) => r.actions.breaks))]);
-  const profile = stressProfile(section);
   // Side-by-side plies stretch by stretch (a plate shorter than the member changes the shares where it stops);
-  // \`plies\` is the stretch with the most of them, for what is said of the member as a whole.
+  // `plies` is the stretch with the most of them, for what is said of the member as a whole.
   const plyStretches = plyStretchesOf(stretches);
   const plies = plyStretches ? plyStretches.reduce((a, b) => (b.plies.parts.length > a.plies.parts.length || (b.plies.parts.length === a.plies.parts.length && b.x1 - b.x0 > a.x1 - a.x0) ? b : a)).plies : null;
-  const offset = stepped ? null : offsetPlies(section);
+  // Plies at different levels bend each about its own centroid (no composite action between them): the member's stiffness
+  // is Σ E_j·I_j, not the transformed section's I about a common axis.
+  const offCentre = plyStretches?.some((s) => s.plies.offCentre) ?? false;
+  // Nor does a cut between plies need Q = V·Q/I fastened: a line is short only if no joint fastens it at all.
+  const uncovered = plyStretches ? uncoveredCuts.filter((u) => u.cause !== "short-cut") : uncoveredCuts;
+  const analysed = offCentre ? stretches.map((s, i) => ({ ...s, section: { ...s.section, secondMoment: plyStretches![i]!.plies.ownSecondMoment } })) : stretches;
+  const beam = analyseBeam(job, analysed, combinationList.combinations);
+  const stations = stationsFor(beam.length, [...new Set(beam.results.flatMap((r) => r.actions.breaks))]);
+  const profile = stressProfile(section);
 
   const assumptions = new Set<string>();
   const notChecked: string[] = [];
@@ -68,7 +73,8 @@ export function designMember(job: JobDocument): DesignResult {
     const flowFactor = Math.max(...mj.stretches.map((x) => x.flowFactor));
     const stressFactor = Math.max(...mj.stretches.map((x) => x.stressFactor));
     const balanced = (m: number) => m <= 1e-9 * mj.section.transformedArea * (mj.section.bounds.y1 - mj.section.bounds.y0);
-    const inPlaneOfBending = stepped ? !!plyStretches && mj.stretches.every((x) => balanced(x.firstMoment)) : balanced(joint.firstMoment);
+    // Between plies at different levels Q ≠ 0, but with no composite action between them no shear flow is passed either.
+    const inPlaneOfBending = offCentre || (stepped ? !!plyStretches && mj.stretches.every((x) => balanced(x.firstMoment)) : balanced(joint.firstMoment));
     const jointPlies = plyStretches ? plyStretchAt(plyStretches, mj.stretches[0]!.from).plies : null;
     const plyInterfaces = inPlaneOfBending && jointPlies ? interfacesOf(jointPlies, joint) : null;
     const plyInterface = plyInterfaces && plyInterfaces.length === 1 ? plyInterfaces[0]! : null;
@@ -142,7 +148,7 @@ export function designMember(job: JobDocument): DesignResult {
   composite.assumptions.forEach((a) => assumptions.add(a));
 
   if (plies) {
-    assumptions.add("Side-by-side plies deflect together, so each carries a share of the load in proportion to its E·I (each ply about its own centroid, all on the member's neutral axis); connectors at each interface pass what arrives on one side beyond its share, across the member (perpendicular to the grain of timber plies).");
+    assumptions.add(`Side-by-side plies deflect together, so each carries a share of the load in proportion to its E·I (each ply about its own centroid${offCentre ? "" : ", all on the member's neutral axis"}); connectors at each interface pass what arrives on one side beyond its share, across the member (perpendicular to the grain of timber plies).`);
     assumptions.add(
       plies.plies.every((p) => p.bearsOnTop !== false)
         ? "A load on top bears on each ply in proportion to its thickness (common practice); each ply's self-weight arrives on that ply, and what it weighs beyond its E·I share passes across the interfaces like any other load."
@@ -256,8 +262,8 @@ export function designMember(job: JobDocument): DesignResult {
   if (plies && plies.parts.some((id) => section.parts.find((p) => p.id === id)!.material.family === "steel")) {
     notChecked.push("Bearing of the bolts on the steel plate and the plate's own edge and end distances (AISC 360-16 §J3.10, §J3.4; EN 1993-1-8 Table 3.4); bearing of each ply at the supports.");
   }
-  if (offset) {
-    notChecked.push(`The load passed across the interfaces of the side-by-side plies (${offset.join(", ")}): their mid-depths are not at one level, so the plies do not share the load simply by E·I; set each ply's mid-depth at one level (plates centred on the depth of the timber) to have the transfer designed.`);
+  if (offCentre) {
+    assumptions.add("The plies' mid-depths are not at one level: the connectors carry only the load passed across the member, not shear flow along it (no composite action between the plies), so each ply bends about its own centroid and the member's stiffness is Σ E·I of the plies about their own axes; a connection meant to make them act compositely is not designed here.");
   }
   if (section.parts.length > 1 && joints.length === 0) warnings.add("No joint was found between the parts; check that the parts touch face to face.");
   const failures = [

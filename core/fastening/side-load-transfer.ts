@@ -8,7 +8,7 @@ import { geometricTolerance } from "../section/contacts.js";
 import type { JointPlane } from "../section/joints.js";
 import type { SectionModel } from "../section/section-model.js";
 
-/** Side-by-side plies, left to right, of any depths with their mid-depths at one level. */
+/** Side-by-side plies, left to right, of any depths, each at any level. */
 export interface MultiPly {
   parts: string[];
   plies: Ply[];
@@ -16,6 +16,10 @@ export interface MultiPly {
   depth: number;
   /** Self-weight of each ply, N/mm: each ply's own weight arrives on it, and it keeps its E·I share of the whole. */
   selfWeights: number[];
+  /** The plies' mid-depths are not at one level (a plate flush with the top of the timber). */
+  offCentre: boolean;
+  /** Σ n_j·I_j of the plies, each about its own centroid (no composite action between them), mm⁴ in the section's reference modulus. */
+  ownSecondMoment: number;
 }
 
 /** The parts as plies standing side by side, touching face to face, left to right; null when they are not. */
@@ -26,19 +30,23 @@ function sideBySide(section: SectionModel) {
   for (let i = 1; i < ordered.length; i++) {
     const [l, r] = [ordered[i - 1]!.rects[0]!, ordered[i]!.rects[0]!];
     if (Math.abs(l.x1 - r.x0) > tol || Math.min(l.y1, r.y1) - Math.max(l.y0, r.y0) <= tol) return null;
+    // Plies stand side by side when their contact spans both their mid-depths (a plate flush with the top of the
+    // timber does); two parts that only touch at a corner or over a sliver are a section of another kind.
+    const [lo, hi] = [Math.max(l.y0, r.y0), Math.min(l.y1, r.y1)];
+    if ([l, r].some((x) => (x.y0 + x.y1) / 2 < lo - tol || (x.y0 + x.y1) / 2 > hi + tol)) return null;
   }
   return { ordered, tol };
 }
 
 /**
  * The section as side-by-side plies (lumber, LVL, steel plates) touching face to face, or null when it is
- * not one. Plies may differ in depth, but their mid-depths must lie at one level: each then bends about
- * its own centroid on the member's neutral axis, no shear flow passes between them (Q = 0 for each), and
- * the E·I shares hold. A ply whose mid-depth is off that level also takes shear flow; see `offsetPlies`.
+ * not one. Plies may differ in depth and stand at any level: joined by connectors that carry only the
+ * load passed across (no composite action between plies), each bends about its own centroid with the
+ * member's curvature, so the E·I shares hold whether or not their mid-depths lie at one level [D].
  */
 export function multiPlyOf(section: SectionModel): MultiPly | null {
   const found = sideBySide(section);
-  if (!found || offCentre(found.ordered, found.tol)) return null;
+  if (!found) return null;
   const { ordered, tol } = found;
   const top = Math.max(...ordered.map((p) => p.rects[0]!.y1));
   const bottom = Math.min(...ordered.map((p) => p.rects[0]!.y0));
@@ -50,13 +58,9 @@ export function multiPlyOf(section: SectionModel): MultiPly | null {
     }),
     depth: top - bottom,
     selfWeights: ordered.map((p) => p.material.density * GRAVITY * p.area * 1e-9),
+    offCentre: offCentre(ordered, tol),
+    ownSecondMoment: ordered.reduce((sum, p) => sum + (p.n * (p.rects[0]!.x1 - p.rects[0]!.x0) * (p.rects[0]!.y1 - p.rects[0]!.y0) ** 3) / 12, 0),
   };
-}
-
-/** Side-by-side plies whose mid-depths are not at one level (the E·I shares do not apply as such); their ids, or null. */
-export function offsetPlies(section: SectionModel): string[] | null {
-  const found = sideBySide(section);
-  return found && offCentre(found.ordered, found.tol) ? found.ordered.map((p) => p.id) : null;
 }
 
 function offCentre(ordered: SectionModel["parts"], tol: number): boolean {

@@ -428,7 +428,7 @@ export const DesignResult = z.object({
   member: z.object({ mark: z.string(), description: z.string(), revision: z.string(), date: z.string().optional() }),
   status: z.object({ passes: z.boolean(), summary: z.string(), failures: z.array(z.string()) }),
   section: SectionResult,
-  /** Side-by-side plies (any depths, mid-depths at one level): each ply's share of a load by E·I, and the fraction of a unit load each interface passes, by the face it arrives on. */
+  /** Side-by-side plies (any depths and levels): each ply's share of a load by E·I, and the fraction of a unit load each interface passes, by the face it arrives on. */
   multiPly: z
     .object({
       /** bearsTopLoad: the ply reaches the top of the member, so loads on top bear on it (shallower plies, such as a flitch plate within the timber's depth, take theirs through the connectors). */
