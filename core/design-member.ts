@@ -4,7 +4,8 @@ import { beamResult } from "./beam/beam-result.js";
 import { memberActions, momentAt } from "./beam/member-actions.js";
 import { combinationSet } from "./beam/combinations.js";
 import { stationsFor } from "./beam/stations.js";
-import { memberChecks } from "./checks/member-checks.js";
+import { memberChecks, SUPPORT_BEARING } from "./checks/member-checks.js";
+import { plyBearingChecks } from "./checks/ply-bearing.js";
 import { kindOf } from "./connector/registry.js";
 import { bondLineResult } from "./fastening/bond-line-result.js";
 import { compositeDesign } from "./fastening/composite-design.js";
@@ -180,7 +181,13 @@ export function designMember(job: JobDocument): DesignResult {
     assumptions.add("A nail or screw at an interface between plies is driven from an outer face: it must pass the plies on that side and still reach its least penetration into the next one; its resistance is taken between the two plies at the interface.");
   }
   const { checks, notChecked: memberNotChecked } = stepped ? steppedChecks(job, stretches, beam, composite.stiffness, plyStretches) : memberChecks(job, section, beam, profile, composite.stiffness, null, true, plies);
-  notChecked.push(...memberNotChecked);
+  notChecked.push(...(plyStretches ? memberNotChecked.map((n) => (n === SUPPORT_BEARING ? "Bearing under point loads, and the supports' own connections." : n)) : memberNotChecked));
+  if (plyStretches) {
+    const bearing = plyBearingChecks(job, beam, plyStretches);
+    checks.push(...bearing.checks);
+    notChecked.push(...bearing.notChecked);
+    bearing.assumptions.forEach((a) => assumptions.add(a));
+  }
   checks.push(...composite.checks);
   const terminationsNow = () =>
     partTerminations({
@@ -260,7 +267,7 @@ export function designMember(job: JobDocument): DesignResult {
     assumptions.add("A part that stops short of the member's ends is developed at its theoretical cut-off: the point where the section without it first reaches its elastic bending strength under the largest moment of any combination; its force there is M·Q/I of the section with it (AISC 360-16 §F13.3 [M]).");
   }
   if (plies && plies.parts.some((id) => section.parts.find((p) => p.id === id)!.material.family === "steel")) {
-    notChecked.push("Bearing of the bolts on the steel plate and the plate's own edge and end distances (AISC 360-16 §J3.10, §J3.4; EN 1993-1-8 Table 3.4); bearing of each ply at the supports.");
+    notChecked.push("Bearing of the bolts on the steel plate and the plate's own edge and end distances (AISC 360-16 §J3.10, §J3.4; EN 1993-1-8 Table 3.4).");
   }
   if (offCentre) {
     assumptions.add("The plies' mid-depths are not at one level: the connectors carry only the load passed across the member, not shear flow along it (no composite action between the plies), so each ply bends about its own centroid and the member's stiffness is Σ E·I of the plies about their own axes; a connection meant to make them act compositely is not designed here.");

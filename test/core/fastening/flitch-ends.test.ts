@@ -174,3 +174,100 @@ describe("a hanger on one timber ply of a flitch beam", () => {
     expect(result.multiPly!.loads).toEqual([{ load: 0, face: "top", plies: ["a", "b"] }]);
   });
 });
+
+describe("bearing of the plies at the supports", () => {
+  /** Two 2x12 DF-L No. 1 plies (F_c⊥ = 625 psi, NDS Supplement Table 4A [M]) with a 1/2 × 11 in plate centred between them. */
+  function flitchUs(spans: number[], extra: { bearingLength?: number; compressionPerp?: number | null } = {}): JobInput {
+    return {
+      format: "stitchplan-job",
+      version: 1,
+      units: "us",
+      basis: "allowable",
+      project: { name: "Flitch bearing" },
+      member: { mark: "FB" },
+      materials: [
+        { id: "DF", name: "DF-L No. 1", family: "sawn-timber", E: 1_700_000, density: 0, specificGravity: 0.5, strength: { bending: 1000, shear: 180, ...(extra.compressionPerp === null ? {} : { compressionPerp: extra.compressionPerp ?? 625 }) } },
+        { id: "PL", name: "A36 plate", family: "steel", E: 29_000_000, density: 0, yieldStrength: 36_000, tensileStrength: 58_000, strength: { bending: 21_600, shear: 12_900 } },
+      ],
+      parts: [
+        { id: "left", material: "DF", shape: { type: "lumber", nominal: "2x12", orientation: "edge" }, x: 0, y: 0 },
+        { id: "plate", material: "PL", shape: { type: "rectangle", b: 0.5, h: 11 }, place: { on: "left", side: "right" } },
+        { id: "right", material: "DF", shape: { type: "lumber", nominal: "2x12", orientation: "edge" }, place: { on: "plate", side: "right" } },
+      ],
+      connectors: [{ id: "B", kind: "timber-bolt", standard: "NDS-2018", shear: "double", size: "3/4" }],
+      fastening: { default: { connector: "B", rows: 1 }, joints: [{ held: ["plate"], connector: "B", rows: 1 }] },
+      beam: { spans, loads: [{ type: "uniform", category: "dead", w: 600 }], selfWeight: false, ...(extra.bearingLength ? { bearingLength: extra.bearingLength } : {}) },
+      combinations: { set: "unfactored" },
+      spacing: { module: 1, minZoneLength: 24, maxZonesPerSpan: 3, symmetric: true },
+    };
+  }
+  const psi = 0.0068947572932; // MPa per psi
+
+  test("14 ft span, 600 plf: R = 4200 lb; the plate does not reach the bottom, so each 2x12 bears 2100 lb on 1.5 × 3 in (the default ℓ_b): f_c⊥ = 466.7 psi ≤ 625 psi, C_b = 1.0 at the member's end (NDS-2018 §3.10.2, §3.10.4 [M]) [D]", () => {
+    const result = run(flitchUs([14]));
+    const c = result.checks.find((x) => x.id === "bearing-ply-left")!;
+    expectClose(c.demand, (2100 / (1.5 * 3)) * psi, { rel: 1e-9 }, "f_c⊥, MPa");
+    expectClose(c.capacity, 625 * psi, { rel: 1e-9 }, "F′_c⊥ = F_c⊥, MPa");
+    expect(c.reference).toContain("§3.10.2");
+    expect(result.checks.some((x) => x.id === "bearing-ply-plate")).toBe(false);
+    expect(result.assumptions.some((a) => a.startsWith("Plate plate does not reach the bottom") && a.includes("through the connectors"))).toBe(true);
+    expect(result.assumptions.some((a) => a.includes("bears over 3 in") && a.includes("none given"))).toBe(true);
+    expect(result.notChecked.some((n) => n.startsWith("Bearing at the supports"))).toBe(false);
+    expect(result.notChecked.some((n) => n.includes("bearing of each ply at the supports"))).toBe(false);
+  });
+
+  test("a 1.5 in bearing doubles the stress to 933 psi > 625 psi: the check fails [D]", () => {
+    const result = run(flitchUs([14], { bearingLength: 1.5 }));
+    const c = result.checks.find((x) => x.id === "bearing-ply-right")!;
+    expectClose(c.utilisation, 2100 / (1.5 * 1.5) / 625, { rel: 1e-9 }, "utilisation");
+    expect(c.passes).toBe(false);
+    expect(result.status.passes).toBe(false);
+  });
+
+  test("two 7 ft spans: the middle support takes 1.25·w·L = 5250 lb [D]; each ply 2625 lb on 1.5 × 3 in = 583.3 psi against 625 · C_b, C_b = (3 + 0.375)/3 = 1.125 (NDS-2018 §3.10.4 [M])", () => {
+    const result = run(flitchUs([7, 7]));
+    const c = result.checks.find((x) => x.id === "bearing-ply-left")!;
+    expectClose(c.demand, (2625 / 4.5) * psi, { rel: 1e-6 }, "f_c⊥ at the middle support, MPa");
+    expectClose(c.capacity, 625 * 1.125 * psi, { rel: 1e-9 }, "F_c⊥·C_b, MPa");
+    expectClose(c.at!, 7 * 12 * 25.4, { rel: 1e-9 });
+  });
+
+  test("without F_c⊥ the bearing is listed as not checked", () => {
+    const result = run(flitchUs([14], { compressionPerp: null }));
+    expect(result.checks.some((x) => x.id.startsWith("bearing-ply"))).toBe(false);
+    expect(result.notChecked.some((n) => n.startsWith("Bearing perpendicular to grain at the supports of left"))).toBe(true);
+  });
+
+  test("EN 1995-1-1 §6.1.5: C24 75 × 300 either side of a 12 × 280 plate, 5.4 m, EN-2a 10.8 N/mm: each ply 14 580 N on 75 × (90 + 30) mm = 1.62 MPa, k_c,90 = 1.0 [M] [D]", () => {
+    const job: JobInput = {
+      format: "stitchplan-job",
+      version: 1,
+      units: "si",
+      basis: "factored",
+      project: { name: "EC5 bearing" },
+      member: { mark: "FB-E" },
+      materials: [
+        // f_c,90,d = k_mod·f_c,90,k/γ_M = 0.8 · 2.5/1.3 = 1.538 MPa (EN 338 C24 [M], Table 3.1, Table 2.3 [M]).
+        { id: "C24", name: "C24", family: "sawn-timber", E: 11_000, density: 0, characteristicDensity: 350, strength: { bending: 14.7, shear: 1.65, compressionPerp: (0.8 * 2.5) / 1.3 } },
+        { id: "S", name: "S235", family: "steel", E: 210_000, density: 0, yieldStrength: 235, strength: { bending: 235, shear: 135 } },
+      ],
+      parts: [
+        { id: "left", material: "C24", shape: { type: "rectangle", b: 75, h: 300 }, x: 0, y: 0 },
+        { id: "plate", material: "S", shape: { type: "rectangle", b: 12, h: 280 }, place: { on: "left", side: "right" } },
+        { id: "right", material: "C24", shape: { type: "rectangle", b: 75, h: 300 }, place: { on: "plate", side: "right" } },
+      ],
+      connectors: [{ id: "M16", kind: "timber-bolt", standard: "EN1995-1-1", shear: "double", size: "M16", grade: "8.8", serviceClass: 1 }],
+      fastening: { default: { connector: "M16", rows: 2 }, joints: [{ held: ["plate"], connector: "M16", rows: 2 }] },
+      beam: { spans: [5.4], loads: [{ type: "uniform", category: "dead", w: 3 }, { type: "uniform", category: "live", w: 4.5 }], selfWeight: false },
+      combinations: { set: "en1990-6.10" },
+      spacing: { module: 25, minZoneLength: 600, maxZonesPerSpan: 3, symmetric: true },
+    };
+    const result = run(job);
+    const c = result.checks.find((x) => x.id === "bearing-ply-left")!;
+    expectClose(c.demand, (10.8 * 2700) / 2 / (75 * 120), { rel: 1e-9 }, "σ_c,90, MPa");
+    expectClose(c.capacity, (0.8 * 2.5) / 1.3, { rel: 1e-9 });
+    expect(c.combination).toBe("EN-2a");
+    expect(c.passes).toBe(false);
+    expect(c.reference).toContain("§6.1.5");
+  });
+});
