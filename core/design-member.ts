@@ -1,7 +1,7 @@
 import { analyseBeam, selfWeightOf, type BeamAnalysis } from "./beam/analyse-beam.js";
 import { beamAssumptions } from "./beam/beam-assumptions.js";
 import { beamResult } from "./beam/beam-result.js";
-import { memberActions, momentAt } from "./beam/member-actions.js";
+import { memberActions } from "./beam/member-actions.js";
 import { combinationSet } from "./beam/combinations.js";
 import { stationsFor } from "./beam/stations.js";
 import { memberChecks, SUPPORT_BEARING } from "./checks/member-checks.js";
@@ -164,19 +164,7 @@ export function designMember(job: JobDocument): DesignResult {
     }
     assumptions.add("A concentrated load hung on a face is passed by the connectors within half the member depth each side of it (common practice).");
     if (plyStretches && plyStretches.length > 1) {
-      assumptions.add("Where a ply starts or stops along the member the E·I shares change stretch by stretch: a ply that stops hands its share of the shear there (its end reaction, s_j·V) to the plies that continue, and one that starts takes its share from them, through the connectors within half the member depth of its end on the side where it runs (the concentrated-load rule).");
-      for (let i = 0; i + 1 < plyStretches.length; i++) {
-        const [left, right] = [plyStretches[i]!, plyStretches[i + 1]!];
-        const x = left.x1;
-        const moment = Math.max(...beam.results.flatMap((r) => [Math.abs(momentAt(r.actions, x, "left")), Math.abs(momentAt(r.actions, x, "right"))]));
-        for (const [side, other] of [[left, right], [right, left]] as const) {
-          const shares = plyShares(side.plies.plies);
-          side.plies.parts.forEach((id, j) => {
-            if (other.plies.parts.includes(id) || moment * shares[j]! <= 1e-9 * moment) return;
-            notChecked.push(`The end of ply ${id} at ${inJobUnits(x, "span", job.units)}: its share of the moment there, s·M = ${inJobUnits(shares[j]! * moment, "moment", job.units)}, must fall to zero over the connectors near its end; they are designed for its end reaction (share of the shear) only. End the ply where the moment is small, or check that couple.`);
-          });
-        }
-      }
+      assumptions.add("Where a ply starts or stops along the member the E·I shares change stretch by stretch: a ply that stops hands its share of the shear (its end reaction, s_j·V) and of the moment (s_j·M at the centre of its end bolts) to the plies that continue, and one that starts takes them, through the connectors within half the member depth of its end on the side where it runs: the force spread evenly, the couple by the elastic method for a bolt group (force in proportion to the distance from the group's centre).");
     }
     assumptions.add("A nail or screw at an interface between plies is driven from an outer face: it must pass the plies on that side and still reach its least penetration into the next one; its resistance is taken between the two plies at the interface.");
   }

@@ -1,5 +1,5 @@
 import type { BeamAnalysis } from "../beam/analyse-beam.js";
-import { memberActions, shearAt, type LoadSet, type MemberActions } from "../beam/member-actions.js";
+import { memberActions, momentAt, shearAt, type LoadSet, type MemberActions } from "../beam/member-actions.js";
 import { interfaceTransfer, plyShares, type LoadFace, type Ply } from "../multi-ply/ply-shares.js";
 import { GRAVITY } from "../units/quantity.js";
 import type { JobDocument } from "../schema/job.js";
@@ -198,11 +198,13 @@ export function interfaceDemand(job: JobDocument, beam: BeamAnalysis, stretches:
         }
       }
     }
-    // Where plies start or stop, each ply's share of the shear changes. Taken in two steps, each self-equilibrated: the
-    // plies that stop hand their shares s_j·V (their end reactions) to the plies that run on (from the left stretch's
-    // shares to those of the plies common to both), then the plies that start take theirs from them; ply j takes
-    // P_j = (s_j − s_j′)·V as a load [D], passed through the connectors within d/2 of the end, on the side where the
-    // ply runs (the concentrated-load rule, [CP]).
+    // Where plies start or stop, each ply's shares of the shear and moment change. Taken in two steps, each
+    // self-equilibrated: the plies that stop hand their shares to the plies that run on (from the left stretch's shares
+    // to those of the plies common to both), then the plies that start take theirs from them. Ply j takes, through the
+    // connectors within d/2 of the end on the side where it runs (a bolt group; the concentrated-load rule, [CP]), the
+    // force P_j = Δs_j·V spread evenly and the couple C_j = Δs_j·M at the group's centre by the elastic method (force
+    // in proportion to the distance from that centre [M]), Δs_j = s_j − s_j′ going along the member [D]: a ply that
+    // stops where the moment is not small carries its share of it up to its end bolts.
     for (let i = 0; i + 1 < stretches.length; i++) {
       const [left, right] = [stretches[i]!, stretches[i + 1]!];
       const x = left.x1;
@@ -213,11 +215,26 @@ export function interfaceDemand(job: JobDocument, beam: BeamAnalysis, stretches:
         [left, shearAt(actions, x, "left"), [Math.max(x - d / 2, left.x0), x]],
         [right, shearAt(actions, x, "right"), [x, Math.min(x + d / 2, right.x1)]],
       ] as const) {
+        const [a, b] = band;
+        const h = b - a;
+        if (!(h > 0)) continue;
+        const centre = (a + b) / 2;
+        const m = momentAt(actions, centre, "right");
         const own = sharesById(side.plies);
-        const P = (id: string) => (side === left ? (own.get(id) ?? 0) - (between.get(id) ?? 0) : (between.get(id) ?? 0) - (own.get(id) ?? 0)) * v;
-        const forces = ksOf(side).map((k) => side.plies.parts.slice(0, k + 1).reduce((sum, id) => sum + P(id), 0));
-        const T = pick(forces);
-        if (Math.abs(T) > 1e-12 * Math.abs(v) && band[1] > band[0]) push(band[0], band[1], T / (band[1] - band[0]), T / (band[1] - band[0]));
+        const change = (id: string) => (side === left ? (own.get(id) ?? 0) - (between.get(id) ?? 0) : (between.get(id) ?? 0) - (own.get(id) ?? 0));
+        const sums = ksOf(side).map((k) => side.plies.parts.slice(0, k + 1).reduce((sum, id) => sum + change(id), 0));
+        if (sums.every((c) => Math.abs(c) <= 1e-12)) continue;
+        // e(X) = P/h − 12·C·(X − centre)/h³: ∫e = P, ∫e·(X − centre) = −C.
+        if (single) {
+          const [P, C] = [sums[0]! * v, sums[0]! * m];
+          push(a, b, P / h + (6 * C) / h ** 2, P / h - (6 * C) / h ** 2);
+        } else {
+          // Several interfaces: the largest force and couple of any, with no relief between them.
+          const P = Math.max(...sums.map((c) => Math.abs(c * v)));
+          const C = Math.max(...sums.map((c) => Math.abs(c * m)));
+          push(a, centre, P / h + (6 * C) / h ** 2, P / h);
+          push(centre, b, P / h, P / h + (6 * C) / h ** 2);
+        }
       }
     }
     // V(x) = t(x): a step up of t0 at x0, a slope along the extent, a step down of t1 at x1; in the joint's coordinate.
