@@ -1,5 +1,5 @@
 import fc from "fast-check";
-import { describe, expect, test } from "vitest";
+import { afterAll, describe, expect, test } from "vitest";
 import { prepareJob } from "../../../core/check-job.js";
 import { designMember } from "../../../core/design-member.js";
 import type { JobInput } from "../../../core/schema/job.js";
@@ -279,5 +279,75 @@ describe("bearing of the plies at the supports", () => {
     expect(c.combination).toBe("EN-2a");
     expect(c.passes).toBe(false);
     expect(c.reference).toContain("§6.1.5");
+  });
+});
+
+describe("properties through designMember (fast-check, fixed seed)", () => {
+  const sized = fc.record({
+    t: fc.double({ min: 35, max: 75, noNaN: true }),
+    d: fc.double({ min: 200, max: 360, noNaN: true }),
+    tp: fc.double({ min: 6, max: 20, noNaN: true }),
+    ratio: fc.double({ min: 0.6, max: 1.2, noNaN: true }),
+    w: fc.double({ min: 0.5, max: 8, noNaN: true }),
+    quarters: fc.integer({ min: 12, max: 24 }),
+    left: fc.integer({ min: 1, max: 3 }),
+    right: fc.integer({ min: 1, max: 3 }),
+  });
+  const build = (g: { t: number; d: number; tp: number; ratio: number; w: number; quarters: number; left: number; right: number }, loads: JobInput["beam"]["loads"]) => {
+    const span = g.quarters / 4;
+    const job = flitch({ ...base, t: g.t, d: g.d, tp: g.tp, dp: g.d * g.ratio, span, pa: g.left / 4, pb: span - g.right / 4, loads });
+    job.combinations = { set: "asce7-22-allowable" };
+    // A strong rated connector, two per row, so that most schedules are feasible and their counts compare.
+    job.connectors = [{ id: "R", kind: "rated", label: "rated (invented)", resistance: 20_000, minSpacing: 50, maxSpacing: 600, endDistance: 50 }];
+    job.fastening = { default: { connector: "R", rows: 2 }, joints: [{ held: ["plate"], connector: "R", rows: 2 }] };
+    return job;
+  };
+  // Many generated members must be designable (a quarter at least), or the properties below say nothing.
+  const feasible: boolean[] = [];
+  afterAll(() => expect(feasible.filter(Boolean).length).toBeGreaterThanOrEqual(feasible.length / 4));
+  const counts = (r: ReturnType<typeof designMember>) => new Map(r.schedules.filter((s) => !s.infeasible).map((s) => [s.joint, s.count]));
+
+  test("adding a live load on any ply (on top, or hung on either face; point or uniform, anywhere) never reduces the connectors of any interface", () => {
+    fc.assert(
+      fc.property(
+        sized,
+        fc.record({ face: fc.constantFrom("top", "left", "right"), point: fc.boolean(), at: fc.double({ min: 0.05, max: 0.95, noNaN: true }), size: fc.double({ min: 0.5, max: 10, noNaN: true }), len: fc.double({ min: 0.1, max: 1, noNaN: true }) }),
+        (g, add) => {
+          const dead: JobInput["beam"]["loads"] = [{ type: "uniform", category: "dead", w: g.w }];
+          const span = g.quarters / 4;
+          const extra: JobInput["beam"]["loads"][number] = add.point
+            ? { type: "point", category: "live", P: add.size, at: add.at * span, face: add.face }
+            : { type: "uniform", category: "live", w: add.size, from: add.at * span * (1 - add.len), to: Math.min(span, add.at * span * (1 - add.len) + add.len * span), face: add.face };
+          const before = counts(run(build(g, dead)));
+          feasible.push(before.has("plate"));
+          const after = run(build(g, [...dead, extra]));
+          for (const s of after.schedules) {
+            if (s.infeasible || !before.has(s.joint)) continue;
+            expect(s.count, `joint ${s.joint}`).toBeGreaterThanOrEqual(before.get(s.joint)!);
+          }
+        },
+      ),
+      { numRuns: 20 },
+    );
+  });
+
+  test("shortening the plate (its ends in the outer third of the span) never reduces the connectors within d/2 of its ends", () => {
+    fc.assert(
+      fc.property(sized, fc.constantFrom("left", "right"), (g, end) => {
+        const span = g.quarters / 4;
+        fc.pre((g.left + 1) / 4 <= span / 3 && (g.right + 1) / 4 <= span / 3);
+        const shorter = { ...g, [end]: g[end] + 1 };
+        const near = (r: ReturnType<typeof designMember>, at: number, inward: number) => {
+          const s = r.schedules.find((x) => x.joint === "plate")!;
+          return s.infeasible ? Infinity : s.positions.filter((x) => (x - at) * inward >= -1e-6 && (x - at) * inward <= g.d / 2 + 1e-6).length;
+        };
+        const loads: JobInput["beam"]["loads"] = [{ type: "uniform", category: "dead", w: g.w }, { type: "uniform", category: "live", w: 2 * g.w }];
+        const [a, b] = [run(build(g, loads)), run(build(shorter, loads))];
+        feasible.push(!a.schedules.find((x) => x.joint === "plate")!.infeasible);
+        const [at, atShorter, inward] = end === "left" ? [g.left * 250, shorter.left * 250, 1] : [(g.quarters - g.right) * 250, (g.quarters - shorter.right) * 250, -1];
+        expect(near(b, atShorter, inward)).toBeGreaterThanOrEqual(near(a, at, inward));
+      }),
+      { numRuns: 20 },
+    );
   });
 });
