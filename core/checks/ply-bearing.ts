@@ -5,12 +5,12 @@ import type { JobDocument } from "../schema/job.js";
 import type { MemberCheck } from "../schema/result.js";
 import { inJobUnits } from "../units/format.js";
 
-/** Bearing length taken when the job gives none, mm: 3 in, about 90 mm [CP]. */
-export const DEFAULT_BEARING_LENGTH = { us: 76.2, si: 90 } as const;
+/** Bearing length taken when the job gives none, mm: 3 in [CP], in either unit system (so that a job and its converted twin design the same). */
+export const DEFAULT_BEARING_LENGTH = 76.2;
 
 const INCH = 25.4;
 
-/** NDS-2018 or EN 1995-1-1: by the job's combinations, then its connectors' standards, then its units. */
+/** NDS-2018 or EN 1995-1-1: by the job's combinations, then its connectors' standards, then its basis (allowable: NDS). */
 function bearingStandard(job: JobDocument): "NDS" | "EN" {
   const set = job.combinations.set;
   if (set.startsWith("en1990")) return "EN";
@@ -18,7 +18,7 @@ function bearingStandard(job: JobDocument): "NDS" | "EN" {
   const named = job.connectors.map((c) => (c as { standard?: string }).standard ?? "");
   if (named.some((s) => s.startsWith("EN"))) return "EN";
   if (named.some((s) => s.startsWith("NDS"))) return "NDS";
-  return job.units === "us" ? "NDS" : "EN";
+  return job.basis === "allowable" ? "NDS" : "EN";
 }
 
 /**
@@ -36,7 +36,7 @@ export function plyBearingChecks(job: JobDocument, beam: BeamAnalysis, stretches
   const L = beam.length;
   const standard = bearingStandard(job);
   const given = job.beam.bearingLength;
-  const lb = given ?? DEFAULT_BEARING_LENGTH[job.units];
+  const lb = given ?? DEFAULT_BEARING_LENGTH;
   const len = (mm: number) => inJobUnits(mm, "length", job.units);
   assumptions.push(
     given === undefined

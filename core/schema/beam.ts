@@ -101,7 +101,7 @@ export const Beam = z.strictObject({
   loads: z.array(Load).max(200, "at most 200 loads"),
   /** Adds the parts' own weight as a dead load. */
   selfWeight: z.boolean().default(true),
-  /** Length of each support's bearing along the member, for bearing perpendicular to the grain; 3 in (90 mm) when absent. */
+  /** Length of each support's bearing along the member, for bearing perpendicular to the grain; 3 in (76.2 mm) when absent. */
   bearingLength: positive("length").optional(),
   categories: z.array(UserLoadCategory).max(8, "at most 8 categories of your own").default([]),
   /**

@@ -248,7 +248,7 @@ describe("bearing of the plies at the supports", () => {
     expect(result.notChecked.some((n) => n.startsWith("Bearing perpendicular to grain at the supports of left"))).toBe(true);
   });
 
-  test("EN 1995-1-1 §6.1.5: C24 75 × 300 either side of a 12 × 280 plate, 5.4 m, EN-2a 10.8 N/mm: each ply 14 580 N on 75 × (90 + 30) mm = 1.62 MPa, k_c,90 = 1.0 [M] [D]", () => {
+  test("EN 1995-1-1 §6.1.5: C24 75 × 300 either side of a 12 × 280 plate, 5.4 m, EN-2a 10.8 N/mm: each ply 14 580 N on 75 × (90 + 30) mm (ℓ = 90 mm given) = 1.62 MPa, k_c,90 = 1.0 [M] [D]", () => {
     const job: JobInput = {
       format: "stitchplan-job",
       version: 1,
@@ -268,7 +268,7 @@ describe("bearing of the plies at the supports", () => {
       ],
       connectors: [{ id: "M16", kind: "timber-bolt", standard: "EN1995-1-1", shear: "double", size: "M16", grade: "8.8", serviceClass: 1 }],
       fastening: { default: { connector: "M16", rows: 2 }, joints: [{ held: ["plate"], connector: "M16", rows: 2 }] },
-      beam: { spans: [5.4], loads: [{ type: "uniform", category: "dead", w: 3 }, { type: "uniform", category: "live", w: 4.5 }], selfWeight: false },
+      beam: { spans: [5.4], loads: [{ type: "uniform", category: "dead", w: 3 }, { type: "uniform", category: "live", w: 4.5 }], selfWeight: false, bearingLength: 90 },
       combinations: { set: "en1990-6.10" },
       spacing: { module: 25, minZoneLength: 600, maxZonesPerSpan: 3, symmetric: true },
     };
