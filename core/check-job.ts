@@ -2,7 +2,7 @@ import { beamIssues } from "./beam/beam-issues.js";
 import { checkConnectorPlacement } from "./connector/check-placement.js";
 import { kindOf } from "./connector/registry.js";
 import { layersFromSection } from "./composite/layers-from-section.js";
-import { multiPlyOf } from "./fastening/side-load-transfer.js";
+import { plyStretchesOf } from "./fastening/side-load-transfer.js";
 import { physicalRangeIssues } from "./physical-ranges.js";
 import { JobDocument } from "./schema/job.js";
 import { issuesFromZod, type JobIssue } from "./schema/job-issues.js";
@@ -134,10 +134,10 @@ export function checkGeometry(job: JobDocument): JobIssue[] {
     const held = new Set(j.held);
     if (!contacts.some((c) => held.has(c.a) !== held.has(c.b))) add(`fastening.joints[${k}].held`, "these parts touch no other part, so no connectors can hold them");
   });
-  if (several || !multiPlyOf(section)) {
+  if (!plyStretchesOf(sectionStretches(job, L))) {
     job.beam.loads.forEach((load, i) => {
       if (load.type !== "moment" && load.face !== "top") {
-        add(`beam.loads[${i}].face`, `a load on the ${load.face} face applies to members of side-by-side plies (of any depths, their mid-depths at one level); this section is not one, so the load must act on top`);
+        add(`beam.loads[${i}].face`, `a load on the ${load.face} face applies to members of side-by-side plies (of any depths and levels, standing face to face); this section is not one, so the load must act on top`);
       }
     });
   }

@@ -4,7 +4,8 @@ import { beamResult } from "./beam/beam-result.js";
 import { memberActions } from "./beam/member-actions.js";
 import { combinationSet } from "./beam/combinations.js";
 import { stationsFor } from "./beam/stations.js";
-import { memberChecks } from "./checks/member-checks.js";
+import { memberChecks, SUPPORT_BEARING } from "./checks/member-checks.js";
+import { plyBearingChecks } from "./checks/ply-bearing.js";
 import { kindOf } from "./connector/registry.js";
 import { bondLineResult } from "./fastening/bond-line-result.js";
 import { compositeDesign } from "./fastening/composite-design.js";
@@ -15,10 +16,10 @@ import { partTerminations } from "./fastening/part-terminations.js";
 import { layoutAcross } from "./fastening/layout-across.js";
 import { loadedEdgesOf } from "./fastening/loaded-edges.js";
 import { rowFit, rowFitProblem } from "./fastening/row-fit.js";
-import { interfaceDemand, interfacesOf, multiPlyOf, offsetPlies, type MultiPly } from "./fastening/side-load-transfer.js";
+import { interfaceDemand, interfacesOf, plyStretchesOf, type MultiPly, type PlyStretch } from "./fastening/side-load-transfer.js";
 import { weldSchedule } from "./fastening/weld-schedule.js";
 import { fastenerReach } from "./multi-ply/ply-detailing.js";
-import { interfaceTransfer, plyShares } from "./multi-ply/ply-shares.js";
+import { arrivalFractions, interfaceTransfer, plyShares } from "./multi-ply/ply-shares.js";
 import type { JobDocument } from "./schema/job.js";
 import { RESULT_FORMAT, RESULT_VERSION, type BondLineResult, type DesignResult, type JointResult, type MemberCheck, type Schedule, type WeldResult } from "./schema/result.js";
 import { MAX_PARTS_FOR_JOINT_SEARCH, type UncoveredContact } from "./section/joints.js";
@@ -41,16 +42,25 @@ export function designMember(job: JobDocument): DesignResult {
   const stepped = stretches.length > 1;
   // The section drawn and reported: every part, wherever along the member it runs.
   const section = stepped ? buildSection(positioned(job.parts), job.materials) : stretches[0]!.section;
-  const { joints, uncovered } = memberJointsOf(job, stretches, length);
+  const { joints, uncovered: uncoveredCuts } = memberJointsOf(job, stretches, length);
   // The same self-weight as the analysis and the assumptions take, so that all three see the same categories.
   const combinationList = combinationSet(job.beam, job.combinations, job.beam.selfWeight ? Math.max(...stretches.map((s) => selfWeightOf(s.section))) : 0);
-  const beam = analyseBeam(job, stretches, combinationList.combinations);
+  // Side-by-side plies stretch by stretch (a plate shorter than the member changes the shares where it stops);
+  // `plies` is the stretch with the most of them, for what is said of the member as a whole.
+  const plyStretches = plyStretchesOf(stretches);
+  const plies = plyStretches ? plyStretches.reduce((a, b) => (b.plies.parts.length > a.plies.parts.length || (b.plies.parts.length === a.plies.parts.length && b.x1 - b.x0 > a.x1 - a.x0) ? b : a)).plies : null;
+  // Plies at different levels bend each about its own centroid (no composite action between them): the member's stiffness
+  // is Σ E_j·I_j, not the transformed section's I about a common axis.
+  const offCentre = plyStretches?.some((s) => s.plies.offCentre) ?? false;
+  // Nor does a cut between plies need Q = V·Q/I fastened: a line is short only if no joint fastens it at all.
+  const uncovered = plyStretches ? uncoveredCuts.filter((u) => u.cause !== "short-cut") : uncoveredCuts;
+  const analysed = offCentre ? stretches.map((s, i) => ({ ...s, section: { ...s.section, secondMoment: plyStretches![i]!.plies.ownSecondMoment } })) : stretches;
+  const beam = analyseBeam(job, analysed, combinationList.combinations);
   const stations = stationsFor(beam.length, [...new Set(beam.results.flatMap((r) => r.actions.breaks))]);
   const profile = stressProfile(section);
-  const plies = stepped ? null : multiPlyOf(section);
-  const offset = stepped ? null : offsetPlies(section);
 
   const assumptions = new Set<string>();
+  const notChecked: string[] = [];
   const standards = new Set<string>();
   const warnings = new Set<string>();
   const jointResults: JointResult[] = [];
@@ -65,8 +75,11 @@ export function designMember(job: JobDocument): DesignResult {
     const share = kind.mechanism === "bond-line" ? 1 : lineCount / joint.crossed.length;
     const flowFactor = Math.max(...mj.stretches.map((x) => x.flowFactor));
     const stressFactor = Math.max(...mj.stretches.map((x) => x.stressFactor));
-    const inPlaneOfBending = !stepped && joint.firstMoment <= 1e-9 * section.transformedArea * (section.bounds.y1 - section.bounds.y0);
-    const plyInterfaces = inPlaneOfBending && plies ? interfacesOf(plies, joint) : null;
+    const balanced = (m: number) => m <= 1e-9 * mj.section.transformedArea * (mj.section.bounds.y1 - mj.section.bounds.y0);
+    // Between plies at different levels Q ≠ 0, but with no composite action between them no shear flow is passed either.
+    const inPlaneOfBending = offCentre || (stepped ? !!plyStretches && mj.stretches.every((x) => balanced(x.firstMoment)) : balanced(joint.firstMoment));
+    const jointPlies = plyStretches ? plyStretchAt(plyStretches, mj.stretches[0]!.from).plies : null;
+    const plyInterfaces = inPlaneOfBending && jointPlies ? interfacesOf(jointPlies, joint) : null;
     const plyInterface = plyInterfaces && plyInterfaces.length === 1 ? plyInterfaces[0]! : null;
     if (inPlaneOfBending && plyInterfaces === null) {
       warnings.add(
@@ -108,7 +121,9 @@ export function designMember(job: JobDocument): DesignResult {
     let input: JointInput;
     if (plyInterfaces !== null) {
       // The demand is per contact line; the schedule divides by the lines, so the factor restores it.
-      input = { ...common, beam, stations, flowFactor: joint.lines.length, stressFactor: 1 / joint.contactWidth, demandActions: interfaceDemand(job, beam, plies!, plyInterfaces), loadedEdges: loadedEdgesOf(job, beam, plies!, plyInterfaces, mj.section) };
+      const view = mj.extent ? localView(beam, stations, mj.extent) : { beam, stations };
+      const local = mj.extent ? { ...common, fastening: shiftProvided(fastening, -mj.extent.from) } : common;
+      input = { ...local, ...view, flowFactor: joint.lines.length, stressFactor: 1 / joint.contactWidth, demandActions: interfaceDemand(job, beam, plyStretches!, joint.lines, mj.extent), loadedEdges: loadedEdgesOf(job, beam, plyStretches!, jointPlies!, plyInterfaces, mj.section, mj.extent) };
     } else if (!stepped) {
       input = { ...common, beam, stations, flowFactor: flowFactor * share, stressFactor };
     } else {
@@ -116,7 +131,7 @@ export function designMember(job: JobDocument): DesignResult {
       const local = mj.extent ? { ...common, fastening: shiftProvided(fastening, -mj.extent.from) } : common;
       input = { ...local, ...view, flowFactor: share, stressFactor: 1 / joint.contactWidth, demandActions: jointDemand(beam, mj) };
     }
-    return { joint, kind, input, extent: mj.extent, plyInterface, share, section: mj.section, across: plyInterfaces !== null };
+    return { joint, kind, input, extent: mj.extent, plyInterface, plyJoint: plyInterfaces !== null, jointPlies, share, section: mj.section, across: plyInterfaces !== null };
   });
 
   type Run = { schedule?: Schedule; bondLine?: BondLineResult; weld?: WeldResult; warnings: string[]; mirrored: boolean };
@@ -136,7 +151,7 @@ export function designMember(job: JobDocument): DesignResult {
   composite.assumptions.forEach((a) => assumptions.add(a));
 
   if (plies) {
-    assumptions.add("Side-by-side plies deflect together, so each carries a share of the load in proportion to its E·I (each ply about its own centroid, all on the member's neutral axis); connectors at each interface pass what arrives on one side beyond its share, across the member (perpendicular to the grain of timber plies).");
+    assumptions.add(`Side-by-side plies deflect together, so each carries a share of the load in proportion to its E·I (each ply about its own centroid${offCentre ? "" : ", all on the member's neutral axis"}); connectors at each interface pass what arrives on one side beyond its share, across the member (perpendicular to the grain of timber plies).`);
     assumptions.add(
       plies.plies.every((p) => p.bearsOnTop !== false)
         ? "A load on top bears on each ply in proportion to its thickness (common practice); each ply's self-weight arrives on that ply, and what it weighs beyond its E·I share passes across the interfaces like any other load."
@@ -150,16 +165,28 @@ export function designMember(job: JobDocument): DesignResult {
       assumptions.add("A steel plate between the plies is held laterally by the bolts through the timber plies on either side, so its lateral-torsional buckling alone is not checked; the bolts must be placed as scheduled for this to hold.");
     }
     assumptions.add("A concentrated load hung on a face is passed by the connectors within half the member depth each side of it (common practice).");
+    if (plyStretches && plyStretches.length > 1) {
+      assumptions.add("Where a ply starts or stops along the member the E·I shares change stretch by stretch: a ply that stops hands its share of the shear (its end reaction, s_j·V) and of the moment (s_j·M at the centre of its end bolts) to the plies that continue, and one that starts takes them, through the connectors within half the member depth of its end on the side where it runs: the force spread evenly, the couple by the elastic method for a bolt group (force in proportion to the distance from the group's centre).");
+    }
     assumptions.add("A nail or screw at an interface between plies is driven from an outer face: it must pass the plies on that side and still reach its least penetration into the next one; its resistance is taken between the two plies at the interface.");
   }
-  const { checks, notChecked } = stepped ? steppedChecks(job, stretches, beam, composite.stiffness) : memberChecks(job, section, beam, profile, composite.stiffness, null, true, plies);
+  const { checks, notChecked: memberNotChecked } = stepped ? steppedChecks(job, stretches, beam, composite.stiffness, plyStretches) : memberChecks(job, section, beam, profile, composite.stiffness, null, true, plies);
+  notChecked.push(...(plyStretches ? memberNotChecked.map((n) => (n === SUPPORT_BEARING ? "Bearing under point loads, and the supports' own connections." : n)) : memberNotChecked));
+  if (plyStretches) {
+    const bearing = plyBearingChecks(job, beam, plyStretches);
+    checks.push(...bearing.checks);
+    notChecked.push(...bearing.notChecked);
+    bearing.assumptions.forEach((a) => assumptions.add(a));
+  }
   checks.push(...composite.checks);
   const terminationsNow = () =>
     partTerminations({
       job,
       beam,
       stretches,
-      joints: joints.map((mj) => {
+      // Between side-by-side plies a ply's end hands its reaction back through the connectors there (interfaceDemand); no
+      // shear flow develops it.
+      joints: joints.filter((mj) => !prepared.find((p) => p.joint.id === mj.joint.id)!.plyJoint).map((mj) => {
         const r = runs.get(mj.joint.id)!;
         const rowResistance = r.schedule ? Math.min(...r.schedule.resistance.map((x) => x.value)) * r.schedule.rows * r.schedule.lineCount : null;
         const weldResistance = r.weld ? Math.min(...r.weld.resistance.map((x) => x.value)) * r.weld.fillets * r.weld.lineCount : null;
@@ -205,8 +232,8 @@ export function designMember(job: JobDocument): DesignResult {
     const r = runs.get(p.joint.id)!;
     // Single shear only: there the penetration provided is the length past the head-side ply.
     const singleShear = (p.input.connector as { shear?: string }).shear !== "double";
-    if (r.schedule && plies && p.plyInterface !== null && singleShear) {
-      const problem = reachProblem(r.schedule, plies, p.plyInterface, p.input.contexts[0]![0]!.members[0].thickness, job.units);
+    if (r.schedule && p.jointPlies && p.plyInterface !== null && singleShear) {
+      const problem = reachProblem(r.schedule, p.jointPlies, p.plyInterface, p.input.contexts[0]![0]!.members[0].thickness, job.units);
       if (problem) r.schedule = { ...r.schedule, detailingProblems: [...r.schedule.detailingProblems, problem], passes: false };
     }
     if (r.schedule) {
@@ -242,12 +269,12 @@ export function designMember(job: JobDocument): DesignResult {
     const bearingChecked = atPlate.length > 0 && atPlate.every((s) => s.resistance.every((r) => (r.modes ?? []).some((m) => m.mode.startsWith("bearing on plate"))));
     notChecked.push(
       bearingChecked
-        ? "The plate's own edge and end distances at the bolt holes (AISC 360-16 §J3.4; EN 1993-1-8 Table 3.3): the plate's bearing and tear-out take them at their least; bearing of each ply at the supports."
-        : "Bearing of the bolts on the steel plate and the plate's own edge and end distances (AISC 360-16 §J3.10, §J3.4; EN 1993-1-8 Table 3.4); bearing of each ply at the supports.",
+        ? "The plate's own edge and end distances at the bolt holes (AISC 360-16 §J3.4; EN 1993-1-8 Table 3.3): the plate's bearing and tear-out take them at their least."
+        : "Bearing of the bolts on the steel plate and the plate's own edge and end distances (AISC 360-16 §J3.10, §J3.4; EN 1993-1-8 Table 3.4).",
     );
   }
-  if (offset) {
-    notChecked.push(`The load passed across the interfaces of the side-by-side plies (${offset.join(", ")}): their mid-depths are not at one level, so the plies do not share the load simply by E·I; set each ply's mid-depth at one level (plates centred on the depth of the timber) to have the transfer designed.`);
+  if (offCentre) {
+    assumptions.add("The plies' mid-depths are not at one level: the connectors carry only the load passed across the member, not shear flow along it (no composite action between the plies), so each ply bends about its own centroid and the member's stiffness is Σ E·I of the plies about their own axes; a connection meant to make them act compositely is not designed here.");
   }
   if (section.parts.length > 1 && joints.length === 0) warnings.add("No joint was found between the parts; check that the parts touch face to face.");
   const failures = [
@@ -276,7 +303,7 @@ export function designMember(job: JobDocument): DesignResult {
       failures,
     },
     section: sectionResult(section, profile),
-    multiPly: plies ? multiPlyResult(plies, jointResults) : null,
+    multiPly: plies ? multiPlyResult(plies, jointResults, plyStretches!, job, length) : null,
     composite: composite.result,
     stretches: stepped
       ? stretches.map((x) => ({ from: x.x0, to: x.x1, parts: x.parts, area: x.section.area, centroidY: x.section.centroidY, secondMoment: x.section.secondMoment }))
@@ -316,7 +343,7 @@ function uncoveredReason(u: UncoveredContact, units: JobDocument["units"]): stri
   return `the cut that holds ${u.held.join(" + ")} has Q = ${q(u.firstMoment)}, but the joints named in the fastening fasten its ${u.lines} contact lines for ${q(u.carried)} in all. Name that held group in the fastening, or fasten its lines for it.`;
 }
 
-function multiPlyResult(plies: MultiPly, joints: JointResult[]): DesignResult["multiPly"] {
+function multiPlyResult(plies: MultiPly, joints: JointResult[], stretches: PlyStretch[], job: JobDocument, length: number): DesignResult["multiPly"] {
   const transfer = (face: "left" | "right" | "top") => interfaceTransfer(plies.plies, [{ face, magnitude: 1 }]);
   const shares = plyShares(plies.plies);
   return {
@@ -329,7 +356,21 @@ function multiPlyResult(plies: MultiPly, joints: JointResult[]): DesignResult["m
       fromRightFace: transfer("right").interfaces[k]!.force,
       fromTop: transfer("top").interfaces[k]!.force,
     })),
+    stretches: stretches.length > 1 ? stretches.map((s) => ({ from: s.x0, to: s.x1, plies: s.plies.parts.map((part, j) => ({ part, share: plyShares(s.plies.plies)[j]! })) })) : [],
+    loads: job.beam.loads.flatMap((load, i) => {
+      if (load.type === "moment") return [];
+      const face = load.face ?? "top";
+      const [a, b] = load.type === "point" ? [load.at, load.at] : [load.from ?? 0, load.to ?? length];
+      const on = stretches.filter((s) => s.x1 >= a && s.x0 <= b && (a === b || (s.x1 > a && s.x0 < b)));
+      const parts = on.flatMap((s) => arrivalFractions(s.plies.plies, face).flatMap((f, j) => (f > 0 ? [s.plies.parts[j]!] : [])));
+      return [{ load: i, face, plies: [...new Set(parts)] }];
+    }),
   };
+}
+
+/** The plies of the stretch at x. */
+function plyStretchAt(stretches: PlyStretch[], x: number): PlyStretch {
+  return stretches.find((s) => x >= s.x0 && x < s.x1) ?? stretches[stretches.length - 1]!;
 }
 
 /** A fastening's provided schedule moved along the member by dx (into a joint's own coordinate). */
@@ -343,12 +384,12 @@ function shiftProvided(fastening: JobDocument["fastening"]["default"], dx: numbe
 }
 
 /** Member checks stretch by stretch, where the section changes along the member; the worst stretch of each check stands. */
-function steppedChecks(job: JobDocument, stretches: ReturnType<typeof sectionStretches>, beam: BeamAnalysis, stiffness: Parameters<typeof memberChecks>[4]) {
+function steppedChecks(job: JobDocument, stretches: ReturnType<typeof sectionStretches>, beam: BeamAnalysis, stiffness: Parameters<typeof memberChecks>[4], plyStretches: PlyStretch[] | null) {
   const worst = new Map<string, MemberCheck>();
   const notChecked = new Set<string>();
   stretches.forEach((s, i) => {
     const label = `${inJobUnits(s.x0, "span", job.units)}–${inJobUnits(s.x1, "span", job.units)}`;
-    const part = memberChecks(job, s.section, beam, stressProfile(s.section), stiffness, { from: s.x0, to: s.x1, label }, i === 0);
+    const part = memberChecks(job, s.section, beam, stressProfile(s.section), stiffness, { from: s.x0, to: s.x1, label }, i === 0, plyStretches?.[i]!.plies ?? null);
     for (const c of part.checks) {
       const before = worst.get(c.id);
       if (!before || c.utilisation > before.utilisation) worst.set(c.id, c);

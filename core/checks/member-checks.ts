@@ -15,6 +15,7 @@ export interface MemberChecks {
   notChecked: string[];
 }
 
+export const SUPPORT_BEARING = "Bearing at the supports and under point loads, and the supports' own connections.";
 const BENDING = "σ = n·M·y/I (elastic bending of the transformed section)";
 const SHEAR = "τ = V·Q/(I·t) (elastic shear stress, averaged over the width at each level)";
 const PLY_BENDING = "σ_j = s_j·M·c_j/I_j, s_j = E_j I_j/Σ E I (each side-by-side ply on its share of the moment)";
@@ -92,7 +93,7 @@ export function memberChecks(
   }
   notChecked.push(
     "Lateral-torsional stability and lateral bracing of the compression edge.",
-    "Bearing at the supports and under point loads, and the supports' own connections.",
+    SUPPORT_BEARING,
     "Local buckling of thin plates and webs, and web crippling.",
     "Fire resistance, vibration and dynamic response.",
     "Splices and end joints within any part, holes and notches.",

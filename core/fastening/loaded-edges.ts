@@ -2,7 +2,7 @@ import type { BeamAnalysis } from "../beam/analyse-beam.js";
 import { poly } from "../beam/member-actions.js";
 import type { JobDocument } from "../schema/job.js";
 import type { SectionModel } from "../section/section-model.js";
-import { interfaceDemand, type MultiPly } from "./side-load-transfer.js";
+import { interfaceDemand, type MultiPly, type PlyStretch } from "./side-load-transfer.js";
 
 export type LoadedEdge = "top" | "bottom";
 
@@ -20,12 +20,13 @@ export type LoadedEdge = "top" | "bottom";
  * along the member in any combination counts, so an edge loaded anywhere is loaded (both where the
  * force reverses; both when nothing passes, as it cannot be told).
  */
-export function loadedEdgesOf(job: JobDocument, beam: BeamAnalysis, plies: MultiPly, interfaces: number[], section: SectionModel): { edges: LoadedEdge[]; note: string } {
+export function loadedEdgesOf(job: JobDocument, beam: BeamAnalysis, stretches: PlyStretch[], plies: MultiPly, interfaces: number[], section: SectionModel, extent: { from: number; to: number } | null): { edges: LoadedEdge[]; note: string } {
   const timber = (id: string) => section.parts.find((p) => p.id === id)!.material.family !== "steel";
   const byPart = new Map<string, Set<LoadedEdge>>();
   for (const k of interfaces) {
-    const { positive, negative } = signsOf(interfaceDemand(job, beam, plies, k));
     const [left, right] = [plies.parts[k]!, plies.parts[k + 1]!];
+    // One interface at a time, so the force passed keeps its sign.
+    const { positive, negative } = signsOf(interfaceDemand(job, beam, stretches, [{ a: left, b: right }], extent));
     const mark = (id: string, edge: LoadedEdge) => {
       if (!timber(id)) return;
       if (!byPart.has(id)) byPart.set(id, new Set());

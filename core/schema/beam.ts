@@ -101,6 +101,8 @@ export const Beam = z.strictObject({
   loads: z.array(Load).max(200, "at most 200 loads"),
   /** Adds the parts' own weight as a dead load. */
   selfWeight: z.boolean().default(true),
+  /** Length of each support's bearing along the member, for bearing perpendicular to the grain; 3 in (76.2 mm) when absent. */
+  bearingLength: positive("length").optional(),
   categories: z.array(UserLoadCategory).max(8, "at most 8 categories of your own").default([]),
   /**
    * EN 1995-1-1 load-duration class of wind (and of categories acting as wind without a duration of their

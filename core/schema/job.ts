@@ -24,6 +24,8 @@ export const Material = z.strictObject({
       shear: positive("stress").optional(),
       /** Rolling shear, where cross-layers of a panel meet a bond line. */
       rollingShear: positive("stress").optional(),
+      /** Compression perpendicular to the grain (F_c⊥, f_c,90), for bearing of timber plies at the supports. */
+      compressionPerp: positive("stress").optional(),
     })
     .default({}),
   /** Timber: specific gravity G (oven-dry), for dowel bearing strength under the NDS. */

@@ -432,12 +432,16 @@ export const DesignResult = z.object({
   member: z.object({ mark: z.string(), description: z.string(), revision: z.string(), date: z.string().optional() }),
   status: z.object({ passes: z.boolean(), summary: z.string(), failures: z.array(z.string()) }),
   section: SectionResult,
-  /** Side-by-side plies (any depths, mid-depths at one level): each ply's share of a load by E·I, and the fraction of a unit load each interface passes, by the face it arrives on. */
+  /** Side-by-side plies (any depths and levels): each ply's share of a load by E·I, and the fraction of a unit load each interface passes, by the face it arrives on. */
   multiPly: z
     .object({
       /** bearsTopLoad: the ply reaches the top of the member, so loads on top bear on it (shallower plies, such as a flitch plate within the timber's depth, take theirs through the connectors). */
       plies: z.array(z.object({ part: z.string(), share: z.number(), bearsTopLoad: z.boolean() })),
       interfaces: z.array(z.object({ between: z.tuple([z.string(), z.string()]), joint: z.string().nullable(), fromLeftFace: z.number(), fromRightFace: z.number(), fromTop: z.number() })),
+      /** Where plies start or stop along the member: each stretch's plies and their E·I shares there (empty for one section). */
+      stretches: z.array(z.object({ from: q("span"), to: q("span"), plies: z.array(z.object({ part: z.string(), share: z.number() })) })).optional(),
+      /** Each load of the job (by its index in beam.loads) and the plies it was applied on: its face, and the parts that take it there. */
+      loads: z.array(z.object({ load: z.number().int(), face: z.enum(["top", "left", "right"]), plies: z.array(z.string()) })).optional(),
     })
     .nullable(),
   /** Rigid and slip-aware composite action side by side (EN 1995-1-1 Annex B), or why the γ-method does not apply. */

@@ -291,11 +291,28 @@ describe("plies of different depths", () => {
     expectClose(t.interfaces[1]!.force, -sp / 2, { rel: 1e-12 }, "T_2 = −s_p/2");
   });
 
-  test("a plate flush with the top of the timber (mid-depths not at one level) is not taken as plies sharing by E·I: the transfer is listed as not checked", () => {
+  test("a plate flush with the top of the timber (mid-depths not at one level) shares by E·I about its own axis (no composite action between plies): a load on top bears on all three by thickness; each line passes |1.5/3.5 − s_t|·q; the deflection is that of Σ E·I [D]", () => {
     const job = flitchUs([{ type: "uniform", category: "dead", w: 600 }]);
-    (job.parts[1] as { place: Record<string, unknown> }).place.align = "end";
+    // Explicit positions, in: timber 0–11.25 deep either side, the 11 in plate from 0.25 to 11.25 (flush with the top).
+    job.parts = [
+      { ...job.parts[0]!, x: 0, y: 0 },
+      { id: "plate", material: "PL", shape: { type: "rectangle", b: 0.5, h: 11 }, x: 1.5, y: 0.25 },
+      { id: "right", material: "DF", shape: { type: "lumber", nominal: "2x12", orientation: "edge" }, x: 2, y: 0 },
+    ] as JobInput["parts"];
     const result = run(job);
-    expect(result.multiPly).toBeNull();
-    expect(result.notChecked.some((n) => n.includes("mid-depths are not at one level"))).toBe(true);
+    expect(result.multiPly).not.toBeNull();
+    expectClose(result.multiPly!.plies.find((p) => p.part === "plate")!.share, plateShare, { rel: 1e-9 });
+    expect(result.multiPly!.plies.map((p) => p.bearsTopLoad)).toEqual([true, true, true]);
+    const s = result.schedules.find((x) => x.joint === "plate")!;
+    const toNmm = 4.4482216152605 / 25.4;
+    const st = (1 - plateShare) / 2;
+    const mid = result.beam.stations.findIndex((x) => x > 2000 && x < 2200);
+    expectClose(s.shearFlow[mid]!, (1.5 / 3.5 - st) * 50 * toNmm, { rel: 1e-9 }, "per-line transfer along the span, N/mm");
+    // Deflection of a simple span, 5wL⁴/(384 Σ E I), w = 50 lb/in, L = 168 in: 0.2343 in [D].
+    const delta = (5 * 50 * 168 ** 4) / (384 * (EIp + 2 * EIt));
+    expectClose(delta, 0.23431, { rel: 1e-4 }, "δ, in");
+    expectClose(result.checks.find((c) => c.id === "deflection-total")!.demand, delta * 25.4, { rel: 1e-6 }, "δ, mm");
+    expect(result.status.failures.some((f) => f.startsWith("Contact line"))).toBe(false);
+    expect(result.assumptions.some((a) => a.includes("no composite action between the plies"))).toBe(true);
   });
 });

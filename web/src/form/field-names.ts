@@ -81,6 +81,8 @@ const names: Record<string, FieldName> = {
   yieldStrength: { label: "Yield strength F_y" },
   "material.tensileStrength": { label: "Tensile strength F_u" },
   rollingShear: { label: "Rolling shear strength" },
+  compressionPerp: { label: "Compression ⊥ grain", hint: "F_c⊥ / f_c,90: bearing of plies at the supports." },
+  bearingLength: { label: "Bearing length at supports", hint: "3 in (76.2 mm) when empty." },
   // Shapes
   b: { label: "b" },
   h: { label: "h" },
