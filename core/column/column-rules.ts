@@ -176,7 +176,8 @@ export function sameFaces(l: Laminations): boolean {
 
 /** A column check in the shape of the member checks. */
 export function columnCheck(id: string, title: string, demand: number, capacity: number, quantity: MemberCheck["quantity"], combination: string, at: number | null, reference: string): MemberCheck {
-  const utilisation = capacity > 0 ? demand / capacity : Infinity;
+  // Finite however small the capacity: a result holds no infinities (core/finite-verdict.ts); still a failure.
+  const utilisation = capacity > 0 ? Math.min(demand / capacity, 1e12) : demand > 0 ? 1e12 : 0;
   return { id, title, demand, capacity, utilisation, passes: utilisation <= 1 + 1e-9, combination, at, reference, quantity } as MemberCheck;
 }
 

@@ -137,7 +137,8 @@ function design(c: ColumnJob): ColumnDesign {
       const x = axisData.find((k) => k.axis === "x")!;
       const cFibre = Math.max(c.section.bounds.y1 - c.section.centroidY, c.section.centroidY - c.section.bounds.y0);
       const fb = (act.moment * cFibre) / c.section.secondMoment;
-      interaction = fc >= x.FcE ? Infinity : (fc / (FcStar * CP)) ** 2 + fb / (fbStrength * (1 - fc / x.FcE));
+      // Where f_c reaches F_cE1 the member buckles in the plane of bending and eq. 3.9-3 has no meaning: f_c/F_cE1 (≥ 1) is reported.
+      interaction = fc >= x.FcE ? fc / x.FcE : (fc / (FcStar * CP)) ** 2 + fb / (fbStrength * (1 - fc / x.FcE));
     }
     return { act, CD, lambda, FcStar, CPs, CP, capacity, interaction, fc };
   });

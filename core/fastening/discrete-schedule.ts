@@ -400,7 +400,7 @@ function infeasibleReason(inf: NonNullable<ReturnType<typeof designSchedule>["in
 function requiredAt(stations: Station[], demand: ReturnType<typeof demandCurve>): (number | null)[] {
   return stations.map((s) => {
     const d = demand.at(s.x, s.side).value;
-    return d > 0 ? 1 / d : null;
+    return d > 0 && Number.isFinite(1 / d) ? 1 / d : null;
   });
 }
 
