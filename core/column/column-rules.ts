@@ -94,6 +94,12 @@ export interface ColumnRule {
   id: Compression["rule"];
   title: string;
   standard: string;
+  /**
+   * The rule's stiffness rests on the joints' spacing (the γ-method): the pipeline then tries greatest
+   * spacings from the joints' largest down and keeps the first under which the column's checks pass, as a
+   * cap on the schedule, so the spacing built never exceeds the one in γ.
+   */
+  spacingInStiffness?: boolean;
   /** Whether "auto" picks this rule for the job (materials, connectors, basis). */
   suits: (c: ColumnJob) => boolean;
   design: (c: ColumnJob) => ColumnDesign;

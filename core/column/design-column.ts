@@ -6,6 +6,7 @@ import type { JobDocument } from "../schema/job.js";
 import type { ColumnResult, Combination, Schedule } from "../schema/result.js";
 import type { SectionModel } from "../section/section-model.js";
 import { allowedSpacings } from "../spacing/allowed-spacings.js";
+import { inJobUnits } from "../units/format.js";
 import { columnActions, columnAxis, type ColumnJob, type ColumnJoint, type ColumnRule } from "./column-rules.js";
 import { ec5MechanicallyJointed } from "./ec5-mechanically-jointed.js";
 import { ndsBuiltUp } from "./nds-built-up.js";
@@ -61,7 +62,7 @@ export function designColumn(p: {
         : `the rule "${compression.rule}" is not available in this version.`;
     return { rule: compression.rule, title: "Built-up column", standard: "", applies: false, reason, conditions: [], height, axes: [], combinations: [], governing: "", checks: [], joints: [], steps: [], notes: [] };
   }
-  const design = named.design(c);
+  const design = named.spacingInStiffness ? designWithCap(named, c, p.runs) : named.design(c);
   const resultJoints: ColumnResult["joints"] = [];
   for (const demand of design.joints) {
     const prepared = p.prepared.find((x) => x.joint.id === demand.joint)!;
@@ -80,7 +81,7 @@ export function designColumn(p: {
       rowsProvided,
       bucklingShear: demand.bucklingShear ? Math.max(...demand.bucklingShear) : null,
       bucklingFlow: demand.bucklingFlow ? Math.max(...demand.bucklingFlow) : null,
-      governs: governing(schedule, demand.bucklingFlow !== null, named.standard),
+      governs: governing(schedule, demand.bucklingFlow !== null, named.spacingInStiffness ? "the spacing taken in γ for the column's (EI)_ef" : `${named.standard} allows (prescriptive)`),
       notes: demand.notes,
       sources: demand.limits?.sources ?? [],
     });
@@ -108,10 +109,36 @@ function bucklingDemand(input: JointInput, s: Schedule, flows: number[], addsToL
 }
 
 /** What set a joint's spacing: the rule's greatest spacing everywhere, or the shear flow somewhere. */
-function governing(s: Schedule, buckling: boolean, standard: string): string {
+function governing(s: Schedule, buckling: boolean, greatest: string): string {
   const allowed = allowedSpacings({ module: s.limits.module, preferred: s.limits.preferred, min: s.limits.minSpacing, max: s.limits.maxSpacing });
   const largest = allowed.length > 0 ? Math.max(...allowed) : s.limits.maxSpacing;
   const closer = s.zones.filter((z) => z.spacing < largest * (1 - 1e-9));
-  if (closer.length === 0) return `the greatest spacing ${standard} allows (prescriptive) governs along the whole column`;
-  return `the shear flow of the ${buckling ? "lateral load and the buckling shear" : "lateral load"} governs in ${closer.length} of ${s.zones.length} zone(s), closer than the greatest spacing ${standard} allows`;
+  if (closer.length === 0) return `the greatest spacing, ${greatest}, governs along the whole column`;
+  return `the shear flow of the ${buckling ? "lateral load and the buckling shear" : "lateral load"} governs in ${closer.length} of ${s.zones.length} zone(s), closer than the greatest spacing (${greatest})`;
+}
+
+/**
+ * A rule whose stiffness rests on the spacing: the greatest spacing tried from each joint's largest
+ * (its lateral-load schedule) down the allowed spacings; the first under which every column check passes
+ * is kept (the least where none does) and becomes a cap on the joint's schedule.
+ */
+function designWithCap(rule: ColumnRule, c: ColumnJob, runs: Map<string, Run>): ReturnType<ColumnRule["design"]> {
+  const first = c.joints[0] ? runs.get(c.joints[0].id)?.schedule : undefined;
+  if (!first || c.joints.some((j) => j.spacing === null)) return rule.design(c);
+  const top = Math.max(...c.joints.map((j) => j.spacing!));
+  const l = first.limits;
+  const caps = allowedSpacings({ module: l.module, preferred: l.preferred, min: l.minSpacing, max: top }).filter((s) => s <= top * (1 + 1e-9)).sort((a, b) => b - a);
+  if (caps.length === 0) return rule.design(c);
+  const at = (cap: number) => rule.design({ ...c, joints: c.joints.map((j) => ({ ...j, spacing: Math.min(j.spacing!, cap) })) });
+  let chosen = caps[caps.length - 1]!;
+  let design = at(chosen);
+  for (const cap of caps) {
+    const d = at(cap);
+    if (d.applies && d.checks.every((k) => k.passes)) {
+      [chosen, design] = [cap, d];
+      break;
+    }
+  }
+  const source = `greatest spacing ${inJobUnits(chosen, "length", c.job.units)}: the spacing in γ of the column's (EI)_ef (EN 1995-1-1 Annex B, C.2.1 [M])`;
+  return { ...design, joints: design.joints.map((j) => ({ ...j, limits: { ...(j.limits ?? { sources: [] }), maxSpacing: Math.min(j.limits?.maxSpacing ?? Infinity, chosen), sources: [...(j.limits?.sources ?? []), source] } })) };
 }

@@ -26,6 +26,7 @@ export const ec5MechanicallyJointed: ColumnRule = {
   id: "en1995-annex-c",
   title: "Mechanically jointed column",
   standard: "EN 1995-1-1 Annex C",
+  spacingInStiffness: true,
   suits: (c) => c.joints.length > 0 && c.joints.every((j) => "standard" in j.connector && j.connector.standard === "EN1995-1-1"),
   design: (c) => design(c),
 };
@@ -174,6 +175,6 @@ function design(c: ColumnJob): ColumnDesign {
       step("f_c,0,d", "k_mod·f_c,0,k/γ_M", gov.fcd, "stress"),
       step("V_d", "eq. (C.5)", gov.Vd, "force", REF),
     ],
-    notes: [...base.notes, `E_0,05 ${E05given ? "as given" : "from E_0,mean (0.67 solid softwood, 0.83 glulam) [M]"}; γ from the joints' largest spacing before the buckling shear was added (the least γ, so the least k_c and the largest V_d) [CP].`],
+    notes: [...base.notes, `E_0,05 ${E05given ? "as given" : "from E_0,mean (0.67 solid softwood, 0.83 glulam) [M]"}; γ from the greatest spacing the joints' schedules are held to (every spacing built is no larger, so γ, k_c and V_d are on the safe side) [CP].`],
   };
 }

@@ -5,6 +5,7 @@ import { prepareJob } from "../../../core/check-job.js";
 import { ec5BucklingFactor, ec5ImperfectionShear } from "../../../core/column/ec5-mechanically-jointed.js";
 import { designMember } from "../../../core/design-member.js";
 import type { JobInput } from "../../../core/schema/job.js";
+import { nailedEc5Column } from "./ec5-column-job.js";
 
 const LBF = 4.4482216152605;
 const IN = 25.4;
@@ -136,5 +137,45 @@ describe("built-up columns through designMember (properties)", () => {
     const [a, b] = [design(base).column!, design(swapped).column!];
     expect(b.combinations.map((c) => c.capacity)).toEqual(a.combinations.map((c) => c.capacity));
     expect(b.combinations.map((c) => c.interaction)).toEqual(a.combinations.map((c) => c.interaction));
+  });
+});
+
+describe("EN 1995-1-1 Annex C through designMember: nailed three-ply C24 column", () => {
+  const r = design(nailedEc5Column());
+  const col = r.column!;
+  const value = (symbol: string) => col.steps.find((s) => s.symbol === symbol)!.value;
+  it("λ_ef from the γ of Annex B (B.1) with l = l_ef, by hand [D]", () => {
+    expect(col.applies).toBe(true);
+    const gamma = value("γ (top)");
+    // Plies 45 × 145 mm side by side: about y each ply's own I = 145·45³/12, the outer plies at a = 45 mm (B.1).
+    const E = 11_000;
+    const A = 45 * 145;
+    const EIef = E * (3 * ((145 * 45 ** 3) / 12) + 2 * gamma * A * 45 ** 2);
+    expect(value("(EI)_ef") / EIef).toBeCloseTo(1, 9);
+    const lambdaEf = 3000 * Math.sqrt((3 * A) / (EIef / E)); // (C.1), (C.2)
+    expect(value("λ_ef")).toBeCloseTo(lambdaEf, 6);
+    // k_c from λ_rel = (λ/π)·√(f_c,0,k/E_0,05), β_c = 0.2 (6.21–6.29) [M]
+    const lrel = (lambdaEf / Math.PI) * Math.sqrt(21 / 7_400);
+    const k = 0.5 * (1 + 0.2 * (lrel - 0.3) + lrel ** 2);
+    const kc = 1 / (k + Math.sqrt(k * k - lrel ** 2));
+    expect(col.axes.find((a) => a.axis === "y")!.stability).toBeCloseTo(kc, 9);
+    // V_d for λ_ef ≥ 60: F_c,d/(60·k_c) (C.5); F_c,d = 1.35·8 + 1.5·10 kN (EN 1990 eq. 6.10 [M])
+    expect(value("V_d")).toBeCloseTo((1.35 * 8000 + 1.5 * 10_000) / (60 * kc), 6);
+  });
+  it("the schedules carry the buckling shear within the spacing taken in γ", () => {
+    expect(r.status.passes).toBe(true);
+    for (const s of r.schedules) {
+      expect(s.limits.sources.some((x) => x.includes("spacing in γ"))).toBe(true);
+      expect(s.zones.every((z) => z.spacing <= s.limits.maxSpacing + 1e-9)).toBe(true);
+    }
+    const flow = col.joints[0]!.bucklingFlow!;
+    expect(flow).toBeGreaterThan(0);
+  });
+  it("more axial load never fewer connectors", () => {
+    const count = (x: ReturnType<typeof design>) => x.schedules.reduce((s, k) => s + k.count, 0);
+    fc.assert(
+      fc.property(fc.integer({ min: 1, max: 10 }), fc.integer({ min: 1, max: 5 }), (snow, more) => count(design(nailedEc5Column({ dead: 8, snow: snow + more }))) >= count(design(nailedEc5Column({ dead: 8, snow })))),
+      { numRuns: 8 },
+    );
   });
 });
