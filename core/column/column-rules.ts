@@ -78,6 +78,8 @@ export interface ColumnJointDemand {
   bucklingFlow: number[] | null;
   /** The buckling shear itself per combination, N. */
   bucklingShear: number[] | null;
+  /** Detailing the joint's connectors break under the rule (they fail the joint's schedule). */
+  problems?: string[];
   /** Whether the lateral load's shear flow adds to the buckling shear at this joint (both about one axis). */
   addsToLateral: boolean;
   notes: string[];

@@ -74,6 +74,7 @@ export function designColumn(p: {
     if (demand.rowsRequired && rowsProvided < demand.rowsRequired.rows) {
       schedule = { ...schedule, passes: false, detailingProblems: [...schedule.detailingProblems, `${rowsProvided} row(s) of connectors across the lamination, but ${demand.rowsRequired.reason}: set the fastening's rows to ${demand.rowsRequired.rows}`] };
     }
+    if (demand.problems && demand.problems.length > 0) schedule = { ...schedule, passes: false, detailingProblems: [...schedule.detailingProblems, ...demand.problems] };
     p.runs.set(demand.joint, { ...run, schedule });
     resultJoints.push({
       joint: demand.joint,
@@ -81,7 +82,7 @@ export function designColumn(p: {
       rowsProvided,
       bucklingShear: demand.bucklingShear ? Math.max(...demand.bucklingShear) : null,
       bucklingFlow: demand.bucklingFlow ? Math.max(...demand.bucklingFlow) : null,
-      governs: governing(schedule, demand.bucklingFlow !== null, named.spacingInStiffness ? "the spacing taken in γ for the column's (EI)_ef" : `${named.standard} allows (prescriptive)`),
+      governs: governing(schedule, demand.bucklingFlow !== null, named.spacingInStiffness ? "taken in γ for the column's (EI)_ef" : `that ${named.standard} allows (prescriptive)`),
       notes: demand.notes,
       sources: demand.limits?.sources ?? [],
     });
@@ -113,8 +114,8 @@ function governing(s: Schedule, buckling: boolean, greatest: string): string {
   const allowed = allowedSpacings({ module: s.limits.module, preferred: s.limits.preferred, min: s.limits.minSpacing, max: s.limits.maxSpacing });
   const largest = allowed.length > 0 ? Math.max(...allowed) : s.limits.maxSpacing;
   const closer = s.zones.filter((z) => z.spacing < largest * (1 - 1e-9));
-  if (closer.length === 0) return `the greatest spacing, ${greatest}, governs along the whole column`;
-  return `the shear flow of the ${buckling ? "lateral load and the buckling shear" : "lateral load"} governs in ${closer.length} of ${s.zones.length} zone(s), closer than the greatest spacing (${greatest})`;
+  if (closer.length === 0) return `the greatest spacing ${greatest} governs along the whole column`;
+  return `the shear flow of the ${buckling ? "lateral load and the buckling shear" : "lateral load"} governs in ${closer.length} of ${s.zones.length} zone(s), closer than the greatest spacing ${greatest}`;
 }
 
 /**

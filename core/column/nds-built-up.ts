@@ -167,9 +167,18 @@ function design(c: ColumnJob): ColumnDesign {
     `row spacing ${len(rules.rowSpacing[0]!)} to ${len(rules.rowSpacing[1]!)} (${fastener.kind === "nailed" ? "10D to 20D" : "1.5D to 10D"}): ${rules.clause} [M]`,
     `edge distance ${len(rules.edge[0]!)} to ${len(rules.edge[1]!)} (${fastener.kind === "nailed" ? "5D to 20D" : "1.5D to 10D"}): ${rules.clause} [M]`,
     `${rules.rows} row(s) across the ${len(depth)} face${rules.deep ? ` (two or more where the lamination is deeper than 3·t = ${len(3 * tMin)})` : ""}: ${rules.clause} [M]`,
-    ...(fastener.kind === "nailed" ? [`adjacent nails driven from opposite faces, each through its lamination and at least 3/4 of the thickness of the next: ${rules.clause} [M]`] : [`a washer under each head and nut: ${rules.clause} [M]`]),
+    ...(fastener.kind === "nailed" ? [`adjacent nails driven from opposite faces, each through every lamination and at least 3/4 of the way into the last: ${rules.clause} [M]`] : [`a washer under each head and nut: ${rules.clause} [M]`]),
   ];
+  // Nails from either face pass every lamination and reach 3/4 into the last (§15.3.3 [M]).
+  const outer = Math.min(l.thicknesses[0]!, l.thicknesses[l.thicknesses.length - 1]!);
+  const nailReach = l.total - outer / 4;
+  const problems = (j: ColumnJob["joints"][number]) => {
+    if (fastener.kind !== "nailed" || j.connector.kind !== "nail") return [];
+    const length = nailDimensions(j.connector).length;
+    return fallsShort(length, nailReach) ? [`a nail ${len(length)} long does not pass every lamination and reach 3/4 into the last from either face: it needs ${len(nailReach)} (${rules.clause} [M]); use longer nails or bolts`] : [];
+  };
   const joints: ColumnJointDemand[] = c.joints.map((j) => ({
+    problems: problems(j),
     joint: j.id,
     limits: { minSpacing: rules.spacing[0]!, maxSpacing: rules.spacing[1]!, endDistance: rules.end[0]!, edgeDistance: rules.edge[0]!, rowSpacing: rules.rowSpacing[0]!, acrossReplaces: true, sources },
     rowsRequired: { rows: rules.rows, reason: `${rules.clause} [M]: ${rules.rows} row(s) across a ${len(depth)} lamination` },
@@ -226,6 +235,7 @@ function design(c: ColumnJob): ColumnDesign {
       ...base.notes,
       `The laminations' joints weaken buckling about the ${l.jointedAxis} axis: K_f = ${Kf} there, 1 about the other (NDS-2018 §15.3.2 [M]).`,
       "The section's I is that of the transformed section; E·I and the Euler load use E_min'. The stiffness of the whole stack enters NDS only through l_e/d and K_f.",
+      "Each interface's schedule is given on its own; a nail or bolt through every lamination (as §15.3 asks) serves each interface it crosses, so the counts are on the safe side where rows of two interfaces fall at one station.",
     ],
   };
 }

@@ -47,7 +47,7 @@ describe("NDS-2018 §15.3 nailed laminations: three-ply 2x6 stud pack", () => {
     expect(col.axes.find((a) => a.axis === "y")!.euler / LBF).toBeCloseTo((Math.PI ** 2 * 510_000 * I) / 108 ** 2, 2);
   });
   it("nailing by §15.3.3 [M]: 6·t greatest spacing, 15D end distance, two rows on a 5.5 in face", () => {
-    const D = 0.148; // 10d common, ASTM F1667 [M]
+    const D = 0.207; // 30d common, ASTM F1667 [M]
     for (const s of r.schedules) {
       expect(s.limits.maxSpacing / IN).toBeCloseTo(6 * 1.5, 6);
       expect(s.limits.minSpacing / IN).toBeCloseTo(20 * D, 6);
@@ -56,6 +56,12 @@ describe("NDS-2018 §15.3 nailed laminations: three-ply 2x6 stud pack", () => {
       expect(s.zones.every((z) => z.spacing <= 9 * IN + 1e-6)).toBe(true);
     }
     expect(col.joints.every((j) => j.rowsRequired === 2)).toBe(true); // 5.5 in > 3·1.5 in
+  });
+  it("a nail that does not pass every lamination and 3/4 into the last fails the joint (§15.3.3 [M])", () => {
+    const job = example("stud-pack-wind.us.json");
+    (job.connectors[0] as { size: string }).size = "20d common"; // 4 in < 4.5 − 1.5/4 = 4.125 in [D]
+    const out = design(job);
+    expect(out.schedules.every((s) => !s.passes && s.detailingProblems.some((p) => p.includes("3/4 into the last")))).toBe(true);
   });
   it("checks wind and axial load together by eq. 3.9-3 [M]", () => {
     expect(r.checks.some((c) => c.id === "column-interaction")).toBe(true);
