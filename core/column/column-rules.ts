@@ -185,9 +185,14 @@ export function sameFaces(l: Laminations): boolean {
 /** A column check in the shape of the member checks. */
 export function columnCheck(id: string, title: string, demand: number, capacity: number, quantity: MemberCheck["quantity"], combination: string, at: number | null, reference: string): MemberCheck {
   // Finite however small the capacity: a result holds no infinities (core/finite-verdict.ts); still a failure.
-  const utilisation = capacity > 0 ? Math.min(demand / capacity, 1e12) : demand > 0 ? 1e12 : 0;
+  const ratio = capacity > 0 ? demand / capacity : demand > 0 ? 1e12 : 0;
+  const utilisation = Number.isFinite(ratio) ? Math.min(ratio, 1e12) : 1e12;
+  if (!Number.isFinite(demand)) demand = 1e12 * Math.max(capacity, 1);
   return { id, title, demand, capacity, utilisation, passes: utilisation <= 1 + 1e-9, combination, at, reference, quantity } as MemberCheck;
 }
 
 export const step = (symbol: string, description: string, value: number, quantity: WorkingLine["quantity"], reference?: string): WorkingLine =>
   ({ symbol, description, value, quantity, ...(reference ? { reference } : {}) }) as WorkingLine;
+
+/** An interaction ratio kept finite (a result holds no infinities): a huge one still fails. */
+export const finiteInteraction = (x: number | null) => ({ interaction: x === null ? null : Number.isFinite(x) ? Math.min(x, 1e12) : 1e12 });

@@ -43,7 +43,7 @@ export function designColumn(p: {
   const joints: ColumnJoint[] = p.prepared.flatMap(({ joint, input }) => {
     const s = p.runs.get(joint.id)?.schedule;
     if (!s) return [];
-    return [{ id: joint.id, connector: input.connector, rows: input.fastening.rows, lines: joint.lines, spacing: Math.max(...s.zones.map((z) => z.spacing)), resistance: s.resistance.map((r) => r.value), slip: s.resistance[0]?.slip ?? null }];
+    return [{ id: joint.id, connector: input.connector, rows: input.fastening.rows, lines: joint.lines, spacing: s.zones.length > 0 ? Math.max(...s.zones.map((z) => z.spacing)) : null, resistance: s.resistance.map((r) => r.value), slip: s.resistance[0]?.slip ?? null }];
   });
   const c: ColumnJob = {
     job: p.job,

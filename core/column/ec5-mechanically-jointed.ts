@@ -3,7 +3,7 @@ import { rectangularLayer, type FlangeName, type JointedSection } from "../compo
 import { ec5DurationOf, ec5Kmod } from "../connector/timber/ec5-factors.js";
 import type { ColumnResult, MemberCheck } from "../schema/result.js";
 import { inJobUnits } from "../units/format.js";
-import { columnCheck, step, type Axis, type ColumnDesign, type ColumnJob, type ColumnJointDemand, type ColumnRule } from "./column-rules.js";
+import { columnCheck, finiteInteraction, step, type Axis, type ColumnDesign, type ColumnJob, type ColumnJointDemand, type ColumnRule } from "./column-rules.js";
 import { solidSecondMoment, timberLaminations } from "./timber-laminations.js";
 
 const REF = "EN 1995-1-1 Annex C [M]";
@@ -160,7 +160,7 @@ function design(c: ColumnJob): ColumnDesign {
       euler: (Math.PI ** 2 * x.stiffness) / x.a.effectiveLength ** 2,
       stability: x.kc,
     })),
-    combinations: per.map((p) => ({ combination: p.act.combination.id, axial: p.act.axial, moment: p.act.moment, strength: p.fcd, stability: p.kc, capacity: p.capacity, interaction: p.interaction })),
+    combinations: per.map((p) => ({ combination: p.act.combination.id, axial: p.act.axial, moment: p.act.moment, ...finiteInteraction(p.interaction), strength: p.fcd, stability: p.kc, capacity: p.capacity })),
     governing: gov.act.combination.id,
     checks,
     joints,

@@ -5,7 +5,7 @@ import { ndsLoadDurationFactor } from "../connector/timber/nds-adjustment.js";
 import type { ColumnResult, MemberCheck } from "../schema/result.js";
 import { inJobUnits } from "../units/format.js";
 import { exceeds, fallsShort } from "../units/limits.js";
-import { columnCheck, step, type Axis, type ColumnDesign, type ColumnJob, type ColumnJointDemand, type ColumnRule } from "./column-rules.js";
+import { columnCheck, finiteInteraction, step, type Axis, type ColumnDesign, type ColumnJob, type ColumnJointDemand, type ColumnRule } from "./column-rules.js";
 import { solidSecondMoment, timberLaminations, type Condition } from "./timber-laminations.js";
 
 const REF = "NDS-2018 §15.3 [M]";
@@ -226,7 +226,7 @@ function design(c: ColumnJob): ColumnDesign {
       euler: (Math.PI ** 2 * EminPrime * x.I) / x.a.effectiveLength ** 2,
       stability: gov.CPs[i]!,
     })),
-    combinations: per.map((p) => ({ combination: p.act.combination.id, axial: p.act.axial, moment: p.act.moment, strength: p.FcStar, stability: p.CP, capacity: p.capacity, interaction: p.interaction })),
+    combinations: per.map((p) => ({ combination: p.act.combination.id, axial: p.act.axial, moment: p.act.moment, ...finiteInteraction(p.interaction), strength: p.FcStar, stability: p.CP, capacity: p.capacity })),
     governing: gov.act.combination.id,
     checks,
     joints,
