@@ -68,7 +68,11 @@ export function designColumn(p: {
     const prepared = p.prepared.find((x) => x.joint.id === demand.joint)!;
     const before = p.runs.get(demand.joint)!.schedule!;
     const extraDemand = demand.bucklingFlow ? bucklingDemand(prepared.input, before, demand.bucklingFlow, demand.addsToLateral, height) : undefined;
-    const run = p.rerun(demand.joint, { ...(demand.limits ? { columnLimits: demand.limits } : {}), ...(extraDemand ? { extraDemand } : {}) });
+    // The rule's distances across the face stand for the connector's only where nothing passes across the plies
+    // (no face load): a connector loaded across the grain keeps its own loaded-edge distances.
+    const loadedAcross = before.shearFlow.some((q) => q > 0);
+    const limits = demand.limits && loadedAcross && demand.limits.acrossReplaces ? { ...demand.limits, acrossReplaces: false } : demand.limits;
+    const run = p.rerun(demand.joint, { ...(limits ? { columnLimits: limits } : {}), ...(extraDemand ? { extraDemand } : {}) });
     let schedule = run.schedule!;
     const rowsProvided = schedule.rows;
     if (demand.rowsRequired && rowsProvided < demand.rowsRequired.rows) {
