@@ -185,3 +185,35 @@ describe("EN 1995-1-1 Annex C through designMember: nailed three-ply C24 column"
     );
   });
 });
+
+describe("NDS-2018 §15.3: loads, bracing and basis", () => {
+  it("an eccentric load adds P·e at the top (the member's right end), nothing at the base [D]", () => {
+    const job = example("girder-truss-post.us.json");
+    job.compression!.loads[1]!.eccentricity = 1.5; // in
+    const col = design(job).column!;
+    const asd3 = col.combinations.find((c) => c.combination === "ASD-3")!;
+    expect(asd3.moment / (LBF * IN)).toBeCloseTo(0.7 * 4200 * 1.5, 6); // ASCE/SEI 7-22 ASD-3: D + 0.7S [V]
+    expect(asd3.interaction).not.toBeNull();
+  });
+  it("a brace at mid-height about y halves l_e there: C_P by hand with l_e = 48 in", () => {
+    const job = example("girder-truss-post.us.json");
+    job.compression!.y = { ends: "pinned-pinned", bracedAt: [4] };
+    const col = design(job).column!;
+    const y = col.axes.find((a) => a.axis === "y")!;
+    expect(y.effectiveLength / IN).toBeCloseTo(48, 9);
+    const FcStar = 1485 * 1.15;
+    expect(y.stability).toBeCloseTo(cp((0.822 * 580_000) / (48 / 6) ** 2, FcStar, 0.8, 0.75), 9);
+  });
+  it("on the factored basis F_c* = F_c·K_F·φ_c·λ and E_min' = E_min·1.76·0.85 (NDS-2018 Tables N1–N3 [M])", () => {
+    const job = example("girder-truss-post.us.json");
+    job.basis = "factored";
+    job.combinations = { set: "asce7-22-strength" };
+    const col = design(job).column!;
+    const c2 = col.combinations.find((c) => c.combination.startsWith("LRFD-1"))!; // 1.4D: λ = 0.6
+    const FcStar = 1485 * 2.4 * 0.9 * 0.6;
+    expect(c2.strength / PSI).toBeCloseTo(FcStar, 6);
+    const Emin = 580_000 * 1.76 * 0.85;
+    const CP = Math.min(cp((0.822 * Emin) / 16 ** 2, FcStar, 0.8, 0.75), cp((0.822 * Emin) / (96 / 5.5) ** 2, FcStar, 0.8, 1));
+    expect(c2.capacity / LBF).toBeCloseTo(FcStar * CP * 33, 3);
+  });
+});
