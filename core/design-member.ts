@@ -47,7 +47,7 @@ export function designMember(input: JobDocument): DesignResult {
   const axialSelfWeight = input.compression && input.beam.selfWeight ? Math.max(...stretches.map((s) => selfWeightOf(s.section))) * length : 0;
   const axialCategories = [...(input.compression?.loads.filter((l) => l.P !== 0).map((l) => l.category) ?? []), ...(axialSelfWeight > 0 ? ["dead"] : [])];
   const combinationList = combinationSet(job.beam, job.combinations, job.beam.selfWeight ? Math.max(...stretches.map((s) => selfWeightOf(s.section))) : 0, axialCategories);
-  const beam = analyseBeam(job, stretches, combinationList.combinations);
+  const beam = analyseBeam(job, stretches, combinationList.combinations, axialCategories);
   const stations = stationsFor(beam.length, [...new Set(beam.results.flatMap((r) => r.actions.breaks))]);
   const profile = stressProfile(section);
   const plies = stepped ? null : multiPlyOf(section);

@@ -63,6 +63,10 @@ describe("NDS-2018 §15.3 nailed laminations: three-ply 2x6 stud pack", () => {
     const out = design(job);
     expect(out.schedules.every((s) => !s.passes && s.detailingProblems.some((p) => p.includes("3/4 into the last")))).toBe(true);
   });
+  it("passes as a whole: two rows of 30d nails fit the 5.5 in face by the distances of §15.3.3", () => {
+    expect(r.status.passes).toBe(true);
+    for (const s of r.schedules) expect(s.rowFit?.fits).toBe(true);
+  });
   it("checks wind and axial load together by eq. 3.9-3 [M]", () => {
     expect(r.checks.some((c) => c.id === "column-interaction")).toBe(true);
     expect(col.joints[0]!.governs).toMatch(/prescriptive|shear flow/);
@@ -79,6 +83,9 @@ describe("NDS-2018 §15.3 bolted laminations: four-ply 2x6 post", () => {
     const CP = Math.min(cp((0.822 * 580_000) / 16 ** 2, FcStar, 0.8, 0.75), cp((0.822 * 580_000) / (96 / 5.5) ** 2, FcStar, 0.8, 1));
     expect(col.combinations.find((c) => c.combination === "ASD-3")!.capacity / LBF).toBeCloseTo(FcStar * CP * 4 * 1.5 * 5.5, 3);
     expect(r.status.passes).toBe(true);
+    // Dead load alone: C_D = 0.9 (NDS-2018 Table 2.3.2 [M]); the combination keeps the axial load's category and duration.
+    expect(col.combinations.find((c) => c.combination === "ASD-1")!.strength / PSI).toBeCloseTo(1485 * 0.9, 6);
+    expect(r.beam.combinations.find((c) => c.id === "ASD-1")!.duration).toBe("permanent");
   });
   it("six laminations fall outside §15.3 and the result says so", () => {
     const job = example("girder-truss-post.us.json");
