@@ -144,6 +144,7 @@ export function designMember(input: JobDocument): DesignResult {
     standards.add(column.standard);
     if (axialSelfWeight > 0) assumptions.add("The column's self-weight (the whole member's) is an axial dead load, not a load across it.");
     assumptions.add("The column's base is the member's left end; axial loads act at its top, an eccentric one adding P·e there, falling linearly to nothing at the base.");
+    assumptions.add("The column's effective lengths come from its own end conditions, K_e and bracing (compression.x and .y), not from the beam's supports, which serve the lateral loads only: keep the two consistent.");
   }
 
   if (plies) {

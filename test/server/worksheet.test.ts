@@ -165,6 +165,7 @@ describe("renderWorksheet(job, result) on every example", () => {
     if (result.composite) expect(text).toContain("Composite action —");
     if (result.stretches.length > 0) expect(text).toContain("Section along the member");
     if (result.terminations.length > 0) expect(text).toContain("Ends of parts that stop short");
+    if (result.column) for (const heading of ["Built-up column:", ...(result.column.applies ? ["Buckling about", "Interaction"] : ["Not designed as a column"])]) expect(text).toContain(heading);
     expect(result.schedules.length + result.bondLines.length + result.welds.length).toBeGreaterThan(0);
 
     expect(text).toContain(run.job.member.mark);
