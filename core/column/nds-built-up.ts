@@ -6,9 +6,8 @@ import type { ColumnResult, MemberCheck } from "../schema/result.js";
 import { inJobUnits } from "../units/format.js";
 import { exceeds, fallsShort } from "../units/limits.js";
 import { columnCheck, finiteInteraction, step, type Axis, type ColumnDesign, type ColumnJob, type ColumnJointDemand, type ColumnRule } from "./column-rules.js";
-import { solidSecondMoment, timberLaminations, type Condition } from "./timber-laminations.js";
+import { solidSecondMoment, timberLaminations } from "./timber-laminations.js";
 
-const REF = "NDS-2018 §15.3 [M]";
 
 /**
  * C_P of NDS-2018 eq. 15.3-1 (§3.7.1 eq. 3.7-1 times K_f) [M]:
