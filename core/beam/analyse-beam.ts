@@ -68,7 +68,7 @@ export interface SectionStretch {
  * section changes along it (parts that start and stop) gives one stretch per section: its E·I steps
  * and its self-weight follows the parts present.
  */
-export function analyseBeam(job: JobDocument, stretches: SectionStretch[], combinations: Combination[]): BeamAnalysis {
+export function analyseBeam(job: JobDocument, stretches: SectionStretch[], combinations: Combination[], alsoPresent: readonly string[] = []): BeamAnalysis {
   const stepped = stretches.length > 1;
   return analyseMember({
     beam: job.beam,
@@ -78,6 +78,7 @@ export function analyseBeam(job: JobDocument, stretches: SectionStretch[], combi
     flexuralRigidity: Math.max(...stretches.map((s) => s.section.referenceModulus * s.section.secondMoment)),
     rigidity: stepped ? stretches.map((s) => ({ x0: s.x0, x1: s.x1, value: s.section.referenceModulus * s.section.secondMoment })) : null,
     serviceLoads: !(job.basis === "factored" && job.combinations.set === "unfactored"),
+    alsoPresent,
   });
 }
 
@@ -95,6 +96,8 @@ export interface MemberInput {
   rigidity?: RigidityStep[] | null;
   /** Whether the loads as entered are service (nominal) loads, so deflection can be checked. */
   serviceLoads: boolean;
+  /** Categories that load the member other than through the beam loads (a column's axial loads): a combination keeps them for its duration, C_D and λ. */
+  alsoPresent?: readonly string[];
 }
 
 /**
@@ -108,6 +111,7 @@ export function analyseMember(input: MemberInput): BeamAnalysis {
   const { length, regions } = model;
   const info = categoriesOf(beam);
   const present = presentCategories(beam, selfWeight);
+  const inCombination = new Set([...present, ...(input.alsoPresent ?? [])]);
   const byCategory = loadsByCategory(beam, input.selfWeightSteps ?? (selfWeight !== 0 ? [{ x0: 0, x1: length, value: selfWeight }] : []), length);
   const rigidity = input.rigidity ?? null;
   const patterned = regions.length > 1 ? beam.patternedCategories.filter((c) => present.has(c)) : [];
@@ -164,7 +168,7 @@ export function analyseMember(input: MemberInput): BeamAnalysis {
     const fixedTerms = Object.entries(base.factors).flatMap(([c, f]) => (whole.has(c) && f !== 0 ? [{ c: whole.get(c)!, f }] : []));
     const inPattern = patterned.filter((c) => (base.factors[c] ?? 0) !== 0);
     if (inPattern.length === 0) {
-      const categories = base.categories.filter((c) => present.has(c));
+      const categories = base.categories.filter((c) => inCombination.has(c));
       return [entry({ ...base, categories, duration: customDuration(base) ?? durationOf(categories) }, fixedTerms)];
     }
     // The sets depend only on the ratios of the patterned categories' factors.
@@ -186,7 +190,7 @@ export function analyseMember(input: MemberInput): BeamAnalysis {
         const k = perRegion.get(c)?.[r];
         if (k) terms.push({ c: k, f: base.factors[c]! });
       }
-      const categories = base.categories.filter((c) => present.has(c) && (!inPattern.includes(c) || loadedRegions.some((r) => perRegion.get(c)?.[r])));
+      const categories = base.categories.filter((c) => inCombination.has(c) && (!inPattern.includes(c) || loadedRegions.some((r) => perRegion.get(c)?.[r])));
       const spansText = loadedRegions.length === 0 ? "on no span" : `on ${placesText(loadedRegions.map((r) => regions[r]!.label))}`;
       const combination: Combination = {
         ...base,

@@ -38,3 +38,16 @@ describe("every example", () => {
     expect(h.errors).toEqual([]);
   });
 });
+
+describe("a column example", () => {
+  test("shows the built-up column's table: each axis's K_e, l_e/d, K_f and C_P, and the interaction", async () => {
+    await page.goto(`${h.base}/?example=stud-pack-wind.us`);
+    await upToDate(page);
+    const axes = page.locator("table.column-axes");
+    await axes.waitFor();
+    expect(await axes.locator("tbody tr").count()).toBe(2);
+    expect(await axes.textContent()).toContain("across the joints");
+    expect(await page.locator("table.column-combinations tbody tr").count()).toBeGreaterThan(0);
+    expect(h.errors).toEqual([]);
+  });
+});
