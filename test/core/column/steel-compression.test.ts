@@ -29,6 +29,32 @@ describe("aiscFlexuralBuckling (AISC 360-16 §E3)", () => {
     expect(lrfd.steps.every((s) => s.reference?.startsWith("AISC 360-16"))).toBe(true);
   });
 
+  // AISC Design Examples v16.0 (AISC 360-22; §E3 for members without slender elements reads as in 360-16) [V].
+  test("Example E.1D: W14×90, A_g = 26.5 in², L_c/r = 360/6.14 = 58.6 → F_e = 83.3 ksi, F_n = 38.9 ksi, P_n = 1,030 kips, φ_c P_n = 927, P_n/Ω_c = 617 [V]", () => {
+    const at = (basis: "factored" | "allowable") => aiscFlexuralBuckling({ grossArea: 26.5 * MM_PER_IN ** 2, slenderness: 360 / 6.14, elasticModulus: E, yieldStrength: 50 * MPA_PER_KSI, basis });
+    const r = at("factored");
+    expectClose(r.slenderness, 58.6, { abs: 0.05 });
+    expectClose(r.elasticBucklingStress / MPA_PER_KSI, 83.3, { abs: 0.05 });
+    expectClose(r.criticalStress / MPA_PER_KSI, 38.9, { abs: 0.05 });
+    expectClose(r.nominal / N_PER_KIP, 1030, { abs: 5 });
+    expectClose(r.available / N_PER_KIP, 927, { abs: 1 });
+    expectClose(at("allowable").available / N_PER_KIP, 617, { abs: 1 });
+  });
+
+  test("Example E.1C: W14×132, L_c/r = 360/3.76 = 95.7 → φ_c F_n = 23.0 ksi (Manual Table 4-14), φ_c P_n = 892 kips [V]", () => {
+    const r = aiscFlexuralBuckling({ grossArea: 38.8 * MM_PER_IN ** 2, slenderness: 360 / 3.76, elasticModulus: E, yieldStrength: 50 * MPA_PER_KSI, basis: "factored" });
+    expectClose((0.9 * r.criticalStress) / MPA_PER_KSI, 23.0, { abs: 0.05 });
+    expectClose(r.available / N_PER_KIP, 892, { abs: 2 });
+  });
+
+  test("Example E.1E(c): L_c/r = 180/1.17 = 154 > 113 → F_e = 12.1 ksi, F_n = 0.877 F_e = 10.6 ksi by E3-3 [V]", () => {
+    const r = aiscFlexuralBuckling({ grossArea: 9.13 * MM_PER_IN ** 2, slenderness: 180 / 1.17, elasticModulus: E, yieldStrength: 50 * MPA_PER_KSI, basis: "factored" });
+    expect(r.equation).toBe("E3-3");
+    expectClose(r.limitSlenderness, 113, { abs: 0.5 });
+    expectClose(r.elasticBucklingStress / MPA_PER_KSI, 12.1, { abs: 0.05 });
+    expectClose(r.criticalStress / MPA_PER_KSI, 10.6, { abs: 0.05 });
+  });
+
   test("a slender strut, L_c/r = 150 at F_y = 36 ksi, is past 4.71√(E/F_y) = 133.7 and takes F_cr = 0.877 F_e (E3-3) [D]", () => {
     const r = aiscFlexuralBuckling({ grossArea: 1000, slenderness: 150, elasticModulus: E, yieldStrength: 36 * MPA_PER_KSI, basis: "factored" });
     expectClose(r.limitSlenderness, 4.71 * Math.sqrt(29_000 / 36), { rel: 1e-12 });
