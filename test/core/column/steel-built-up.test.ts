@@ -147,7 +147,8 @@ describe("aiscBuiltUpColumn (AISC 360-16 §E6 with §E3)", () => {
     components: fc.constantFrom<BuiltUpComponents>("angles back to back", "channels back to back", "other"),
     spacing: fc.double({ min: 0.02, max: 1, noNaN: true }), // a as a fraction of the length
   });
-  const inputOf = (c: fc.RecordValue<{ lengthIn: number; rx: number; ry: number; ri: number; FyKsi: number; connection: IntermediateConnection; components: BuiltUpComponents; spacing: number }>, scale = 1, spacingScale = 1): AiscBuiltUpColumnInput => ({
+  interface ColumnCase { lengthIn: number; rx: number; ry: number; ri: number; FyKsi: number; connection: IntermediateConnection; components: BuiltUpComponents; spacing: number }
+  const inputOf = (c: ColumnCase, scale = 1, spacingScale = 1): AiscBuiltUpColumnInput => ({
     grossArea: 5000,
     elasticModulus: E,
     yieldStrength: c.FyKsi * MPA_PER_KSI,
