@@ -84,6 +84,16 @@ export function aiscFlexuralBuckling(p: AiscFlexuralBucklingInput): AiscFlexural
   };
 }
 
+/**
+ * F_cr from an elastic buckling stress of any mode, AISC 360-16 §E3 (and §E4 through it): E3-2 when
+ * F_y/F_e ≤ 2.25, else E3-3.
+ */
+export function aiscCriticalStress(elasticBucklingStress: number, yieldStrength: number): { criticalStress: number; equation: "E3-2" | "E3-3" } {
+  requirePositive({ elasticBucklingStress, yieldStrength });
+  const ratio = yieldStrength / elasticBucklingStress;
+  return ratio <= 2.25 ? { criticalStress: 0.658 ** ratio * yieldStrength, equation: "E3-2" } : { criticalStress: 0.877 * elasticBucklingStress, equation: "E3-3" };
+}
+
 /** Buckling curves of EN 1993-1-1 Table 6.1 (imperfection factor α). */
 export const EN1993_IMPERFECTION = { a0: 0.13, a: 0.21, b: 0.34, c: 0.49, d: 0.76 } as const;
 export type BucklingCurve = keyof typeof EN1993_IMPERFECTION;

@@ -10,6 +10,7 @@ import {
   type BuiltUpComponents,
   type IntermediateConnection,
 } from "../../../core/column/steel-built-up.js";
+import { angleSection, aiscDoubleAngleStrut, doubleAngleSection, type DoubleAngleStrutInput } from "../../../core/column/double-angle.js";
 import { MM_PER_IN, MPA_PER_KSI, N_PER_KIP } from "../../../core/connector/quantity-text.js";
 import { expectClose } from "../../expect-close.js";
 
@@ -176,6 +177,114 @@ describe("aiscBuiltUpColumn (AISC 360-16 §E6 with §E3)", () => {
         expect(base.nominal).toBeLessThanOrEqual(unit.nominal * (1 + 1e-12));
       }),
       { numRuns: 300 },
+    );
+  });
+});
+
+// Double angles back to back with stitch bolts: the issue's example (US, AISC).
+describe("double angles back to back (AISC 360-16 §E3, §E4, §E6)", () => {
+  const L4x3half = { backLeg: inch(4), outstandingLeg: inch(3.5), thickness: inch(0.375) };
+  const G = 11_200 * MPA_PER_KSI;
+  const strut = (over: Partial<DoubleAngleStrutInput> = {}): DoubleAngleStrutInput => ({
+    angle: L4x3half,
+    gap: inch(0.75),
+    length: inch(96),
+    ends: "pinned-pinned",
+    yieldStrength: 50 * MPA_PER_KSI,
+    elasticModulus: E,
+    shearModulus: G,
+    basis: "factored",
+    connection: "pretensioned bolts",
+    ...over,
+  });
+
+  test("angleSection: L4×4×½ by hand, two rectangles — A = 3.75 in², ȳ = 1.183 in, I_x = 5.56 in⁴, r_z = 0.782 in [D]; Manual 3.75, 1.18, 5.52, 0.776 [M]", () => {
+    const s = angleSection({ backLeg: inch(4), outstandingLeg: inch(4), thickness: inch(0.5) });
+    // [D]: legs 4 × 0.5 (centre 2.0) and 3.5 × 0.5 (centre 0.25); ȳ = (2·2 + 1.75·0.25)/3.75.
+    const ybar = (2 * 2 + 1.75 * 0.25) / 3.75;
+    const Ix = (0.5 * 4 ** 3) / 12 + 2 * (2 - ybar) ** 2 + (3.5 * 0.5 ** 3) / 12 + 1.75 * (0.25 - ybar) ** 2;
+    // equal legs: I_x = I_y, principal I_z = I_x − |I_xy|, I_xy from the two legs' centres.
+    const Ixy = 2 * (0.25 - ybar) * (2 - ybar) + 1.75 * (2.25 - ybar) * (0.25 - ybar);
+    const rz = Math.sqrt((Ix - Math.abs(Ixy)) / 3.75);
+    expectClose(s.area / MM_PER_IN ** 2, 3.75, { rel: 1e-12 });
+    expectClose(s.centroidFromOutstandingFace / MM_PER_IN, ybar, { rel: 1e-12 });
+    expectClose(s.secondMomentX / MM_PER_IN ** 4, Ix, { rel: 1e-12 });
+    expectClose(s.secondMomentY, s.secondMomentX, { rel: 1e-12 });
+    expectClose(s.radiusZ / MM_PER_IN, rz, { rel: 1e-12 });
+    expectClose(s.radiusZ / MM_PER_IN, 0.776, { rel: 0.015 }, "Manual r_z [M], fillets left out");
+    expectClose(s.secondMomentX / MM_PER_IN ** 4, 5.52, { rel: 0.015 }, "Manual I_x [M]");
+  });
+
+  test("doubleAngleSection: 2L4×3½×⅜ LLBB, ¾ in apart, against Example E.5's Manual values A_g = 5.36, r_x = 1.25, r_y = 1.69, r_z = 0.719, r̄_o = 2.33, H = 0.813 [V] (fillets left out)", () => {
+    const s = doubleAngleSection(L4x3half, inch(0.75));
+    expectClose(s.area / MM_PER_IN ** 2, 5.36, { rel: 0.01 });
+    expectClose(s.radiusX / MM_PER_IN, 1.25, { rel: 0.01 });
+    expectClose(s.radiusY / MM_PER_IN, 1.69, { rel: 0.01 });
+    expectClose(s.angle.radiusZ / MM_PER_IN, 0.719, { rel: 0.015 });
+    expectClose(Math.sqrt(s.polarRadiusSquared) / MM_PER_IN, 2.33, { rel: 0.01 });
+    expectClose(s.flexuralConstant, 0.813, { rel: 0.01 });
+    // Closed form [D]: I_y of the pair = 2 (I_y1 + A_1 (x̄ + g/2)²).
+    const a = s.angle;
+    expectClose(s.secondMomentY, 2 * (a.secondMomentY + a.area * (a.centroidFromBack + inch(0.375)) ** 2), { rel: 1e-12 });
+    expect(s.maxWidth).toBeCloseTo(inch(7.75), 9);
+  });
+
+  test("Example E.5 by the strut function: two pretensioned stitch bolts at 32 in, x-x flexural buckling governs, φ_c P_n = 157 kips [V] (within the closed-form section's 1 %)", () => {
+    const r = aiscDoubleAngleStrut(strut());
+    expect(r.connectors.count).toBe(2);
+    expectClose(r.connectors.spacing / MM_PER_IN, 32, { rel: 1e-12 });
+    expectClose(r.spacingLimit.largest / MM_PER_IN, 41.4, { rel: 0.015 }, "a_max [V]");
+    expect(r.governing).toBe("flexural buckling about x-x");
+    expectClose(r.available / N_PER_KIP, 157, { rel: 0.01 }, "φ_c P_n [V]");
+    // F_e of flexural-torsional buckling, Example E.5: 60.5 ksi with the Manual's J and C_w [V]; here J by Σbt³/3 and C_w = 0, so lower.
+    const FeFT = r.flexuralTorsional.elasticBucklingStress / MPA_PER_KSI;
+    expect(FeFT).toBeLessThan(60.5);
+    expectClose(FeFT, 60.5, { rel: 0.05 });
+    expect(r.slenderLegs).toBe(false);
+    expect(r.passes).toBeNull();
+  });
+
+  test("snug-tight stitch bolts need more connectors than pretensioned ones when y-y and flexural-torsional buckling govern: 6 at 20.6 in against 3 at 36 in for 125 kips [D]", () => {
+    // 12 ft strut braced about x-x at mid-length, so the modified slenderness about y-y enters F_e of eq. E4-3.
+    const base = strut({ unbracedLengthX: inch(72), length: inch(144), connection: "snug-tight bolts", requiredStrength: 125 * N_PER_KIP });
+    const snug = aiscDoubleAngleStrut(base);
+    const pre = aiscDoubleAngleStrut({ ...base, connection: "pretensioned bolts" });
+    expect(pre.connectors.count).toBe(3); // a_max = 0.75 r_z × 144/r_y ≈ 47 in → 3 spaces of 48 in fail, 4 of 36 in
+    expect(snug.connectors.count).toBe(6);
+    expect(snug.governing).toBe("flexural-torsional buckling");
+    for (const r of [snug, pre]) expect(r.available).toBeGreaterThanOrEqual(125 * N_PER_KIP);
+  });
+    expect(fewer.axes[0]!.modified!.value).toBeGreaterThan(snug.flexural.axes.find((a) => a.axis === "y-y")!.modified!.value);
+  });
+
+  test("a 5 × 3 × ¼ angle's legs are slender at 50 ksi (Example E.6: b/t = 20 > 10.8 [V]) and the result says so", () => {
+    const r = aiscDoubleAngleStrut(strut({ angle: { backLeg: inch(5), outstandingLeg: inch(3), thickness: inch(0.25) } }));
+    expect(r.slenderLegs).toBe(true);
+    expect(r.warnings.join(" ")).toContain("§E7");
+  });
+
+  test("property (fast-check, fixed seed): more axial load never fewer connectors; a longer strut never a higher capacity; P_n never above A_g F_y", () => {
+    fc.assert(
+      fc.property(
+        fc.double({ min: 1.5, max: 6, noNaN: true }),
+        fc.double({ min: 1.5, max: 6, noNaN: true }),
+        fc.double({ min: 0.1875, max: 0.75, noNaN: true }),
+        fc.double({ min: 36, max: 240, noNaN: true }),
+        fc.constantFrom<IntermediateConnection>("snug-tight bolts", "pretensioned bolts", "welds"),
+        fc.double({ min: 5, max: 200, noNaN: true }),
+        (back, out, t, lengthIn, connection, kips) => {
+          if (t >= Math.min(back, out) / 2) return;
+          const input = strut({ angle: { backLeg: inch(back), outstandingLeg: inch(out), thickness: inch(t) }, length: inch(lengthIn), connection });
+          const free = aiscDoubleAngleStrut(input);
+          expect(free.nominal).toBeLessThanOrEqual(free.section.area * 50 * MPA_PER_KSI * (1 + 1e-12));
+          expect(aiscDoubleAngleStrut({ ...input, length: inch(lengthIn * 1.25) }).nominal).toBeLessThanOrEqual(free.nominal * (1 + 1e-9));
+          const light = aiscDoubleAngleStrut({ ...input, requiredStrength: kips * N_PER_KIP });
+          const heavy = aiscDoubleAngleStrut({ ...input, requiredStrength: 1.5 * kips * N_PER_KIP });
+          expect(heavy.connectors.count).toBeGreaterThanOrEqual(light.connectors.count);
+          expect(light.connectors.count).toBeGreaterThanOrEqual(free.connectors.count);
+        },
+      ),
+      { numRuns: 150 },
     );
   });
 });
