@@ -7,6 +7,7 @@ import {
   type AiscBuiltUpColumn,
   type ConnectorSpacing,
   type IntermediateConnection,
+  type RuleCondition,
 } from "./steel-built-up.js";
 import { aiscCriticalStress, requirePositive, type DesignBasis } from "./steel-compression.js";
 
@@ -193,6 +194,7 @@ export interface DoubleAngleStrut {
   slenderLegs: boolean;
   steps: WorkingStep[];
   warnings: string[];
+  conditions: RuleCondition[];
   notChecked: string[];
 }
 
@@ -298,6 +300,10 @@ export function aiscDoubleAngleStrut(p: DoubleAngleStrutInput): DoubleAngleStrut
     slenderLegs,
     steps,
     warnings,
+    conditions: [
+      { condition: `legs not slender: b/t ≤ 0.45√(E/F_y) = ${legLimit.toFixed(1)}`, met: !slenderLegs, clause: "AISC 360-16 Table B4.1a case 3" },
+      ...design.flexural.conditions,
+    ],
     notChecked: ["local buckling of slender legs (AISC 360-16 §E7): flagged, not designed", "strength of the stitch bolts or welds and of the end connections", "the gusset plate"],
   };
 }

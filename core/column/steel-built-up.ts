@@ -219,8 +219,16 @@ export interface AiscBuiltUpColumn {
   endConnection: EndConnection;
   steps: WorkingStep[];
   warnings: string[];
+  /** The rule's conditions, each met or not, with its clause (the shape of a column result's conditions). */
+  conditions: RuleCondition[];
   /** Limit states this function does not check; the worksheet lists them. */
   notChecked: string[];
+}
+
+export interface RuleCondition {
+  condition: string;
+  met: boolean;
+  clause: string;
 }
 
 /** AISC 360-16 §E6 with §E3: flexural buckling of a built-up member at a given connector spacing. */
@@ -274,6 +282,10 @@ export function aiscBuiltUpColumn(p: AiscBuiltUpColumnInput): AiscBuiltUpColumn 
     endConnection,
     steps,
     warnings,
+    conditions: [
+      { condition: `intermediate connectors no further apart than a_max (${spacing.governing.rule})`, met: spacingPasses, clause: spacing.governing.reference },
+      ...(p.connection === "pretensioned bolts" ? [{ condition: "pretensioned bolts with Class A or B faying surfaces (to be confirmed)", met: true, clause: "AISC 360-16 §E6.1(b)" }] : []),
+    ],
     notChecked: [
       "torsional and flexural-torsional buckling (AISC 360-16 §E4)",
       "local buckling of slender elements (AISC 360-16 §E7, Table B4.1a)",
