@@ -114,6 +114,8 @@ export interface BattenedMember {
   endPanel: { chordMoment: number; chordShear: number; battenShear: number; battenMoment: number };
   steps: WorkingStep[];
   warnings: string[];
+  /** Checks this function leaves to others or to the reviewer; the worksheet lists them. */
+  notChecked: string[];
 }
 
 /** EN 1993-1-1 §6.4.3 with §6.4.1: a battened member at a given batten spacing. */
@@ -152,7 +154,12 @@ export function en1993BattenedMember(p: BattenedMemberInput): BattenedMember {
   if (!force.stable) warnings.push("N_Ed reaches the built-up member's critical force with its shear stiffness (1 − N_Ed/N_cr − N_Ed/S_v ≤ 0, EN 1993-1-1 eq. (6.70)): the member cannot carry it");
   // §6.4.1(1): at least three panels [M].
   if (p.length / a < 3 - 1e-9) warnings.push("fewer than three panels between battens: EN 1993-1-1 §6.4.1 assumes at least three equal panels");
-  return { radius: i0, slenderness: lambda, efficiency: mu, effectiveSecondMoment: Ieff, shearStiffness: Sv, force, chordBuckling, chordUtilisation, endPanel, steps, warnings };
+  const notChecked = [
+    "buckling about the material axis (the axis through both chords) as a solid member, EN 1993-1-1 §6.3.1",
+    "the chords in the end panel under N_ch,Ed with the moment V_Ed a/4 (EN 1993-1-1 §6.4.3.1, Figure 6.11)",
+    "the battens and their connections for V_b and M_b",
+  ];
+  return { radius: i0, slenderness: lambda, efficiency: mu, effectiveSecondMoment: Ieff, shearStiffness: Sv, force, chordBuckling, chordUtilisation, endPanel, steps, warnings, notChecked };
 }
 
 /**
