@@ -33,11 +33,11 @@ export interface ChordForce {
   criticalForce: number;
   /** False when N_Ed reaches the amplification's pole: 1 − N_Ed/N_cr − N_Ed/S_v ≤ 0. */
   stable: boolean;
-  /** M_Ed (6.70), N·mm; Infinity when not stable. */
+  /** M_Ed (§6.4.1(6)), N·mm; Infinity when not stable. */
   moment: number;
   /** N_ch,Ed (6.69), N. */
   chordForce: number;
-  /** V_Ed = π M_Ed / L (§6.4.1(7) [M]): the shear the lacing, battens or packing plates carry, N. */
+  /** V_Ed = π M_Ed / L (§6.4.1(7), eq. (6.70) [M]): the shear the lacing, battens or packing plates carry, N. */
   shear: number;
   steps: WorkingStep[];
 }
@@ -56,10 +56,10 @@ export function en1993ChordForce(p: ChordForceInput): ChordForce {
   const steps: WorkingStep[] = [
     { symbol: "e_0", description: "bow imperfection, L/500", value: e0, quantity: "length", reference: "EN 1993-1-1 §6.4.1(1) [M]" },
     { symbol: "N_cr", description: "effective critical force of the built-up member, π² E I_eff / L²", value: Ncr, quantity: "force", reference: "EN 1993-1-1 §6.4.1(6) [M]" },
-    { symbol: "1 − N_Ed/N_cr − N_Ed/S_v", description: stable ? "amplification denominator" : "amplification denominator ≤ 0: the member buckles under N_Ed", value: amplifier, quantity: "ratio", reference: "EN 1993-1-1 eq. (6.70) [M]" },
-    { symbol: "M_Ed", description: "design moment with the imperfection, (N_Ed e_0 + M_Ed^I)/(1 − N_Ed/N_cr − N_Ed/S_v)", value: moment, quantity: "moment", reference: "EN 1993-1-1 eq. (6.70) [M]" },
+    { symbol: "1 − N_Ed/N_cr − N_Ed/S_v", description: stable ? "amplification denominator" : "amplification denominator ≤ 0: the member buckles under N_Ed", value: amplifier, quantity: "ratio", reference: "EN 1993-1-1 §6.4.1(6) [M]" },
+    { symbol: "M_Ed", description: "design moment with the imperfection, (N_Ed e_0 + M_Ed^I)/(1 − N_Ed/N_cr − N_Ed/S_v)", value: moment, quantity: "moment", reference: "EN 1993-1-1 §6.4.1(6) [M]" },
     { symbol: "N_ch,Ed", description: "design force in the more compressed chord, 0.5 N_Ed + M_Ed h_0 A_ch / (2 I_eff)", value: chordForce, quantity: "force", reference: "EN 1993-1-1 eq. (6.69) [M]" },
-    { symbol: "V_Ed", description: "shear carried by the lacing, battens or packing plates, π M_Ed / L", value: shear, quantity: "force", reference: "EN 1993-1-1 §6.4.1(7) [M]" },
+    { symbol: "V_Ed", description: "shear carried by the lacing, battens or packing plates, π M_Ed / L", value: shear, quantity: "force", reference: "EN 1993-1-1 §6.4.1(7), eq. (6.70) [M]" },
   ];
   return { imperfection: e0, criticalForce: Ncr, stable, moment, chordForce, shear, steps };
 }
@@ -145,13 +145,13 @@ export function en1993BattenedMember(p: BattenedMemberInput): BattenedMember {
     { symbol: "S_v", description: `shear stiffness, 24 E I_ch / (a² (1 + 2 I_ch h_0 / (n I_b a))) ≤ 2π² E I_ch / a²${svFrame > svLimit ? " (the limit governs)" : ""}`, value: Sv, quantity: "force", reference: "EN 1993-1-1 eq. (6.73) [M]" },
     ...force.steps,
     ...chordBuckling.steps.map((s) => ({ ...s, symbol: `${s.symbol} (chord, L_ch = a)` })),
-    { symbol: "N_ch,Ed / N_b,Rd", description: "chord between battens", value: chordUtilisation, quantity: "ratio", reference: "EN 1993-1-1 eq. (6.71) [M]" },
+    { symbol: "N_ch,Ed / N_b,Rd", description: "chord between battens", value: chordUtilisation, quantity: "ratio", reference: "EN 1993-1-1 §6.4.1(6), §6.4.3.1 [M]" },
     { symbol: "M_ch (end panel)", description: "chord moment, V_Ed a / 4", value: endPanel.chordMoment, quantity: "moment", reference: "EN 1993-1-1 Figure 6.11 [M]" },
     { symbol: "V_b", description: "longitudinal shear in each batten (and its connection), V_Ed a / (n h_0)", value: endPanel.battenShear, quantity: "force", reference: "EN 1993-1-1 Figure 6.11 [M]" },
     { symbol: "M_b", description: "batten moment at the chord, V_Ed a / (2n)", value: endPanel.battenMoment, quantity: "moment", reference: "EN 1993-1-1 Figure 6.11 [M]" },
   ];
   const warnings: string[] = [];
-  if (!force.stable) warnings.push("N_Ed reaches the built-up member's critical force with its shear stiffness (1 − N_Ed/N_cr − N_Ed/S_v ≤ 0, EN 1993-1-1 eq. (6.70)): the member cannot carry it");
+  if (!force.stable) warnings.push("N_Ed reaches the built-up member's critical force with its shear stiffness (1 − N_Ed/N_cr − N_Ed/S_v ≤ 0, EN 1993-1-1 §6.4.1(6)): the member cannot carry it");
   // §6.4.1(1): at least three panels [M].
   if (p.length / a < 3 - 1e-9) warnings.push("fewer than three panels between battens: EN 1993-1-1 §6.4.1 assumes at least three equal panels");
   const notChecked = [
@@ -182,7 +182,7 @@ export function en1993LargestBattenSpacing(p: Omit<BattenedMemberInput, "battenS
     if (ok(mid)) lo = mid;
     else hi = mid;
   }
-  return { largest: lo, governing: "the chord between battens, N_ch,Ed ≤ N_b,Rd (EN 1993-1-1 eq. (6.71) [M])" };
+  return { largest: lo, governing: "the chord between battens, N_ch,Ed ≤ N_b,Rd (EN 1993-1-1 §6.4.3.1 [M])" };
 }
 
 export type CloselySpacedKind = "in contact or through packing plates" | "star-battened angles";
