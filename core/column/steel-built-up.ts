@@ -99,8 +99,8 @@ const inches = (n: number) => n * MM_PER_IN;
 
 /**
  * Largest spacing of intermediate connectors, AISC 360-16 §E6.2(a) and (b), §J3.5.
- * The ¾ rule uses the unmodified governing slenderness: the modified one is larger and would allow a
- * longer spacing from the spacing it limits.
+ * The ¾ rule takes the governing slenderness unmodified (as AISC Design Example E.5 does [V]): the
+ * modified one grows with the spacing itself and would loosen the limit it sets.
  */
 export function aiscIntermediateConnectorSpacing(p: ConnectorSpacingInput): ConnectorSpacing {
   requirePositive({ governingSlenderness: p.governingSlenderness, componentRadius: p.componentRadius });
