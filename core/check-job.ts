@@ -83,6 +83,18 @@ export function checkJob(job: JobDocument): JobIssue[] {
   });
   if (issues.length > 0) return issues;
   for (const issue of beamIssues(job)) add(issue.path, issue.message);
+  if (job.compression) {
+    const known = new Set<string>(["dead", "live", "roof-live", "snow", "wind", ...job.beam.categories.map((c) => c.id)]);
+    const L = job.beam.spans.reduce((s, l) => s + l, 0);
+    job.compression.loads.forEach((l, i) => {
+      if (!known.has(l.category)) add(`compression.loads[${i}].category`, `"${l.category}" is not a load category: use one of ${[...known].join(", ")}, or define it in beam.categories`);
+    });
+    for (const axis of ["x", "y"] as const) {
+      job.compression[axis].bracedAt.forEach((x, i) => {
+        if (x >= L * (1 - 1e-9)) add(`compression.${axis}.bracedAt[${i}]`, `${x} is at or beyond the top of the column (its height is the member's length, ${Number(L.toPrecision(6))})`);
+      });
+    }
+  }
   return issues;
 }
 

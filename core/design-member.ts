@@ -28,12 +28,15 @@ import { inJobUnits } from "./units/format.js";
 import { unitLabels } from "./units/quantity.js";
 import { PROGRAM } from "./version.js";
 import { withFiniteVerdict } from "./finite-verdict.js";
+import { designColumn } from "./column/design-column.js";
 
 /**
  * The whole job: a valid job document in core units (see `prepareJob`) → the result in core units.
  * Pure: no I/O, no clock.
  */
-export function designMember(job: JobDocument): DesignResult {
+export function designMember(input: JobDocument): DesignResult {
+  // A column's self-weight acts along it, not across: the beam analysis leaves it out and the column takes it axially.
+  const job: JobDocument = input.compression ? { ...input, beam: { ...input.beam, selfWeight: false } } : input;
   const length = job.beam.spans.reduce((sum, l) => sum + l, 0);
   const stretches = sectionStretches(job, length);
   const stepped = stretches.length > 1;
@@ -41,7 +44,9 @@ export function designMember(job: JobDocument): DesignResult {
   const section = stepped ? buildSection(positioned(job.parts), job.materials) : stretches[0]!.section;
   const { joints, uncovered } = memberJointsOf(job, stretches, length);
   // The same self-weight as the analysis and the assumptions take, so that all three see the same categories.
-  const combinationList = combinationSet(job.beam, job.combinations, job.beam.selfWeight ? Math.max(...stretches.map((s) => selfWeightOf(s.section))) : 0);
+  const axialSelfWeight = input.compression && input.beam.selfWeight ? Math.max(...stretches.map((s) => selfWeightOf(s.section))) * length : 0;
+  const axialCategories = [...(input.compression?.loads.filter((l) => l.P !== 0).map((l) => l.category) ?? []), ...(axialSelfWeight > 0 ? ["dead"] : [])];
+  const combinationList = combinationSet(job.beam, job.combinations, job.beam.selfWeight ? Math.max(...stretches.map((s) => selfWeightOf(s.section))) : 0, axialCategories);
   const beam = analyseBeam(job, stretches, combinationList.combinations);
   const stations = stationsFor(beam.length, [...new Set(beam.results.flatMap((r) => r.actions.breaks))]);
   const profile = stressProfile(section);
@@ -118,8 +123,8 @@ export function designMember(job: JobDocument): DesignResult {
   });
 
   type Run = { schedule?: Schedule; bondLine?: BondLineResult; weld?: WeldResult; warnings: string[]; mirrored: boolean };
-  const run = ({ kind, input, extent, share }: (typeof prepared)[number], override: Partial<Pick<JointInput, "flowFactor" | "maxSpacingCap" | "extraDemand">> = {}): Run => {
-    const inputs = { ...input, ...override, ...(override.flowFactor !== undefined ? { flowFactor: override.flowFactor * share } : {}) };
+  const run = ({ kind, input: jointInput, extent, share }: (typeof prepared)[number], override: Partial<Pick<JointInput, "flowFactor" | "maxSpacingCap" | "extraDemand" | "columnLimits">> = {}): Run => {
+    const inputs = { ...jointInput, ...override, ...(override.flowFactor !== undefined ? { flowFactor: override.flowFactor * share } : {}) };
     const back = <T extends Schedule | WeldResult | BondLineResult>(r: T): T => (extent ? globalise(r, stations, extent) : r);
     if (kind.mechanism === "bond-line") return { bondLine: back(bondLineResult(inputs, kind)), warnings: [], mirrored: false };
     if (kind.mechanism === "weld") {
@@ -132,6 +137,14 @@ export function designMember(job: JobDocument): DesignResult {
   const runs = new Map(prepared.map((p) => [p.joint.id, run(p)]));
   const composite = compositeDesign({ job, section, beam, prepared, runs, rerun: (id, override) => run(prepared.find((p) => p.joint.id === id)!, override) });
   composite.assumptions.forEach((a) => assumptions.add(a));
+  const column = job.compression
+    ? designColumn({ job, section, beam, stations, axialSelfWeight, combinations: combinationList.combinations, prepared, runs, rerun: (id, override) => run(prepared.find((p) => p.joint.id === id)!, override) })
+    : undefined;
+  if (column) {
+    standards.add(column.standard);
+    if (axialSelfWeight > 0) assumptions.add("The column's self-weight (the whole member's) is an axial dead load, not a load across it.");
+    assumptions.add("The column's base is the member's left end; axial loads act at its top, an eccentric one adding P·e there, falling linearly to nothing at the base.");
+  }
 
   if (plies) {
     assumptions.add("Side-by-side plies deflect together, so each carries a share of the load in proportion to its E·I (each ply about its own centroid, all on the member's neutral axis); connectors at each interface pass what arrives on one side beyond its share, across the member (perpendicular to the grain of timber plies).");
@@ -152,6 +165,7 @@ export function designMember(job: JobDocument): DesignResult {
   }
   const { checks, notChecked } = stepped ? steppedChecks(job, stretches, beam, composite.stiffness) : memberChecks(job, section, beam, profile, composite.stiffness, null, true, plies);
   checks.push(...composite.checks);
+  if (column) checks.push(...column.checks);
   const terminationsNow = () =>
     partTerminations({
       job,
@@ -240,6 +254,7 @@ export function designMember(job: JobDocument): DesignResult {
     ...bondLines.filter((b) => !b.passes).map((b) => `Bond line ${b.joint}: stress exceeds the strength (utilisation ${b.utilisation.toFixed(2)}).`),
     ...welds.filter((w) => !w.passes).map((w) => `Weld ${w.joint}: shear flow exceeds the weld's resistance (utilisation ${w.utilisation.toFixed(2)}).${w.sizeNote ? ` ${w.sizeNote}` : ""}`),
     ...checks.filter((c) => !c.passes).map((c) => `${c.title}: utilisation ${c.utilisation.toFixed(2)}.`),
+    ...(column && !column.applies ? [`Built-up column: ${column.reason}`] : []),
     ...(composite.result && !composite.result.applies ? [`Slip-aware composite action was asked for but cannot be applied: ${composite.result.reason}`] : []),
     ...terminations.filter((t) => !t.passes).map((t) => `End of ${t.part} (${t.end}, joint ${t.joint}): ${t.note || "the connectors there do not develop the part's force"} (${t.utilisation === null ? "no connectors there to develop it" : `utilisation ${t.utilisation.toFixed(2)}`}).`),
   ];
@@ -267,13 +282,14 @@ export function designMember(job: JobDocument): DesignResult {
       : [],
     terminations,
     joints: jointResults,
+    ...(column ? { column } : {}),
     beam: { ...beamResult(beam, stations), omitted: combinationList.omitted },
     schedules,
     bondLines,
     welds,
     checks,
     notChecked,
-    assumptions: [...baseAssumptions(job, beam), ...assumptions],
+    assumptions: [...baseAssumptions(job, beam).filter((a) => !(input.compression && a.startsWith("Self-weight is not included"))), ...assumptions],
     standards: [
       "Connector resistances are the values given in the job or computed by the standards listed below; material strengths are the values given in the job, on its stated basis.",
       "Shear flow q = V·Q/I and stresses by elastic beam theory (mechanics of materials, e.g. Gere & Goodno, Mechanics of Materials, ch. 5).",

@@ -76,11 +76,14 @@ export interface CombinationSetResult {
  * cannot govern: its factors lie on the segment between two others' (its actions then lie between
  * theirs at every point, whatever their signs) or are a fraction of another's, and each of those others
  * holds no category it lacks (so no shorter duration: C_D and k_mod no higher) and has no higher λ, in any
- * live-load pattern. `selfWeight` is any non-zero number when self-weight is on.
+ * live-load pattern. `selfWeight` is any non-zero number when self-weight is on; `alsoPresent`, categories
+ * loading the member other than through the beam loads (a column's axial loads).
  */
-export function combinationSet(beam: Beam, settings: CombinationSettings, selfWeight: number): CombinationSetResult {
+export function combinationSet(beam: Beam, settings: CombinationSettings, selfWeight: number, alsoPresent: readonly string[] = []): CombinationSetResult {
   const info = categoriesOf(beam, settings.psi0);
-  const present = [...info.values()].filter((c) => presentCategories(beam, selfWeight).has(c.id));
+  const loaded = presentCategories(beam, selfWeight);
+  for (const c of alsoPresent) loaded.add(c);
+  const present = [...info.values()].filter((c) => loaded.has(c.id));
   const notes: string[] = [];
   let raw: Raw[];
   switch (settings.set) {

@@ -42,7 +42,7 @@ export const Nail = z
 export type Nail = z.infer<typeof Nail>;
 
 /** Diameter and length in core units (mm), from the size or the fields. */
-function dimensions(c: Nail): { diameter: number; length: number; sizeName: string | null } {
+export function dimensions(c: Nail): { diameter: number; length: number; sizeName: string | null } {
   const size = c.size !== undefined ? nailSize(c.size) : null;
   if (size) return { diameter: size.diameterIn * MM_PER_IN, length: size.lengthIn * MM_PER_IN, sizeName: size.name };
   return { diameter: c.diameter!, length: c.length!, sizeName: null };

@@ -47,7 +47,7 @@ function boltDiameter(size: string): number | null {
   return inches === null ? null : inches * MM_PER_IN;
 }
 
-const diameterOf = (c: TimberBolt) => (c.size !== undefined ? boltDiameter(c.size)! : c.diameter!);
+export const diameterOf = (c: TimberBolt) => (c.size !== undefined ? boltDiameter(c.size)! : c.diameter!);
 
 function specOf(c: TimberBolt): DowelSpec {
   const d = diameterOf(c);

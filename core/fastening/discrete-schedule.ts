@@ -1,7 +1,8 @@
 import type { BeamAnalysis } from "../beam/analyse-beam.js";
 import { maxAbsShear, shearAt, type MemberActions } from "../beam/member-actions.js";
 import type { Station } from "../beam/stations.js";
-import { governingLimits, type ConnectorContext, type ConnectorResistance, type DiscreteConnectorKind } from "../connector/connector-kind.js";
+import type { ColumnSpacingLimits } from "../column/column-rules.js";
+import { governingLimits, type ConnectorContext, type ConnectorResistance, type DetailingLimits, type DiscreteConnectorKind } from "../connector/connector-kind.js";
 import type { Connector } from "../connector/registry.js";
 import type { Fastening, JobDocument } from "../schema/job.js";
 import type { Schedule } from "../schema/result.js";
@@ -36,6 +37,24 @@ export interface JointInput {
   maxSpacingCap?: number;
   /** More demand the rows must meet besides the flow, as if further combinations (a part's force to develop at its end). */
   extraDemand?: { id: string; actions: MemberActions; resistance: number }[];
+  /** Limits a built-up column rule sets on the joint (core/column/column-rules.ts): they tighten the connector's own. */
+  columnLimits?: ColumnSpacingLimits;
+}
+
+/** The connector's limits tightened by a column rule's: larger minima, a smaller maximum, the rule's clauses added. */
+export function withColumnLimits(limits: DetailingLimits, column: ColumnSpacingLimits | undefined): DetailingLimits {
+  if (!column) return limits;
+  const larger = (a: number | null | undefined, b: number | undefined) => (b === undefined ? a : Math.max(a ?? 0, b));
+  return {
+    ...limits,
+    minSpacing: Math.max(limits.minSpacing, column.minSpacing ?? 0),
+    maxSpacing: column.maxSpacing === undefined ? limits.maxSpacing : Math.min(limits.maxSpacing ?? Infinity, column.maxSpacing),
+    endDistance: Math.max(limits.endDistance, column.endDistance ?? 0),
+    // The rule's distances across the face stand for the connector's where it says so (NDS-2018 §15.3.3, §15.3.4 for laminated columns).
+    edgeDistance: (column.acrossReplaces ? column.edgeDistance ?? limits.edgeDistance : larger(limits.edgeDistance, column.edgeDistance)) ?? null,
+    rowSpacing: (column.acrossReplaces ? column.rowSpacing ?? limits.rowSpacing : larger(limits.rowSpacing, column.rowSpacing)) ?? null,
+    sources: [...limits.sources, ...column.sources],
+  };
 }
 
 const VERIFICATION_METHOD =
@@ -63,7 +82,7 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
   const lineCount = joint.lines.length;
   const resistances: ConnectorResistance[] = contexts.map((lines) => leastOf(lines.map((c) => kind.resistance(connector, c))));
   const warnings = [...new Set(resistances.flatMap((r) => r.warnings ?? []))];
-  const limits = governingLimits(contexts[0]!.map((c) => kind.detailing(connector, c)));
+  const limits = withColumnLimits(governingLimits(contexts[0]!.map((c) => kind.detailing(connector, c))), input.columnLimits);
   const defaults = spacingPractice(job);
   const minSpacing = Math.max(limits.minSpacing, job.spacing.minimum ?? 0);
   const maxSpacing = Math.max(minSpacing, Math.min(limits.maxSpacing ?? defaults.maxSpacing, job.spacing.maximum ?? Infinity, input.maxSpacingCap ?? Infinity));
@@ -268,7 +287,7 @@ function designedRemedies(
   const attempt = (c: Connector, rows: number, factor: number) => {
     const lines = contexts.map((ls) => ls.map((ctx) => ({ ...ctx, rows })));
     if (lines[0]!.some((ctx) => (kind.problems?.(c, ctx) ?? []).length > 0)) return null;
-    const limits = governingLimits(lines[0]!.map((ctx) => kind.detailing(c, ctx)));
+    const limits = withColumnLimits(governingLimits(lines[0]!.map((ctx) => kind.detailing(c, ctx))), input.columnLimits);
     if (rowFit(limits, rows, joint.lines)?.fits === false) return null;
     if (beam.length < 2 * limits.endDistance * (1 - 1e-9)) return null;
     const r = lines.map((ls) => Math.min(...ls.map((ctx) => kind.resistance(c, ctx).value)) * factor);
@@ -381,7 +400,7 @@ function infeasibleReason(inf: NonNullable<ReturnType<typeof designSchedule>["in
 function requiredAt(stations: Station[], demand: ReturnType<typeof demandCurve>): (number | null)[] {
   return stations.map((s) => {
     const d = demand.at(s.x, s.side).value;
-    return d > 0 ? 1 / d : null;
+    return d > 0 && Number.isFinite(1 / d) ? 1 / d : null;
   });
 }
 

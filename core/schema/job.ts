@@ -4,6 +4,7 @@ import { unitSystems } from "../units/quantity.js";
 import { Id, Text, nonNegative, positive, quantity } from "./quantity.js";
 import { Beam, CombinationSettings } from "./beam.js";
 import { Shape } from "./shapes.js";
+import { Compression } from "./column.js";
 
 export { Shape };
 
@@ -24,6 +25,11 @@ export const Material = z.strictObject({
       shear: positive("stress").optional(),
       /** Rolling shear, where cross-layers of a panel meet a bond line. */
       rollingShear: positive("stress").optional(),
+      /**
+       * Compression parallel to the grain, for a column. NDS: F_c with every factor but C_D (or K_F·φ·λ) and
+       * C_P applied. EN 1995-1-1: the characteristic f_c,0,k (k_mod and γ_M are applied per combination).
+       */
+      compression: positive("stress").optional(),
     })
     .default({}),
   /** Timber: specific gravity G (oven-dry), for dowel bearing strength under the NDS. */
@@ -32,6 +38,8 @@ export const Material = z.strictObject({
   characteristicDensity: positive("density").optional(),
   /** Timber: mean density ρ_mean, for slip moduli under EN 1995-1-1. */
   meanDensity: positive("density").optional(),
+  /** Timber columns: E_min (NDS) or E_0,05 (EN 1995-1-1); worked out from E when absent (stated in the result). */
+  Emin: positive("modulus").optional(),
   /** Steel: yield strength F_y. */
   yieldStrength: positive("stress").optional(),
   /** Steel: tensile strength F_u. */
@@ -179,6 +187,8 @@ export const JobDocument = z.strictObject({
       longTerm: z.strictObject({ psi2: z.number().min(0).max(1), kdef: z.number().min(0).max(4) }).optional(),
     })
     .default({ model: "rigid" }),
+  /** Axial compression: the member stands as a column (a post, a stud pack). A beam when absent. */
+  compression: Compression.optional(),
 });
 export type JobDocument = z.infer<typeof JobDocument>;
 export type JobInput = z.input<typeof JobDocument>;

@@ -416,6 +416,74 @@ const MemberCheckShape = z.object({ ...checkFields(null), quantity: z.enum(["rat
 export type MemberCheck = z.infer<typeof MemberCheckShape>;
 export const MemberCheck = byQuantity(checkFields) as unknown as z.ZodType<MemberCheck>;
 
+/** A member standing as a built-up column: the rule, each axis's slenderness and stability factor, each combination's interaction, and its joints. */
+export const ColumnResult = z.object({
+  /** nds-15.3, en1995-annex-c, … (core/column/column-rules.ts). */
+  rule: z.string(),
+  title: z.string(),
+  standard: z.string(),
+  /** False where the section or its connectors fall outside the rule; `reason` says why and nothing is checked. */
+  applies: z.boolean(),
+  reason: z.string().nullable(),
+  conditions: z.array(z.object({ condition: z.string(), met: z.boolean(), clause: z.string() })),
+  height: q("span"),
+  axes: z.array(
+    z.object({
+      /** Buckling about the section's x (horizontal) or y (vertical) axis. */
+      axis: z.enum(["x", "y"]),
+      K: z.number(),
+      basis: z.string(),
+      unbraced: q("span"),
+      effectiveLength: q("span"),
+      /** The dimension the slenderness is measured by (d of l_e/d), or the radius of gyration (EN: λ = l_e/i). */
+      depth: q("length"),
+      slenderness: z.number(),
+      /** Buckling across the laminations' joints. */
+      jointed: z.boolean(),
+      /** NDS K_f (0.6 nailed, 0.75 bolted, 1 about the other axis); 1 for EN 1995-1-1. */
+      factor: z.number(),
+      /** E·I about the axis: effective (with slip) where jointed. */
+      stiffness: q("flexuralRigidity"),
+      /** Euler load π²·E·I/l_e² of the built-up section with that E·I. */
+      euler: q("force"),
+      /** C_P or k_c under the governing combination. */
+      stability: z.number(),
+    }),
+  ),
+  combinations: z.array(
+    z.object({
+      combination: z.string(),
+      axial: q("force"),
+      moment: q("moment"),
+      /** F_c* (NDS) or f_c,0,d (EN 1995-1-1) for this combination. */
+      strength: q("stress"),
+      stability: z.number(),
+      capacity: q("force"),
+      /** The interaction of axial load and bending; null without bending. */
+      interaction: z.number().nullable(),
+    }),
+  ),
+  governing: z.string(),
+  checks: z.array(MemberCheck),
+  joints: z.array(
+    z.object({
+      joint: z.string(),
+      rowsRequired: z.number().int().nullable(),
+      rowsProvided: z.number().int(),
+      /** The shear the column's imperfection puts on the connectors (EN 1995-1-1 eq. C.5), largest over the combinations, and its flow per contact line. */
+      bucklingShear: q("force").nullable(),
+      bucklingFlow: q("shearFlow").nullable(),
+      /** What set the spacing: the rule's prescriptive spacing, the lateral load's shear flow, or the buckling shear. */
+      governs: z.string(),
+      notes: z.array(z.string()),
+      sources: z.array(z.string()),
+    }),
+  ),
+  steps: z.array(WorkingLine),
+  notes: z.array(z.string()),
+});
+export type ColumnResult = z.infer<typeof ColumnResult>;
+
 export const DesignResult = z.object({
   format: z.literal(RESULT_FORMAT),
   version: z.literal(RESULT_VERSION),
@@ -520,6 +588,8 @@ export const DesignResult = z.object({
     }),
   ),
   joints: z.array(JointResult),
+  /** The member as a built-up column, when the job gives axial compression. */
+  column: ColumnResult.optional(),
   beam: BeamResult,
   schedules: z.array(Schedule),
   bondLines: z.array(BondLineResult),

@@ -59,7 +59,8 @@ export function checkSchedule(p: {
         spacing: z.spacing,
         rows: p.rows,
         count: rows.length * p.rows * p.lines,
-        requiredSpacing: peak.value > 0 ? 1 / peak.value : null,
+        // A demand so small that its spacing overflows asks for no connectors at all (null, as for none).
+        requiredSpacing: peak.value > 0 && Number.isFinite(1 / peak.value) ? 1 / peak.value : null,
         utilisation: worst?.utilisation ?? 0,
         governingCombination: worst?.combination ?? peak.combination,
         passes: (worst?.utilisation ?? 0) <= 1 + 1e-9,

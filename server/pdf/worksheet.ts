@@ -15,6 +15,7 @@ import { PAGE_SIZES, Sheet, pageFrame, registerFonts } from "./sheet.js";
 import { glanceSection, statusSection } from "./status-section.js";
 import { weldSection, weldsOf } from "./weld-section.js";
 import { terminationsSection } from "./terminations-section.js";
+import { columnSection } from "./column-section.js";
 import { stampPages } from "./title-block.js";
 import type { WorksheetContext } from "./worksheet-context.js";
 
@@ -46,6 +47,7 @@ export function renderWorksheet(job: JobDocument, result: DesignResult, options:
     for (const bondLine of result.bondLines) bondLineSection(context, bondLine);
     for (const weld of weldsOf(context)) weldSection(context, weld);
     terminationsSection(context);
+    columnSection(context);
     memberChecksSection(context);
     closingSection(context);
     return new Map(fieldSheet(context).map((page) => [page, FIELD_SHEET_HEADING]));

@@ -69,3 +69,29 @@ export function bondLines(result: DesignResult, width: number): HTMLElement[] {
   );
   return [rows, ...plots];
 }
+
+/** A member under axial compression: each axis's K_e, l_e/d (or λ) and C_P (or k_c), and each combination's interaction. */
+export function columnTables(result: DesignResult): HTMLElement[] {
+  const col = result.column;
+  if (!col) return [];
+  const title = `Built-up column: ${col.title}${col.standard ? `, ${col.standard}` : ""}`;
+  if (!col.applies) return [el("p", { className: "hint fails", text: `${title}. Not designed as a column: ${col.reason ?? ""}` })];
+  const nds = col.rule === "nds-15.3";
+  const axes = table(
+    title,
+    ["Buckling about", "K_e", "l_e", nds ? "l_e/d" : "λ", nds ? "K_f" : "", nds ? "C_P" : "k_c", "π²EI/l_e²"],
+    col.axes.map((a) => ({
+      cells: [`${a.axis} axis${a.jointed ? " (across the joints)" : ""}`, formatNumber(a.K), shown(result, a.effectiveLength, "span"), formatNumber(a.slenderness, 4), nds ? formatNumber(a.factor) : "", formatNumber(a.stability, 3), shown(result, a.euler, "force")],
+    })),
+    { className: "column-axes", numeric: [1, 2, 3, 4, 5, 6] },
+  );
+  const combos = table(
+    "Axial load by combination",
+    ["Combination", "Axial P", "Moment", nds ? "F_c*" : "f_c,0,d", "Capacity", "Interaction"],
+    col.combinations.map((k) => ({
+      cells: [k.combination === col.governing ? `${k.combination} (governs)` : k.combination, shown(result, k.axial, "force"), shown(result, k.moment, "moment"), shown(result, k.strength, "stress"), shown(result, k.capacity, "force"), k.interaction === null ? "—" : formatNumber(k.interaction, 3)],
+    })),
+    { className: "column-combinations", numeric: [1, 2, 3, 4, 5] },
+  );
+  return [axes, combos, ...col.joints.map((j) => el("p", { className: "hint", text: `Joint ${j.joint}: ${j.governs}.` }))];
+}

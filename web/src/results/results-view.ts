@@ -3,7 +3,7 @@ import type { DesignResult } from "../../../core/schema/result.js";
 import { el } from "../dom.js";
 import type { PlacedIssue } from "../form/field-registry.js";
 import { alongMemberPanel } from "./along-member-view.js";
-import { bondLines, memberChecks } from "./checks-view.js";
+import { bondLines, columnTables, memberChecks } from "./checks-view.js";
 import { compositePanel } from "./composite-view.js";
 import { combinations, shearAndMoment, shearFlow } from "./diagrams.js";
 import { drawingWidth } from "./figure.js";
@@ -228,7 +228,7 @@ export class ResultsView {
       ]),
       schedules,
       bond.length ? el("section", { className: "panel", attrs: { "aria-labelledby": "bond-title" } }, [el("h2", { text: "Bond lines", attrs: { id: "bond-title" } }), ...bond]) : "",
-      el("section", { className: "panel", attrs: { id: "checks", "aria-labelledby": "checks-title" } }, [el("h2", { text: "Member checks", attrs: { id: "checks-title" } }), memberChecks(result)]),
+      el("section", { className: "panel", attrs: { id: "checks", "aria-labelledby": "checks-title" } }, [el("h2", { text: "Member checks", attrs: { id: "checks-title" } }), memberChecks(result), ...columnTables(result)]),
       ...notes(result),
     );
     this.#body.classList.toggle("stale", this.#freshness === "invalid" || this.#freshness === "unreachable");

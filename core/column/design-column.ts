@@ -1,0 +1,144 @@
+import type { BeamAnalysis } from "../beam/analyse-beam.js";
+import { combineActions, memberActions, type MemberActions } from "../beam/member-actions.js";
+import type { Station } from "../beam/stations.js";
+import { demandActionsOf, type JointInput } from "../fastening/discrete-schedule.js";
+import type { JobDocument } from "../schema/job.js";
+import type { ColumnResult, Combination, Schedule } from "../schema/result.js";
+import type { SectionModel } from "../section/section-model.js";
+import { allowedSpacings } from "../spacing/allowed-spacings.js";
+import { inJobUnits } from "../units/format.js";
+import { columnActions, columnAxis, type ColumnJob, type ColumnJoint, type ColumnRule } from "./column-rules.js";
+import { ec5MechanicallyJointed } from "./ec5-mechanically-jointed.js";
+import { ndsBuiltUp } from "./nds-built-up.js";
+
+/** The built-up column rules, in the order "auto" tries them. A steel rule (§E6, §6.4) is added here. */
+export const columnRules: ColumnRule[] = [ndsBuiltUp, ec5MechanicallyJointed];
+
+interface PreparedJoint {
+  joint: { id: string; lines: ColumnJoint["lines"] };
+  input: JointInput;
+}
+type Run = { schedule?: Schedule };
+type Override = Partial<Pick<JointInput, "extraDemand" | "columnLimits">>;
+
+/**
+ * The member as a built-up column: the rule's checks, and each joint designed again with the rule's
+ * limits and the buckling shear. `rerun` designs a joint with an override; `runs` holds the joints'
+ * schedules and is updated in place.
+ */
+export function designColumn(p: {
+  job: JobDocument;
+  section: SectionModel;
+  beam: BeamAnalysis;
+  stations: Station[];
+  axialSelfWeight: number;
+  /** The combination set with the axial loads' categories. */
+  combinations: Combination[];
+  prepared: PreparedJoint[];
+  runs: Map<string, Run>;
+  rerun: (id: string, override: Override) => Run;
+}): ColumnResult {
+  const compression = p.job.compression!;
+  const height = p.beam.length;
+  const joints: ColumnJoint[] = p.prepared.flatMap(({ joint, input }) => {
+    const s = p.runs.get(joint.id)?.schedule;
+    if (!s) return [];
+    return [{ id: joint.id, connector: input.connector, rows: input.fastening.rows, lines: joint.lines, spacing: Math.max(...s.zones.map((z) => z.spacing)), resistance: s.resistance.map((r) => r.value), slip: s.resistance[0]?.slip ?? null }];
+  });
+  const c: ColumnJob = {
+    job: p.job,
+    compression,
+    section: p.section,
+    height,
+    axes: { x: columnAxis("x", compression.x, height), y: columnAxis("y", compression.y, height) },
+    actions: columnActions(compression, p.beam, p.stations, p.axialSelfWeight, p.combinations),
+    joints,
+  };
+  const named = compression.rule === "auto" ? columnRules.find((r) => r.suits(c)) : columnRules.find((r) => r.id === compression.rule);
+  if (!named) {
+    const reason =
+      compression.rule === "auto"
+        ? "no built-up column rule here covers this section and its connectors: NDS-2018 §15.3 takes NDS nails or bolts, EN 1995-1-1 Annex C takes EN 1995-1-1 connectors with slip moduli."
+        : `the rule "${compression.rule}" is not available in this version.`;
+    return { rule: compression.rule, title: "Built-up column", standard: "", applies: false, reason, conditions: [], height, axes: [], combinations: [], governing: "", checks: [], joints: [], steps: [], notes: [] };
+  }
+  const design = named.spacingInStiffness ? designWithCap(named, c, p.runs) : named.design(c);
+  const resultJoints: ColumnResult["joints"] = [];
+  for (const demand of design.joints) {
+    const prepared = p.prepared.find((x) => x.joint.id === demand.joint)!;
+    const before = p.runs.get(demand.joint)!.schedule!;
+    const extraDemand = demand.bucklingFlow ? bucklingDemand(prepared.input, before, demand.bucklingFlow, demand.addsToLateral, height) : undefined;
+    const run = p.rerun(demand.joint, { ...(demand.limits ? { columnLimits: demand.limits } : {}), ...(extraDemand ? { extraDemand } : {}) });
+    let schedule = run.schedule!;
+    const rowsProvided = schedule.rows;
+    if (demand.rowsRequired && rowsProvided < demand.rowsRequired.rows) {
+      schedule = { ...schedule, passes: false, detailingProblems: [...schedule.detailingProblems, `${rowsProvided} row(s) of connectors across the lamination, but ${demand.rowsRequired.reason}: set the fastening's rows to ${demand.rowsRequired.rows}`] };
+    }
+    p.runs.set(demand.joint, { ...run, schedule });
+    resultJoints.push({
+      joint: demand.joint,
+      rowsRequired: demand.rowsRequired?.rows ?? null,
+      rowsProvided,
+      bucklingShear: demand.bucklingShear ? Math.max(...demand.bucklingShear) : null,
+      bucklingFlow: demand.bucklingFlow ? Math.max(...demand.bucklingFlow) : null,
+      governs: governing(schedule, demand.bucklingFlow !== null, named.spacingInStiffness ? "the spacing taken in γ for the column's (EI)_ef" : `${named.standard} allows (prescriptive)`),
+      notes: demand.notes,
+      sources: demand.limits?.sources ?? [],
+    });
+  }
+  return { ...design, joints: resultJoints };
+}
+
+/**
+ * The buckling shear as more demand on a joint's rows, one entry per combination: a constant flow along
+ * the column; where the lateral load shears the same joint, added to its shear either way round.
+ */
+function bucklingDemand(input: JointInput, s: Schedule, flows: number[], addsToLateral: boolean, height: number) {
+  const lines = input.joint.lines.length;
+  const lateral = demandActionsOf(input);
+  return flows.flatMap((flow, i) => {
+    if (!(flow > 0) || !(input.flowFactor > 0)) return [];
+    const V = (flow * lines) / input.flowFactor;
+    const constant = memberActions(height, { points: [{ x: 0, P: -V }, { x: height, P: V }], lines: [], moments: [] }, []);
+    const resistance = s.resistance[i]!.value;
+    const id = `${s.resistance[i]!.combination} buckling shear`;
+    if (!addsToLateral) return [{ id, actions: constant, resistance }];
+    const both = (sign: number): MemberActions => combineActions([{ actions: lateral[i]!, f: 1 }, { actions: constant, f: sign }], height, [...new Set([...lateral[i]!.breaks, ...constant.breaks])].sort((a, b) => a - b));
+    return [{ id: `${id} + lateral`, actions: both(1), resistance }, { id: `${id} − lateral`, actions: both(-1), resistance }];
+  });
+}
+
+/** What set a joint's spacing: the rule's greatest spacing everywhere, or the shear flow somewhere. */
+function governing(s: Schedule, buckling: boolean, greatest: string): string {
+  const allowed = allowedSpacings({ module: s.limits.module, preferred: s.limits.preferred, min: s.limits.minSpacing, max: s.limits.maxSpacing });
+  const largest = allowed.length > 0 ? Math.max(...allowed) : s.limits.maxSpacing;
+  const closer = s.zones.filter((z) => z.spacing < largest * (1 - 1e-9));
+  if (closer.length === 0) return `the greatest spacing, ${greatest}, governs along the whole column`;
+  return `the shear flow of the ${buckling ? "lateral load and the buckling shear" : "lateral load"} governs in ${closer.length} of ${s.zones.length} zone(s), closer than the greatest spacing (${greatest})`;
+}
+
+/**
+ * A rule whose stiffness rests on the spacing: the greatest spacing tried from each joint's largest
+ * (its lateral-load schedule) down the allowed spacings; the first under which every column check passes
+ * is kept (the least where none does) and becomes a cap on the joint's schedule.
+ */
+function designWithCap(rule: ColumnRule, c: ColumnJob, runs: Map<string, Run>): ReturnType<ColumnRule["design"]> {
+  const first = c.joints[0] ? runs.get(c.joints[0].id)?.schedule : undefined;
+  if (!first || c.joints.some((j) => j.spacing === null)) return rule.design(c);
+  const top = Math.max(...c.joints.map((j) => j.spacing!));
+  const l = first.limits;
+  const caps = allowedSpacings({ module: l.module, preferred: l.preferred, min: l.minSpacing, max: top }).filter((s) => s <= top * (1 + 1e-9)).sort((a, b) => b - a);
+  if (caps.length === 0) return rule.design(c);
+  const at = (cap: number) => rule.design({ ...c, joints: c.joints.map((j) => ({ ...j, spacing: Math.min(j.spacing!, cap) })) });
+  let chosen = caps[caps.length - 1]!;
+  let design = at(chosen);
+  for (const cap of caps) {
+    const d = at(cap);
+    if (d.applies && d.checks.every((k) => k.passes)) {
+      [chosen, design] = [cap, d];
+      break;
+    }
+  }
+  const source = `greatest spacing ${inJobUnits(chosen, "length", c.job.units)}: the spacing in γ of the column's (EI)_ef (EN 1995-1-1 Annex B, C.2.1 [M])`;
+  return { ...design, joints: design.joints.map((j) => ({ ...j, limits: { ...(j.limits ?? { sources: [] }), maxSpacing: Math.min(j.limits?.maxSpacing ?? Infinity, chosen), sources: [...(j.limits?.sources ?? []), source] } })) };
+}
