@@ -309,7 +309,7 @@ export function aiscDoubleAngleStrut(p: DoubleAngleStrutInput): DoubleAngleStrut
 }
 
 /** AISC 360-16 §E4(b) for a singly symmetric double angle (x_o = 0), C_w = 0 (conservative for double angles). */
-function aiscFlexuralTorsional(section: DoubleAngleSection, Fey: number, p: DoubleAngleStrutInput): FlexuralTorsionalBuckling {
+export function aiscFlexuralTorsional(section: DoubleAngleSection, Fey: number, p: DoubleAngleStrutInput): FlexuralTorsionalBuckling {
   const Fez = (p.shearModulus * section.torsionConstant) / (section.area * section.polarRadiusSquared);
   const H = section.flexuralConstant;
   const sum = Fey + Fez;
