@@ -3,6 +3,8 @@ import type { Connector } from "../connector/registry.js";
 import type { MemberCheck, WorkingLine } from "../schema/result.js";
 import { rectArea, type Rect } from "../section/rectangles.js";
 import type { PlacedPart } from "../section/section-model.js";
+import { allowedSpacings } from "../spacing/allowed-spacings.js";
+import { spacingPractice } from "../spacing/spacing-defaults.js";
 import { inJobUnits } from "../units/format.js";
 import { exceeds } from "../units/limits.js";
 import { columnCheck, step, type Axis, type ColumnDesign, type ColumnJob, type ColumnJointDemand, type ColumnRule } from "./column-rules.js";
@@ -89,6 +91,14 @@ function doubleAngleOf(parts: PlacedPart[], c: ColumnJob) {
   const level = Math.abs(parts[0]!.rects[0]!.y0 - parts[1]!.rects[0]!.y0) <= 1e-6 * (1 + a.d);
   if (!(gap >= 0) || !level) return null;
   return { angle: { backLeg: a.d, outstandingLeg: a.b, thickness: a.t }, gap };
+}
+
+/** The smallest spacing a joint's schedule can build: the bolts' least spacing and the job's, up to an allowed spacing, mm. */
+function closestBuildable(c: ColumnJob, aMax: number): number {
+  const least = Math.max(c.job.spacing.minimum ?? 0, ...c.joints.map((j) => (j.connector.kind === "steel-bolt" ? (j.connector.minSpacing ?? 3 * (steelBoltDiameter(j.connector) ?? 0)) : 0)));
+  const module = c.job.spacing.preferred ? null : (c.job.spacing.module ?? spacingPractice(c.job).module);
+  const allowed = allowedSpacings({ module, preferred: c.job.spacing.preferred ?? null, min: least, max: 2 * Math.max(least, aMax) + (module ?? 0) });
+  return allowed[0] ?? Math.max(least, aMax);
 }
 
 export const aiscE6: ColumnRule = {
@@ -216,18 +226,32 @@ function designE6(c: ColumnJob): ColumnDesign {
   const aMax = at(1).spacing.largest;
   let aLimit = aMax;
   let spacingGoverns = `the largest spacing of ${at(1).spacing.governing.reference}`;
-  if (utilisation(strength(aMax)) > 1 + 1e-9) {
-    const tight = strength(aMax * 1e-3);
-    if (utilisation(tight) <= 1 + 1e-9 && utilisation(tight) < utilisation(strength(aMax)) * (1 - 1e-9)) {
-      let lo = aMax * 1e-3;
+  // Closer than a_max only where it raises the strength, and no closer than the closest spacing the schedule can build
+  // (the bolts' least spacing, c.minSpacing or 3d, AISC 360-16 §J3.3, rounded up to the spacing module): a strut that
+  // fails there gets its connectors there and fails, so more load never means fewer connectors.
+  const aLow = closestBuildable(c, aMax);
+  const uMax = utilisation(strength(aMax));
+  if (!(aLow < aMax)) {
+    aLimit = aLow;
+    spacingGoverns = "the closest spacing the bolts and the spacing module allow, which exceeds a_max";
+  }
+  if (uMax > 1 + 1e-9 && aLow < aMax) {
+    const uLow = utilisation(strength(aLow));
+    if (uLow < uMax * (1 - 1e-9)) {
+      let lo = aLow;
       let hi = aMax;
-      for (let i = 0; i < 60; i++) {
-        const mid = (lo + hi) / 2;
-        if (utilisation(strength(mid)) <= 1 + 1e-9) lo = mid;
-        else hi = mid;
+      if (uLow <= 1 + 1e-9) {
+        for (let i = 0; i < 60; i++) {
+          const mid = (lo + hi) / 2;
+          if (utilisation(strength(mid)) <= 1 + 1e-9) lo = mid;
+          else hi = mid;
+        }
       }
       aLimit = lo;
-      spacingGoverns = "the axial strength: closer than a_max, so that the modified slenderness (§E6.1) leaves enough strength";
+      spacingGoverns =
+        uLow <= 1 + 1e-9
+          ? "the axial strength: closer than a_max, so that the modified slenderness (§E6.1) leaves enough strength"
+          : "the axial strength: the strut falls short even with the connectors as close as they can be built; a larger section is needed";
     }
   }
   const largestScheduled = c.joints.map((j) => j.spacing).filter((s): s is number => s !== null);
@@ -245,6 +269,7 @@ function designE6(c: ColumnJob): ColumnDesign {
   const designYield = factored ? 0.9 * Fy : Fy / 1.67;
 
   const checks: MemberCheck[] = [columnCheck("column-axial", `Column axial compression P_r ≤ ${factored ? "φ_c P_n" : "P_n/Ω_c"} (${s.governs})`, gov.act.axial, s.available, "force", gov.act.combination.id, null, `AISC 360-16 §E1, §E3${s.ft ? ", §E4" : ""}, §E6.1`)];
+  if (exceeds(aLimit, aMax)) checks.push(columnCheck("column-connector-spacing", "Intermediate connectors' spacing a ≤ a_max", aLimit, aMax, "length", gov.act.combination.id, null, col.spacing.governing.reference));
   const bending = per.filter((p) => p.interaction !== null);
   if (bending.length > 0) {
     const worst = bending.reduce((x, y) => (y.interaction! > x.interaction! ? y : x));
