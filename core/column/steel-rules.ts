@@ -55,9 +55,11 @@ export function plasticModulusX(rects: Rect[]): number {
   let Z = 0;
   for (const r of rects) {
     const b = r.x1 - r.x0;
-    const under = Math.max(0, Math.min(r.y1, yp) - r.y0);
-    const over = Math.max(0, r.y1 - Math.max(r.y0, yp));
-    Z += (b * under * under) / 2 + (b * over * over) / 2;
+    // ∫ |y − y_p| b dy over the rectangle's parts below and above the equal-area line.
+    const top = Math.min(r.y1, yp);
+    if (top > r.y0) Z += (b * ((yp - r.y0) ** 2 - (yp - top) ** 2)) / 2;
+    const bottom = Math.max(r.y0, yp);
+    if (r.y1 > bottom) Z += (b * ((r.y1 - yp) ** 2 - (bottom - yp) ** 2)) / 2;
   }
   return Z;
 }
