@@ -288,7 +288,13 @@ function designE6(c: ColumnJob): ColumnDesign {
     bucklingFlow: null,
     bucklingShear: null,
     addsToLateral: false,
-    notes: ["AISC 360-16 §E6 gives no force on the intermediate connectors from flexural buckling: they are set by the largest spacing, and by the lateral load's shear flow q = V·Q/I where that needs them closer.", endNote],
+    notes: [
+      "AISC 360-16 §E6 gives no force on the intermediate connectors from flexural buckling: they are set by the largest spacing, and by the lateral load's shear flow q = V·Q/I where that needs them closer.",
+      j.spacing !== null && j.spacing < aLimit * (1 - 1e-9)
+        ? `Joint ${j.id}: without the column's rule its schedule is already no wider than ${len(j.spacing)} (the bolts' own greatest spacing or the lateral load's q = V·Q/I), closer than the column's ${len(aLimit)}: that governs.`
+        : `Joint ${j.id}: the column's greatest spacing ${len(aLimit)} (${spacingGoverns}) governs where the lateral load's q = V·Q/I does not need the connectors closer.`,
+      endNote,
+    ],
   }));
 
   const steps: WorkingLine[] = [

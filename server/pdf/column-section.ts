@@ -55,5 +55,6 @@ export function columnSection(c: WorksheetContext): void {
       k.interaction === null ? "—" : formatRatio(k.interaction),
     ]),
   );
+  if (steel) for (const n of new Set([...col.notes, ...col.joints.flatMap((j) => j.notes)])) sheet.note(n);
   for (const j of col.joints) sheet.note(`Joint ${j.joint}: ${j.governs}${j.rowsRequired !== null ? `; ${j.rowsRequired} row(s) required, ${j.rowsProvided} given` : ""}.`);
 }

@@ -149,7 +149,7 @@ describe("AISC 360-16 §E6 through designMember (properties)", () => {
       const j = example();
       j.beam.spans = [12];
       (j.connectors[0] as { slipCritical: string }).slipCritical = "no";
-      j.compression!.x.bracedAt = [6];
+      j.compression!.x = { ends: "pinned-pinned", bracedAt: [6] };
       j.compression!.loads[1]!.P = live;
       return j;
     };
