@@ -89,6 +89,9 @@ export function checkJob(job: JobDocument): JobIssue[] {
     job.compression.loads.forEach((l, i) => {
       if (!known.has(l.category)) add(`compression.loads[${i}].category`, `"${l.category}" is not a load category: use one of ${[...known].join(", ")}, or define it in beam.categories`);
     });
+    job.compression.packing.forEach((id, i) => {
+      if (!job.parts.some((p) => p.id === id)) add(`compression.packing[${i}]`, `"${id}" is not one of the parts`);
+    });
     for (const axis of ["x", "y"] as const) {
       job.compression[axis].bracedAt.forEach((x, i) => {
         if (x >= L * (1 - 1e-9)) add(`compression.${axis}.bracedAt[${i}]`, `${x} is at or beyond the top of the column (its height is the member's length, ${Number(L.toPrecision(6))})`);

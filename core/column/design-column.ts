@@ -10,9 +10,10 @@ import { inJobUnits } from "../units/format.js";
 import { columnActions, columnAxis, type ColumnJob, type ColumnJoint, type ColumnRule } from "./column-rules.js";
 import { ec5MechanicallyJointed } from "./ec5-mechanically-jointed.js";
 import { ndsBuiltUp } from "./nds-built-up.js";
+import { aiscE6 } from "./steel-rules.js";
 
 /** The built-up column rules, in the order "auto" tries them. A steel rule (§E6, §6.4) is added here. */
-export const columnRules: ColumnRule[] = [ndsBuiltUp, ec5MechanicallyJointed];
+export const columnRules: ColumnRule[] = [ndsBuiltUp, ec5MechanicallyJointed, aiscE6];
 
 interface PreparedJoint {
   joint: { id: string; lines: ColumnJoint["lines"] };

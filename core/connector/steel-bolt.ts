@@ -426,3 +426,6 @@ export const steelBoltKind: DiscreteConnectorKind<SteelBolt> = {
         };
   },
 };
+
+/** The bolt's diameter d, mm, or null for a size this program does not know. */
+export const steelBoltDiameter = (c: SteelBolt): number | null => resolve(c)?.d ?? null;

@@ -55,6 +55,8 @@ export const Compression = z.strictObject({
   y: BucklingAxis.default({ bracedAt: [] }),
   /** The built-up column rule: "auto" picks it from the materials, the connectors and the basis. */
   rule: z.enum(builtUpRules).default("auto"),
+  /** Steel: parts that only fill the gap between the components (gusset, packing plates): left out of the column's A, I and r. */
+  packing: z.array(Id).max(10, "at most 10 packing parts").default([]),
   /** EN 1995-1-1: service class (§2.3.1.3) for k_mod, 1 when absent. */
   serviceClass: z.union([z.literal(1), z.literal(2), z.literal(3)]).default(1),
   /** EN 1995-1-1: γ_M of the timber (Table 2.3: 1.3 solid timber, 1.25 glulam [M]); that of the material's family when absent. */

@@ -83,5 +83,23 @@ export const HollowRectangle = z
     if (2 * s.t >= Math.min(s.b, s.h)) ctx.addIssue({ code: "custom", path: ["t"], message: "must be less than half of the smaller outside dimension" });
   });
 
-export const Shape = z.discriminatedUnion("type", [Rectangle, Lumber, ISection, Channel, Tee, HollowRectangle]);
+/**
+ * Angle (L) of leg lengths d (vertical) and b (horizontal), thickness t; `heel` is the corner where
+ * the legs meet. Root fillets and toe rounding are ignored. Two angles back to back: the vertical
+ * legs are the backs, each angle's heel towards the other (bottom-right, then bottom-left).
+ */
+export const Angle = z
+  .strictObject({
+    type: z.literal("angle"),
+    designation: Text(40).default(""),
+    d: positive("length"),
+    b: positive("length"),
+    t: positive("length"),
+    heel: z.enum(["bottom-left", "bottom-right", "top-left", "top-right"]).default("bottom-left"),
+  })
+  .superRefine((s, ctx) => {
+    if (s.t >= Math.min(s.b, s.d)) ctx.addIssue({ code: "custom", path: ["t"], message: "must be less than either leg" });
+  });
+
+export const Shape = z.discriminatedUnion("type", [Rectangle, Lumber, ISection, Channel, Tee, HollowRectangle, Angle]);
 export type Shape = z.infer<typeof Shape>;

@@ -53,6 +53,13 @@ export function shapeRectangles(shape: Shape): Rect[] {
         box(shape.b - shape.t, shape.t, shape.t, shape.h - 2 * shape.t),
         box(0, shape.h - shape.t, shape.b, shape.t),
       ];
+    case "angle": {
+      const { b, d, t } = shape;
+      const right = shape.heel.endsWith("right");
+      const top = shape.heel.startsWith("top");
+      // The vertical leg whole, the horizontal leg less the thickness.
+      return [box(right ? b - t : 0, 0, t, d), box(right ? 0 : t, top ? d - t : 0, b - t, t)];
+    }
   }
 }
 

@@ -14,19 +14,20 @@ export function columnSection(c: WorksheetContext): void {
     return;
   }
   const nds = col.rule === "nds-15.3";
+  const steel = col.rule === "aisc-e6";
   table(
     sheet,
     [
       { header: "Buckling about", weight: 1.2 },
       { header: "K_e", weight: 0.5, align: "right" },
       { header: "l_e", weight: 0.8, align: "right" },
-      { header: nds ? "l_e/d" : "λ", weight: 0.6, align: "right" },
+      { header: nds ? "l_e/d" : steel ? "L_c/r" : "λ", weight: 0.6, align: "right" },
       { header: nds ? "K_f" : "", weight: 0.5, align: "right" },
-      { header: nds ? "C_P" : "k_c", weight: 0.6, align: "right" },
+      { header: nds ? "C_P" : steel ? "F_cr/F_y" : "k_c", weight: 0.6, align: "right" },
       { header: "π²EI/l_e²", weight: 0.9, align: "right" },
     ],
     col.axes.map((a) => [
-      { text: `${a.axis} axis`, note: a.jointed ? "across the laminations' joints" : "along them" },
+      { text: `${a.axis} axis`, note: steel ? (a.jointed ? "shears the connectors" : "does not shear them") : a.jointed ? "across the laminations' joints" : "along them" },
       formatNumber(a.K),
       text.of(a.effectiveLength, "span"),
       formatNumber(Number(a.slenderness.toPrecision(4))),
@@ -41,7 +42,7 @@ export function columnSection(c: WorksheetContext): void {
       { header: "Combination", weight: 1.2 },
       { header: "Axial P", weight: 0.9, align: "right" },
       { header: "Moment", weight: 0.9, align: "right" },
-      { header: nds ? "F_c*" : "f_c,0,d", weight: 0.8, align: "right" },
+      { header: nds ? "F_c*" : steel ? (result.basis === "factored" ? "φ_c F_y" : "F_y/Ω_c") : "f_c,0,d", weight: 0.8, align: "right" },
       { header: "Capacity", weight: 0.9, align: "right" },
       { header: "Interaction", weight: 0.8, align: "right" },
     ],
@@ -54,5 +55,6 @@ export function columnSection(c: WorksheetContext): void {
       k.interaction === null ? "—" : formatRatio(k.interaction),
     ]),
   );
+  if (steel) for (const n of new Set([...col.notes, ...col.joints.flatMap((j) => j.notes)])) sheet.note(n);
   for (const j of col.joints) sheet.note(`Joint ${j.joint}: ${j.governs}${j.rowsRequired !== null ? `; ${j.rowsRequired} row(s) required, ${j.rowsProvided} given` : ""}.`);
 }

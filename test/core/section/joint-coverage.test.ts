@@ -35,6 +35,9 @@ function widthAt(p: Part, y: number): number {
     case "hollow-rectangle":
       if (t <= 0 || t >= s.h) return 0;
       return t < s.t || t > s.h - s.t ? s.b : 2 * s.t;
+    case "angle":
+      if (t <= 0 || t >= s.d) return 0;
+      return (s.heel.startsWith("top") ? t > s.d - s.t : t < s.t) ? s.b : s.t;
   }
 }
 

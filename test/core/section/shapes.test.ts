@@ -54,6 +54,30 @@ describe("shapeRectangles", () => {
     expectClose(section.area, 100 * 200 - 84 * 184, { rel: 1e-12 });
   });
 
+  test("an angle L100×75×10 (bottom-left heel): A = 1650 mm², ȳ from the horizontal leg's face by hand; every heel gives the same I about x when mirrored left-right [D]", () => {
+    // [D]: vertical leg 10 × 100 (centre 50), horizontal leg 65 × 10 (centre 5): A = 1000 + 650, ȳ = (1000·50 + 650·5)/1650.
+    const ybar = (1000 * 50 + 650 * 5) / 1650;
+    const Ix = (10 * 100 ** 3) / 12 + 1000 * (50 - ybar) ** 2 + (65 * 10 ** 3) / 12 + 650 * (5 - ybar) ** 2;
+    const L = (heel: "bottom-left" | "bottom-right" | "top-left" | "top-right") => sectionOf([part("L", { type: "angle", designation: "", d: 100, b: 75, t: 10, heel })]).section;
+    expectClose(L("bottom-left").area, 1650, { rel: 1e-12 });
+    expectClose(L("bottom-left").centroidY, ybar, { rel: 1e-12 });
+    expectClose(L("bottom-left").secondMoment, Ix, { rel: 1e-12 });
+    expectClose(L("bottom-right").secondMoment, Ix, { rel: 1e-12 });
+    expectClose(L("top-left").centroidY, 100 - ybar, { rel: 1e-12 });
+    expect(shapeRectangles({ type: "angle", designation: "", d: 100, b: 75, t: 10, heel: "bottom-right" })).toEqual([
+      { x0: 65, x1: 75, y0: 0, y1: 100 },
+      { x0: 0, x1: 65, y0: 0, y1: 10 },
+    ]);
+  });
+
+  test("an angle thicker than a leg is refused with the field named", () => {
+    const job = plankIJob() as { parts: { shape: unknown }[] };
+    job.parts[0]!.shape = { type: "angle", d: 50, b: 40, t: 40 };
+    const r = prepareJob(job);
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.issues.some((i) => i.path === "parts[0].shape.t" && i.message.includes("less than either leg"))).toBe(true);
+  });
+
   test("a channel facing either way has the same I; its web is at the back", () => {
     const right = shapeRectangles({ type: "channel", designation: "", d: 250, bf: 80, tf: 12, tw: 8, toes: "right" });
     const left = shapeRectangles({ type: "channel", designation: "", d: 250, bf: 80, tf: 12, tw: 8, toes: "left" });

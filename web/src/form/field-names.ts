@@ -97,6 +97,7 @@ const names: Record<string, FieldName> = {
   orientation: { label: "on", values: { edge: "edge", flat: "flat" } },
   toes: { label: "toes", values: { right: "right", left: "left" } },
   flange: { label: "flange", values: { top: "top", bottom: "bottom" } },
+  heel: { label: "heel", values: { "bottom-left": "bottom left", "bottom-right": "bottom right", "top-left": "top left", "top-right": "top right" } },
   designation: { label: "designation" },
 };
 

@@ -9,6 +9,7 @@ export const shapeNames: Record<string, string> = {
   channel: "channel",
   tee: "tee",
   "hollow-rectangle": "rectangular hollow section",
+  angle: "angle (L)",
 };
 
 /** A starting shape of each type in the job's units; invented round sizes, not catalogue sections. */
@@ -27,6 +28,8 @@ export function shapePreset(type: string, units: UnitSystem): Item {
       return us ? { type, d: 6, bf: 6, tf: 0.4, tw: 0.3, flange: "top" } : { type, d: 150, bf: 150, tf: 10, tw: 7, flange: "top" };
     case "hollow-rectangle":
       return us ? { type, b: 4, h: 8, t: 0.25 } : { type, b: 100, h: 200, t: 6 };
+    case "angle":
+      return us ? { type, d: 4, b: 3.5, t: 0.375, heel: "bottom-left" } : { type, d: 100, b: 90, t: 10, heel: "bottom-left" };
     default:
       return { type };
   }

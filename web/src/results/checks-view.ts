@@ -77,9 +77,10 @@ export function columnTables(result: DesignResult): HTMLElement[] {
   const title = `Built-up column: ${col.title}${col.standard ? `, ${col.standard}` : ""}`;
   if (!col.applies) return [el("p", { className: "hint fails", text: `${title}. Not designed as a column: ${col.reason ?? ""}` })];
   const nds = col.rule === "nds-15.3";
+  const steel = col.rule === "aisc-e6";
   const axes = table(
     title,
-    ["Buckling about", "K_e", "l_e", nds ? "l_e/d" : "λ", nds ? "K_f" : "", nds ? "C_P" : "k_c", "π²EI/l_e²"],
+    ["Buckling about", "K_e", "l_e", nds ? "l_e/d" : steel ? "L_c/r" : "λ", nds ? "K_f" : "", nds ? "C_P" : steel ? "F_cr/F_y" : "k_c", "π²EI/l_e²"],
     col.axes.map((a) => ({
       cells: [`${a.axis} axis${a.jointed ? " (across the joints)" : ""}`, formatNumber(a.K), shown(result, a.effectiveLength, "span"), formatNumber(a.slenderness, 4), nds ? formatNumber(a.factor) : "", formatNumber(a.stability, 3), shown(result, a.euler, "force")],
     })),
@@ -87,7 +88,7 @@ export function columnTables(result: DesignResult): HTMLElement[] {
   );
   const combos = table(
     "Axial load by combination",
-    ["Combination", "Axial P", "Moment", nds ? "F_c*" : "f_c,0,d", "Capacity", "Interaction"],
+    ["Combination", "Axial P", "Moment", nds ? "F_c*" : steel ? (result.basis === "factored" ? "φ_c F_y" : "F_y/Ω_c") : "f_c,0,d", "Capacity", "Interaction"],
     col.combinations.map((k) => ({
       cells: [k.combination === col.governing ? `${k.combination} (governs)` : k.combination, shown(result, k.axial, "force"), shown(result, k.moment, "moment"), shown(result, k.strength, "stress"), shown(result, k.capacity, "force"), k.interaction === null ? "—" : formatNumber(k.interaction, 3)],
     })),
