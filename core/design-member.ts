@@ -8,7 +8,7 @@ import { memberChecks } from "./checks/member-checks.js";
 import { kindOf } from "./connector/registry.js";
 import { bondLineResult } from "./fastening/bond-line-result.js";
 import { compositeDesign } from "./fastening/composite-design.js";
-import { contextFor } from "./fastening/connector-context.js";
+import { contextsFor } from "./fastening/connector-context.js";
 import { discreteSchedule, type JointInput } from "./fastening/discrete-schedule.js";
 import { globalise, jointDemand, localView, memberJointsOf, type MemberJoint } from "./fastening/member-joints.js";
 import { partTerminations } from "./fastening/part-terminations.js";
@@ -101,7 +101,9 @@ export function designMember(job: JobDocument): DesignResult {
     // One context per combination and contact line; a combination's resistance is the least over the lines.
     // Across side-by-side plies the connectors pass the load across the member (perpendicular to the grain of timber plies).
     const direction = plyInterfaces !== null ? "across" : "along";
-    const contexts = beam.results.map((r) => joint.lines.map((line) => contextFor(r.combination, job, joint, line, fastening.headSide, fastening.rows, mj.section, direction)));
+    const combinations = beam.results.map((r) => r.combination);
+    const byLine = joint.lines.map((line) => contextsFor(combinations, job, joint, line, fastening.headSide, fastening.rows, mj.section, direction));
+    const contexts = combinations.map((_, i) => byLine.map((line) => line[i]!));
     const common = { job, joint, connector, fastening, contexts };
     let input: JointInput;
     if (plyInterfaces !== null) {

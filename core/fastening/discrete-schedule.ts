@@ -6,6 +6,7 @@ import type { Connector } from "../connector/registry.js";
 import type { Fastening, JobDocument } from "../schema/job.js";
 import type { Schedule } from "../schema/result.js";
 import type { JointPlane } from "../section/joints.js";
+import { memoisedByLoading } from "./connector-context.js";
 import { rowFit } from "./row-fit.js";
 import { allowedSpacings } from "../spacing/allowed-spacings.js";
 import { checkSchedule } from "../spacing/check-schedule.js";
@@ -61,7 +62,7 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
   const { job, beam, stations, joint, connector, fastening, contexts, flowFactor, stressFactor } = input;
   const rows = fastening.rows;
   const lineCount = joint.lines.length;
-  const resistances: ConnectorResistance[] = contexts.map((lines) => leastOf(lines.map((c) => kind.resistance(connector, c))));
+  const resistances: ConnectorResistance[] = memoisedByLoading(contexts, (c) => kind.resistance(connector, c)).map(leastOf);
   const warnings = [...new Set(resistances.flatMap((r) => r.warnings ?? []))];
   const limits = governingLimits(contexts[0]!.map((c) => kind.detailing(connector, c)));
   const defaults = spacingPractice(job);
@@ -271,7 +272,7 @@ function designedRemedies(
     const limits = governingLimits(lines[0]!.map((ctx) => kind.detailing(c, ctx)));
     if (rowFit(limits, rows, joint.lines)?.fits === false) return null;
     if (beam.length < 2 * limits.endDistance * (1 - 1e-9)) return null;
-    const r = lines.map((ls) => Math.min(...ls.map((ctx) => kind.resistance(c, ctx).value)) * factor);
+    const r = memoisedByLoading(lines, (ctx) => kind.resistance(c, ctx).value).map((ls) => Math.min(...ls) * factor);
     const scale = Math.min(...r) / leastNow;
     const combinations = problem.combinations.map((k, i) => ({ ...k, resistance: i < combos ? r[i]! : k.resistance * scale }));
     const minSpacing = Math.max(limits.minSpacing, job.spacing.minimum ?? 0);
