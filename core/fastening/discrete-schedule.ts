@@ -10,6 +10,7 @@ import { memoisedByLoading } from "./connector-context.js";
 import { rowFit } from "./row-fit.js";
 import { allowedSpacings } from "../spacing/allowed-spacings.js";
 import { checkSchedule } from "../spacing/check-schedule.js";
+import { absShearsAtStations } from "../spacing/demand.js";
 import { demandCurve, designSchedule, type ZoneReason } from "../spacing/design-schedule.js";
 import { spacingPractice } from "../spacing/spacing-defaults.js";
 import { inJobUnits } from "../units/format.js";
@@ -51,7 +52,13 @@ export function demandActionsOf(input: Pick<JointInput, "beam" | "demandActions"
 
 /** Envelope of the flow on one contact line at the beam stations, N/mm. */
 export function lineFlow(actions: MemberActions[], stations: Station[], flowFactor: number, lines: number): number[] {
-  return stations.map((s) => (Math.max(...actions.map((a) => Math.abs(shearAt(a, s.x, s.side)))) * flowFactor) / lines);
+  const shears = absShearsAtStations(actions, stations);
+  if (!shears) return stations.map((s) => (Math.max(...actions.map((a) => Math.abs(shearAt(a, s.x, s.side)))) * flowFactor) / lines);
+  return stations.map((_, j) => {
+    let largest = -Infinity;
+    for (const v of shears) largest = Math.max(largest, v[j]!);
+    return (largest * flowFactor) / lines;
+  });
 }
 
 /**
@@ -380,10 +387,7 @@ function infeasibleReason(inf: NonNullable<ReturnType<typeof designSchedule>["in
 }
 
 function requiredAt(stations: Station[], demand: ReturnType<typeof demandCurve>): (number | null)[] {
-  return stations.map((s) => {
-    const d = demand.at(s.x, s.side).value;
-    return d > 0 ? 1 / d : null;
-  });
+  return Array.from(demand.valuesAtStations(stations), (d) => (d > 0 ? 1 / d : null));
 }
 
 function efficiencyOf(lowerBound: number, demandIntegral: number, count: number, uniform: { spacing: number; count: number } | null): Schedule["efficiency"] {

@@ -1,5 +1,6 @@
 import type { Zone } from "../schema/result.js";
-import { DemandCurve } from "./demand.js";
+import { maxAbsShear } from "../beam/member-actions.js";
+import type { DemandCurve, DemandTerm } from "./demand.js";
 import { placeRows } from "./place-rows.js";
 import { verifyRows, type RowUtilisation } from "./verify-rows.js";
 
@@ -38,12 +39,14 @@ export function checkSchedule(p: {
   const zones: ProvidedZone[] = "zones" in p.provided ? p.provided.zones : zonesOfPositions(given!, L);
   const positions = given ?? placeRows(zones, L, p.endDistance, false, p.minGap ?? 0);
   const rowChecks = verifyRows(positions, p.demand);
-  const single = p.demand.terms.map((t) => ({ id: t.combination, rows: verifyRows(positions, new DemandCurve(L, [t])) }));
-  const perCombination = single.map(({ id, rows }) => {
-    const worst = rows.reduce((a, b) => (b.utilisation > a.utilisation ? b : a));
-    return { combination: id, maxUtilisation: worst.utilisation, at: worst.x };
+  // Each combination on its own, row by row (the rows' utilisations under it alone).
+  const single = p.demand.terms.map((t) => ({ id: t.combination, utilisation: utilisationsUnder(rowChecks, t, L) }));
+  const perCombination = single.map(({ id, utilisation }) => {
+    let worst = 0;
+    for (let r = 1; r < utilisation.length; r++) if (utilisation[r]! > utilisation[worst]!) worst = r;
+    return { combination: id, maxUtilisation: utilisation[worst]!, at: rowChecks[worst]!.x };
   });
-  const inZone = (z: ProvidedZone, i: number) => (r: RowUtilisation) => r.x >= z.from - 1e-9 && (i === zones.length - 1 ? r.x <= z.to + 1e-9 : r.x < z.to - 1e-9);
+  const inZone = (z: ProvidedZone, i: number) => (r: { x: number }) => r.x >= z.from - 1e-9 && (i === zones.length - 1 ? r.x <= z.to + 1e-9 : r.x < z.to - 1e-9);
   return {
     positions,
     rowChecks,
@@ -52,7 +55,8 @@ export function checkSchedule(p: {
       const rows = rowChecks.filter(inZone(z, i));
       const worst = rows.reduce<RowUtilisation | undefined>((a, b) => (!a || b.utilisation > a.utilisation ? b : a), undefined);
       const peak = p.demand.maxOver(z.from, z.to);
-      const failing = single.filter(({ rows: r }) => r.filter(inZone(z, i)).some((row) => row.utilisation > 1 + 1e-9)).map((s) => s.id);
+      const here = inZone(z, i);
+      const failing = single.filter(({ utilisation }) => rowChecks.some((row, r) => here(row) && utilisation[r]! > 1 + 1e-9)).map((s) => s.id);
       return {
         from: z.from,
         to: z.to,
@@ -67,6 +71,18 @@ export function checkSchedule(p: {
       };
     }),
   };
+}
+
+/** Each row's utilisation under one combination alone: as verifyRows with that term only. */
+function utilisationsUnder(rows: RowUtilisation[], term: DemandTerm, length: number): Float64Array {
+  const out = new Float64Array(rows.length);
+  rows.forEach((row, r) => {
+    const lo = Math.max(0, row.from);
+    const hi = Math.min(length, row.to);
+    const value = hi < lo ? 0 : term.k * maxAbsShear(term.actions, lo, hi).value;
+    out[r] = (row.to - row.from) * (value > 0 ? value : 0);
+  });
+  return out;
 }
 
 /** Explicit positions shown as one zone per run of equal gaps (to a tenth of a millimetre). */

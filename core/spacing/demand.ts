@@ -1,6 +1,32 @@
+import { locateStations } from "../beam/beam-result.js";
 import { maxAbsShear, pieceAt, poly, shearAt, type Extreme, type MemberActions, type Side } from "../beam/member-actions.js";
+import type { Station } from "../beam/stations.js";
 
 const SIMPSON_PANELS = 64;
+
+/**
+ * |V| of each of `actions` at the stations, exactly as shearAt gives it, located in one sweep where the
+ * actions share their breaks (a member's combinations) and the stations run along the member; null
+ * otherwise (then ask shearAt).
+ */
+export function absShearsAtStations(actions: MemberActions[], stations: Station[]): Float64Array[] | null {
+  const first = actions[0];
+  if (!first || actions.some((a) => a.breaks !== first.breaks || a.pieces.length !== first.pieces.length || a.length !== first.length)) return null;
+  for (let j = 1; j < stations.length; j++) {
+    const a = stations[j - 1]!;
+    const b = stations[j]!;
+    if (!(a.x < b.x || (a.x === b.x && !(a.side === "right" && b.side === "left")))) return null;
+  }
+  const at = locateStations(first, stations);
+  return actions.map((a) => {
+    const out = new Float64Array(stations.length);
+    for (let j = 0; j < stations.length; j++) {
+      if (at.outside[j] === 1) continue;
+      out[j] = Math.abs(poly(a.pieces[at.piece[j]!]!.v, at.u[j]!));
+    }
+    return out;
+  });
+}
 
 const sameNumbers = (a: number[], b: number[]) => a.length === b.length && a.every((x, i) => x === b[i]);
 
@@ -63,6 +89,24 @@ export class DemandCurve {
       if (value > best.value) best = { value, x, combination: t.combination };
     }
     return best;
+  }
+
+  /** at(x, side).value at every station. */
+  valuesAtStations(stations: Station[]): Float64Array {
+    const out = new Float64Array(stations.length);
+    const shears = absShearsAtStations(this.terms.map((t) => t.actions), stations);
+    if (!shears) {
+      stations.forEach((s, j) => (out[j] = this.at(s.x, s.side).value));
+      return out;
+    }
+    this.terms.forEach((t, i) => {
+      const v = shears[i]!;
+      for (let j = 0; j < stations.length; j++) {
+        const value = t.k * v[j]!;
+        if (value > out[j]!) out[j] = value;
+      }
+    });
+    return out;
   }
 
   /** Exact maximum over [a, b] ∩ [0, L], both sides of every jump counted. */
