@@ -275,7 +275,7 @@ export function designMember(job: JobDocument): DesignResult {
     welds,
     checks,
     notChecked,
-    assumptions: [...baseAssumptions(job, beam), ...assumptions],
+    assumptions: [...baseAssumptions(job, beam, combinationList), ...assumptions],
     standards: [
       "Connector resistances are the values given in the job or computed by the standards listed below; material strengths are the values given in the job, on its stated basis.",
       "Shear flow q = V·Q/I and stresses by elastic beam theory (mechanics of materials, e.g. Gere & Goodno, Mechanics of Materials, ch. 5).",
@@ -369,7 +369,7 @@ function scheduleFailure(s: Schedule): string {
   return s.mode === "check" ? "a row of the given schedule is over-utilised" : "a row is over-utilised";
 }
 
-function baseAssumptions(job: JobDocument, beam: BeamAnalysis): string[] {
+function baseAssumptions(job: JobDocument, beam: BeamAnalysis, combinations: Parameters<typeof beamAssumptions>[2]): string[] {
   return [
     "Linear-elastic member; plane sections remain plane; the parts act as one section (rigid connection), so q = V·Q/I about the transformed section's neutral axis.",
     "Parts of different stiffness are transformed by the modular ratio n = E/E_ref to the first part's material.",
@@ -377,7 +377,7 @@ function baseAssumptions(job: JobDocument, beam: BeamAnalysis): string[] {
       ? `Loads are taken as entered, on the ${job.basis === "allowable" ? "allowable-stress (service load)" : "factored (strength)"} basis; resistances and strengths are compared on the same basis.`
       : `Loads are entered as nominal values by category and combined by the factors of each load combination; resistances and strengths are on the ${job.basis === "allowable" ? "allowable-stress" : "factored (design)"} basis.`,
     job.beam.selfWeight ? "Self-weight of the parts (area × density × g) is added as a dead load over the whole member." : "Self-weight is not included (switched off in the job).",
-    ...beamAssumptions(job, beam),
+    ...beamAssumptions(job, beam, combinations),
     "Shear stress at a level is averaged over the full width cut at that level.",
     "Zone boundaries are on a round grid from the left end; the first and last rows sit at the end distance from the member ends.",
   ];

@@ -101,16 +101,18 @@ const LOADING_FIELDS = new Set(["combinationName", "duration", "categories", "ti
  */
 export function memoisedByLoading<T>(contexts: ConnectorContext[][], compute: (context: ConnectorContext) => T): T[][] {
   const caches: Map<string, T>[] = [];
-  const sameLine = (c: ConnectorContext, first: ConnectorContext) => {
+  const lineKeys = (contexts[0] ?? []).map((first) => Object.keys(first).filter((k) => !LOADING_FIELDS.has(k)));
+  const sameLine = (c: ConnectorContext, first: ConnectorContext, keys: string[]) => {
     const a = c as unknown as Record<string, unknown>;
     const b = first as unknown as Record<string, unknown>;
-    const keys = Object.keys(a);
-    return keys.length === Object.keys(b).length && keys.every((k) => LOADING_FIELDS.has(k) || a[k] === b[k]);
+    if (c === first) return true;
+    for (const k in a) if (!LOADING_FIELDS.has(k) && !(k in b)) return false;
+    return keys.every((k) => a[k] === b[k]);
   };
   return contexts.map((lines) =>
     lines.map((c, j) => {
       const first = contexts[0]![j];
-      if (!first || !sameLine(c, first)) return compute(c);
+      if (!first || !sameLine(c, first, lineKeys[j]!)) return compute(c);
       const key = JSON.stringify([c.duration, c.categories, c.timeEffect?.value ?? null, c.timeEffect?.reason ?? null]);
       const cache = (caches[j] ??= new Map());
       if (cache.has(key)) return cache.get(key)!;
