@@ -111,6 +111,17 @@ export class DemandCurve {
 
   /** Exact maximum over [a, b] ∩ [0, L], both sides of every jump counted. */
   maxOver(a: number, b: number): DemandPeak {
+    // Rows that stay put while a schedule is tightened ask again for the same tributary: answered once.
+    let byEnd = this.peaks.get(a);
+    if (!byEnd) this.peaks.set(a, (byEnd = new Map()));
+    let peak = byEnd.get(b);
+    if (!peak) byEnd.set(b, (peak = this.peakOver(a, b)));
+    return { ...peak };
+  }
+
+  private readonly peaks = new Map<number, Map<number, DemandPeak>>();
+
+  private peakOver(a: number, b: number): DemandPeak {
     const lo = Math.max(0, a);
     const hi = Math.min(this.length, b);
     let best: DemandPeak = { value: 0, x: lo, combination: this.terms[0]?.combination ?? "" };
