@@ -1,6 +1,6 @@
 import type { Zone } from "../schema/result.js";
 import { maxAbsShear } from "../beam/member-actions.js";
-import type { DemandCurve, DemandTerm } from "./demand.js";
+import { piecesMet, shearBounds, type DemandCurve, type DemandTerm } from "./demand.js";
 import { placeRows } from "./place-rows.js";
 import { verifyRows, type RowUtilisation } from "./verify-rows.js";
 
@@ -73,15 +73,42 @@ export function checkSchedule(p: {
   };
 }
 
-/** Each row's utilisation under one combination alone: as verifyRows with that term only. */
+/**
+ * Each row's utilisation under one combination alone, as verifyRows with that term only, where it can
+ * matter: the worst row and any row above 1. A row whose bound (its tributary × k × the bound on |V| over
+ * the pieces it meets) is below both the worst found and 1 is not worked out and reads −1.
+ */
 function utilisationsUnder(rows: RowUtilisation[], term: DemandTerm, length: number): Float64Array {
   const out = new Float64Array(rows.length);
-  rows.forEach((row, r) => {
+  const ranges = rows.map((row) => {
     const lo = Math.max(0, row.from);
     const hi = Math.min(length, row.to);
-    const value = hi < lo ? 0 : term.k * maxAbsShear(term.actions, lo, hi).value;
-    out[r] = (row.to - row.from) * (value > 0 ? value : 0);
+    return { lo, hi, pieces: hi < lo ? null : piecesMet(term.actions, lo, hi) };
   });
+  const pieceBounds = shearBounds(term.actions);
+  const bounds = ranges.map(({ pieces }, r) => {
+    if (!pieces) return 0;
+    let m = 0;
+    for (let p = pieces[0]; p <= pieces[1]; p++) if (pieceBounds[p]! > m) m = pieceBounds[p]!;
+    return (rows[r]!.to - rows[r]!.from) * (term.k * m);
+  });
+  const exact = (r: number) => {
+    const { lo, hi } = ranges[r]!;
+    const value = hi < lo ? 0 : term.k * maxAbsShear(term.actions, lo, hi).value;
+    return (rows[r]!.to - rows[r]!.from) * (value > 0 ? value : 0);
+  };
+  let lead = 0;
+  for (let r = 1; r < rows.length; r++) if (bounds[r]! > bounds[lead]!) lead = r;
+  let known = rows.length > 0 ? (out[lead] = exact(lead)) : 0;
+  for (let r = 0; r < rows.length; r++) {
+    if (r === lead) continue;
+    if (bounds[r]! < known && bounds[r]! <= 1 + 1e-9) {
+      out[r] = -1;
+      continue;
+    }
+    out[r] = exact(r);
+    if (out[r]! > known) known = out[r]!;
+  }
   return out;
 }
 

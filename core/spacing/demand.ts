@@ -30,6 +30,22 @@ export function absShearsAtStations(actions: MemberActions[], stations: Station[
 
 const sameNumbers = (a: number[], b: number[]) => a.length === b.length && a.every((x, i) => x === b[i]);
 
+/** The first and last piece that meet [lo − tol, hi + tol]: every piece maxAbsShear(actions, lo, hi) looks at. */
+export function piecesMet(actions: MemberActions, lo: number, hi: number): [number, number] {
+  const tol = 1e-9 * actions.length;
+  const pieces = actions.pieces;
+  let first = 0;
+  let top = pieces.length;
+  while (first < top) {
+    const mid = (first + top) >> 1;
+    if (pieces[mid]!.x1 < lo - tol) first = mid + 1;
+    else top = mid;
+  }
+  let last = first - 1;
+  while (last + 1 < pieces.length && pieces[last + 1]!.x0 <= hi + tol) last++;
+  return [first, last];
+}
+
 const boundsOf = new WeakMap<MemberActions, Float64Array>();
 
 /**
@@ -37,7 +53,7 @@ const boundsOf = new WeakMap<MemberActions, Float64Array>();
  * far above the rounding of evaluating the polynomial, so that no value maxAbsShear computes inside the
  * piece exceeds it.
  */
-function shearBounds(actions: MemberActions): Float64Array {
+export function shearBounds(actions: MemberActions): Float64Array {
   let out = boundsOf.get(actions);
   if (out) return out;
   out = new Float64Array(actions.pieces.length);
@@ -166,17 +182,7 @@ export class DemandCurve {
       // Terms analysed on the same breaks share their pieces: find the range once.
       if (actions.breaks !== breaks) {
         breaks = actions.breaks;
-        const tol = 1e-9 * actions.length;
-        const pieces = actions.pieces;
-        first = 0;
-        let top = pieces.length;
-        while (first < top) {
-          const mid = (first + top) >> 1;
-          if (pieces[mid]!.x1 < lo - tol) first = mid + 1;
-          else top = mid;
-        }
-        last = first - 1;
-        while (last + 1 < pieces.length && pieces[last + 1]!.x0 <= hi + tol) last++;
+        [first, last] = piecesMet(actions, lo, hi);
       }
       const pieceBounds = shearBounds(actions);
       let m = 0;
