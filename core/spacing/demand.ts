@@ -10,6 +10,21 @@ const SIMPSON_PANELS = 64;
  * otherwise (then ask shearAt).
  */
 export function absShearsAtStations(actions: MemberActions[], stations: Station[]): Float64Array[] | null {
+  // Asked for the same actions and stations by each joint (shear flow, required spacing): worked out once.
+  const first = actions[0];
+  if (!first) return null;
+  let byFirst = shearsAt.get(stations);
+  if (!byFirst) shearsAt.set(stations, (byFirst = new WeakMap()));
+  const known = byFirst.get(first);
+  if (known && known.actions.length === actions.length && known.actions.every((a, i) => a === actions[i])) return known.shears;
+  const shears = locatedShears(actions, stations);
+  byFirst.set(first, { actions: [...actions], shears });
+  return shears;
+}
+
+const shearsAt = new WeakMap<Station[], WeakMap<MemberActions, { actions: MemberActions[]; shears: Float64Array[] | null }>>();
+
+function locatedShears(actions: MemberActions[], stations: Station[]): Float64Array[] | null {
   const first = actions[0];
   if (!first || actions.some((a) => a.breaks !== first.breaks || a.pieces.length !== first.pieces.length || a.length !== first.length)) return null;
   for (let j = 1; j < stations.length; j++) {
