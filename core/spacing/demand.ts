@@ -158,10 +158,14 @@ export class DemandCurve {
     let best: DemandPeak = { value: 0, x: lo, combination: this.terms[0]?.combination ?? "" };
     if (hi < lo) return best;
     const terms = this.terms;
-    if (terms.length === 1) {
-      const e = maxAbsShear(terms[0]!.actions, lo, hi);
-      const value = terms[0]!.k * e.value;
-      return value > best.value ? { value, x: e.x, combination: terms[0]!.combination } : best;
+    // With a few terms, bounding them costs more than it saves.
+    if (terms.length < 4) {
+      for (const t of terms) {
+        const e = maxAbsShear(t.actions, lo, hi);
+        const value = t.k * e.value;
+        if (value > best.value) best = { value, x: e.x, combination: t.combination };
+      }
+      return best;
     }
     // A term whose bound over the pieces it meets is below a value already found cannot govern: only the
     // others are evaluated exactly, in their order (the first to reach the largest value keeps it, as before).

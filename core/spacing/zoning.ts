@@ -62,12 +62,6 @@ export function planZones(p: ZoningProblem): ZonePlan {
     }
     return cost[key]!;
   };
-  const floors = new Float64Array(size).fill(NaN);
-  const floorOf = (i: number, j: number): number => {
-    const key = i * (n + 1) + j;
-    if (Number.isNaN(floors[key]!)) floors[key] = zoneCostFloor(p, g[i]!, g[j]!, i === 0, j === n);
-    return floors[key]!;
-  };
   let previous = new Float64Array(n + 1).fill(Infinity);
   previous[0] = 0;
   const parent: Int32Array[] = [];
@@ -80,8 +74,6 @@ export function planZones(p: ZoningProblem): ZonePlan {
       for (let i = 0; i < j; i++) {
         const before = previous[i]!;
         if (before === Infinity) continue;
-        // A zone that cannot improve on the best found even at its floor need not be evaluated (yet).
-        if (current[j]! !== Infinity && Number.isNaN(cost[i * (n + 1) + j]!) && before + floorOf(i, j) >= current[j]! - 1e-9) continue;
         const total = before + zoneCost(i, j);
         if (total < current[j]! - 1e-9) {
           current[j] = total;
@@ -142,33 +134,12 @@ export function evaluateZone(p: ZoningProblem, a: number, b: number, first: bool
   if (!last && b <= start + tol) return null;
   const spacing = zoneSpacing(p, a, b, first, last);
   const s = spacing ?? p.spacings[0]!;
-  const rows = rowsAt(p, b, start, last, s, tol);
+  let rows: number;
+  if (p.mirrored && last) rows = (Math.ceil((L - 2 * start - tol) / s - 1e-9) + 1) / 2;
+  else if (last) rows = Math.ceil((L - e - start - tol) / s - 1e-9) + 1;
+  else rows = Math.ceil((b - start - tol) / s - 1e-9);
   const cost = spacing === undefined ? rows + INFEASIBLE_PENALTY * (b - a) : rows;
   return { cost, rows, spacing: s, feasible: spacing !== undefined };
-}
-
-/** Rows of a zone from `start` (its first row) to b at spacing s, as evaluateZone counts them. */
-function rowsAt(p: ZoningProblem, b: number, start: number, last: boolean, s: number, tol: number): number {
-  const L = p.length;
-  if (p.mirrored && last) return (Math.ceil((L - 2 * start - tol) / s - 1e-9) + 1) / 2;
-  if (last) return Math.ceil((L - p.endDistance - start - tol) / s - 1e-9) + 1;
-  return Math.ceil((b - start - tol) / s - 1e-9);
-}
-
-/**
- * A cost no evaluation of zone [a, b] goes below, from one look at its demand: its spacing is at most
- * the largest allowed spacing that demand allows (or the least, with the penalty, when none does), and
- * the row count is monotonic in the spacing between the least and that one.
- */
-function zoneCostFloor(p: ZoningProblem, a: number, b: number, first: boolean, last: boolean): number {
-  const L = p.length;
-  const tol = 1e-9 * Math.max(L, p.minZoneLength);
-  const start = first ? p.endDistance : a;
-  const peak = p.demand(a, b);
-  const topIndex = peak > 0 ? indexAtMost(p.spacings, 1 / peak) : p.spacings.length - 1;
-  const least = rowsAt(p, b, start, last, p.spacings[0]!, tol);
-  if (topIndex < 0) return least + INFEASIBLE_PENALTY * (b - a);
-  return Math.min(least, rowsAt(p, b, start, last, p.spacings[topIndex]!, tol));
 }
 
 /**
