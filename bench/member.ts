@@ -4,30 +4,12 @@ import { readFileSync } from "node:fs";
 import { designMember, DesignResult, prepareJob, toDisplayUnits } from "../core/index.js";
 import { fingerprintOf } from "../server/fingerprint.js";
 import { SIMPLE_MEMBER } from "./http.js";
+import { threeSpanJob } from "./three-span-job.js";
 import { timeIt } from "./time-it.js";
 
 export interface MemberFigures {
   simpleMedianMs: number;
   threeSpanMedianMs: number;
-}
-
-/** The simple member's section on three continuous spans, 20 loads of every built-in category (invented, demo data). */
-function threeSpanJob(): Record<string, unknown> {
-  const job = JSON.parse(readFileSync(new URL(`../fixtures/examples/${SIMPLE_MEMBER}.json`, import.meta.url), "utf8"));
-  const categories = ["dead", "live", "roof-live", "snow", "wind"];
-  const loads: Record<string, unknown>[] = [];
-  for (let i = 0; i < 20; i++) {
-    const category = categories[i % categories.length]!;
-    const from = ((i * 617) % 11_000) / 1000;
-    if (i % 4 === 0) loads.push({ type: "uniform", category, w: 0.4 + 0.1 * (i % 3) });
-    else if (i % 4 === 1) loads.push({ type: "linear", category, wStart: 0.2, wEnd: 0.8, from, to: Math.min(12, from + 2.5) });
-    else if (i % 4 === 2) loads.push({ type: "point", category, P: 0.5 + 0.05 * i, at: from + 0.3 });
-    else loads.push({ type: "uniform", category, w: 0.5, from, to: Math.min(12, from + 1.8) });
-  }
-  job.member.mark = "B-3S";
-  job.beam = { spans: [4.2, 4.8, 3.0], loads, patternedCategories: ["live", "roof-live", "snow"] };
-  job.combinations = { set: "asce7-22-allowable" };
-  return job;
 }
 
 export function memberBench(say: (line: string) => void): MemberFigures {

@@ -9,7 +9,7 @@ import { plyBearingChecks } from "./checks/ply-bearing.js";
 import { kindOf } from "./connector/registry.js";
 import { bondLineResult } from "./fastening/bond-line-result.js";
 import { compositeDesign } from "./fastening/composite-design.js";
-import { contextFor } from "./fastening/connector-context.js";
+import { contextsFor } from "./fastening/connector-context.js";
 import { discreteSchedule, type JointInput } from "./fastening/discrete-schedule.js";
 import { globalise, jointDemand, localView, memberJointsOf, type MemberJoint } from "./fastening/member-joints.js";
 import { partTerminations } from "./fastening/part-terminations.js";
@@ -121,7 +121,9 @@ export function designMember(input: JobDocument): DesignResult {
     // One context per combination and contact line; a combination's resistance is the least over the lines.
     // Across side-by-side plies the connectors pass the load across the member (perpendicular to the grain of timber plies).
     const direction = plyInterfaces !== null ? "across" : "along";
-    const contexts = beam.results.map((r) => joint.lines.map((line) => contextFor(r.combination, job, joint, line, fastening.headSide, fastening.rows, mj.section, direction)));
+    const combinations = beam.results.map((r) => r.combination);
+    const byLine = joint.lines.map((line) => contextsFor(combinations, job, joint, line, fastening.headSide, fastening.rows, mj.section, direction));
+    const contexts = combinations.map((_, i) => byLine.map((line) => line[i]!));
     const common = { job, joint, connector, fastening, contexts };
     let input: JointInput;
     if (plyInterfaces !== null) {
@@ -333,7 +335,7 @@ export function designMember(input: JobDocument): DesignResult {
     welds,
     checks,
     notChecked,
-    assumptions: [...baseAssumptions(job, beam).filter((a) => !(input.compression && a.startsWith("Self-weight is not included"))), ...assumptions],
+    assumptions: [...baseAssumptions(job, beam, combinationList).filter((a) => !(input.compression && a.startsWith("Self-weight is not included"))), ...assumptions],
     standards: [
       "Connector resistances are the values given in the job or computed by the standards listed below; material strengths are the values given in the job, on its stated basis.",
       "Shear flow q = V·Q/I and stresses by elastic beam theory (mechanics of materials, e.g. Gere & Goodno, Mechanics of Materials, ch. 5).",
@@ -442,7 +444,7 @@ function scheduleFailure(s: Schedule): string {
   return s.mode === "check" ? "a row of the given schedule is over-utilised" : "a row is over-utilised";
 }
 
-function baseAssumptions(job: JobDocument, beam: BeamAnalysis): string[] {
+function baseAssumptions(job: JobDocument, beam: BeamAnalysis, combinations: Parameters<typeof beamAssumptions>[2]): string[] {
   return [
     "Linear-elastic member; plane sections remain plane; the parts act as one section (rigid connection), so q = V·Q/I about the transformed section's neutral axis.",
     "Parts of different stiffness are transformed by the modular ratio n = E/E_ref to the first part's material.",
@@ -450,7 +452,7 @@ function baseAssumptions(job: JobDocument, beam: BeamAnalysis): string[] {
       ? `Loads are taken as entered, on the ${job.basis === "allowable" ? "allowable-stress (service load)" : "factored (strength)"} basis; resistances and strengths are compared on the same basis.`
       : `Loads are entered as nominal values by category and combined by the factors of each load combination; resistances and strengths are on the ${job.basis === "allowable" ? "allowable-stress" : "factored (design)"} basis.`,
     job.beam.selfWeight ? "Self-weight of the parts (area × density × g) is added as a dead load over the whole member." : "Self-weight is not included (switched off in the job).",
-    ...beamAssumptions(job, beam),
+    ...beamAssumptions(job, beam, combinations),
     "Shear stress at a level is averaged over the full width cut at that level.",
     "Zone boundaries are on a round grid from the left end; the first and last rows sit at the end distance from the member ends.",
   ];

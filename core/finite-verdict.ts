@@ -12,7 +12,13 @@ function walk(x: unknown): (string | number)[] | null {
   if (typeof x === "number") return Number.isFinite(x) ? null : [];
   if (Array.isArray(x)) {
     for (let i = 0; i < x.length; i++) {
-      const found = walk(x[i]);
+      const v: unknown = x[i];
+      // Most of a result is long arrays of numbers: checked here without a call each.
+      if (typeof v === "number") {
+        if (Number.isFinite(v)) continue;
+        return [i];
+      }
+      const found = walk(v);
       if (found) return (found.push(i), found);
     }
     return null;

@@ -151,8 +151,12 @@ export function analyseMember(input: MemberInput): BeamAnalysis {
     curve: combineCurves(terms.map((t) => ({ curve: t.c.curve, f: t.f })), grid),
   });
   const entry = (combination: Combination, terms: Term[]): CombinationActions => {
-    const { loads, reactions } = superpose(terms, model.supports);
-    return { combination, loads, reactions, ...sum(terms) };
+    const { reactions } = superpose(terms, model.supports, false);
+    // The combined loads are for a reader who asks: built on first read, not for every combination.
+    let loads: LoadSet | undefined;
+    const made = { combination, reactions, ...sum(terms) } as CombinationActions;
+    Object.defineProperty(made, "loads", { enumerable: true, configurable: true, get: () => (loads ??= superpose(terms, model.supports).loads) });
+    return made;
   };
   const regionTerms = (factors: Record<string, number>) =>
     regions.map((_, r) => {
@@ -176,7 +180,7 @@ export function analyseMember(input: MemberInput): BeamAnalysis {
     const key = `${what}|${inPattern.map((c) => `${c}:${base.factors[c]! / lead}`).join("|")}`;
     let masks = patternCache.get(key);
     if (!masks) {
-      const parts = regionTerms(base.factors).map((terms) => (terms ? { ...sum(terms), reactions: superpose(terms, model.supports).reactions } : null));
+      const parts = regionTerms(base.factors).map((terms) => (terms ? { ...sum(terms), reactions: superpose(terms, model.supports, false).reactions } : null));
       masks =
         what === "actions"
           ? governingPatterns(parts.map((p) => p?.actions ?? null), "actions", parts.map((p) => (p ? p.reactions.map((r) => r.R) : null)))
@@ -297,13 +301,13 @@ function clip(loads: LoadSet, region: LoadRegion, length: number): LoadSet {
 const hasLoads = (l: LoadSet) => l.points.some((p) => p.P !== 0) || l.moments.some((m) => m.M !== 0) || l.lines.some((w) => w.w0 !== 0 || w.w1 !== 0);
 
 /** Σ f·(loads, reactions) of load cases on the same supports. */
-function superpose(terms: { c: { loads: LoadSet; reactions: Reaction[] }; f: number }[], supports: Support[]): { loads: LoadSet; reactions: Reaction[] } {
+function superpose(terms: { c: { loads: LoadSet; reactions: Reaction[] }; f: number }[], supports: Support[], withLoads = true): { loads: LoadSet; reactions: Reaction[] } {
   const loads = emptyLoads();
   const reactions: Reaction[] = supports.map((s) => ({ x: s.x, R: 0, M: 0 }));
   for (const { c, f } of terms) {
-    for (const p of c.loads.points) loads.points.push({ x: p.x, P: f * p.P });
-    for (const m of c.loads.moments) loads.moments.push({ x: m.x, M: f * m.M });
-    for (const w of c.loads.lines) loads.lines.push({ x0: w.x0, x1: w.x1, w0: f * w.w0, w1: f * w.w1 });
+    if (withLoads) for (const p of c.loads.points) loads.points.push({ x: p.x, P: f * p.P });
+    if (withLoads) for (const m of c.loads.moments) loads.moments.push({ x: m.x, M: f * m.M });
+    if (withLoads) for (const w of c.loads.lines) loads.lines.push({ x0: w.x0, x1: w.x1, w0: f * w.w0, w1: f * w.w1 });
     c.reactions.forEach((r, i) => {
       reactions[i]!.R += f * r.R;
       reactions[i]!.M += f * r.M;

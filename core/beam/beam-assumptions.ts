@@ -5,7 +5,7 @@ import { combinationSet } from "./combinations.js";
 import { windDurationOf } from "./load-categories.js";
 
 /** What the result says about the member's supports, analysis, combinations and patterns (job in core units). */
-export function beamAssumptions(job: JobDocument, beam: BeamAnalysis): string[] {
+export function beamAssumptions(job: JobDocument, beam: BeamAnalysis, set: Pick<ReturnType<typeof combinationSet>, "notes" | "omitted"> = combinationSet(job.beam, job.combinations, beam.selfWeight)): string[] {
   const at = (mm: number) => `${Number(fromCore(mm, "span", job.units).toPrecision(4))} ${unitLabel("span", job.units)}`;
   const supports = beam.supports.map((s) => `${s.type} at x = ${at(s.x)}`).join(", ");
   const overhangs = beam.regions.filter((r) => r.kind === "overhang").map((r) => r.label);
@@ -16,7 +16,7 @@ export function beamAssumptions(job: JobDocument, beam: BeamAnalysis): string[] 
       : `Supports: ${supports}${overhangs.length ? `; overhangs: ${overhangs.join(", ")}` : ""}. Analysed as one continuous prismatic member by the stiffness method (exact for constant E·I; shear deformation neglected; supports rigid).`,
     "Pinned and roller supports both stop vertical movement and leave rotation free; under transverse loads they act alike. A fixed support also stops rotation.",
   ];
-  const { notes, omitted } = combinationSet(job.beam, job.combinations, beam.selfWeight);
+  const { notes, omitted } = set;
   out.push(...notes);
   if (omitted.length > 0) {
     out.push(

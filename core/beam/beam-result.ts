@@ -85,6 +85,17 @@ export function valuesAtStations(actions: MemberActions, curve: DeflectionCurve,
   return out;
 }
 
+/** Deflection alone at the stations, as valuesAtStations gives it (a service case shows nothing else). */
+function deflectionAtStations(curve: DeflectionCurve, stations: Station[], at: StationLocator): number[] {
+  const out = new Array<number>(stations.length);
+  for (let j = 0; j < stations.length; j++) {
+    const w = curve.pieces[at.piece[j]!]!.v;
+    const u = at.u[j]!;
+    out[j] = -(w[0]! + u * (w[1]! + u * (w[2]! + u * (w[3]! + u * (w[4]! + u * w[5]!)))));
+  }
+  return out;
+}
+
 /** The beam part of the result: every combination at the stations, the envelopes and who governs them. */
 export function beamResult(beam: BeamAnalysis, stations: Station[]): BeamResult {
   let at: StationLocator | undefined;
@@ -153,7 +164,7 @@ export function beamResult(beam: BeamAnalysis, stations: Station[]): BeamResult 
     },
     service: service.map((s: CombinationActions) => ({
       combination: s.combination,
-      deflection: valuesAtStations(s.actions, s.curve, stations, locate(s)).deflection,
+      deflection: deflectionAtStations(s.curve, stations, locate(s)),
       maxDeflection: deflectionExtremes(s.curve).down,
     })),
   };

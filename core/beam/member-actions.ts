@@ -197,26 +197,22 @@ export interface Extreme {
 
 /** Largest |V| over the closed interval [a, b], counting both sides of every jump inside it. */
 export function maxAbsShear(actions: MemberActions, a: number, b: number): Extreme {
-  return extremeOver(actions, a, b, (p) => p.v, (p) => [p.v[1], 2 * p.v[2]], true);
+  return extremeOver(actions, a, b, SHEAR, 1);
 }
 
 /** Largest sagging and hogging moments over [a, b]. */
 export function momentExtremes(actions: MemberActions, a = 0, b = actions.length): { max: Extreme; min: Extreme } {
-  return {
-    max: extremeOver(actions, a, b, (p) => p.m, (p) => [p.m[1], 2 * p.m[2], 3 * p.m[3]], false, 1),
-    min: extremeOver(actions, a, b, (p) => p.m, (p) => [p.m[1], 2 * p.m[2], 3 * p.m[3]], false, -1),
-  };
+  return { max: extremeOver(actions, a, b, MOMENT, 1), min: extremeOver(actions, a, b, MOMENT, -1) };
 }
 
-function extremeOver(
-  actions: MemberActions,
-  a: number,
-  b: number,
-  coefficients: (p: Piece) => readonly number[],
-  derivative: (p: Piece) => readonly number[],
-  absolute: boolean,
-  sign = 1,
-): Extreme {
+const SHEAR = 0;
+const MOMENT = 1;
+/** Roots of a piece's derivative, reused from call to call (this runs for every zone, row and combination). */
+const scratchRoots = new Float64Array(2);
+
+/** |V| (what = SHEAR) or sign·M (what = MOMENT) at its largest over [a, b]: piece ends and the derivative's roots. */
+function extremeOver(actions: MemberActions, a: number, b: number, what: typeof SHEAR | typeof MOMENT, sign: number): Extreme {
+  const absolute = what === SHEAR;
   let bestValue = -Infinity;
   let bestX = a;
   const pieces = actions.pieces;
@@ -237,9 +233,9 @@ function extremeOver(
     const lo = Math.max(a - tol, p.x0);
     const hi = Math.min(b + tol, p.x1);
     if (hi < lo) continue;
-    const c = coefficients(p);
-    const ends = [lo, hi];
-    for (const x of ends) {
+    const c: readonly number[] = absolute ? p.v : p.m;
+    for (let e = 0; e < 2; e++) {
+      const x = e === 0 ? lo : hi;
       const value = poly(c, x - p.x0);
       const score = absolute ? Math.abs(value) : sign * value;
       if (score > bestValue) {
@@ -247,7 +243,9 @@ function extremeOver(
         bestX = x;
       }
     }
-    for (const u of realRoots(derivative(p))) {
+    const count = absolute ? rootsOf(p.v[1], 2 * p.v[2], 0, scratchRoots) : rootsOf(p.m[1], 2 * p.m[2], 3 * p.m[3], scratchRoots);
+    for (let r = 0; r < count; r++) {
+      const u = scratchRoots[r]!;
       const x = p.x0 + u;
       if (!(x > lo && x < hi)) continue;
       const value = poly(c, u);
@@ -258,22 +256,32 @@ function extremeOver(
       }
     }
   }
-  const best = { value: bestValue, x: bestX };
-  if (best.value === -Infinity) return { value: 0, x: a };
-  return { value: absolute ? best.value : sign * best.value, x: best.x };
+  if (bestValue === -Infinity) return { value: 0, x: a };
+  return { value: absolute ? bestValue : sign * bestValue, x: bestX };
 }
 
 /** Real roots of a polynomial of degree ≤ 2 (ascending coefficients). */
 export function realRoots(c: readonly number[]): number[] {
   const [c0 = 0, c1 = 0, c2 = 0] = c;
+  const out = new Float64Array(2);
+  return Array.from(out.subarray(0, rootsOf(c0, c1, c2, out)));
+}
+
+/** realRoots into `out`, without allocating: the number of roots. */
+function rootsOf(c0: number, c1: number, c2: number, out: Float64Array): number {
   const scale = Math.max(Math.abs(c0), Math.abs(c1), Math.abs(c2), 1e-300);
-  if (Math.abs(c2) <= 1e-14 * scale) return Math.abs(c1) <= 1e-14 * scale ? [] : [-c0 / c1];
+  if (Math.abs(c2) <= 1e-14 * scale) {
+    if (Math.abs(c1) <= 1e-14 * scale) return 0;
+    out[0] = -c0 / c1;
+    return 1;
+  }
   const disc = c1 * c1 - 4 * c2 * c0;
-  if (disc < 0) return [];
+  if (disc < 0) return 0;
   const q = -0.5 * (c1 + Math.sign(c1 || 1) * Math.sqrt(disc));
-  const roots = [q / c2];
-  if (q !== 0) roots.push(c0 / q);
-  return roots;
+  out[0] = q / c2;
+  if (q === 0) return 1;
+  out[1] = c0 / q;
+  return 2;
 }
 
 /** Deflected shape as pieces: rotation and upward deflection in powers of u. */

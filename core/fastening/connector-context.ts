@@ -7,6 +7,14 @@ import type { SectionModel } from "../section/section-model.js";
 
 /** Context of a connector at one contact line of a joint, for one combination. */
 export function contextFor(combination: Combination, job: Pick<JobDocument, "basis" | "units">, joint: JointPlane, line: ContactLine, headSide: "auto" | "held" | "other", rows: number, section: SectionModel, direction: "along" | "across" = "along"): ConnectorContext {
+  return contextsFor([combination], job, joint, line, headSide, rows, section, direction)[0]!;
+}
+
+/**
+ * Contexts of a connector at one contact line, one per combination: the line's geometry is worked out
+ * once and shared (the same objects), so that resistances can be memoised by what changes between them.
+ */
+export function contextsFor(combinations: Combination[], job: Pick<JobDocument, "basis" | "units">, joint: JointPlane, line: ContactLine, headSide: "auto" | "held" | "other", rows: number, section: SectionModel, direction: "along" | "across" = "along"): ConnectorContext[] {
   const member = memberAt(section);
   const held = new Set(joint.held);
   const inside = member(held.has(line.a) ? line.a : line.b, line);
@@ -14,7 +22,10 @@ export function contextFor(combination: Combination, job: Pick<JobDocument, "bas
   const headIsHeld = headSide === "held" || (headSide === "auto" && inside.thickness <= outside.thickness);
   const ids = new Set(joint.lines.flatMap((l) => [l.a, l.b]));
   const materials = new Map(section.parts.filter((p) => ids.has(p.id)).map((p) => [p.material.id, p.material]));
-  return {
+  const members: [JoinedMember, JoinedMember] = headIsHeld ? [inside, outside] : [outside, inside];
+  const double = doubleShearAt(joint, line, section, member);
+  const adherends = [...materials.values()].map((m) => ({ material: m.name, shearStrength: m.strength.shear, rollingShear: m.strength.rollingShear }));
+  return combinations.map((combination) => ({
     duration: combination.duration,
     categories: combination.categories,
     timeEffect: combination.timeEffect,
@@ -23,10 +34,10 @@ export function contextFor(combination: Combination, job: Pick<JobDocument, "bas
     rows,
     units: job.units,
     direction,
-    members: headIsHeld ? [inside, outside] : [outside, inside],
-    double: doubleShearAt(joint, line, section, member),
-    adherends: [...materials.values()].map((m) => ({ material: m.name, shearStrength: m.strength.shear, rollingShear: m.strength.rollingShear })),
-  };
+    members,
+    double,
+    adherends,
+  }));
 }
 
 /** A part as joined at a contact line: its rectangles touching the line give the thickness across it and the width along it. */
@@ -77,4 +88,37 @@ function doubleShearAt(joint: JointPlane, line: ContactLine, section: SectionMod
     central: { ...centralHere, thickness: upper.level - lower.level, width: Math.min(centralHere.width, centralThere.width) },
     outer: [outerOf(same(p) ? p : q), outerOf(other)],
   };
+}
+
+/** What a combination changes in a context; every other field is the contact line's and compared by identity. */
+const LOADING_FIELDS = new Set(["combinationName", "duration", "categories", "timeEffect"]);
+
+/**
+ * compute(context) for each combination (outer) and contact line (inner), computed once per line for
+ * combinations of the same loading: the key is what a resistance may depend on (duration class, the
+ * categories present, the time effect factor), never the combination's name; a context whose other
+ * fields are not those of the line's first context (the same objects) is computed on its own.
+ */
+export function memoisedByLoading<T>(contexts: ConnectorContext[][], compute: (context: ConnectorContext) => T): T[][] {
+  const caches: Map<string, T>[] = [];
+  const lineKeys = (contexts[0] ?? []).map((first) => Object.keys(first).filter((k) => !LOADING_FIELDS.has(k)));
+  const sameLine = (c: ConnectorContext, first: ConnectorContext, keys: string[]) => {
+    const a = c as unknown as Record<string, unknown>;
+    const b = first as unknown as Record<string, unknown>;
+    if (c === first) return true;
+    for (const k in a) if (!LOADING_FIELDS.has(k) && !(k in b)) return false;
+    return keys.every((k) => a[k] === b[k]);
+  };
+  return contexts.map((lines) =>
+    lines.map((c, j) => {
+      const first = contexts[0]![j];
+      if (!first || !sameLine(c, first, lineKeys[j]!)) return compute(c);
+      const key = JSON.stringify([c.duration, c.categories, c.timeEffect?.value ?? null, c.timeEffect?.reason ?? null]);
+      const cache = (caches[j] ??= new Map());
+      if (cache.has(key)) return cache.get(key)!;
+      const made = compute(c);
+      cache.set(key, made);
+      return made;
+    }),
+  );
 }

@@ -8,9 +8,11 @@ import type { Fastening, JobDocument } from "../schema/job.js";
 import type { Schedule } from "../schema/result.js";
 import type { JointPlane } from "../section/joints.js";
 import type { LoadedEdge } from "./loaded-edges.js";
+import { memoisedByLoading } from "./connector-context.js";
 import { rowFit } from "./row-fit.js";
 import { allowedSpacings } from "../spacing/allowed-spacings.js";
 import { checkSchedule } from "../spacing/check-schedule.js";
+import { absShearsAtStations } from "../spacing/demand.js";
 import { demandCurve, designSchedule, type ZoneReason } from "../spacing/design-schedule.js";
 import { spacingPractice } from "../spacing/spacing-defaults.js";
 import { inJobUnits } from "../units/format.js";
@@ -72,7 +74,13 @@ export function demandActionsOf(input: Pick<JointInput, "beam" | "demandActions"
 
 /** Envelope of the flow on one contact line at the beam stations, N/mm. */
 export function lineFlow(actions: MemberActions[], stations: Station[], flowFactor: number, lines: number): number[] {
-  return stations.map((s) => (Math.max(...actions.map((a) => Math.abs(shearAt(a, s.x, s.side)))) * flowFactor) / lines);
+  const shears = absShearsAtStations(actions, stations);
+  if (!shears) return stations.map((s) => (Math.max(...actions.map((a) => Math.abs(shearAt(a, s.x, s.side)))) * flowFactor) / lines);
+  return stations.map((_, j) => {
+    let largest = -Infinity;
+    for (const v of shears) largest = Math.max(largest, v[j]!);
+    return (largest * flowFactor) / lines;
+  });
 }
 
 /**
@@ -83,7 +91,7 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
   const { job, beam, stations, joint, connector, fastening, contexts, flowFactor, stressFactor } = input;
   const rows = fastening.rows;
   const lineCount = joint.lines.length;
-  const resistances: ConnectorResistance[] = contexts.map((lines) => leastOf(lines.map((c) => kind.resistance(connector, c))));
+  const resistances: ConnectorResistance[] = memoisedByLoading(contexts, (c) => kind.resistance(connector, c)).map(leastOf);
   const warnings = [...new Set(resistances.flatMap((r) => r.warnings ?? []))];
   const limits = withColumnLimits(governingLimits(contexts[0]!.map((c) => kind.detailing(connector, c))), input.columnLimits);
   const defaults = spacingPractice(job);
@@ -296,7 +304,7 @@ function designedRemedies(
     const limits = withColumnLimits(governingLimits(lines[0]!.map((ctx) => kind.detailing(c, ctx))), input.columnLimits);
     if (rowFit({ ...limits, ...(input.loadedEdges ? { loadedEdges: input.loadedEdges.edges } : {}) }, rows, joint.lines)?.fits === false) return null;
     if (beam.length < 2 * limits.endDistance * (1 - 1e-9)) return null;
-    const r = lines.map((ls) => Math.min(...ls.map((ctx) => kind.resistance(c, ctx).value)) * factor);
+    const r = memoisedByLoading(lines, (ctx) => kind.resistance(c, ctx).value).map((ls) => Math.min(...ls) * factor);
     const scale = Math.min(...r) / leastNow;
     const combinations = problem.combinations.map((k, i) => ({ ...k, resistance: i < combos ? r[i]! : k.resistance * scale }));
     const minSpacing = Math.max(limits.minSpacing, job.spacing.minimum ?? 0);
@@ -404,10 +412,7 @@ function infeasibleReason(inf: NonNullable<ReturnType<typeof designSchedule>["in
 }
 
 function requiredAt(stations: Station[], demand: ReturnType<typeof demandCurve>): (number | null)[] {
-  return stations.map((s) => {
-    const d = demand.at(s.x, s.side).value;
-    return d > 0 && Number.isFinite(1 / d) ? 1 / d : null;
-  });
+  return Array.from(demand.valuesAtStations(stations), (d) => (d > 0 && Number.isFinite(1 / d) ? 1 / d : null));
 }
 
 function efficiencyOf(lowerBound: number, demandIntegral: number, count: number, uniform: { spacing: number; count: number } | null): Schedule["efficiency"] {

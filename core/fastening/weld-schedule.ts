@@ -12,6 +12,7 @@ import { spacingPractice } from "../spacing/spacing-defaults.js";
 import { inJobUnits } from "../units/format.js";
 import { toCore } from "../units/quantity.js";
 import { demandActionsOf, lineFlow, type JointInput } from "./discrete-schedule.js";
+import { memoisedByLoading } from "./connector-context.js";
 
 const leastOf = <T extends { value: number }>(values: T[]) => values.reduce((a, b) => (b.value < a.value ? b : a));
 
@@ -27,7 +28,7 @@ export function weldSchedule(input: JointInput, kind: WeldKind<Connector>): { we
   const { job, beam, stations, joint, connector, fastening, contexts, flowFactor } = input;
   const fillets = fastening.rows;
   const lineCount = joint.lines.length;
-  const strengths: WeldResistance[] = contexts.map((lines) => leastOf(lines.map((c) => kind.resistancePerLength(connector, c))));
+  const strengths: WeldResistance[] = memoisedByLoading(contexts, (c) => kind.resistancePerLength(connector, c)).map(leastOf);
   const warnings = [...new Set(strengths.flatMap((s) => s.warnings ?? []))];
   const thinnest = contexts[0]!.reduce((a, b) => (Math.min(b.members[0].thickness, b.members[1].thickness) < Math.min(a.members[0].thickness, a.members[1].thickness) ? b : a));
   const limits = kind.detailing(connector, thinnest);

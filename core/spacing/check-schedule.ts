@@ -1,5 +1,6 @@
 import type { Zone } from "../schema/result.js";
-import { DemandCurve } from "./demand.js";
+import { maxAbsShear } from "../beam/member-actions.js";
+import { piecesMet, shearBounds, type DemandCurve, type DemandTerm } from "./demand.js";
 import { placeRows } from "./place-rows.js";
 import { verifyRows, type RowUtilisation } from "./verify-rows.js";
 
@@ -38,12 +39,14 @@ export function checkSchedule(p: {
   const zones: ProvidedZone[] = "zones" in p.provided ? p.provided.zones : zonesOfPositions(given!, L);
   const positions = given ?? placeRows(zones, L, p.endDistance, false, p.minGap ?? 0);
   const rowChecks = verifyRows(positions, p.demand);
-  const single = p.demand.terms.map((t) => ({ id: t.combination, rows: verifyRows(positions, new DemandCurve(L, [t])) }));
-  const perCombination = single.map(({ id, rows }) => {
-    const worst = rows.reduce((a, b) => (b.utilisation > a.utilisation ? b : a));
-    return { combination: id, maxUtilisation: worst.utilisation, at: worst.x };
+  // Each combination on its own, row by row (the rows' utilisations under it alone).
+  const single = p.demand.terms.map((t) => ({ id: t.combination, utilisation: utilisationsUnder(rowChecks, t, L) }));
+  const perCombination = single.map(({ id, utilisation }) => {
+    let worst = 0;
+    for (let r = 1; r < utilisation.length; r++) if (utilisation[r]! > utilisation[worst]!) worst = r;
+    return { combination: id, maxUtilisation: utilisation[worst]!, at: rowChecks[worst]!.x };
   });
-  const inZone = (z: ProvidedZone, i: number) => (r: RowUtilisation) => r.x >= z.from - 1e-9 && (i === zones.length - 1 ? r.x <= z.to + 1e-9 : r.x < z.to - 1e-9);
+  const inZone = (z: ProvidedZone, i: number) => (r: { x: number }) => r.x >= z.from - 1e-9 && (i === zones.length - 1 ? r.x <= z.to + 1e-9 : r.x < z.to - 1e-9);
   return {
     positions,
     rowChecks,
@@ -52,7 +55,8 @@ export function checkSchedule(p: {
       const rows = rowChecks.filter(inZone(z, i));
       const worst = rows.reduce<RowUtilisation | undefined>((a, b) => (!a || b.utilisation > a.utilisation ? b : a), undefined);
       const peak = p.demand.maxOver(z.from, z.to);
-      const failing = single.filter(({ rows: r }) => r.filter(inZone(z, i)).some((row) => row.utilisation > 1 + 1e-9)).map((s) => s.id);
+      const here = inZone(z, i);
+      const failing = single.filter(({ utilisation }) => rowChecks.some((row, r) => here(row) && utilisation[r]! > 1 + 1e-9)).map((s) => s.id);
       return {
         from: z.from,
         to: z.to,
@@ -68,6 +72,45 @@ export function checkSchedule(p: {
       };
     }),
   };
+}
+
+/**
+ * Each row's utilisation under one combination alone, as verifyRows with that term only, where it can
+ * matter: the worst row and any row above 1. A row whose bound (its tributary × k × the bound on |V| over
+ * the pieces it meets) is below both the worst found and 1 is not worked out and reads −1.
+ */
+function utilisationsUnder(rows: RowUtilisation[], term: DemandTerm, length: number): Float64Array {
+  const out = new Float64Array(rows.length);
+  const ranges = rows.map((row) => {
+    const lo = Math.max(0, row.from);
+    const hi = Math.min(length, row.to);
+    return { lo, hi, pieces: hi < lo ? null : piecesMet(term.actions, lo, hi) };
+  });
+  const pieceBounds = shearBounds(term.actions);
+  const bounds = ranges.map(({ pieces }, r) => {
+    if (!pieces) return 0;
+    let m = 0;
+    for (let p = pieces[0]; p <= pieces[1]; p++) if (pieceBounds[p]! > m) m = pieceBounds[p]!;
+    return (rows[r]!.to - rows[r]!.from) * (term.k * m);
+  });
+  const exact = (r: number) => {
+    const { lo, hi } = ranges[r]!;
+    const value = hi < lo ? 0 : term.k * maxAbsShear(term.actions, lo, hi).value;
+    return (rows[r]!.to - rows[r]!.from) * (value > 0 ? value : 0);
+  };
+  let lead = 0;
+  for (let r = 1; r < rows.length; r++) if (bounds[r]! > bounds[lead]!) lead = r;
+  let known = rows.length > 0 ? (out[lead] = exact(lead)) : 0;
+  for (let r = 0; r < rows.length; r++) {
+    if (r === lead) continue;
+    if (bounds[r]! < known && bounds[r]! <= 1 + 1e-9) {
+      out[r] = -1;
+      continue;
+    }
+    out[r] = exact(r);
+    if (out[r]! > known) known = out[r]!;
+  }
+  return out;
 }
 
 /** Explicit positions shown as one zone per run of equal gaps (to a tenth of a millimetre). */
