@@ -1,6 +1,7 @@
 import type { FastifyInstance } from "fastify";
 import { z } from "zod";
 import { convertJob, gradeMaterial, grades, JobDocument, prepareJob, PROGRAM, quantityOf } from "../../core/index.js";
+import { bytesOf } from "../design-tasks.js";
 import type { TaskRunner } from "../design-threads.js";
 import { ApiError } from "../errors.js";
 import type { Example } from "../examples.js";
@@ -36,8 +37,8 @@ export async function apiRoutes(app: FastifyInstance, options: { examples: Examp
     const key = ResultCache.key("design", request.body);
     let json = cache.get(key);
     if (json === undefined) {
-      // Encoded here, once, rather than on the design thread (the busier one) or at every send from the cache.
-      json = Buffer.from(await designs.run({ kind: "result-json", input: request.body }));
+      // Encoded once, on the design thread, and moved here; never again at a send from the cache.
+      json = bytesOf(await designs.run({ kind: "result-json", input: request.body }));
       cache.set(key, json);
     }
     return reply.type("application/json; charset=utf-8").send(json);
@@ -56,6 +57,6 @@ export async function apiRoutes(app: FastifyInstance, options: { examples: Examp
     return reply
       .type("application/pdf")
       .header("content-disposition", `attachment; filename="${sheet.fileName}"`)
-      .send(Buffer.from(sheet.pdf.buffer, sheet.pdf.byteOffset, sheet.pdf.byteLength));
+      .send(bytesOf(sheet.pdf));
   });
 }
