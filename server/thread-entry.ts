@@ -54,6 +54,13 @@ const ownFiles: Plugin = {
   },
 };
 
+/** The module `entry` from its bundle (made now if need be), or undefined when the program runs as JavaScript or the bundle failed. */
+export async function importBundled<T>(entry: URL): Promise<T | undefined> {
+  await bundleThread(entry);
+  const bundle = bundled.get(entry.href);
+  return bundle ? ((await import(bundle)) as T) : undefined;
+}
+
 /**
  * A worker thread on a module of this program, given as its `.ts` source URL: the bundle `bundleThread`
  * made of it, or else the source itself. Node 20 does not apply a loader given with --import to a
