@@ -33,12 +33,24 @@ export async function apiRoutes(app: FastifyInstance, options: { examples: Examp
     return grades.map((g) => ({ grade: g.id, name: g.name, family: g.family, material: gradeMaterial(g, basis, units) }));
   });
 
+  // Designs under way, by the same key as the cache: the same job sent again before its answer is ready
+  // (a double click, a reload, many clients) waits for that design instead of queueing another.
+  const underWay = new Map<string, Promise<Buffer>>();
   app.post("/api/designs", async (request, reply) => {
     const key = ResultCache.key("design", request.body);
     let json = cache.get(key);
     if (json === undefined) {
-      // Encoded once, on the design thread, and moved here; never again at a send from the cache.
-      json = bytesOf(await designs.run({ kind: "result-json", input: request.body }));
+      let pending = key === undefined ? undefined : underWay.get(key);
+      if (pending === undefined) {
+        // Encoded once, on the design thread, and moved here; never again at a send from the cache.
+        pending = designs.run({ kind: "result-json", input: request.body }).then(bytesOf);
+        if (key !== undefined) {
+          underWay.set(key, pending);
+          const forget = () => underWay.delete(key);
+          pending.then(forget, forget);
+        }
+      }
+      json = await pending;
       cache.set(key, json);
     }
     return reply.type("application/json; charset=utf-8").send(json);
