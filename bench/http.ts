@@ -44,9 +44,9 @@ export async function httpBench(say: (line: string) => void, largestExample: str
       say(
         `| ${route} | ${member} | ${jobs} | ${connections} | ${f.perSecond.toFixed(0)} | ${f.latency.p50.toFixed(0)} | ${f.latency.p90.toFixed(0)} | ${f.latency.p99.toFixed(0)} | ${f.latency.max.toFixed(0)} | ${f.cpuMsPerAnswer.toFixed(2)} | ${f.errors} / ${f.non2xx} / ${f.bad} |`,
       );
-    // The first design starts the thread's code; not part of any figure.
-    await fire(server.url, { path: "/api/designs", body: distinctBody(simple), connections: 1, distinct: true, check: isResult }, 2);
-    await fire(server.url, { path: "/api/conversions?to=us", body: distinctBody(simple), connections: 1, distinct: true, check: isJob }, 1);
+    // The first designs start the thread's code and let the JIT settle (a few hundred designs): the rows measure the steady state, not part of any figure.
+    await fire(server.url, { path: "/api/designs", body: distinctBody(simple), connections: 10, distinct: true, check: isResult }, 5);
+    await fire(server.url, { path: "/api/conversions?to=us", body: distinctBody(simple), connections: 10, distinct: true, check: isJob }, 3);
     let designsPerSecond = 0;
     let designsOverConversions = Number.NaN;
     for (const connections of [10, 100]) {
