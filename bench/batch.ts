@@ -103,7 +103,7 @@ export async function batchBench(say: (line: string) => void): Promise<void> {
       }
     }
     say("");
-    say("Targets: 1,000 members without worksheets under 5 s; a worksheet under 300 ms. Seconds include reading the job files and writing every output; with threads > 1 they include starting the worker threads (each loads the TypeScript sources through tsx).");
+    say("Targets: 1,000 members without worksheets under 3 s (issue 20); a worksheet under 300 ms. Seconds include reading the job files and writing every output, and bundling the members' code once (about half a second: server/thread-entry.ts) for a large batch or for worker threads, and with threads > 1 starting them.");
   } finally {
     rmSync(work, { recursive: true, force: true });
   }

@@ -175,4 +175,5 @@ export async function fire(url: string, load: Load, seconds: number, maxRequests
 }
 
 export const isResult = (status: number, body: string) => status === 200 && body.startsWith('{"format":"stitchplan-result"');
+export const isJob = (status: number, body: string) => status === 200 && body.startsWith('{"format":"stitchplan-job"');
 export const isPdf = (status: number, body: string) => status === 200 && body.startsWith("%PDF-");

@@ -62,7 +62,7 @@ async function examplesTable(): Promise<string> {
 
 const largestExample = wanted("examples") || wanted("worksheet") || wanted("http") ? await examplesTable() : "";
 let member: MemberFigures | undefined;
-if (wanted("member")) member = memberBench(say);
+if (wanted("member")) member = await memberBench(say);
 let worksheetMs: number | undefined;
 if (wanted("worksheet")) worksheetMs = await worksheetBench(say, largestExample);
 if (wanted("spacing")) spacingBench(say);

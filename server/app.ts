@@ -5,7 +5,7 @@ import { fileURLToPath } from "node:url";
 import fastifyStatic from "@fastify/static";
 import { build } from "esbuild";
 import Fastify, { type FastifyError, type FastifyInstance } from "fastify";
-import { DesignQueues, DesignThreads } from "./design-threads.js";
+import { DesignQueues, DesignThreads, prepareDesignThreads } from "./design-threads.js";
 import { ApiError, errorBody, type ErrorCode } from "./errors.js";
 import { loadExamples } from "./examples.js";
 import { hostCheck, loopbackHosts } from "./host-check.js";
@@ -65,7 +65,7 @@ export async function buildApp(options: AppOptions = {}): Promise<FastifyInstanc
   // Only JSON is read: a text body must not reach a route as a string.
   app.removeContentTypeParser(["text/plain"]);
   const examples = loadExamples(options.examplesDir ?? join(projectRoot, "fixtures/examples"));
-  const pageScript = await bundlePage();
+  const [pageScript] = await Promise.all([bundlePage(), prepareDesignThreads()]);
 
   const limits = { designMs: options.timeLimits?.designMs ?? serviceLimits.designMs, worksheetMs: options.timeLimits?.worksheetMs ?? serviceLimits.worksheetMs };
   const memoryMb = options.threadLimits?.memoryMb ?? serviceLimits.threadMemoryMb;

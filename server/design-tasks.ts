@@ -6,7 +6,7 @@ import { renderWorksheet, worksheetFileName } from "./pdf/worksheet.js";
 
 /** Work the design threads do: everything that may take long runs there, never on the thread that answers HTTP. */
 export type DesignTask =
-  /** The result as JSON text, in `units` or the job's own. */
+  /** The result as JSON text encoded in UTF-8 (moved to the HTTP thread, not copied), in `units` or the job's own. */
   | { kind: "result-json"; input: unknown; units?: UnitSystem | undefined }
   /** The job, the job in core units and the result in the job's and in `units`, as objects. */
   | { kind: "result"; input: unknown; units?: UnitSystem | undefined }
@@ -32,7 +32,7 @@ export interface WorksheetRun {
 }
 
 export type TaskAnswer<T extends DesignTask> = T extends { kind: "result-json" }
-  ? string
+  ? Uint8Array
   : T extends { kind: "result" }
     ? ResultRun
     : T extends { kind: "summary" }
@@ -53,10 +53,13 @@ export interface WireError {
   issues: JobIssue[];
 }
 
-export async function performTask(task: DesignTask): Promise<string | ResultRun | WorksheetRun | ResultSummary | PreparedSummary | null> {
+const utf8 = new TextEncoder();
+
+export async function performTask(task: DesignTask): Promise<Uint8Array | ResultRun | WorksheetRun | ResultSummary | PreparedSummary | null> {
   switch (task.kind) {
     case "result-json":
-      return JSON.stringify(designInUnits(task.input, task.units).shown);
+      // Encoded once, here: the bytes own their memory, so they move to the HTTP thread, which sends them as they are.
+      return utf8.encode(JSON.stringify(designInUnits(task.input, task.units).shown));
     case "result": {
       const { job, core, result, shown } = designInUnits(task.input, task.units);
       return { job, core, result, shown };
@@ -95,6 +98,9 @@ export async function performTask(task: DesignTask): Promise<string | ResultRun 
     }
   }
 }
+
+/** A Buffer over the same memory as an answer's bytes (no copy), for a reply. */
+export const bytesOf = (bytes: Uint8Array) => Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength);
 
 export function toWire(error: unknown): WireError {
   if (error instanceof ApiError) return { code: error.code, message: error.message, issues: error.issues };

@@ -1,7 +1,7 @@
 import type { Worker } from "node:worker_threads";
 import { fromWire, type DesignTask, type TaskAnswer, type WireError } from "./design-tasks.js";
 import { ApiError } from "./errors.js";
-import { startThread } from "./thread-entry.js";
+import { bundleThread, startThread } from "./thread-entry.js";
 
 export interface DesignThreadsOptions {
   /** Worker threads; designs beyond that wait their turn. */
@@ -35,6 +35,9 @@ interface Slot {
 }
 
 const WORKER_ENTRY = new URL("./design-worker.ts", import.meta.url);
+
+/** Bundles the design threads' code once per process, before the first thread starts (see bundleThread). */
+export const prepareDesignThreads = () => bundleThread(WORKER_ENTRY);
 
 const seconds = (ms: number) => `${Number((ms / 1000).toPrecision(2))} s`;
 

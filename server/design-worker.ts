@@ -5,7 +5,9 @@ import { performTask, toWire, type DesignTask } from "./design-tasks.js";
 parentPort!.on("message", ({ id, task }: { id: number; task: DesignTask }) => {
   void performTask(task).then(
     (answer) => {
-      const transfer = answer instanceof Object && "pdf" in answer ? [answer.pdf.buffer as ArrayBuffer] : [];
+      // Bytes (a result's JSON, a worksheet) are moved to the HTTP thread rather than copied.
+      const bytes = answer instanceof Uint8Array ? answer : answer instanceof Object && "pdf" in answer ? answer.pdf : undefined;
+      const transfer = bytes ? [bytes.buffer as ArrayBuffer] : [];
       parentPort!.postMessage({ id, answer }, transfer);
     },
     (error: unknown) => parentPort!.postMessage({ id, error: toWire(error) }),

@@ -5,7 +5,7 @@ import { positionsCsv, scheduleCsv, weldsCsv } from "../../core/export/schedule-
 import { designInUnits } from "../design-in-units.js";
 import { ApiError } from "../errors.js";
 import { summariseResult, type ResultSummary } from "../result-summary.js";
-import { writeOutputFile } from "./output-file.js";
+import { writeOutputFileAsync } from "./output-file.js";
 
 /** One job file of a batch, and where its outputs go. */
 export interface MemberTask {
@@ -122,18 +122,19 @@ export async function runMemberTask(task: MemberTask): Promise<MemberOutcome> {
     outcome.milliseconds.pdf = performance.now() - t0;
   }
   const failed: JobIssue[] = [];
-  // Written one after another, synchronously: for a few small files that is faster than the promise
-  // API (measured on a 1,000-member batch, 7.5 s against 8.1 s), and a batch has nothing else to wait on.
   const inputs = new Set(task.inputs);
-  for (const [path, content] of files) {
-    try {
-      writeOutputFile(path, content, inputs);
-      outcome.written.push(path);
-    } catch (error) {
-      const code = (error as NodeJS.ErrnoException).code;
-      failed.push({ path: "(output)", message: code ? `cannot write ${path} (${code === "ELOOP" ? "it is a symbolic link; stitchplan does not write through links" : code})` : (error as Error).message });
-    }
-  }
+  // The files are written on the system's threads while this thread goes on to the next member.
+  await Promise.all(
+    files.map(async ([path, content]) => {
+      try {
+        await writeOutputFileAsync(path, content, inputs);
+        outcome.written.push(path);
+      } catch (error) {
+        const code = (error as NodeJS.ErrnoException).code;
+        failed.push({ path: "(output)", message: code ? `cannot write ${path} (${code === "ELOOP" ? "it is a symbolic link; stitchplan does not write through links" : code})` : (error as Error).message });
+      }
+    }),
+  );
   outcome.written.sort();
   return failed.length > 0 ? { ...outcome, status: "error", problems: failed } : outcome;
 }

@@ -5,9 +5,10 @@ import { join, resolve } from "node:path";
 import type { UnitSystem } from "../../core/index.js";
 import { collectJobFiles, outputNames } from "./collect-job-files.js";
 import { identityOf, writeOutputFile } from "./output-file.js";
-import { runMemberTask, type MemberOutcome, type MemberTask } from "./member-files.js";
+import { runMemberTask as runHere, type MemberOutcome, type MemberTask } from "./member-files.js";
 import { summaryCsv } from "./summary-table.js";
 import { runInWorkers } from "./worker-pool.js";
+import { importBundled } from "../thread-entry.js";
 
 export interface BatchOptions {
   mode: "design" | "check";
@@ -37,10 +38,13 @@ export interface BatchReport {
 }
 
 /**
- * Worker threads pay off once the work outweighs starting them (about a second each, loading the
- * TypeScript sources): see bench/batch.ts for the figures behind these estimates.
+ * Worker threads pay off once the work outweighs starting them: bundling their code once (about half a
+ * second, from source) and about a tenth of a second each (measured on the shared 2-core machine; a
+ * second each when they loaded the sources through tsx). See bench/batch.ts for the batch's figures.
  */
-export const WORKER_START_MS = 1000;
+export const WORKER_START_MS = 600;
+const BUNDLE_MS = 500;
+const MEMBER_FILES = new URL("./member-files.ts", import.meta.url);
 export const ESTIMATED_MS = { design: 15, pdf: 150 };
 
 /**
@@ -59,6 +63,9 @@ export const IN_FLIGHT = 3;
 
 async function runInThisThread(tasks: MemberTask[], onOutcome: (outcome: MemberOutcome) => void): Promise<MemberOutcome[]> {
   const outcomes: MemberOutcome[] = [];
+  // From source, a large batch runs the members' code from one bundle (see bundleThread: a fifth faster than through tsx, for about half a second of bundling).
+  const bundled = tasks.length * ESTIMATED_MS.design >= 4 * BUNDLE_MS ? await importBundled<typeof import("./member-files.js")>(MEMBER_FILES) : undefined;
+  const runMemberTask = bundled?.runMemberTask ?? runHere;
   let next = 0;
   const lane = async () => {
     while (next < tasks.length) {

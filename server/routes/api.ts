@@ -1,6 +1,7 @@
 import type { FastifyInstance } from "fastify";
 import { z } from "zod";
 import { convertJob, gradeMaterial, grades, JobDocument, prepareJob, PROGRAM, quantityOf } from "../../core/index.js";
+import { bytesOf } from "../design-tasks.js";
 import type { TaskRunner } from "../design-threads.js";
 import { ApiError } from "../errors.js";
 import type { Example } from "../examples.js";
@@ -32,12 +33,24 @@ export async function apiRoutes(app: FastifyInstance, options: { examples: Examp
     return grades.map((g) => ({ grade: g.id, name: g.name, family: g.family, material: gradeMaterial(g, basis, units) }));
   });
 
+  // Designs under way, by the same key as the cache: the same job sent again before its answer is ready
+  // (a double click, a reload, many clients) waits for that design instead of queueing another.
+  const underWay = new Map<string, Promise<Buffer>>();
   app.post("/api/designs", async (request, reply) => {
     const key = ResultCache.key("design", request.body);
     let json = cache.get(key);
     if (json === undefined) {
-      // Encoded here, once, rather than on the design thread (the busier one) or at every send from the cache.
-      json = Buffer.from(await designs.run({ kind: "result-json", input: request.body }));
+      let pending = key === undefined ? undefined : underWay.get(key);
+      if (pending === undefined) {
+        // Encoded once, on the design thread, and moved here; never again at a send from the cache.
+        pending = designs.run({ kind: "result-json", input: request.body }).then(bytesOf);
+        if (key !== undefined) {
+          underWay.set(key, pending);
+          const forget = () => underWay.delete(key);
+          pending.then(forget, forget);
+        }
+      }
+      json = await pending;
       cache.set(key, json);
     }
     return reply.type("application/json; charset=utf-8").send(json);
@@ -56,6 +69,6 @@ export async function apiRoutes(app: FastifyInstance, options: { examples: Examp
     return reply
       .type("application/pdf")
       .header("content-disposition", `attachment; filename="${sheet.fileName}"`)
-      .send(Buffer.from(sheet.pdf.buffer, sheet.pdf.byteOffset, sheet.pdf.byteLength));
+      .send(bytesOf(sheet.pdf));
   });
 }

@@ -4,7 +4,7 @@ import { issuesFromZod, JobDocument, toDisplayUnits, type JobIssue, type UnitSys
 import type { Comparison } from "../../core/schema/store-contract.js";
 import type { ResultSummary } from "../result-summary.js";
 import type { ProjectFile } from "../store/store-schemas.js";
-import type { DesignTask, PreparedSummary, TaskAnswer } from "../design-tasks.js";
+import { bytesOf, type DesignTask, type PreparedSummary, type TaskAnswer } from "../design-tasks.js";
 import type { TaskRunner } from "../design-threads.js";
 import { ApiError } from "../errors.js";
 import { today } from "../pdf/worksheet.js";
@@ -171,7 +171,7 @@ export async function storeRoutes(app: FastifyInstance, options: StoreRoutesOpti
         () => undefined,
       );
     }
-    return reply.type("application/json; charset=utf-8").send(json);
+    return reply.type("application/json; charset=utf-8").send(bytesOf(json));
   });
 
   app.get<M & { Querystring: Record<string, string> }>("/api/projects/:project/members/:member/compare", async (request) => {

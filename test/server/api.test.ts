@@ -2,6 +2,7 @@ import { readFileSync } from "node:fs";
 import type { FastifyInstance } from "fastify";
 import request from "supertest";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { DesignResult } from "../../core/index.js";
 import { buildApp } from "../../server/app.js";
 import { OPENING_EXAMPLE } from "../../server/examples.js";
 import { clone, plankIJob } from "../job-builders.js";
@@ -22,7 +23,7 @@ describe("GET routes", () => {
     expect(res.body).toMatchObject({ status: "ok", program: "stitchplan" });
   });
 
-  test("GET /api/examples lists examples in both unit systems, and each one designs without a 4xx", async () => {
+  test("GET /api/examples lists examples in both unit systems, and each one designs without a 4xx into a result that matches its schema", async () => {
     const list = await request(app.server).get("/api/examples");
     expect(list.status).toBe(200);
     const units = new Set(list.body.map((e: { units: string }) => e.units));
@@ -34,6 +35,9 @@ describe("GET routes", () => {
       expect(job.status).toBe(200);
       const result = await post(job.body);
       expect(result.status, `example ${id}: ${JSON.stringify(result.body.issues)}`).toBe(200);
+      // The server does not parse the engine's result on each request: this is where its shape is proven, as served.
+      const parsed = DesignResult.safeParse(result.body);
+      expect(parsed.success, `example ${id}: ${parsed.error?.issues.slice(0, 3).map((i) => `${i.path.join(".")}: ${i.message}`).join("; ")}`).toBe(true);
     }
   });
 

@@ -186,6 +186,18 @@ describe("designs, summaries and worksheets stay on their threads, within their 
     }
   });
 
+  test("the same job sent many times at once is designed once: with a queue of one, every copy is answered with the same result", { timeout: 120_000 }, async () => {
+    const busy = await buildApp({ designThreads: 1, threadLimits: { designQueue: 1 } });
+    try {
+      const payload = JSON.stringify({ ...plankIJob(), member: { mark: "SAME" } });
+      const answers = await Promise.all(Array.from({ length: 6 }, () => busy.inject({ method: "POST", url: "/api/designs", payload, headers: json })));
+      expect(answers.map((a) => a.statusCode)).toEqual(Array(6).fill(200));
+      expect(new Set(answers.map((a) => a.body)).size).toBe(1);
+    } finally {
+      await busy.close();
+    }
+  });
+
   test("a worksheet does not hold the designs: a design sent while a heavy worksheet prints is answered first; heavy worksheets print within the time and memory limits", { timeout: 120_000 }, async () => {
     const both = await buildApp({ designThreads: 1, warmThreads: true });
     try {
