@@ -44,11 +44,12 @@ export function packShear(Vd: number, packSpacing: number, centroidDistance: num
   return (Vd * packSpacing) / centroidDistance;
 }
 
-/** How the packs are fastened, from the packing joints' connectors (the least favourable η where it is not plain). */
+/**
+ * How the packs are fastened, from the packing joints' connectors: nails or bolts, one kind throughout.
+ * Glued packs (η of Table C.1) are not designed here: their bond lines are not checked for T_d.
+ */
 function connectionOf(connectors: Connector[]): { connection: PackConnection; least: number; why: string } | null {
   if (connectors.length === 0) return null;
-  const glued = connectors.every((c) => c.kind === "glue");
-  if (glued) return { connection: "glued", least: 0, why: "glued" };
   if (connectors.every((c) => c.kind === "nail")) return { connection: "nailed", least: 4, why: "nails" };
   if (connectors.every((c) => c.kind === "timber-bolt")) return { connection: "bolted", least: 2, why: "bolts" };
   return null;
@@ -125,8 +126,8 @@ function design(c: ColumnJob): ColumnDesign {
   conditions.push(
     { condition: "the shafts are held apart across one axis (a free gap between neighbours)", met: gaps.every((g) => g > 0), clause },
     { condition: "the shafts are alike (same thickness and depth)", met: same, clause },
-    { condition: `packs or gussets are listed in compression.packing and join the shafts (${packs.length})`, met: packs.length > 0 && packJoints.length > 0, clause: "job" },
-    { condition: `the packs are nailed (nails), bolted (timber bolts) or glued, one kind throughout${conn ? ` (${conn.why})` : ""}`, met: conn !== null && (conn.connection !== "bolted" || !gussets), clause: "EN 1995-1-1 Table C.1 [M]" },
+    { condition: `packs or gussets are listed in compression.packing and fastened to the shafts by connectors placed one by one (${packs.length} listed); glued packs are not designed here`, met: packs.length > 0 && packJoints.length > 0, clause: "job" },
+    { condition: `the packs are nailed (nails) or bolted (timber bolts), one kind throughout, bolts with packs only${conn ? ` (${conn.why})` : ""}`, met: conn !== null && (conn.connection !== "bolted" || !gussets), clause: "EN 1995-1-1 Table C.1 [M]" },
     { condition: `free gap a ≤ ${gussets ? 6 : 3}·h (a = ${len(a)}, h = ${len(h)})`, met: !exceeds(a, (gussets ? 6 : 3) * h), clause },
     { condition: `pack length l_2 ≥ ${gussets ? 2 : 1.5}·a (l_2 = ${len(l2)})`, met: !fallsShort(l2, (gussets ? 2 : 1.5) * a), clause },
     { condition: `at least three bays: l_1 ≤ l/3 (l_1 = ${len(l1)}, l = ${len(c.height)})`, met: !exceeds(3 * l1, c.height), clause },
@@ -175,9 +176,6 @@ function design(c: ColumnJob): ColumnDesign {
   const checks: MemberCheck[] = [columnCheck("column-axial", "Spaced column axial compression σ_c,0,d ≤ k_c·f_c,0,d", gov.act.axial, gov.capacity, "force", gov.act.combination.id, null, "EN 1995-1-1 C.3.2, eq. (6.23), (6.24) [M]")];
 
   const joints: ColumnJointDemand[] = packJoints.map((j) => {
-    if (conn.connection === "glued") {
-      return { joint: j.id, limits: null, rowsRequired: null, bucklingShear: per.map((p) => p.Td), bucklingFlow: per.map((p) => p.Td / l2), addsToLateral: false, notes: [`Pack shear T_d = V_d·l_1/a_1 (eq. C.13) carried by the glue line over the pack length l_2 = ${len(l2)}.`] };
-    }
     // At least 4 nails or 2 bolts per shear plane at each pack (C.3.1 [M]): k per row fit in l_2 whatever the
     // rows' positions when s ≤ l_2/(k+1); then at least l_2 − s of every pack carries the flow, so T_d/(l_2 − s_max).
     const perRow = Math.ceil(conn.least / Math.max(1, j.rows));
