@@ -83,7 +83,8 @@ function design(c: ColumnJob): ColumnDesign {
     joints: [] as ColumnJointDemand[],
     steps: [] as ColumnResult["steps"],
     notes: [
-      "The packs (or gussets) are modelled over the whole length; their connectors are needed only over each pack's length l_2, at the spacing the schedule gives there. The end packs are taken at the column's ends (C.3.1 [M]): confirm on the drawings.",
+      "The packs (or gussets) are modelled over the whole length; their connectors are needed only over each pack's length l_2, at the spacing the schedule gives there. The end packs are taken at the column's ends (C.3.1 [M]): confirm on the drawings, and that the end packs, whose connectors start at the end distance, still hold at least 4 nails (2 bolts) per shear plane.",
+      "Not checked here: the packs or gussets themselves under T_d (shear along a pack, a gusset's bending), and glued packs.",
     ],
   };
   const conditions = base.conditions;
