@@ -92,6 +92,11 @@ export function checkJob(job: JobDocument): JobIssue[] {
     job.compression.packing.forEach((id, i) => {
       if (!job.parts.some((p) => p.id === id)) add(`compression.packing[${i}]`, `"${id}" is not one of the parts`);
     });
+    const spaced = job.compression.spaced;
+    if (spaced) {
+      if (job.compression.packing.length === 0) add("compression.packing", "a spaced column (compression.spaced) needs its packs or gussets listed here");
+      if (spaced.packSpacing >= L * (1 + 1e-9)) add("compression.spaced.packSpacing", `${spaced.packSpacing} is longer than the column (its height is the member's length, ${Number(L.toPrecision(6))})`);
+    }
     for (const axis of ["x", "y"] as const) {
       job.compression[axis].bracedAt.forEach((x, i) => {
         if (x >= L * (1 - 1e-9)) add(`compression.${axis}.bracedAt[${i}]`, `${x} is at or beyond the top of the column (its height is the member's length, ${Number(L.toPrecision(6))})`);

@@ -106,6 +106,8 @@ export const physicalRanges: Record<string, PhysicalRange> = {
   "compression.x.bracedAt[]": alongMember,
   "compression.y.bracedAt[]": alongMember,
   "compression.gammaM": range(null, 1, 3, "partial factors of materials"),
+  "compression.spaced.packSpacing": alongMember,
+  "compression.spaced.packLength": range("length", 0, 20_000, "pack lengths"),
   "spacing.module": spacing,
   "spacing.preferred[]": spacing,
   "spacing.minimum": spacing,

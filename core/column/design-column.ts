@@ -9,11 +9,12 @@ import { allowedSpacings } from "../spacing/allowed-spacings.js";
 import { inJobUnits } from "../units/format.js";
 import { columnActions, columnAxis, type ColumnJob, type ColumnJoint, type ColumnRule } from "./column-rules.js";
 import { ec5MechanicallyJointed } from "./ec5-mechanically-jointed.js";
+import { ec5Spaced } from "./ec5-spaced.js";
 import { ndsBuiltUp } from "./nds-built-up.js";
 import { aiscE6 } from "./steel-rules.js";
 
 /** The built-up column rules, in the order "auto" tries them. A steel rule (§E6, §6.4) is added here. */
-export const columnRules: ColumnRule[] = [ndsBuiltUp, ec5MechanicallyJointed, aiscE6];
+export const columnRules: ColumnRule[] = [ndsBuiltUp, ec5Spaced, ec5MechanicallyJointed, aiscE6];
 
 interface PreparedJoint {
   joint: { id: string; lines: ColumnJoint["lines"] };

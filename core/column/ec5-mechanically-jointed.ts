@@ -51,7 +51,7 @@ function design(c: ColumnJob): ColumnDesign {
     checks: [] as MemberCheck[],
     joints: [] as ColumnJointDemand[],
     steps: [] as ColumnResult["steps"],
-    notes: ["Spaced columns with packs or gussets (Annex C.3) are not covered: the laminations here must touch."],
+    notes: ["The laminations here must touch; spaced columns with packs or gussets (Annex C.3) take compression.spaced (ec5-spaced.ts)."],
   };
   const unmet = conditions.filter((x) => !x.met);
   if (unmet.length > 0 || l === null) return { ...base, applies: false, reason: `outside EN 1995-1-1 Annex C as built here: ${unmet.map((x) => x.condition).join("; ")}.` };

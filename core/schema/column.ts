@@ -41,7 +41,22 @@ export const BucklingAxis = z.strictObject({
 });
 export type BucklingAxis = z.infer<typeof BucklingAxis>;
 
-export const builtUpRules = ["auto", "nds-15.3", "en1995-annex-c", "aisc-e6", "en1993-6.4"] as const;
+export const builtUpRules = ["auto", "nds-15.3", "en1995-annex-c", "en1995-c3-spaced", "aisc-e6", "en1993-6.4"] as const;
+
+/**
+ * EN 1995-1-1 Annex C.3: a spaced column, its shafts held apart by packs or gussets at a spacing. The
+ * packs (or gussets) are parts of the section listed in `packing`, modelled over the whole length; the
+ * connectors of each pack are those of the packing's joints within one pack length.
+ */
+export const SpacedColumn = z.strictObject({
+  /** Packs between the shafts, or gussets on their faces (Table C.1, C.3.1 [M]). */
+  kind: z.enum(["packs", "gussets"]).default("packs"),
+  /** l_1: distance between the packs' centres along the column (bays), the end packs at the column's ends. */
+  packSpacing: positive("span"),
+  /** l_2: length of one pack (or gusset) along the column. */
+  packLength: positive("length"),
+});
+export type SpacedColumn = z.infer<typeof SpacedColumn>;
 
 /**
  * Axial compression on the member, which then stands as a column: its height is the member's length
@@ -57,6 +72,8 @@ export const Compression = z.strictObject({
   rule: z.enum(builtUpRules).default("auto"),
   /** Steel: parts that only fill the gap between the components (gusset, packing plates): left out of the column's A, I and r. */
   packing: z.array(Id).max(10, "at most 10 packing parts").default([]),
+  /** EN 1995-1-1 Annex C.3: the shafts are held apart by the `packing` parts at a spacing (a spaced column). */
+  spaced: SpacedColumn.optional(),
   /** EN 1995-1-1: service class (§2.3.1.3) for k_mod, 1 when absent. */
   serviceClass: z.union([z.literal(1), z.literal(2), z.literal(3)]).default(1),
   /** EN 1995-1-1: γ_M of the timber (Table 2.3: 1.3 solid timber, 1.25 glulam [M]); that of the material's family when absent. */
