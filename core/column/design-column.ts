@@ -90,7 +90,7 @@ export function designColumn(p: {
       rowsProvided,
       bucklingShear: demand.bucklingShear ? Math.max(...demand.bucklingShear) : null,
       bucklingFlow: demand.bucklingFlow ? Math.max(...demand.bucklingFlow) : null,
-      governs: governing(schedule, demand.bucklingFlow !== null, named.spacingInStiffness ? "taken in γ for the column's (EI)_ef" : `that ${named.standard} allows (prescriptive)`),
+      governs: governing(schedule, demand.bucklingFlow !== null, p.job.beam.loads.length > 0, named.spacingInStiffness ? "taken in γ for the column's (EI)_ef" : `that ${named.standard} allows (prescriptive)`),
       notes: demand.notes,
       sources: demand.limits?.sources ?? [],
     });
@@ -118,12 +118,13 @@ function bucklingDemand(input: JointInput, s: Schedule, flows: number[], addsToL
 }
 
 /** What set a joint's spacing: the rule's greatest spacing everywhere, or the shear flow somewhere. */
-function governing(s: Schedule, buckling: boolean, greatest: string): string {
+function governing(s: Schedule, buckling: boolean, lateral: boolean, greatest: string): string {
   const allowed = allowedSpacings({ module: s.limits.module, preferred: s.limits.preferred, min: s.limits.minSpacing, max: s.limits.maxSpacing });
   const largest = allowed.length > 0 ? Math.max(...allowed) : s.limits.maxSpacing;
   const closer = s.zones.filter((z) => z.spacing < largest * (1 - 1e-9));
   if (closer.length === 0) return `the greatest spacing ${greatest} governs along the whole column`;
-  return `the shear flow of the ${buckling ? "lateral load and the buckling shear" : "lateral load"} governs in ${closer.length} of ${s.zones.length} zone(s), closer than the greatest spacing ${greatest}`;
+  const flow = buckling && lateral ? "the shear flow of the lateral load and the buckling shear" : buckling ? "the buckling shear" : "the shear flow of the lateral load";
+  return `${flow} governs in ${closer.length} of ${s.zones.length} zone(s), closer than the greatest spacing ${greatest}`;
 }
 
 /**
