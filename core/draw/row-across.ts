@@ -34,6 +34,40 @@ export function drivingFace(layout: LayoutAcross): string {
   return layout.drivenFrom === null ? "through bolts, either face" : `driven from ${layout.drivenFrom}`;
 }
 
+/** A row worth drawing: a stagger (alternate connectors set along the member); a row in line reads fully in words. */
+export const drawnAcross = (layout: LayoutAcross): boolean => layout.offsets.length > 1 && layout.stagger !== null;
+
+/** One joint's layout across the contact, with the contact's width there (length units). */
+export interface RowAcrossOfJoint {
+  joint: string;
+  layout: LayoutAcross;
+  contact: number | null;
+}
+
+/**
+ * Where the connectors of a row sit across the contact, in a few words for the joints' line on the field
+ * sheet: "centred 3/4 in from the left edge of the contact, driven from Top flange", "at 15 mm and 30 mm
+ * from the left edge of the contact, through bolts, either face", "…, alternate ones 3-3/4 in along the
+ * member, …"; "centred" where a single connector stands in the middle of the contact; joints that differ
+ * are named. Null unless every one of the joints has a layout.
+ */
+export function rowAcrossInOneLine(joints: string[], layouts: RowAcrossOfJoint[], dims: BuilderDimensions): string | null {
+  if (layouts.length === 0 || !joints.every((j) => layouts.some((l) => l.joint === j))) return null;
+  const where = (l: RowAcrossOfJoint) => {
+    const offsets = l.layout.offsets.map((o) => dims.length(o));
+    const one = l.layout.offsets.length === 1 ? l.layout.offsets[0]! : null;
+    const centred = one !== null && l.contact !== null && Math.abs(one - l.contact / 2) <= 1e-6 * Math.max(1, l.contact);
+    const list = offsets.length === 1 ? offsets[0]! : `${offsets.slice(0, -1).join(", ")} and ${offsets[offsets.length - 1]}`;
+    const stagger = l.layout.stagger !== null && l.layout.offsets.length > 1 ? `, alternate ones ${dims.length(l.layout.stagger)} along the member` : "";
+    return `${centred ? "centred" : "at"} ${list} from the ${l.layout.edge}${stagger}`;
+  };
+  const places = new Set(layouts.map(where));
+  const faces = new Set(layouts.map((l) => drivingFace(l.layout)));
+  if (places.size === 1 && faces.size === 1) return `${where(layouts[0]!)}, ${drivingFace(layouts[0]!.layout)}`;
+  if (places.size === 1) return `${where(layouts[0]!)}, ${layouts.map((l) => `${l.joint} ${drivingFace(l.layout)}`).join(", ")}`;
+  return layouts.map((l) => `${l.joint} ${where(l)}, ${drivingFace(l.layout)}`).join("; ");
+}
+
 /**
  * The sentences a builder reads about a row across the contact. With the result's layout: each
  * connector's distance from the named edge, the stagger and the face. Without it: only what the
@@ -68,11 +102,12 @@ const ROWS = 3;
  * edge heavy, at the top), three rows along the member with each connector where the layout puts it,
  * each connector's distance from the edge dimensioned on the left and the stagger dimensioned under the
  * rows. Across the contact to scale; along the member the rows are drawn apart for clarity. Without a
- * layout, null (the sentences say what is known).
+ * layout, or for a row without stagger, null (the sentences say it all).
  */
 export function rowAcrossDrawing(r: RowAcross, dims: BuilderDimensions, options: { width: number; height: number }): Drawing | null {
   const L = r.layout;
-  if (!L || L.offsets.length === 0) return null;
+  // A row in line says all it has to in words.
+  if (!L || L.offsets.length === 0 || !drawnAcross(L)) return null;
   const items: DrawItem[] = [];
   const top = 14;
   const dimLeft = 46;
