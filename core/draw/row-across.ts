@@ -134,10 +134,14 @@ export function rowAcrossDrawing(r: RowAcross, dims: BuilderDimensions, options:
   // Each connector's distance from the edge, as a chain of running dimensions on the left.
   const dimX = dimLeft;
   items.push({ type: "path", d: `${moveTo(dimX, top)}${lineTo(dimX, Y(Math.max(...L.offsets)))}`, stroke: palette.ink, strokeWidth: 0.6, role: "dimension" });
+  // Offsets closer than a line of text apart get their labels spread about their middle, each led to its tick.
+  const labelYs = spread(L.offsets.map(Y), LABEL_GAP);
   for (const [i, o] of L.offsets.entries()) {
     const y = Y(o);
+    const labelY = labelYs[i]!;
     items.push({ type: "path", d: `${moveTo(dimX - 2.5, y + 2.5)}${lineTo(dimX + 2.5, y - 2.5)}${moveTo(dimX, y)}${lineTo(xs[0]! + (i % 2 === 1 ? shift : 0) - DOT, y)}`, stroke: palette.faint, strokeWidth: 0.5 });
-    items.push({ type: "text", x: dimX - 4, y: y + 2.5, text: dims.length(o), size: 7, anchor: "end", fill: palette.ink, role: "offset-from-edge" });
+    if (Math.abs(labelY - y) > 0.5) items.push({ type: "path", d: `${moveTo(dimX - 4, labelY)}${lineTo(dimX - 1, y)}`, stroke: palette.faint, strokeWidth: 0.4, role: "offset-leader" });
+    items.push({ type: "text", x: dimX - 5, y: labelY + 2.5, text: dims.length(o), size: 7, anchor: "end", fill: palette.ink, role: "offset-from-edge" });
   }
   items.push({ type: "path", d: `${moveTo(dimX - 2.5, top + 2.5)}${lineTo(dimX + 2.5, top - 2.5)}`, stroke: palette.ink, strokeWidth: 0.8 });
 
@@ -154,6 +158,16 @@ export function rowAcrossDrawing(r: RowAcross, dims: BuilderDimensions, options:
     items,
     title: `Row across the contact of ${r.joints.join(", ")}: ${L.offsets.map((o) => dims.length(o)).join(", ")} from the ${L.edge}; ${drivingFace(L)}`,
   };
+}
+
+const LABEL_GAP = 8;
+
+/** Increasing positions moved apart to at least `gap`, the group kept about its own middle. */
+function spread(ys: number[], gap: number): number[] {
+  const out = [...ys];
+  for (let i = 1; i < out.length; i++) out[i] = Math.max(out[i]!, out[i - 1]! + gap);
+  const shift = (ys.reduce((a, b) => a + b, 0) - out.reduce((a, b) => a + b, 0)) / Math.max(1, ys.length);
+  return out.map((y) => y + shift);
 }
 
 const circle = (x: number, y: number, radius: number) =>
