@@ -29,9 +29,13 @@ export function rowAcrossOf(joints: string[], s: Pick<Schedule, "rows" | "layout
   };
 }
 
-/** The face the connectors go in from: "driven from <part>", or for a through bolt either face. */
+/**
+ * The face the connectors go in from: "driven from <part>", or "from either face" where the result names none
+ * (a through bolt; also a nail the standard sets no penetration for, so not "through bolts", which a builder
+ * would read as a change of connector).
+ */
 export function drivingFace(layout: LayoutAcross): string {
-  return layout.drivenFrom === null ? "through bolts, either face" : `driven from ${layout.drivenFrom}`;
+  return layout.drivenFrom === null ? "from either face" : `driven from ${layout.drivenFrom}`;
 }
 
 /** A row worth drawing: a stagger (alternate connectors set along the member); a row in line reads fully in words. */
@@ -47,7 +51,7 @@ export interface RowAcrossOfJoint {
 /**
  * Where the connectors of a row sit across the contact, in a few words for the joints' line on the field
  * sheet: "centred 3/4 in from the left edge of the contact, driven from Top flange", "at 15 mm and 30 mm
- * from the left edge of the contact, through bolts, either face", "…, alternate ones 3-3/4 in along the
+ * from the left edge of the contact, from either face", "…, alternate ones 3-3/4 in along the
  * member, …"; "centred" where a single connector stands in the middle of the contact; joints that differ
  * are named. Null unless every one of the joints has a layout.
  */

@@ -24,7 +24,7 @@ describe("a row across the contact, for the field sheet and the page", () => {
     expect(texts(drawing.items, "offset-from-edge")).toEqual(["3 in", "8-1/4 in"]);
     expect(texts(drawing.items, "edge-name")).toEqual(["top edge of the plies"]);
     expect(texts(drawing.items, "stagger")).toEqual(["stagger 2 in"]);
-    expect(texts(drawing.items, "driving-face")).toEqual(["through bolts, either face"]);
+    expect(texts(drawing.items, "driving-face")).toEqual(["from either face"]);
     // Three rows drawn, each with its two connectors: six dots.
     const dots = drawing.items.find((i) => i.type === "path" && i.role === "connectors-across")!;
     expect(((dots as { d: string }).d.match(/M/g) ?? []).length).toBe(6);
@@ -36,7 +36,7 @@ describe("a row across the contact, for the field sheet and the page", () => {
     expect(rowAcrossLines(across, us)).toEqual([
       "Connectors across the contact at 3 in, 8-1/4 in from the top edge of the plies (contact 11 in).",
       "Staggered: alternate connectors 2 in apart along the member.",
-      "Through bolts, either face.",
+      "From either face.",
     ]);
   });
 
