@@ -1,5 +1,6 @@
 import type { BondLineResult, DesignResult, Schedule, WeldResult } from "../schema/result.js";
 import { builderDimensions } from "./builder-dimensions.js";
+import type { RowAcrossOfJoint } from "./row-across.js";
 
 /** One zone of a joint as built: numbers in the result's units (positions in span units, spacings in length units). */
 export interface FieldZone {
@@ -48,6 +49,12 @@ export interface FieldJoint {
   arrangement: "chain" | "staggered" | null;
   /** Least distances across the line, length units, where the connector has them: between the connectors of a row, and to an edge. */
   acrossLine: { spacing: number | null; edge: number | null };
+  /**
+   * Where a row's connectors sit across the contact, joint by joint (the schedule's layoutAcross, and the contact's width
+   * there, length units); none for a joint whose result gives none. Joints gathered into one entry may differ here (the
+   * part driven from), so this is not part of what makes two joints the same along the member.
+   */
+  acrossLayouts: RowAcrossOfJoint[];
   /** Contact width of a bond line, length units. */
   bondWidth: number | null;
   passes: boolean;
@@ -85,9 +92,12 @@ export function fieldLayout(
   const groups = new Map<string, FieldJoint>();
   for (const { source, run } of sources) {
     const joint = fieldJointOf(result, source, run, options);
-    const key = JSON.stringify({ ...joint, joints: [] }, (_k, v: unknown) => (typeof v === "number" ? Number(v.toPrecision(9)) : v));
+    const key = JSON.stringify({ ...joint, joints: [], acrossLayouts: [] }, (_k, v: unknown) => (typeof v === "number" ? Number(v.toPrecision(9)) : v));
     const same = groups.get(key);
-    if (same) same.joints.push(...joint.joints);
+    if (same) {
+      same.joints.push(...joint.joints);
+      same.acrossLayouts.push(...joint.acrossLayouts);
+    }
     else groups.set(key, joint);
   }
   return [...groups.values()];
@@ -125,6 +135,7 @@ function fieldJointOf(result: Pick<DesignResult, "beam" | "units">, source: Sour
       run,
       arrangement: null,
       acrossLine: { spacing: s.rows > 1 ? (s.limits.rowSpacing ?? null) : null, edge: s.limits.edgeDistance ?? null },
+      acrossLayouts: s.layoutAcross ? [{ joint: s.joint, layout: s.layoutAcross, contact: s.rowFit?.available ?? null }] : [],
       bondWidth: null,
       passes: s.passes,
     };
@@ -160,6 +171,7 @@ function fieldJointOf(result: Pick<DesignResult, "beam" | "units">, source: Sour
       // Sides to stagger only with an even number of fillets (one each side of a web, or two pairs).
       arrangement: intermittent && w.fillets % 2 === 0 ? w.arrangement : null,
       acrossLine: { spacing: null, edge: null },
+      acrossLayouts: [],
       bondWidth: null,
       passes: w.passes,
     };
@@ -179,6 +191,7 @@ function fieldJointOf(result: Pick<DesignResult, "beam" | "units">, source: Sour
     run,
     arrangement: null,
     acrossLine: { spacing: null, edge: null },
+    acrossLayouts: [],
     bondWidth: b.width,
     passes: b.passes,
   };

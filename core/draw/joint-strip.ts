@@ -4,6 +4,7 @@ import type { FieldJoint, FieldZone } from "./field-layout.js";
 import { labelWidth, placeInTiers } from "./label-tiers.js";
 import { supportSymbol, xOf, type AlongMember } from "./member-elevation.js";
 import { staggeredSide } from "../spacing/place-rows.js";
+import { rowAcrossInOneLine } from "./row-across.js";
 
 const ZONE_LABEL = 8.5;
 const POSITION_LABEL = 7.5;
@@ -36,6 +37,9 @@ export function jointMakeUp(j: FieldJoint, dims: BuilderDimensions): string {
   }
   const count = j.zones.reduce((s, z) => s + (z.connectors ?? 0), 0);
   const per = j.across === 1 ? "1 per row" : `${j.across} per row side by side`;
+  // A row in line across the contact is said here in full; the sheet draws only staggered rows.
+  const oneLine = rowAcrossInOneLine(j.joints, j.acrossLayouts, dims);
+  if (oneLine) return `${j.across} per row ${oneLine}, ${lines}; ${count} per joint`;
   const apart = j.acrossLine.spacing !== null ? ` at least ${dims.length(j.acrossLine.spacing, "up")} apart` : "";
   const edge = j.acrossLine.edge !== null ? `, at least ${dims.length(j.acrossLine.edge, "up")} from every edge` : "";
   return `${per}${apart}${edge}, ${lines}; ${count} per joint`;
@@ -61,8 +65,11 @@ export function jointStrip(
 
   items.push({ type: "text", x: along.left, y: y + 10, text: `${jointNames(j.joints)}${j.mode === "check" ? " (given schedule, checked)" : ""} — ${j.connectorLabel}`, size: 9.5, anchor: "start", bold: true, fill: j.passes ? palette.ink : palette.fail, role: "joint-title" });
   y += 14;
-  items.push({ type: "text", x: along.left, y: y + 8, text: jointMakeUp(j, dims), size: 8, anchor: "start", fill: palette.ink, role: "joint-make-up" });
-  y += 12;
+  // A long make-up (joints driven from different parts) runs on to further lines rather than past the strip.
+  for (const line of wrapped(jointMakeUp(j, dims), 8, along.right - along.left)) {
+    items.push({ type: "text", x: along.left, y: y + 8, text: line, size: 8, anchor: "start", fill: palette.ink, role: "joint-make-up" });
+    y += 12;
+  }
 
   // Call-outs above their zones, in as many tiers as they need to stay apart.
   const callOuts = j.zones.map((z) => zoneCallOut(j, z, dims));
@@ -147,6 +154,21 @@ export function jointStrip(
     y += 4;
   }
   return { items, height: y - top };
+}
+
+/** Words into lines no wider than `width` at this size; prose averages a little under half an em a character in DejaVu Sans. */
+function wrapped(text: string, size: number, width: number): string[] {
+  const widthOf = (t: string) => t.length * size * 0.48;
+  const lines: string[] = [];
+  let line = "";
+  for (const word of text.split(" ")) {
+    const next = line ? `${line} ${word}` : word;
+    if (line && widthOf(next) > width) {
+      lines.push(line);
+      line = word;
+    } else line = next;
+  }
+  return [...lines, line];
 }
 
 /** Where the joint's part is absent: hatched grey, with a heavy mark at each end of the part. */

@@ -29,9 +29,47 @@ export function rowAcrossOf(joints: string[], s: Pick<Schedule, "rows" | "layout
   };
 }
 
-/** The face the connectors go in from: "driven from <part>", or for a through bolt either face. */
+/**
+ * The face the connectors go in from: "driven from <part>", or "from either face" where the result names none
+ * (a through bolt; also a nail the standard sets no penetration for, so not "through bolts", which a builder
+ * would read as a change of connector).
+ */
 export function drivingFace(layout: LayoutAcross): string {
-  return layout.drivenFrom === null ? "through bolts, either face" : `driven from ${layout.drivenFrom}`;
+  return layout.drivenFrom === null ? "from either face" : `driven from ${layout.drivenFrom}`;
+}
+
+/** A row worth drawing: a stagger (alternate connectors set along the member); a row in line reads fully in words. */
+export const drawnAcross = (layout: LayoutAcross): boolean => layout.offsets.length > 1 && layout.stagger !== null;
+
+/** One joint's layout across the contact, with the contact's width there (length units). */
+export interface RowAcrossOfJoint {
+  joint: string;
+  layout: LayoutAcross;
+  contact: number | null;
+}
+
+/**
+ * Where the connectors of a row sit across the contact, in a few words for the joints' line on the field
+ * sheet: "centred 3/4 in from the left edge of the contact, driven from Top flange", "at 15 mm and 30 mm
+ * from the left edge of the contact, from either face", "…, alternate ones 3-3/4 in along the
+ * member, …"; "centred" where a single connector stands in the middle of the contact; joints that differ
+ * are named. Null unless every one of the joints has a layout.
+ */
+export function rowAcrossInOneLine(joints: string[], layouts: RowAcrossOfJoint[], dims: BuilderDimensions): string | null {
+  if (layouts.length === 0 || !joints.every((j) => layouts.some((l) => l.joint === j))) return null;
+  const where = (l: RowAcrossOfJoint) => {
+    const offsets = l.layout.offsets.map((o) => dims.length(o));
+    const one = l.layout.offsets.length === 1 ? l.layout.offsets[0]! : null;
+    const centred = one !== null && l.contact !== null && Math.abs(one - l.contact / 2) <= 1e-6 * Math.max(1, l.contact);
+    const list = offsets.length === 1 ? offsets[0]! : `${offsets.slice(0, -1).join(", ")} and ${offsets[offsets.length - 1]}`;
+    const stagger = l.layout.stagger !== null && l.layout.offsets.length > 1 ? `, alternate ones ${dims.length(l.layout.stagger)} along the member` : "";
+    return `${centred ? "centred" : "at"} ${list} from the ${l.layout.edge}${stagger}`;
+  };
+  const places = new Set(layouts.map(where));
+  const faces = new Set(layouts.map((l) => drivingFace(l.layout)));
+  if (places.size === 1 && faces.size === 1) return `${where(layouts[0]!)}, ${drivingFace(layouts[0]!.layout)}`;
+  if (places.size === 1) return `${where(layouts[0]!)}, ${layouts.map((l) => `${l.joint} ${drivingFace(l.layout)}`).join(", ")}`;
+  return layouts.map((l) => `${l.joint} ${where(l)}, ${drivingFace(l.layout)}`).join("; ");
 }
 
 /**
@@ -68,11 +106,12 @@ const ROWS = 3;
  * edge heavy, at the top), three rows along the member with each connector where the layout puts it,
  * each connector's distance from the edge dimensioned on the left and the stagger dimensioned under the
  * rows. Across the contact to scale; along the member the rows are drawn apart for clarity. Without a
- * layout, null (the sentences say what is known).
+ * layout, or for a row without stagger, null (the sentences say it all).
  */
 export function rowAcrossDrawing(r: RowAcross, dims: BuilderDimensions, options: { width: number; height: number }): Drawing | null {
   const L = r.layout;
-  if (!L || L.offsets.length === 0) return null;
+  // A row in line says all it has to in words.
+  if (!L || L.offsets.length === 0 || !drawnAcross(L)) return null;
   const items: DrawItem[] = [];
   const top = 14;
   const dimLeft = 46;
@@ -99,10 +138,14 @@ export function rowAcrossDrawing(r: RowAcross, dims: BuilderDimensions, options:
   // Each connector's distance from the edge, as a chain of running dimensions on the left.
   const dimX = dimLeft;
   items.push({ type: "path", d: `${moveTo(dimX, top)}${lineTo(dimX, Y(Math.max(...L.offsets)))}`, stroke: palette.ink, strokeWidth: 0.6, role: "dimension" });
+  // Offsets closer than a line of text apart get their labels spread about their middle, each led to its tick.
+  const labelYs = spread(L.offsets.map(Y), LABEL_GAP);
   for (const [i, o] of L.offsets.entries()) {
     const y = Y(o);
+    const labelY = labelYs[i]!;
     items.push({ type: "path", d: `${moveTo(dimX - 2.5, y + 2.5)}${lineTo(dimX + 2.5, y - 2.5)}${moveTo(dimX, y)}${lineTo(xs[0]! + (i % 2 === 1 ? shift : 0) - DOT, y)}`, stroke: palette.faint, strokeWidth: 0.5 });
-    items.push({ type: "text", x: dimX - 4, y: y + 2.5, text: dims.length(o), size: 7, anchor: "end", fill: palette.ink, role: "offset-from-edge" });
+    if (Math.abs(labelY - y) > 0.5) items.push({ type: "path", d: `${moveTo(dimX - 4, labelY)}${lineTo(dimX - 1, y)}`, stroke: palette.faint, strokeWidth: 0.4, role: "offset-leader" });
+    items.push({ type: "text", x: dimX - 5, y: labelY + 2.5, text: dims.length(o), size: 7, anchor: "end", fill: palette.ink, role: "offset-from-edge" });
   }
   items.push({ type: "path", d: `${moveTo(dimX - 2.5, top + 2.5)}${lineTo(dimX + 2.5, top - 2.5)}`, stroke: palette.ink, strokeWidth: 0.8 });
 
@@ -119,6 +162,16 @@ export function rowAcrossDrawing(r: RowAcross, dims: BuilderDimensions, options:
     items,
     title: `Row across the contact of ${r.joints.join(", ")}: ${L.offsets.map((o) => dims.length(o)).join(", ")} from the ${L.edge}; ${drivingFace(L)}`,
   };
+}
+
+const LABEL_GAP = 8;
+
+/** Increasing positions moved apart to at least `gap`, the group kept about its own middle. */
+function spread(ys: number[], gap: number): number[] {
+  const out = [...ys];
+  for (let i = 1; i < out.length; i++) out[i] = Math.max(out[i]!, out[i - 1]! + gap);
+  const shift = (ys.reduce((a, b) => a + b, 0) - out.reduce((a, b) => a + b, 0)) / Math.max(1, ys.length);
+  return out.map((y) => y + shift);
 }
 
 const circle = (x: number, y: number, radius: number) =>

@@ -2,7 +2,7 @@ import { builderDimensions, type BuilderDimensions } from "../../core/draw/build
 import { fieldElevation } from "../../core/draw/field-elevation.js";
 import { fieldLayout, type FieldJoint } from "../../core/draw/field-layout.js";
 import { jointNames, zoneCallOut } from "../../core/draw/joint-strip.js";
-import { rowAcrossDrawing, rowAcrossLines, rowAcrossOf } from "../../core/draw/row-across.js";
+import { drawnAcross, rowAcrossDrawing, rowAcrossLines, rowAcrossOf } from "../../core/draw/row-across.js";
 import { sectionSketch } from "../../core/draw/section-sketch.js";
 import { paintDrawing } from "./paint-drawing.js";
 import { ink, type TextStyle } from "./sheet.js";
@@ -34,6 +34,19 @@ export function fieldSheet(c: WorksheetContext): number[] {
   const joints = fieldLayout(result, { electrodeOf });
 
   band(c);
+  // Every further page of the field sheet starts with the band too, whatever spills onto it.
+  sheet.pageStart = () => band(c);
+  try {
+    fieldSheetBody(c, joints, dims);
+  } finally {
+    sheet.pageStart = null;
+  }
+  const last = sheet.doc.bufferedPageRange().count - 1;
+  return Array.from({ length: last - page + 1 }, (_, i) => page + i);
+}
+
+function fieldSheetBody(c: WorksheetContext, joints: FieldJoint[], dims: BuilderDimensions): void {
+  const { sheet, job, result } = c;
   if (!result.status.passes) failureBox(c);
   introWithSketch(c, joints, dims);
 
@@ -66,14 +79,12 @@ export function fieldSheet(c: WorksheetContext): number[] {
     });
   acrossTheContact(c, joints, dims);
   zonesTable(c, joints, dims);
-  const last = sheet.doc.bufferedPageRange().count - 1;
-  return Array.from({ length: last - page + 1 }, (_, i) => page + i);
 }
 
+/** The review band across the top of a field sheet page; drawn at the top of the page, never moved to another. */
 function band(c: WorksheetContext): void {
   const { sheet } = c;
   const height = 34;
-  sheet.ensure(height + 6);
   sheet.doc.save().rect(sheet.left, sheet.y, sheet.width, height).fill(ink.text).restore();
   sheet.textAt(FIELD_SHEET_BAND, sheet.left, sheet.y + 5, { font: "bold", size: 13, width: sheet.width, align: "center", colour: "#ffffff" });
   sheet.textAt("Build only from a copy reviewed and sealed by the engineer of record. Local codes and the engineer of record govern.", sheet.left, sheet.y + 21, {
@@ -156,40 +167,42 @@ function introWithSketch(c: WorksheetContext, joints: FieldJoint[], dims: Builde
   sheet.y += height + 6;
 }
 
-const ACROSS = { width: 200, height: 96 };
+/** A staggered row across the contact, drawn small: three to a line. */
+const ACROSS = { height: 84, caption: 11, perLine: 3, gutter: 10 };
 
 /** Joints laid out with connectors whose result gives no layout across the contact (the intro says what to do). */
 const withoutLayoutAcross = (c: WorksheetContext, joints: FieldJoint[]) =>
   joints.filter((j) => j.kind === "connectors" && !c.result.schedules.find((s) => s.joint === j.joints[0])?.layoutAcross);
 
 /**
- * Where each joint's connectors sit across the contact, where the result gives it: drawn and dimensioned
- * from the named edge, with the stagger and the driving face beside it. Joints that read the same are said once.
+ * Staggered rows across the contact, drawn small and dimensioned from the named edge, three to a line,
+ * each under the names of its joints; joints drawn alike are drawn once. The words (offsets, stagger,
+ * face) are on each joint's own line above (jointMakeUp), so a row in line needs no drawing.
  */
 function acrossTheContact(c: WorksheetContext, joints: FieldJoint[], dims: BuilderDimensions): void {
   const { sheet, result } = c;
-  const said = new Map<string, { lines: string[]; joints: string[] }>();
+  const drawn = new Map<string, string[]>();
   for (const j of joints.filter((k) => k.kind === "connectors")) {
-    const s = result.schedules.find((k) => k.joint === j.joints[0]);
-    if (!s?.layoutAcross) continue;
-    const lines = rowAcrossLines(rowAcrossOf(j.joints, s), dims);
-    const key = JSON.stringify(lines);
-    const entry = said.get(key) ?? { lines, joints: [] };
-    entry.joints.push(...j.joints);
-    said.set(key, entry);
+    for (const a of j.acrossLayouts) {
+      if (!drawnAcross(a.layout)) continue;
+      const s = result.schedules.find((k) => k.joint === a.joint);
+      if (!s) continue;
+      const key = JSON.stringify(rowAcrossLines(rowAcrossOf([], s), dims));
+      drawn.set(key, [...(drawn.get(key) ?? []), a.joint]);
+    }
   }
-  if (said.size === 0) return;
-  sheet.heading("Across the contact", 2, ACROSS.height + 20);
-  for (const { lines, joints: ids } of said.values()) {
-    const s = result.schedules.find((k) => k.joint === ids[0])!;
-    const drawing = rowAcrossDrawing(rowAcrossOf(ids, s), dims, ACROSS);
-    const text = `${jointNames(ids)}: ${lines.join(" ")}`;
-    const width = sheet.width - ACROSS.width - 12;
-    const height = Math.max(drawing ? ACROSS.height : 0, sheet.textHeight(text, { size: 8.5, width }));
-    sheet.ensure(height + 6);
-    if (drawing) paintDrawing(sheet.doc, drawing, sheet.left, sheet.y);
-    sheet.textAt(text, sheet.left + ACROSS.width + 12, sheet.y + 4, { size: 8.5, width });
-    sheet.y += height + 6;
+  if (drawn.size === 0) return;
+  const width = (sheet.width - (ACROSS.perLine - 1) * ACROSS.gutter) / ACROSS.perLine;
+  const groups = [...drawn.values()];
+  for (let i = 0; i < groups.length; i += ACROSS.perLine) {
+    sheet.ensure(ACROSS.caption + ACROSS.height + 4);
+    groups.slice(i, i + ACROSS.perLine).forEach((ids, n) => {
+      const x = sheet.left + n * (width + ACROSS.gutter);
+      const drawing = rowAcrossDrawing(rowAcrossOf(ids, result.schedules.find((k) => k.joint === ids[0])!), dims, { width, height: ACROSS.height });
+      sheet.textAt(`${jointNames(ids)} across the contact`, x, sheet.y, { font: "bold", size: 7.5, width });
+      if (drawing) paintDrawing(sheet.doc, drawing, x, sheet.y + ACROSS.caption);
+    });
+    sheet.y += ACROSS.caption + ACROSS.height + 4;
   }
 }
 

@@ -113,9 +113,16 @@ export class Sheet {
     return this.y <= this.frame.top + 0.5;
   }
 
+  /**
+   * Drawn at the top of every page this sheet adds while set (the field sheet's review band), so that a
+   * block spilling onto a new page can never leave that page without it.
+   */
+  pageStart: (() => void) | null = null;
+
   newPage(): void {
     this.doc.addPage();
     this.y = this.frame.top;
+    this.pageStart?.();
   }
 
   /**

@@ -83,10 +83,29 @@ describe("feet and inches on the page's schedule tables, as on the field sheet",
 
 describe("across the contact on the page", () => {
   test("without a layout across in the result, the schedule says what the limits give and draws nothing", { timeout: 60_000 }, async () => {
+    // Every discrete schedule has one now: the design's answer is copied with the field deleted to test the path.
+    await page.route("**/api/designs", async (route) => {
+      const response = await route.fetch();
+      const result = (await response.json()) as { schedules: Record<string, unknown>[] };
+      for (const s of result.schedules) delete s.layoutAcross;
+      await route.fulfill({ response, json: result });
+    });
+    try {
+      await open("flitch-door-header.us");
+      const block = await textOf(".schedule-block");
+      expect(block).toContain("Across the contact2 per row across the contact of 11 in, at least 3 in from each edge and at least 3 in apart.");
+      expect(await page.locator(".schedule-block figure.row-across").count()).toBe(0);
+    } finally {
+      await page.unroute("**/api/designs");
+    }
+    expect(h.errors).toEqual([]);
+  });
+
+  test("with it: the flitch plate's staggered bolts are said and drawn", { timeout: 60_000 }, async () => {
     await open("flitch-door-header.us");
     const block = await textOf(".schedule-block");
-    expect(block).toContain("Across the contact2 per row across the contact of 11 in, at least 3 in from each edge and at least 3 in apart.");
-    expect(await page.locator(".schedule-block figure.row-across").count()).toBe(0);
+    expect(block).toContain("Across the contactConnectors across the contact at");
+    expect(await page.locator(".schedule-block figure.row-across").count()).toBe(1);
     expect(h.errors).toEqual([]);
   });
 });

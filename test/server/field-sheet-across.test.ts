@@ -24,18 +24,30 @@ describe("field sheet: where the connectors sit across the contact", () => {
     const result = { ...run.result, schedules: run.result.schedules.map((s) => ({ ...s, layoutAcross: { edge: "top edge of the plies", offsets: [3, 8.25], stagger: 2, drivenFrom: null } })) };
     const { text, pages } = await fieldSheetText(result, run.job, "with");
     expect(pages).toBe(1);
-    expect(text).toContain("Across the contact");
-    expect(text).toContain("Connectors across the contact at 3 in, 8-1/4 in from the top edge of the plies (contact 11 in).");
+    // In words on the joint's line, and drawn (the rows are staggered).
+    expect(text).toContain("2 per row at 3 in and 8-1/4 in from the top edge of the plies, alternate ones 2 in along the member, from either face");
+    expect(text).toContain("Joint plate across the contact");
     expect(text).toContain("stagger 2 in");
-    expect(text).toContain("Through bolts, either face.");
+  });
+
+  test("rows in line: said on the joint's line, nothing drawn", async () => {
+    const result = { ...run.result, schedules: run.result.schedules.map((s) => ({ ...s, layoutAcross: { edge: "top edge of the plies", offsets: [3, 8.25], stagger: null, drivenFrom: null } })) };
+    const { text, pages } = await fieldSheetText(result, run.job, "in-line");
+    expect(pages).toBe(1);
+    expect(text).toContain("2 per row at 3 in and 8-1/4 in from the top edge of the plies, from either face");
+    expect(text).not.toContain("Joint plate across the contact");
+    expect(text).not.toContain("stagger");
   });
 
   test("without it: the least distances on the joint's line, and that the positions across are the engineer's to set; nothing invented", async () => {
-    const { text, pages } = await fieldSheetText(run.result, run.job, "without");
+    // Every discrete schedule has one now: taken out of a copy of the result to test the path.
+    const result = { ...run.result, schedules: run.result.schedules.map(({ layoutAcross: _, ...s }) => s) };
+    const { text, pages } = await fieldSheetText(result, run.job, "without");
     expect(pages).toBe(1);
     expect(text).toContain("2 per row side by side at least 3 in apart, at least 3 in from every edge");
     expect(text).toContain("The engineer of record sets where rows sit across the contact");
-    expect(text).not.toContain("Across the contact");
-    expect(text).not.toContain("Through bolts");
+    expect(text).not.toContain("Joint plate across the contact");
+    expect(text).not.toContain("either face");
+    expect(text).not.toContain("from the top edge");
   });
 });

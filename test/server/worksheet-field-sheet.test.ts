@@ -248,6 +248,16 @@ describe("the field sheet at the end of the worksheet", () => {
     expect(text).not.toMatch(/1st row .* from END A/);
   });
 
+  test("a field sheet that takes two pages has the band, the title block and the notice on each", async () => {
+    // The three-ply header's staggered rows are drawn across the contact: its field sheet runs on to a second page.
+    const { run, file } = await fieldSheetOf("two-pages", example("three-ply-header.us"));
+    const pageTexts = execFileSync("pdftotext", ["-enc", "UTF-8", file, "-"], { encoding: "utf8" }).split("\f").map(flat).filter(Boolean);
+    expect(pageTexts.length).toBeGreaterThan(1);
+    pageTexts.forEach((page, i) => {
+      for (const t of [FIELD_SHEET_BAND, FIELD_SHEET_HEADING, flat(REVIEW_NOTICE), run.result.fingerprint!, run.job.member.mark, `Page ${i + 1} of ${pageTexts.length}`]) expect(page, `page ${i + 1}`).toContain(t);
+    });
+  });
+
   test("the field sheet alone is the worksheet's last page, word for word but for the page number", async () => {
     const name = "mezzanine-edge-beam.si";
     const { text, pages } = await fieldSheetOf("field-only", example(name));

@@ -2,7 +2,7 @@ import { describe, expect, test } from "vitest";
 import { builderDimensions } from "../../../core/draw/builder-dimensions.js";
 import type { TextItem } from "../../../core/draw/drawing.js";
 import { renderSvg } from "../../../core/draw/render-svg.js";
-import { rowAcrossDrawing, rowAcrossLines, rowAcrossOf } from "../../../core/draw/row-across.js";
+import { rowAcrossDrawing, rowAcrossInOneLine, rowAcrossLines, rowAcrossOf } from "../../../core/draw/row-across.js";
 import type { Schedule } from "../../../core/schema/result.js";
 
 // A flitch joint's schedule as a result gives it in US units (lengths in inches), made by hand: two 3/4 in
@@ -24,7 +24,7 @@ describe("a row across the contact, for the field sheet and the page", () => {
     expect(texts(drawing.items, "offset-from-edge")).toEqual(["3 in", "8-1/4 in"]);
     expect(texts(drawing.items, "edge-name")).toEqual(["top edge of the plies"]);
     expect(texts(drawing.items, "stagger")).toEqual(["stagger 2 in"]);
-    expect(texts(drawing.items, "driving-face")).toEqual(["through bolts, either face"]);
+    expect(texts(drawing.items, "driving-face")).toEqual(["from either face"]);
     // Three rows drawn, each with its two connectors: six dots.
     const dots = drawing.items.find((i) => i.type === "path" && i.role === "connectors-across")!;
     expect(((dots as { d: string }).d.match(/M/g) ?? []).length).toBe(6);
@@ -36,17 +36,28 @@ describe("a row across the contact, for the field sheet and the page", () => {
     expect(rowAcrossLines(across, us)).toEqual([
       "Connectors across the contact at 3 in, 8-1/4 in from the top edge of the plies (contact 11 in).",
       "Staggered: alternate connectors 2 in apart along the member.",
-      "Through bolts, either face.",
+      "From either face.",
     ]);
   });
 
-  test("rows in line, driven from a named part", () => {
-    const across = rowAcrossOf(["top"], { ...schedule({ edge: "outer face of the flange", offsets: [20, 45], stagger: null, drivenFrom: "top flange" }), rows: 2 });
+  test("rows in line, driven from a named part: said in words on one line, not drawn", () => {
+    const layout = { edge: "outer face of the flange", offsets: [20, 45], stagger: null, drivenFrom: "top flange" };
+    const across = rowAcrossOf(["top"], { ...schedule(layout), rows: 2 });
     const si = builderDimensions("si");
-    const drawing = rowAcrossDrawing(across, si, { width: 200, height: 96 })!;
-    expect(texts(drawing.items, "driving-face")).toEqual(["driven from top flange"]);
-    expect(texts(drawing.items, "stagger")).toEqual([]);
+    expect(rowAcrossDrawing(across, si, { width: 200, height: 96 })).toBeNull();
     expect(rowAcrossLines(across, si)[1]).toBe("Rows in line: no stagger.");
+    expect(rowAcrossInOneLine(["top"], [{ joint: "top", layout, contact: 70 }], si)).toBe("at 20 mm and 45 mm from the outer face of the flange, driven from top flange");
+  });
+
+  test("one connector in the middle of the contact is centred; joints alike along the member but driven from different parts are named", () => {
+    const one = (drivenFrom: string) => ({ edge: "left edge of the contact", offsets: [0.75], stagger: null, drivenFrom });
+    // 3/4 in is the middle of a 1-1/2 in contact [D].
+    expect(rowAcrossInOneLine(["top"], [{ joint: "top", layout: one("Top flange"), contact: 1.5 }], us)).toBe("centred 3/4 in from the left edge of the contact, driven from Top flange");
+    expect(rowAcrossInOneLine(["top", "bottom"], [{ joint: "top", layout: one("Top flange"), contact: 1.5 }, { joint: "bottom", layout: one("Bottom flange"), contact: 1.5 }], us)).toBe(
+      "centred 3/4 in from the left edge of the contact, top driven from Top flange, bottom driven from Bottom flange",
+    );
+    // A joint without a layout: nothing said for the group.
+    expect(rowAcrossInOneLine(["top", "bottom"], [{ joint: "top", layout: one("Top flange"), contact: 1.5 }], us)).toBeNull();
   });
 
   test("without a layout: what the limits say, no drawing and no invented position", () => {
