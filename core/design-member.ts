@@ -142,7 +142,7 @@ export function designMember(input: JobDocument): DesignResult {
   });
 
   type Run = { schedule?: Schedule; bondLine?: BondLineResult; weld?: WeldResult; warnings: string[]; mirrored: boolean };
-  const run = ({ kind, input: jointInput, extent, share }: (typeof prepared)[number], override: Partial<Pick<JointInput, "flowFactor" | "maxSpacingCap" | "extraDemand" | "columnLimits">> = {}): Run => {
+  const run = ({ kind, input: jointInput, extent, share }: (typeof prepared)[number], override: Partial<Pick<JointInput, "flowFactor" | "maxSpacingCap" | "extraDemand" | "columnLimits" | "demandActions">> = {}): Run => {
     const inputs = { ...jointInput, ...override, ...(override.flowFactor !== undefined ? { flowFactor: override.flowFactor * share } : {}) };
     const back = <T extends Schedule | WeldResult | BondLineResult>(r: T): T => (extent ? globalise(r, stations, extent) : r);
     if (kind.mechanism === "bond-line") return { bondLine: back(bondLineResult(inputs, kind)), warnings: [], mirrored: false };
