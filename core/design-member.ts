@@ -88,7 +88,7 @@ export function designMember(input: JobDocument): DesignResult {
     const plyInterface = plyInterfaces && plyInterfaces.length === 1 ? plyInterfaces[0]! : null;
     if (inPlaneOfBending && plyInterfaces === null) {
       warnings.add(
-        `Joint ${joint.id}: its held parts are balanced about the neutral axis (Q = 0), so bending in the plane of the member puts no shear flow on it; its connectors are placed by the spacing limits only.`,
+        `Joint ${joint.id}: its held parts are balanced about the neutral axis (Q = 0), so bending in the plane of the member puts no shear flow on it; its connectors are placed by the spacing limits${job.compression ? " and by the column rule's buckling shear where it gives one (see the built-up column)" : " only"}.`,
       );
     }
     jointResults.push({
