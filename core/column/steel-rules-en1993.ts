@@ -8,7 +8,9 @@ import { exceeds } from "../units/limits.js";
 import { columnCheck, step, type Axis, type ColumnDesign, type ColumnJob, type ColumnJointDemand, type ColumnRule } from "./column-rules.js";
 import { en1993CloselySpacedLimit, en1993CloselySpacedMember } from "./steel-built-up-en1993.js";
 import { EN1993_GAMMA_M1, en1993FlexuralBuckling, type BucklingCurve } from "./steel-compression.js";
-import { closestBuildable, rectGeometry } from "./steel-rules.js";
+import { allowedSpacings } from "../spacing/allowed-spacings.js";
+import { spacingPractice } from "../spacing/spacing-defaults.js";
+import { rectGeometry } from "./steel-rules.js";
 
 /**
  * EN 1993-1-1 §6.4.4: closely spaced built-up members (two angles or two channels back to back, in
@@ -21,6 +23,21 @@ const isEnBolt = (c: Connector) => c.kind === "steel-bolt" && c.standard === "EN
 
 /** EN 1993-1-1 Table 6.2 [M]: L-sections curve b, U-sections curve c, about any axis. */
 const CURVE: Record<"angle" | "channel", BucklingCurve> = { angle: "b", channel: "c" };
+
+/** The least hole-to-hole spacing of an EN 1993-1-8 bolt: as given, or p_1 ≥ 2.2 d_0 (Table 3.3); d_0 = d + 2 mm off the table [M]. */
+function leastPitch(c: Connector): number {
+  if (c.kind !== "steel-bolt") return 0;
+  const d = steelBoltDiameter(c) ?? 12;
+  return c.minSpacing ?? 2.2 * (metricBoltSize(c.size ?? "")?.d0 ?? d + 2);
+}
+
+/** The closest spacing the schedule can build: the bolts' least pitch and the job's least spacing, up to an allowed spacing, mm. */
+function closestBuildable(c: ColumnJob, aMax: number): number {
+  const least = Math.max(c.job.spacing.minimum ?? 0, ...c.joints.map((j) => leastPitch(j.connector)));
+  const module = c.job.spacing.preferred ? null : (c.job.spacing.module ?? spacingPractice(c.job).module);
+  const allowed = allowedSpacings({ module, preferred: c.job.spacing.preferred ?? null, min: least, max: 2 * Math.max(least, aMax) + (module ?? 0) });
+  return allowed[0] ?? Math.max(least, aMax);
+}
 
 export const en1993Closely: ColumnRule = {
   id: "en1993-6.4",
@@ -180,9 +197,12 @@ function designClosely(c: ColumnJob): ColumnDesign {
   const spacingGoverns = exceeds(aLimit, aMax) ? "the closest spacing the bolts and the spacing module allow, which exceeds 15 i_min" : "15 i_min, EN 1993-1-1 §6.4.4(1), Table 6.9 [M]";
   const sources = [`greatest spacing of the interconnections ${len(aLimit)}: ${spacingGoverns}`];
   const gm = gov.m;
+  // Unstable with the plates' shear stiffness: no shear can be given, so the bolts go as close as they can be built (the joint fails).
+  const jointSpacing = unstable.length > 0 ? Math.min(aLimit, aLow) : aLimit;
+  if (unstable.length > 0) sources.push(`the member buckles under N_Ed with the packing plates' shear stiffness: the bolts at the closest buildable spacing ${len(jointSpacing)}`);
   const joints: ColumnJointDemand[] = c.joints.map((j) => ({
     joint: j.id,
-    limits: { maxSpacing: aLimit, sources },
+    limits: { maxSpacing: jointSpacing, sources },
     rowsRequired: null,
     bucklingShear: per.map((p) => p.shear),
     bucklingFlow: flows,

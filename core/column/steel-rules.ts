@@ -96,7 +96,7 @@ function doubleAngleOf(parts: PlacedPart[], c: ColumnJob) {
 }
 
 /** The smallest spacing a joint's schedule can build: the bolts' least spacing and the job's, up to an allowed spacing, mm. */
-export function closestBuildable(c: ColumnJob, aMax: number): number {
+function closestBuildable(c: ColumnJob, aMax: number): number {
   const least = Math.max(c.job.spacing.minimum ?? 0, ...c.joints.map((j) => (j.connector.kind === "steel-bolt" ? (j.connector.minSpacing ?? 3 * (steelBoltDiameter(j.connector) ?? 0)) : 0)));
   const module = c.job.spacing.preferred ? null : (c.job.spacing.module ?? spacingPractice(c.job).module);
   const allowed = allowedSpacings({ module, preferred: c.job.spacing.preferred ?? null, min: least, max: 2 * Math.max(least, aMax) + (module ?? 0) });
