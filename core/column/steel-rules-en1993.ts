@@ -214,6 +214,7 @@ function designClosely(c: ColumnJob): ColumnDesign {
     ],
   }));
 
+  // A result holds no infinities (core/finite-verdict.ts): an unstable member's M_Ed and V_Ed show as 1e12.
   const steps: WorkingLine[] = [
     step("A", `integral member, two ${kind}s${packing.size > 0 ? ", packing left out" : ""}`, g.A, "area"),
     ...axisNames.flatMap((x) => [step(`I_${x}`, `integral member about ${x}`, x === "x" ? g.Ix : g.Iy, "secondMoment"), step(`i_${x}`, `√(I_${x}/A)`, radius[x], "length")]),
@@ -230,7 +231,7 @@ function designClosely(c: ColumnJob): ColumnDesign {
     step("h_0", "distance between the components' centroids", h0, "length"),
     step("I_ch", `one component about its own axis parallel to ${jointed}`, Ich, "secondMoment"),
     step("I_b", plateDepth !== null ? `one packing plate in its plane, depth ${len(plateDepth)} × (2e_1 = ${len(plateLength)})³/12` : `components in contact: the component's depth × (2e_1 = ${len(plateLength)})³/12`, Ib, "secondMoment"),
-    ...(gm ? ((gm.packing.steps as WorkingLine[]).filter((s) => !/^(M_ch|M_b|N_ch,Ed \/|N_b,Rd \(chord|χ \(chord|Φ \(chord|λ̄ \(chord|α \(chord|N_cr \(chord|γ_M1 \(chord)/.test(s.symbol)).map((s) => ({ ...s, description: `${s.description}; ${gov.act.combination.id}` }))) : []),
+    ...(gm ? ((gm.packing.steps as WorkingLine[]).filter((s) => !/^(M_ch|M_b|N_ch,Ed \/|N_b,Rd \(chord|χ \(chord|Φ \(chord|λ̄ \(chord|α \(chord|N_cr \(chord|γ_M1 \(chord)/.test(s.symbol)).map((s) => ({ ...s, value: Number.isFinite(s.value) ? s.value : 1e12, description: `${s.description}; ${gov.act.combination.id}` }))) : []),
   ];
   const axes: ColumnDesign["axes"] = axisNames.map((x) => ({
     axis: x,
