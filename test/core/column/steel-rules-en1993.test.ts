@@ -96,7 +96,7 @@ describe("EN 1993-1-1 §6.4.4 through designMember: two channels back to back wi
     const Ich = channel.Iy;
     const Ieff = 0.5 * pair.h0 ** 2 * channel.A + 2 * Ich; // μ = 1: λ = L/i_0 ≤ 75 (Table 6.8 [M])
     expectClose(Ieff, pair.Iy, { rel: 1e-12 }, "I_eff = I_y of the pair for μ = 1 [D]");
-    const Ib = (100 * (2 * 1.2 * 18) ** 3) / 12; // the plate 100 deep, 2e_1 = 2 × 1.2 d_0 long (d_0 = 18 mm, EN 1993-1-8 Table 3.3 [M])
+    const Ib = (100 * (2 * 30) ** 3) / 12; // the plate 100 deep, taken 2e_1 = 2 × 30 mm long (the bolts' given end distance)
     const Sv = Math.min((24 * E * Ich) / (a * a * (1 + (2 * Ich * pair.h0) / (Ib * a))), (2 * Math.PI ** 2 * E * Ich) / (a * a));
     const Ncr = (Math.PI ** 2 * E * Ieff) / L ** 2;
     const M = (N * (L / 500)) / (1 - N / Ncr - N / Sv);
