@@ -120,6 +120,24 @@ describe("EN 1993-1-1 §6.4.4 through designMember: two channels back to back wi
     if (!p.ok) expect(p.issues.some((i) => i.path === "basis" && i.message.includes("factored"))).toBe(true);
   });
 
+  it("two angles back to back take curve b (L-sections, Table 6.2 [M]); slender legs, (b + h)/2t > 11.5ε (Table 5.2 [M]), are outside the rule", () => {
+    const angles = (t: number): JobInput => {
+      const j = JSON.parse(readFileSync(new URL("../../../fixtures/examples/double-angle-strut.us.json", import.meta.url), "utf8")) as JobInput;
+      j.connectors[0] = { id: "B34", kind: "steel-bolt", standard: "EN1993-1-8", size: "M20", grade: "8.8", shear: "double" } as JobInput["connectors"][number];
+      for (const p of j.parts) if (p.shape.type === "angle") p.shape.t = t;
+      j.compression!.rule = "auto";
+      return j;
+    };
+    const thick = design(angles(0.5)).column!;
+    expect(thick.rule).toBe("en1993-6.4");
+    expect(thick.applies).toBe(true);
+    expect(thick.steps.find((x) => x.symbol === "curve")!.value).toBe(0.34); // α of curve b, Table 6.1 [M]
+    // L4×3½×⅜ at F_y = 50 ksi: (4 + 3.5)/(2 × 0.375) = 10.0 > 11.5 √(235/344.7) = 9.50 [D]
+    const thin = design(angles(0.375)).column!;
+    expect(thin.applies).toBe(false);
+    expect(thin.reason).toContain("class 4");
+  });
+
   it("two unequal channels are outside the rule, with the reason", () => {
     const job = example();
     (job.parts[2]!.shape as { tf: number }).tf = 7;
