@@ -92,6 +92,7 @@ export function checkJob(job: JobDocument): JobIssue[] {
     job.compression.packing.forEach((id, i) => {
       if (!job.parts.some((p) => p.id === id)) add(`compression.packing[${i}]`, `"${id}" is not one of the parts`);
     });
+    if (job.compression.rule === "en1993-6.4" && job.basis !== "factored") add("basis", `EN 1993-1-1 §6.4 (compression.rule "en1993-6.4") works with design values (γ_M1) only: set basis to "factored"`);
     const spaced = job.compression.spaced;
     if (spaced) {
       if (job.compression.packing.length === 0) add("compression.packing", "a spaced column (compression.spaced) needs its packs or gussets listed here");

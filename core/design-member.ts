@@ -86,9 +86,10 @@ export function designMember(input: JobDocument): DesignResult {
     const jointPlies = plyStretches ? plyStretchAt(plyStretches, mj.stretches[0]!.from).plies : null;
     const plyInterfaces = inPlaneOfBending && jointPlies ? interfacesOf(jointPlies, joint) : null;
     const plyInterface = plyInterfaces && plyInterfaces.length === 1 ? plyInterfaces[0]! : null;
-    if (inPlaneOfBending && plyInterfaces === null) {
+    // A column with no load across it (its self-weight is axial) is not bent: nothing to warn of.
+    if (inPlaneOfBending && plyInterfaces === null && !(job.compression && job.beam.loads.length === 0)) {
       warnings.add(
-        `Joint ${joint.id}: its held parts are balanced about the neutral axis (Q = 0), so bending in the plane of the member puts no shear flow on it; its connectors are placed by the spacing limits only.`,
+        `Joint ${joint.id}: its held parts are balanced about the neutral axis (Q = 0), so bending in the plane of the member puts no shear flow on it; its connectors are placed by the spacing limits${job.compression ? " and by the column rule's buckling shear where it gives one (see the built-up column)" : " only"}.`,
       );
     }
     jointResults.push({
@@ -142,7 +143,7 @@ export function designMember(input: JobDocument): DesignResult {
   });
 
   type Run = { schedule?: Schedule; bondLine?: BondLineResult; weld?: WeldResult; warnings: string[]; mirrored: boolean };
-  const run = ({ kind, input: jointInput, extent, share }: (typeof prepared)[number], override: Partial<Pick<JointInput, "flowFactor" | "maxSpacingCap" | "extraDemand" | "columnLimits">> = {}): Run => {
+  const run = ({ kind, input: jointInput, extent, share }: (typeof prepared)[number], override: Partial<Pick<JointInput, "flowFactor" | "maxSpacingCap" | "extraDemand" | "columnLimits" | "demandActions">> = {}): Run => {
     const inputs = { ...jointInput, ...override, ...(override.flowFactor !== undefined ? { flowFactor: override.flowFactor * share } : {}) };
     const back = <T extends Schedule | WeldResult | BondLineResult>(r: T): T => (extent ? globalise(r, stations, extent) : r);
     if (kind.mechanism === "bond-line") return { bondLine: back(bondLineResult(inputs, kind)), warnings: [], mirrored: false };

@@ -12,16 +12,17 @@ import { ec5MechanicallyJointed } from "./ec5-mechanically-jointed.js";
 import { ec5Spaced } from "./ec5-spaced.js";
 import { ndsBuiltUp } from "./nds-built-up.js";
 import { aiscE6 } from "./steel-rules.js";
+import { en1993Closely } from "./steel-rules-en1993.js";
 
 /** The built-up column rules, in the order "auto" tries them. A steel rule (§E6, §6.4) is added here. */
-export const columnRules: ColumnRule[] = [ndsBuiltUp, ec5Spaced, ec5MechanicallyJointed, aiscE6];
+export const columnRules: ColumnRule[] = [ndsBuiltUp, ec5Spaced, ec5MechanicallyJointed, aiscE6, en1993Closely];
 
 interface PreparedJoint {
   joint: { id: string; lines: ColumnJoint["lines"] };
   input: JointInput;
 }
 type Run = { schedule?: Schedule };
-type Override = Partial<Pick<JointInput, "extraDemand" | "columnLimits">>;
+type Override = Partial<Pick<JointInput, "extraDemand" | "columnLimits" | "flowFactor" | "demandActions">>;
 
 /**
  * The member as a built-up column: the rule's checks, and each joint designed again with the rule's
@@ -69,14 +70,21 @@ export function designColumn(p: {
   for (const demand of design.joints) {
     const prepared = p.prepared.find((x) => x.joint.id === demand.joint)!;
     const before = p.runs.get(demand.joint)!.schedule!;
-    const extraDemand = demand.bucklingFlow ? bucklingDemand(prepared.input, before, demand.bucklingFlow, demand.addsToLateral, height) : undefined;
+    // A joint balanced about the neutral axis (Q = 0, flowFactor 0) takes no lateral flow, but it still carries the buckling
+    // shear: its demand then stands as a force per length with flowFactor = lines (the side-by-side plies' form).
+    const balanced = !!demand.bucklingFlow && demand.bucklingFlow.some((f) => f > 0) && !(prepared.input.flowFactor > 0);
+    const share = prepared.input.joint.lines.length / Math.max(1, prepared.input.joint.crossed.length);
+    const nil = memberActions(height, { points: [], lines: [], moments: [] }, []);
+    const asFlow: Override = balanced ? { flowFactor: prepared.input.joint.lines.length / share, demandActions: p.beam.results.map(() => nil) } : {};
+    const input = balanced ? { ...prepared.input, ...asFlow, flowFactor: prepared.input.joint.lines.length } : prepared.input;
+    const extraDemand = demand.bucklingFlow ? bucklingDemand(input, before, demand.bucklingFlow, demand.addsToLateral, height) : undefined;
     // The rule's distances across the face stand for the connector's only where nothing passes across the plies
     // (no face load): a connector loaded across the grain keeps its own loaded-edge distances.
     // Rounding noise of equal plies' shares is not a load: over the whole column less than a millionth of one connector.
     const leastResistance = Math.min(...before.resistance.map((r) => r.value));
     const loadedAcross = before.shearFlow.some((q) => q * height > 1e-6 * leastResistance);
     const limits = demand.limits && loadedAcross && demand.limits.acrossReplaces ? { ...demand.limits, acrossReplaces: false } : demand.limits;
-    const run = p.rerun(demand.joint, { ...(limits ? { columnLimits: limits } : {}), ...(extraDemand ? { extraDemand } : {}) });
+    const run = p.rerun(demand.joint, { ...asFlow, ...(limits ? { columnLimits: limits } : {}), ...(extraDemand ? { extraDemand } : {}) });
     let schedule = run.schedule!;
     const rowsProvided = schedule.rows;
     if (demand.rowsRequired && rowsProvided < demand.rowsRequired.rows) {

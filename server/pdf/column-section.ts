@@ -14,16 +14,17 @@ export function columnSection(c: WorksheetContext): void {
     return;
   }
   const nds = col.rule === "nds-15.3";
-  const steel = col.rule === "aisc-e6";
+  const en1993 = col.rule === "en1993-6.4";
+  const steel = col.rule === "aisc-e6" || en1993;
   table(
     sheet,
     [
       { header: "Buckling about", weight: 1.2 },
       { header: "K_e", weight: 0.5, align: "right" },
       { header: "l_e", weight: 0.8, align: "right" },
-      { header: nds ? "l_e/d" : steel ? "L_c/r" : "λ", weight: 0.6, align: "right" },
+      { header: nds ? "l_e/d" : en1993 ? "L_cr/i" : steel ? "L_c/r" : "λ", weight: 0.6, align: "right" },
       { header: nds ? "K_f" : "", weight: 0.5, align: "right" },
-      { header: nds ? "C_P" : steel ? "F_cr/F_y" : "k_c", weight: 0.6, align: "right" },
+      { header: nds ? "C_P" : en1993 ? "χ" : steel ? "F_cr/F_y" : "k_c", weight: 0.6, align: "right" },
       { header: "π²EI/l_e²", weight: 0.9, align: "right" },
     ],
     col.axes.map((a) => [
@@ -42,7 +43,7 @@ export function columnSection(c: WorksheetContext): void {
       { header: "Combination", weight: 1.2 },
       { header: "Axial P", weight: 0.9, align: "right" },
       { header: "Moment", weight: 0.9, align: "right" },
-      { header: nds ? "F_c*" : steel ? (result.basis === "factored" ? "φ_c F_y" : "F_y/Ω_c") : "f_c,0,d", weight: 0.8, align: "right" },
+      { header: nds ? "F_c*" : en1993 ? "f_y/γ_M1" : steel ? (result.basis === "factored" ? "φ_c F_y" : "F_y/Ω_c") : "f_c,0,d", weight: 0.8, align: "right" },
       { header: "Capacity", weight: 0.9, align: "right" },
       { header: "Interaction", weight: 0.8, align: "right" },
     ],

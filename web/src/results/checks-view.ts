@@ -77,10 +77,11 @@ export function columnTables(result: DesignResult): HTMLElement[] {
   const title = `Built-up column: ${col.title}${col.standard ? `, ${col.standard}` : ""}`;
   if (!col.applies) return [el("p", { className: "hint fails", text: `${title}. Not designed as a column: ${col.reason ?? ""}` })];
   const nds = col.rule === "nds-15.3";
-  const steel = col.rule === "aisc-e6";
+  const en1993 = col.rule === "en1993-6.4";
+  const steel = col.rule === "aisc-e6" || en1993;
   const axes = table(
     title,
-    ["Buckling about", "K_e", "l_e", nds ? "l_e/d" : steel ? "L_c/r" : "λ", nds ? "K_f" : "", nds ? "C_P" : steel ? "F_cr/F_y" : "k_c", "π²EI/l_e²"],
+    ["Buckling about", "K_e", "l_e", nds ? "l_e/d" : en1993 ? "L_cr/i" : steel ? "L_c/r" : "λ", nds ? "K_f" : "", nds ? "C_P" : en1993 ? "χ" : steel ? "F_cr/F_y" : "k_c", "π²EI/l_e²"],
     col.axes.map((a) => ({
       cells: [`${a.axis} axis${a.jointed ? " (across the joints)" : ""}`, formatNumber(a.K), shown(result, a.effectiveLength, "span"), formatNumber(a.slenderness, 4), nds ? formatNumber(a.factor) : "", formatNumber(a.stability, 3), shown(result, a.euler, "force")],
     })),
@@ -88,7 +89,7 @@ export function columnTables(result: DesignResult): HTMLElement[] {
   );
   const combos = table(
     "Axial load by combination",
-    ["Combination", "Axial P", "Moment", nds ? "F_c*" : steel ? (result.basis === "factored" ? "φ_c F_y" : "F_y/Ω_c") : "f_c,0,d", "Capacity", "Interaction"],
+    ["Combination", "Axial P", "Moment", nds ? "F_c*" : en1993 ? "f_y/γ_M1" : steel ? (result.basis === "factored" ? "φ_c F_y" : "F_y/Ω_c") : "f_c,0,d", "Capacity", "Interaction"],
     col.combinations.map((k) => ({
       cells: [k.combination === col.governing ? `${k.combination} (governs)` : k.combination, shown(result, k.axial, "force"), shown(result, k.moment, "moment"), shown(result, k.strength, "stress"), shown(result, k.capacity, "force"), k.interaction === null ? "—" : formatNumber(k.interaction, 3)],
     })),
