@@ -104,14 +104,24 @@ describe("a concentrated load hung on a face of the plies (moved from the stand-
       expect(reach * 2 * 600).toBeGreaterThanOrEqual(T - 1e-6);
     }
   });
-  // Open finding for the plies' owner: the stand-alone module asked for ⌈6667/600⌉ = 12 nails strictly within d/2
-  // each side of the load (the [CP] rule the result's assumptions state); the product spreads the load uniformly
-  // over that band and credits rows just outside it by their tributary length, so at s = 50 mm only 5 rows
-  // (10 nails, 6000 N) stand inside the band. Recorded as failing until the band is counted that way.
-  test.fails("[open finding] the rows strictly within d/2 each side of the load carry T₁ = 6667 N: 12 nails of 600 N [D, rule CP]", () => {
+  // The stand-alone module asked for ⌈6667/600⌉ = 12 nails strictly within d/2 each side of the load (the [CP] rule
+  // the result's assumptions state). The product once spread the load over that band and credited rows just outside it
+  // by their tributary length, so at s = 50 mm only 5 rows (10 nails, 6000 N) stood inside; the rows within each band
+  // are now counted on their own (a zone over the band steps down or restarts at its edge, or the joint fails).
+  test("the rows strictly within d/2 each side of the load carry T₁ = 6667 N: 12 nails of 600 N, and T₂ = 3333 N: 6 nails [D, rule CP]", () => {
+    const result = hung();
+    for (const [k, T] of [[0, 20_000 / 3], [1, 10_000 / 3]] as const) {
+      const s = interfaces(result)[k]!.s;
+      const within = s.positions.filter((x) => Math.abs(x - 2000) <= 143 + 1e-9).length;
+      expect(within * 2 * 600).toBeGreaterThanOrEqual(T - 1e-6);
+    }
+    expect(result.status.passes).toBe(true);
+  });
+  test("at s = 50 mm the zone over the band restarts at its edge, 2000 − 143 = 1857 mm, and says why [D]", () => {
     const s = interfaces(hung())[0]!.s;
-    const within = s.positions.filter((x) => Math.abs(x - 2000) <= 143 + 1e-9).length;
-    expect(within * 2 * 600).toBeGreaterThanOrEqual(20_000 / 3 - 1e-6);
+    const zone = s.zones.find((z) => Math.abs(z.from - 1857) < 1e-6)!;
+    expect(zone.spacing).toBe(50);
+    expect(zone.note).toMatch(/within half the member depth/);
   });
   test("6 stations of 2 nails fit in 286 mm only at a spacing ≤ 57.2 mm: at a least spacing of 60 mm interface 1 cannot be scheduled [D]", () => {
     const result = run(plies(3, [{ type: "point", P: 10, at: 2, face: "left" }], { minSpacing: 60 }));
