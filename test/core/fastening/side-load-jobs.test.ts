@@ -1,4 +1,5 @@
-import { describe, expect, test } from "vitest";
+import fc from "fast-check";
+import { afterAll, describe, expect, test } from "vitest";
 import { prepareJob } from "../../../core/check-job.js";
 import { designMember } from "../../../core/design-member.js";
 import type { JobInput } from "../../../core/schema/job.js";
@@ -169,5 +170,44 @@ describe("rows of bolts across the depth of the plies (moved from the stand-alon
         expect(s.passes).toBe(false);
       }
     }
+  });
+});
+
+describe("property through designMember (fast-check, fixed seed): the rows within d/2 of a face-hung load carry what it passes", () => {
+  // Plies of one depth d = 286 mm, each bending about its own centroid: the E·I shares are s_j = E_j·t_j / Σ E·t
+  // (d³/12 cancels) [D]. A load P on the left face crosses interface k (between plies k and k + 1, from 0) with
+  // P·Σ_{j>k} s_j, on the right face with P·Σ_{j≤k} s_j [D]; the connectors within d/2 each side of it pass that
+  // force (the concentrated-load rule, [CP]): rows within × connectors per row × R ≥ it, whatever rows outside carry.
+  const passing: boolean[] = [];
+  afterAll(() => expect(passing.filter(Boolean).length).toBeGreaterThanOrEqual(passing.length / 4));
+  test("in every passing schedule, for every load, Σ over the rows within d/2 of (n·R) ≥ the share it passes", () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.record({ t: fc.constantFrom(38, 45, 63), E: fc.constantFrom(9_000, 11_000, 13_000) }), { minLength: 2, maxLength: 4 }),
+        fc.array(fc.record({ P: fc.double({ min: 0.5, max: 12, noNaN: true }), at: fc.double({ min: 0.2, max: 3.8, noNaN: true }), face: fc.constantFrom("left" as const, "right" as const) }), { minLength: 1, maxLength: 3 }),
+        fc.record({ R: fc.constantFrom(400, 600, 900, 1_500), rows: fc.integer({ min: 1, max: 3 }), minSpacing: fc.constantFrom(40, 50, 60) }),
+        (plyList, loads, nail) => {
+          const job = plies(plyList.length, loads.map((l) => ({ type: "point" as const, ...l })), { resistance: nail.R, minSpacing: nail.minSpacing }, nail.rows);
+          job.materials = plyList.map((p, j) => ({ id: `T${j}`, name: "timber", E: p.E, density: 0 }));
+          job.parts = job.parts.map((part, j) => ({ ...part, material: `T${j}`, shape: { type: "rectangle" as const, b: plyList[j]!.t, h: 286 } }));
+          const result = run(job);
+          const stiffness = plyList.map((p) => p.E * p.t);
+          const total = stiffness.reduce((a, b) => a + b, 0);
+          const share = (from: number, to: number) => stiffness.slice(from, to).reduce((a, b) => a + b, 0) / total;
+          result.multiPly!.interfaces.forEach((face, k) => {
+            const s = result.schedules.find((x) => x.joint === face.joint);
+            if (!s) return;
+            passing.push(s.passes);
+            if (!s.passes) return;
+            for (const load of loads) {
+              const force = load.P * 1000 * (load.face === "left" ? share(k + 1, plyList.length) : share(0, k + 1));
+              const within = s.positions.filter((x) => Math.abs(x - load.at * 1000) <= 143 * (1 + 1e-9)).length;
+              expect(within * nail.rows * nail.R, `interface ${k + 1}, load ${load.P} kN at ${load.at} m on the ${load.face} face`).toBeGreaterThanOrEqual(force * (1 - 1e-9));
+            }
+          });
+        },
+      ),
+      { numRuns: 40 },
+    );
   });
 });
