@@ -443,14 +443,20 @@ function zoneNote(reason: ZoneReason | null, len: (mm: number) => string, bands:
 
 /** What fails, where the flow alone would allow the minimum spacing. */
 function infeasibleReason(inf: NonNullable<ReturnType<typeof designSchedule>["infeasible"]>, endDistance: number, minSpacing: number, len: (mm: number) => string, bands: readonly ConcentratedBand[], rows: number, force: (n: number) => string): string | undefined {
-  if (inf.cause === "band" && inf.band) return `At the minimum spacing of ${len(minSpacing)} too few rows stand within a band. ${bandNote(bands[inf.band.band]!, inf.band, rows, len, force)}`;
+  const band = inf.band ? bandNote(bands[inf.band.band]!, inf.band, rows, len, force) : undefined;
+  if (inf.cause === "band") return `At the minimum spacing of ${len(minSpacing)} too few rows stand within a band. ${band}`;
+  const rowsText = rowsReason(inf, endDistance, minSpacing, len);
+  return rowsText && band ? `${rowsText} ${band}` : (rowsText ?? band);
+}
+
+function rowsReason(inf: NonNullable<ReturnType<typeof designSchedule>["infeasible"]>, endDistance: number, minSpacing: number, len: (mm: number) => string): string | undefined {
   if (inf.cause === "flow" || !inf.worstRow) return undefined;
   const r = inf.worstRow;
   const tributary = r.to - r.from;
   if (r.endRow) {
-    return `The shear flow alone needs ${len(inf.smallestRequired)}, which the minimum spacing of ${len(minSpacing)} meets, but the end row at ${len(r.x)} carries from the member end to halfway to the next row, ${len(tributary)} (the end distance ${len(endDistance)} plus half a spacing): utilisation ${r.utilisation.toFixed(2)}.`;
+    return `The shear flow alone needs ${len(inf.flowRequired)}, which the minimum spacing of ${len(minSpacing)} meets, but the end row at ${len(r.x)} carries from the member end to halfway to the next row, ${len(tributary)} (the end distance ${len(endDistance)} plus half a spacing): utilisation ${r.utilisation.toFixed(2)}.`;
   }
-  return `The shear flow alone needs ${len(inf.smallestRequired)}, which the minimum spacing of ${len(minSpacing)} meets, but the row at ${len(r.x)} carries ${len(tributary)} of the member: utilisation ${r.utilisation.toFixed(2)}.`;
+  return `The shear flow alone needs ${len(inf.flowRequired)}, which the minimum spacing of ${len(minSpacing)} meets, but the row at ${len(r.x)} carries ${len(tributary)} of the member: utilisation ${r.utilisation.toFixed(2)}.`;
 }
 
 function requiredAt(stations: Station[], demand: ReturnType<typeof demandCurve>): (number | null)[] {

@@ -62,6 +62,8 @@ export interface ScheduleDesign {
   infeasible: {
     where: { from: number; to: number }[];
     smallestRequired: number;
+    /** What the shear flow alone needs, 1/max d. */
+    flowRequired: number;
     /** The flow itself needs less than the minimum spacing (cells), only the placed rows fail (end rows, zone meetings), or too few rows stand within a band. */
     cause: "flow" | "rows" | "band";
     /** The worst failing row, its tributary length and utilisation. */
@@ -201,6 +203,7 @@ export function designSchedule(p: ScheduleProblem): ScheduleDesign {
       ? {
           where,
           smallestRequired: Math.min(1 / peak.value, ...failingBands.map((b) => spacingWithin(b, p.rows, p.combinations))),
+          flowRequired: 1 / peak.value,
           cause: failingRows.length === 0 ? ("band" as const) : mirroredCells.length > 0 ? ("flow" as const) : ("rows" as const),
           worstRow: worstRow
             ? { x: worstRow.x, from: worstRow.from, to: worstRow.to, utilisation: worstRow.utilisation, endRow: worstRow.x === positions[0] || worstRow.x === positions[positions.length - 1] }

@@ -124,11 +124,35 @@ describe("a concentrated load hung on a face of the plies (moved from the stand-
     expect(zone.spacing).toBe(50);
     expect(zone.note).toMatch(/within half the member depth/);
   });
+  test("check mode counts the rows within the band the same way: 50 mm from the end distance leaves 5 rows (6000 N < 6667 N) and fails; the same spacing with its rows shifted by 10 mm has 6 within and passes [D, rule CP]", () => {
+    const checked = (provided: NonNullable<JobInput["fastening"]["default"]["provided"]>) => {
+      const job = plies(3, [{ type: "point", P: 10, at: 2, face: "left" }], { minSpacing: 40 });
+      job.mode = "check";
+      job.fastening.default.provided = provided;
+      return interfaces(run(job))[0]!.s;
+    };
+    // Every row passes by its tributary length: 50 × 6667/286 = 1166 N ≤ 2 × 600 N [D].
+    const even = checked({ type: "zones", zones: [{ from: 0, to: 4, spacing: 50 }] });
+    expect(even.positions.filter((x) => Math.abs(x - 2000) <= 143).length).toBe(5);
+    expect(even.verification.passes).toBe(true);
+    expect(even.passes).toBe(false);
+    const over = even.zones.filter((z) => !z.passes);
+    expect(over.length).toBeGreaterThan(0);
+    expect(over[0]!.note).toMatch(/5 rows of 2 stand within it and carry 6,000 N against the 6,667 N/);
+    const shifted = checked({ type: "positions", positions: [0.05, ...Array.from({ length: 77 }, (_, k) => (110 + 50 * k) / 1000), 3.95] });
+    expect(shifted.positions.filter((x) => Math.abs(x - 2000) <= 143).length).toBe(6);
+    expect(shifted.passes).toBe(true);
+  });
   test("6 stations of 2 nails fit in 286 mm only at a spacing ≤ 57.2 mm: at a least spacing of 60 mm interface 1 cannot be scheduled [D]", () => {
     const result = run(plies(3, [{ type: "point", P: 10, at: 2, face: "left" }], { minSpacing: 60 }));
     const [i1] = interfaces(result);
     expect(i1!.s.passes).toBe(false);
     expect(i1!.s.infeasible).not.toBeNull();
+    // At 60 mm, 5 rows at most stand within 286 mm (4 × 60 = 240 ≤ 286 < 300): 5 × 2 × 600 = 6000 N < 6667 N [D].
+    expect(i1!.s.infeasible!.reason).toMatch(/within half the member depth/);
+    expect(i1!.s.infeasible!.reason).toMatch(/against the 6,667 N passed there/);
+    // The remedies are designed again under the same rule: 3 nails per row, 5 rows within, 9000 N ≥ 6667 N [D].
+    expect(i1!.s.infeasible!.remedies!.some((r) => r.change === "rows" && r.rows === 3)).toBe(true);
   });
 });
 
