@@ -411,13 +411,17 @@ function shortGaps(positions: number[], minSpacing: number, sources: string[], l
 
 /** What hands a band's force across, and the rule: the connectors within half the member depth of it ([CP]). */
 function bandRule(band: ConcentratedBand, len: (mm: number) => string): string {
-  const at = len(band.source.at);
+  const source = band.source;
+  if (source.kind === "overlapping") {
+    return `the concentrated forces at ${source.at.map(len).join(", ")}, whose bands overlap, are passed together by the connectors within half the member depth of them (common practice)`;
+  }
+  const at = len(source.at);
   const what =
-    band.source.kind === "load"
+    source.kind === "load"
       ? `the concentrated load at ${at} is passed`
-      : band.source.kind === "support"
+      : source.kind === "support"
         ? `the share of the reaction at the support at ${at} is handed to the plies that bear there`
-        : `where ${band.source.ply ? `ply ${band.source.ply}` : "a ply"} starts or stops at ${at} its share is handed across`;
+        : `where ${source.ply ? `ply ${source.ply}` : "a ply"} starts or stops at ${at} its share is handed across`;
   return `${what} by the connectors within half the member depth of it (common practice)`;
 }
 

@@ -146,7 +146,7 @@ export interface ConcentratedBand {
   /** The force each contact line passes within the band, N, per combination where it is not zero. */
   forces: { combination: string; force: number }[];
   /** What hands the force there, at x along the member (mm from its left end), for the notes. */
-  source: { kind: "load" | "support" | "ply-end"; at: number; ply?: string };
+  source: { kind: "load" | "support" | "ply-end"; at: number; ply?: string } | { kind: "overlapping"; at: number[] };
 }
 
 /** interfaceDemand, and the bands where a concentrated force is handed across (see ConcentratedBand). */
@@ -162,6 +162,8 @@ export function interfaceDemandAndBands(job: JobDocument, beam: BeamAnalysis, st
   const stretchAt = (x: number) => stretches.find((s) => x >= s.x0 - tol && x <= s.x1 + tol) ?? stretches[stretches.length - 1]!;
   const [lo, hi] = extent ? [extent.from, extent.to] : [0, L];
   const bands = new Map<string, ConcentratedBand>();
+  // The signed force of each band per combination (∫|t| for several interfaces), for bands that overlap.
+  const signed = new Map<ConcentratedBand, Map<string, number>>();
   const perCombination = beam.results.map(({ combination, reactions, actions }) => {
     const intensity: { x0: number; x1: number; t0: number; t1: number }[] = [];
     // The force of what is pushed since the last band began: ∫t dx (∫|t| dx for several interfaces).
@@ -174,6 +176,8 @@ export function interfaceDemandAndBands(job: JobDocument, beam: BeamAnalysis, st
       let entry = bands.get(key);
       if (!entry) bands.set(key, (entry = { from: a - lo, to: b - lo, origin: lo, forces: [], source }));
       entry.forces.push({ combination: combination.id, force: Math.abs(gathered) });
+      if (!signed.has(entry)) signed.set(entry, new Map());
+      signed.get(entry)!.set(combination.id, gathered);
     };
     const push = (x0: number, x1: number, t0: number, t1: number) => {
       // Kept to the joint's extent, where the intensity is linear: t at the clipped ends by interpolation.
@@ -286,7 +290,32 @@ export function interfaceDemandAndBands(job: JobDocument, beam: BeamAnalysis, st
     }
     return memberActions(hi - lo, set, []);
   });
-  return { actions: perCombination, bands: [...bands.values()] };
+  return { actions: perCombination, bands: [...bands.values(), ...overlapping([...bands.values()], signed, tol)] };
+}
+
+/**
+ * Bands that overlap share the rows in their overlap: each run of them is a band too, from the first's start to the
+ * last's end, carrying the sum of their forces (signed for one interface; each already a magnitude for several).
+ */
+function overlapping(bands: ConcentratedBand[], signed: Map<ConcentratedBand, Map<string, number>>, tol: number): ConcentratedBand[] {
+  const sorted = [...bands].sort((a, b) => a.from - b.from);
+  const runs: ConcentratedBand[][] = [];
+  for (const b of sorted) {
+    const run = runs[runs.length - 1];
+    if (run && b.from < Math.max(...run.map((r) => r.to)) - tol) run.push(b);
+    else runs.push([b]);
+  }
+  return runs
+    .filter((run) => run.length > 1)
+    .flatMap((run) => {
+      const combinations = [...new Set(run.flatMap((b) => b.forces.map((f) => f.combination)))];
+      const forces = combinations
+        .map((combination) => ({ combination, force: Math.abs(run.reduce((sum, b) => sum + (signed.get(b)?.get(combination) ?? 0), 0)) }))
+        .filter((f) => f.force > 0);
+      if (forces.length === 0) return [];
+      const at = run.flatMap((b) => (b.source.kind === "overlapping" ? b.source.at : [b.source.at]));
+      return [{ from: run[0]!.from, to: Math.max(...run.map((b) => b.to)), origin: run[0]!.origin, forces, source: { kind: "overlapping" as const, at } }];
+    });
 }
 
 function factorOf(combination: Combination, category: string): number {

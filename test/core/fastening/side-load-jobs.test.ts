@@ -208,7 +208,7 @@ describe("property through designMember (fast-check, fixed seed): the rows withi
     fc.assert(
       fc.property(
         fc.array(fc.record({ t: fc.constantFrom(38, 45, 63), E: fc.constantFrom(9_000, 11_000, 13_000) }), { minLength: 2, maxLength: 4 }),
-        fc.array(fc.record({ P: fc.double({ min: 0.5, max: 12, noNaN: true }), at: fc.double({ min: 0.2, max: 3.8, noNaN: true }), face: fc.constantFrom("left" as const, "right" as const) }), { minLength: 1, maxLength: 3 }),
+        fc.array(fc.record({ P: fc.double({ min: 0.5, max: 12, noNaN: true }), at: fc.oneof(fc.double({ min: 0.2, max: 3.8, noNaN: true }), fc.double({ min: 1.8, max: 2.2, noNaN: true })), face: fc.constantFrom("left" as const, "right" as const) }), { minLength: 1, maxLength: 3 }),
         fc.record({ R: fc.constantFrom(400, 600, 900, 1_500), rows: fc.integer({ min: 1, max: 3 }), minSpacing: fc.constantFrom(40, 50, 60) }),
         (plyList, loads, nail) => {
           const job = plies(plyList.length, loads.map((l) => ({ type: "point" as const, ...l })), { resistance: nail.R, minSpacing: nail.minSpacing }, nail.rows);
@@ -227,6 +227,15 @@ describe("property through designMember (fast-check, fixed seed): the rows withi
               const force = load.P * 1000 * (load.face === "left" ? share(k + 1, plyList.length) : share(0, k + 1));
               const within = s.positions.filter((x) => Math.abs(x - load.at * 1000) <= 143 * (1 + 1e-9)).length;
               expect(within * nail.rows * nail.R, `interface ${k + 1}, load ${load.P} kN at ${load.at} m on the ${load.face} face`).toBeGreaterThanOrEqual(force * (1 - 1e-9));
+            }
+            // Loads on one face whose bands overlap share the rows there: those within the union carry their sum [D].
+            for (const a of loads) {
+              for (const b of loads) {
+                if (a === b || a.face !== b.face || a.at > b.at || b.at - a.at >= 0.286) continue;
+                const f = (l: typeof a) => l.P * 1000 * (l.face === "left" ? share(k + 1, plyList.length) : share(0, k + 1));
+                const within = s.positions.filter((x) => x >= a.at * 1000 - 143 * (1 + 1e-9) && x <= b.at * 1000 + 143 * (1 + 1e-9)).length;
+                expect(within * nail.rows * nail.R, `interface ${k + 1}, loads at ${a.at} and ${b.at} m`).toBeGreaterThanOrEqual((f(a) + f(b)) * (1 - 1e-9));
+              }
             }
           });
         },
