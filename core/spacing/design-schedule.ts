@@ -137,27 +137,35 @@ export function designSchedule(p: ScheduleProblem): ScheduleDesign {
     bandsNow = bandsOf(placed);
   }
   // A band still short where its zones cannot step down: the rows' phase may leave one out that fits. The zone over
-  // the band's edge is split there at the same spacing, so the rows restart at the edge (from the side the zone is
-  // stepped from); kept only where every row still passes and no band that passed fails.
-  for (let round = 0; !mirrored && round < bands.length; round++) {
+  // the band's edge is split there at the same spacing (a mirrored plan's mirror zone too), so the rows restart at the
+  // edge; kept only where every row still passes and no band that passed fails.
+  for (let round = 0; round < bands.length; round++) {
     const short = bandsNow.filter((b) => b.utilisation > 1 + 1e-9);
     if (short.length === 0) break;
     const band = short.reduce((w, b) => (b.utilisation > w.utilisation ? b : w));
     let kept = false;
     for (const edge of [band.from, band.to]) {
-      const i = planned.findIndex((z) => edge > z.from + 1e-6 && edge < z.to - 1e-6);
-      if (i < 0) continue;
-      const trial = [...planned.slice(0, i), { ...planned[i]!, to: edge }, { ...planned[i]!, from: edge }, ...planned.slice(i + 1)];
+      let trial = planned.map((z, i) => ({ ...z, flow: flowSpacings[i]!, tightened: tightenedAt.get(i) }));
+      const splits: number[] = [];
+      for (const x of mirrored ? [edge, L - edge] : [edge]) {
+        const i = trial.findIndex((z) => x > z.from + 1e-6 && x < z.to - 1e-6);
+        if (i < 0) continue;
+        trial = [...trial.slice(0, i), { ...trial[i]!, to: x }, { ...trial[i]!, from: x }, ...trial.slice(i + 1)];
+        splits.push(x);
+      }
+      if (trial.length === planned.length) continue;
+      // The pieces whose rows restart at the edge are those over the band (or its mirror image).
+      const over = (z: { from: number; to: number }, a: number, b: number) => z.from < b - 1e-6 && z.to > a + 1e-6;
+      const pieces = new Set(trial.filter((z) => (over(z, band.from, band.to) || (mirrored && over(z, L - band.to, L - band.from))) && splits.some((x) => Math.abs(z.from - x) < 1e-6 || Math.abs(z.to - x) < 1e-6)));
+      for (const z of pieces) z.tightened = { at: edge, band: band.band, restart: true };
       const rows = place(trial);
       const checks = bandsOf(rows);
       const fine = verifyRows(rows, demand).every((r) => r.utilisation <= 1 + 1e-9) && checks[band.band]!.utilisation <= 1 + 1e-9 && checks.every((b, k) => b.utilisation <= 1 + 1e-9 || bandsNow[k]!.utilisation > 1 + 1e-9);
       if (!fine) continue;
-      const moved = new Map([...tightenedAt].map(([k, v]) => [k > i ? k + 1 : k, v] as const));
-      moved.set(i + 1, { at: edge, band: band.band, restart: true });
       tightenedAt.clear();
-      for (const [k, v] of moved) tightenedAt.set(k, v);
-      flowSpacings = [...flowSpacings.slice(0, i + 1), flowSpacings[i]!, ...flowSpacings.slice(i + 1)];
-      planned = trial;
+      trial.forEach((z, i) => z.tightened && tightenedAt.set(i, z.tightened));
+      flowSpacings = trial.map((z) => z.flow);
+      planned = trial.map(({ flow: _flow, tightened: _tightened, ...z }) => z);
       bandsNow = checks;
       kept = true;
       break;

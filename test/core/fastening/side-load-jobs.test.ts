@@ -124,6 +124,16 @@ describe("a concentrated load hung on a face of the plies (moved from the stand-
     expect(zone.spacing).toBe(50);
     expect(zone.note).toMatch(/within half the member depth/);
   });
+  test("a symmetric plan keeps the rule too: the rows within 2000 ± 143 mm carry 6667 N (12 nails) and 3333 N (6 nails) [D, rule CP]", () => {
+    const job = plies(3, [{ type: "point", P: 10, at: 2, face: "left" }], { minSpacing: 40 });
+    job.spacing!.symmetric = true;
+    const result = run(job);
+    for (const [k, T] of [[0, 20_000 / 3], [1, 10_000 / 3]] as const) {
+      const s = interfaces(result)[k]!.s;
+      expect(s.passes).toBe(true);
+      expect(s.positions.filter((x) => Math.abs(x - 2000) <= 143 + 1e-9).length * 2 * 600).toBeGreaterThanOrEqual(T - 1e-6);
+    }
+  });
   test("check mode counts the rows within the band the same way: 50 mm from the end distance leaves 5 rows (6000 N < 6667 N) and fails; the same spacing with its rows shifted by 10 mm has 6 within and passes [D, rule CP]", () => {
     const checked = (provided: NonNullable<JobInput["fastening"]["default"]["provided"]>) => {
       const job = plies(3, [{ type: "point", P: 10, at: 2, face: "left" }], { minSpacing: 40 });
