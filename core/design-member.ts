@@ -438,9 +438,12 @@ function reachProblem(s: Schedule, plies: MultiPly, k: number, sidePly: number, 
 
 function scheduleFailure(s: Schedule): string {
   if (s.rowFit && !s.rowFit.fits) return `a row does not fit across the contact (${s.detailingProblems.join("; ")})`;
+  // Every row passing by its tributary length while the joint fails: too few rows stand within d/2 of a concentrated force.
+  if (s.infeasible?.reason && s.verification.passes) return "at the least spacing too few rows stand within half the member depth of a concentrated force to carry what it passes there";
   if (s.infeasible) return "no spacing within the limits carries the shear flow";
   if (s.detailingProblems.length > 0 && s.verification.passes && s.mode === "design") return `the connectors cannot be placed as designed (${s.detailingProblems.join("; ")})`;
   if (s.detailingProblems.length > 0 && s.verification.passes) return `the given spacing is outside the detailing limits (${s.detailingProblems.join("; ")})`;
+  if (s.mode === "check" && s.verification.passes && s.detailingProblems.length === 0) return "too few rows of the given schedule stand within half the member depth of a concentrated force to carry what it passes there";
   return s.mode === "check" ? "a row of the given schedule is over-utilised" : "a row is over-utilised";
 }
 

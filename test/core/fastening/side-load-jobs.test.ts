@@ -134,6 +134,19 @@ describe("a concentrated load hung on a face of the plies (moved from the stand-
       expect(s.positions.filter((x) => Math.abs(x - 2000) <= 143 + 1e-9).length * 2 * 600).toBeGreaterThanOrEqual(T - 1e-6);
     }
   });
+  test("where every row passes by its tributary length but too few stand within the band, the joint fails for the band: least spacing 50 mm on a 50 mm module, rows on the 50 mm grid from the end distance, 5 within (1900…2100), 6000 N < 6667 N [D, rule CP]", () => {
+    // Each row: 50 × 6667/286 = 1166 N ≤ 2 × 600 N [D], so only the band fails; restarting the rows at 1857 mm would
+    // leave 1850 → 1857 mm, closer than the least spacing, and the next row comes at 1900 mm.
+    const job = plies(3, [{ type: "point", P: 10, at: 2, face: "left" }], { minSpacing: 50 });
+    job.spacing = { ...job.spacing!, module: 50 };
+    const result = run(job);
+    const s = interfaces(result)[0]!.s;
+    expect(s.verification.passes).toBe(true);
+    expect(s.passes).toBe(false);
+    expect(s.infeasible!.reason).toMatch(/5 rows of 2 stand within it and carry 6,000 N against the 6,667 N passed there/);
+    expect(s.infeasible!.remedies!.some((r) => r.change === "rows" && r.rows === 3)).toBe(true);
+    expect(result.status.failures.join(" ")).toMatch(/too few rows stand within half the member depth of a concentrated force/);
+  });
   test("check mode counts the rows within the band the same way: 50 mm from the end distance leaves 5 rows (6000 N < 6667 N) and fails; the same spacing with its rows shifted by 10 mm has 6 within and passes [D, rule CP]", () => {
     const checked = (provided: NonNullable<JobInput["fastening"]["default"]["provided"]>) => {
       const job = plies(3, [{ type: "point", P: 10, at: 2, face: "left" }], { minSpacing: 40 });
@@ -149,6 +162,10 @@ describe("a concentrated load hung on a face of the plies (moved from the stand-
     const over = even.zones.filter((z) => !z.passes);
     expect(over.length).toBeGreaterThan(0);
     expect(over[0]!.note).toMatch(/5 rows of 2 stand within it and carry 6,000 N against the 6,667 N/);
+    const job = plies(3, [{ type: "point", P: 10, at: 2, face: "left" }], { minSpacing: 40 });
+    job.mode = "check";
+    job.fastening.default.provided = { type: "zones", zones: [{ from: 0, to: 4, spacing: 50 }] };
+    expect(run(job).status.failures.join(" ")).toMatch(/too few rows of the given schedule stand within half the member depth/);
     const shifted = checked({ type: "positions", positions: [0.05, ...Array.from({ length: 77 }, (_, k) => (110 + 50 * k) / 1000), 3.95] });
     expect(shifted.positions.filter((x) => Math.abs(x - 2000) <= 143).length).toBe(6);
     expect(shifted.passes).toBe(true);
