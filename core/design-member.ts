@@ -16,7 +16,7 @@ import { partTerminations } from "./fastening/part-terminations.js";
 import { layoutAcross } from "./fastening/layout-across.js";
 import { loadedEdgesOf } from "./fastening/loaded-edges.js";
 import { rowFit, rowFitProblem } from "./fastening/row-fit.js";
-import { interfaceDemand, interfacesOf, plyStretchesOf, type MultiPly, type PlyStretch } from "./fastening/side-load-transfer.js";
+import { interfaceDemandAndBands, interfacesOf, plyStretchesOf, type MultiPly, type PlyStretch } from "./fastening/side-load-transfer.js";
 import { weldSchedule } from "./fastening/weld-schedule.js";
 import { fastenerReach } from "./multi-ply/ply-detailing.js";
 import { arrivalFractions, interfaceTransfer, plyShares } from "./multi-ply/ply-shares.js";
@@ -131,7 +131,7 @@ export function designMember(input: JobDocument): DesignResult {
       // The demand is per contact line; the schedule divides by the lines, so the factor restores it.
       const view = mj.extent ? localView(beam, stations, mj.extent) : { beam, stations };
       const local = mj.extent ? { ...common, fastening: shiftProvided(fastening, -mj.extent.from) } : common;
-      input = { ...local, ...view, flowFactor: joint.lines.length, stressFactor: 1 / joint.contactWidth, demandActions: interfaceDemand(job, beam, plyStretches!, joint.lines, mj.extent), loadedEdges: loadedEdgesOf(job, beam, plyStretches!, jointPlies!, plyInterfaces, mj.section, mj.extent) };
+      input = { ...local, ...view, flowFactor: joint.lines.length, stressFactor: 1 / joint.contactWidth, ...demandAndBands(interfaceDemandAndBands(job, beam, plyStretches!, joint.lines, mj.extent)), loadedEdges: loadedEdgesOf(job, beam, plyStretches!, jointPlies!, plyInterfaces, mj.section, mj.extent) };
     } else if (!stepped) {
       input = { ...common, beam, stations, flowFactor: flowFactor * share, stressFactor };
     } else {
@@ -439,9 +439,12 @@ function reachProblem(s: Schedule, plies: MultiPly, k: number, sidePly: number, 
 
 function scheduleFailure(s: Schedule): string {
   if (s.rowFit && !s.rowFit.fits) return `a row does not fit across the contact (${s.detailingProblems.join("; ")})`;
+  // Every row passing by its tributary length while the joint fails: too few rows stand within d/2 of a concentrated force.
+  if (s.infeasible?.reason && s.verification.passes) return "at the least spacing too few rows stand within half the member depth of a concentrated force to carry what it passes there";
   if (s.infeasible) return "no spacing within the limits carries the shear flow";
   if (s.detailingProblems.length > 0 && s.verification.passes && s.mode === "design") return `the connectors cannot be placed as designed (${s.detailingProblems.join("; ")})`;
   if (s.detailingProblems.length > 0 && s.verification.passes) return `the given spacing is outside the detailing limits (${s.detailingProblems.join("; ")})`;
+  if (s.mode === "check" && s.verification.passes && s.detailingProblems.length === 0) return "too few rows of the given schedule stand within half the member depth of a concentrated force to carry what it passes there";
   return s.mode === "check" ? "a row of the given schedule is over-utilised" : "a row is over-utilised";
 }
 
@@ -457,4 +460,9 @@ function baseAssumptions(job: JobDocument, beam: BeamAnalysis, combinations: Par
     "Shear stress at a level is averaged over the full width cut at that level.",
     "Zone boundaries are on a round grid from the left end; the first and last rows sit at the end distance from the member ends.",
   ];
+}
+
+/** The demand between side-by-side plies, with the bands of concentrated transfer where there are any. */
+function demandAndBands({ actions, bands }: ReturnType<typeof interfaceDemandAndBands>): Pick<JointInput, "demandActions" | "concentratedBands"> {
+  return bands.length > 0 ? { demandActions: actions, concentratedBands: bands } : { demandActions: actions };
 }

@@ -8,10 +8,12 @@ import type { Fastening, JobDocument } from "../schema/job.js";
 import type { Schedule } from "../schema/result.js";
 import type { JointPlane } from "../section/joints.js";
 import type { LoadedEdge } from "./loaded-edges.js";
+import type { ConcentratedBand } from "./side-load-transfer.js";
 import { memoisedByLoading } from "./connector-context.js";
 import { rowFit } from "./row-fit.js";
 import { allowedSpacings } from "../spacing/allowed-spacings.js";
 import { checkSchedule } from "../spacing/check-schedule.js";
+import { verifyBands, type BandUtilisation } from "../spacing/verify-rows.js";
 import { absShearsAtStations } from "../spacing/demand.js";
 import { demandCurve, designSchedule, type ZoneReason } from "../spacing/design-schedule.js";
 import { spacingPractice } from "../spacing/spacing-defaults.js";
@@ -44,6 +46,8 @@ export interface JointInput {
   loadedEdges?: { edges: LoadedEdge[]; note: string };
   /** Limits a built-up column rule sets on the joint (core/column/column-rules.ts): they tighten the connector's own. */
   columnLimits?: ColumnSpacingLimits;
+  /** Between side-by-side plies: where a concentrated force is handed across within d/2, which the rows within must carry. */
+  concentratedBands?: ConcentratedBand[];
 }
 
 /** The connector's limits tightened by a column rule's: larger minima, a smaller maximum, the rule's clauses added. */
@@ -111,9 +115,11 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
     flowFactor,
     lines: lineCount,
     rows,
+    ...(input.concentratedBands && input.concentratedBands.length > 0 ? { bands: input.concentratedBands } : {}),
   };
   const label = kind.describe(connector);
   const len = (mm: number) => inJobUnits(mm, "length", job.units);
+  const force = (n: number) => inJobUnits(n, "connectorForce", job.units);
   const common = {
     joint: joint.id,
     connector: connector.id,
@@ -159,19 +165,31 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
       provided: provided.type === "zones" ? { zones: provided.zones } : { positions: provided.positions },
     });
     const worst = check.rowChecks.reduce((w, r) => (r.utilisation > w.utilisation ? r : w));
-    const detailing = check.zones.flatMap((z) => [
+    // The rows within each band must carry its force, as in a design; a zone over a band that falls short fails with the band's note.
+    const shortBands = verifyBands(check.positions, problem.bands ?? [], problem.combinations, rows).filter((b) => b.utilisation > 1 + 1e-9);
+    const checkedZones = check.zones.map((z, i) => {
+      const over = shortBands.filter((b) => z.to > b.from && z.from < b.to && (i === check.zones.length - 1 || b.from < z.to));
+      if (over.length === 0) return z;
+      return {
+        ...z,
+        passes: false,
+        failingCombinations: [...new Set([...z.failingCombinations, ...over.map((b) => b.combination)])],
+        note: [z.note, ...over.map((b) => bandNote(problem.bands![b.band]!, b, rows, len, force))].filter(Boolean).join(" "),
+      };
+    });
+    const detailing = checkedZones.flatMap((z) => [
       ...(z.spacing < minSpacing * (1 - 1e-9) ? [`zone ${len(z.from)}–${len(z.to)}: spacing ${len(z.spacing)} is below the minimum ${len(minSpacing)}`] : []),
       ...(z.spacing > maxSpacing * (1 + 1e-9) ? [`zone ${len(z.from)}–${len(z.to)}: spacing ${len(z.spacing)} is above the maximum ${len(maxSpacing)}`] : []),
     ]);
     detailing.push(...shortGaps(check.positions, minSpacing, limits.sources, len));
-    const passes = worst.utilisation <= 1 + 1e-9 && detailing.length === 0;
+    const passes = worst.utilisation <= 1 + 1e-9 && detailing.length === 0 && shortBands.length === 0;
     return {
       mirrored: false,
       warnings,
       schedule: {
         ...common,
         mode: "check",
-        zones: check.zones,
+        zones: checkedZones,
         positions: check.positions,
         count: check.positions.length * rows * lineCount,
         efficiency: efficiencyOf(demand.integral(1 / maxSpacing) * rows * lineCount, demand.integral() * rows * lineCount, check.positions.length * rows * lineCount, null),
@@ -201,7 +219,7 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
   const tooShort = beam.length < 2 * limits.endDistance * (1 - 1e-9);
   const peakShear = Math.max(...actions.map((a) => maxAbsShear(a, 0, beam.length).value));
   const gapProblems = shortGaps(design.positions, minSpacing, limits.sources, len);
-  const reason = design.infeasible ? infeasibleReason(design.infeasible, limits.endDistance, design.spacings[0]!, len) : undefined;
+  const reason = design.infeasible ? infeasibleReason(design.infeasible, limits.endDistance, design.spacings[0]!, len, problem.bands ?? [], rows, force) : undefined;
   const remedies = design.infeasible ? designedRemedies(input, kind, problem, settings, resistances) : null;
   const options = remedies
     ? [
@@ -210,7 +228,7 @@ export function discreteSchedule(input: JointInput, kind: DiscreteConnectorKind<
       ]
     : [];
   const zones = design.zones.map((z, i) => {
-    const note = zoneNote(design.zoneReasons[i] ?? null, len);
+    const note = zoneNote(design.zoneReasons[i] ?? null, len, problem.bands ?? []);
     return note ? { ...z, note } : z;
   });
   return {
@@ -391,9 +409,36 @@ function shortGaps(positions: number[], minSpacing: number, sources: string[], l
   ];
 }
 
+/** What hands a band's force across, and the rule: the connectors within half the member depth of it ([CP]). */
+function bandRule(band: ConcentratedBand, len: (mm: number) => string): string {
+  const source = band.source;
+  if (source.kind === "overlapping") {
+    return `the concentrated forces at ${source.at.map(len).join(", ")}, whose bands overlap, are passed together by the connectors within half the member depth of them (common practice)`;
+  }
+  const at = len(source.at);
+  const what =
+    source.kind === "load"
+      ? `the concentrated load at ${at} is passed`
+      : source.kind === "support"
+        ? `the share of the reaction at the support at ${at} is handed to the plies that bear there`
+        : `where ${source.ply ? `ply ${source.ply}` : "a ply"} starts or stops at ${at} its share is handed across`;
+  return `${what} by the connectors within half the member depth of it (common practice)`;
+}
+
+/** A band whose rows within fall short, in words. */
+function bandNote(band: ConcentratedBand, check: BandUtilisation, rows: number, len: (mm: number) => string, force: (n: number) => string): string {
+  return `Within the band ${len(band.origin + band.from)}–${len(band.origin + band.to)} ${bandRule(band, len)}: ${check.rows} row${check.rows === 1 ? "" : "s"} of ${rows} stand within it and carry ${force(check.carried)} against the ${force(check.force)} passed there under ${check.combination}.`;
+}
+
 /** The sentence beside a zone that is closer than the shear flow along it needs. */
-function zoneNote(reason: ZoneReason | null, len: (mm: number) => string): string | undefined {
+function zoneNote(reason: ZoneReason | null, len: (mm: number) => string, bands: readonly ConcentratedBand[]): string | undefined {
   if (!reason) return undefined;
+  if (reason.kind === "band") {
+    const band = bands[reason.band]!;
+    const within = `${len(band.origin + band.from)}–${len(band.origin + band.to)}`;
+    if (reason.restart) return `Its rows restart at the edge of the band ${within}: ${bandRule(band, len)}, and the rows within it must carry that force themselves, without credit for rows outside it.`;
+    return `Closer than the ${len(reason.flowSpacing)} the shear flow along it allows: ${bandRule(band, len)}, so the rows within ${len(band.origin + band.from)}–${len(band.origin + band.to)} must carry that force themselves, without credit for rows outside it.`;
+  }
   if (reason.kind === "end-row") {
     return `End row governs: the row at the end distance ${len(reason.endDistance)} carries from the member end to halfway to the next row (e + s/2), so this zone is closer than the ${len(reason.flowSpacing)} the shear flow along it allows.`;
   }
@@ -401,14 +446,21 @@ function zoneNote(reason: ZoneReason | null, len: (mm: number) => string): strin
 }
 
 /** What fails, where the flow alone would allow the minimum spacing. */
-function infeasibleReason(inf: NonNullable<ReturnType<typeof designSchedule>["infeasible"]>, endDistance: number, minSpacing: number, len: (mm: number) => string): string | undefined {
+function infeasibleReason(inf: NonNullable<ReturnType<typeof designSchedule>["infeasible"]>, endDistance: number, minSpacing: number, len: (mm: number) => string, bands: readonly ConcentratedBand[], rows: number, force: (n: number) => string): string | undefined {
+  const band = inf.band ? bandNote(bands[inf.band.band]!, inf.band, rows, len, force) : undefined;
+  if (inf.cause === "band") return `At the minimum spacing of ${len(minSpacing)} too few rows stand within a band. ${band}`;
+  const rowsText = rowsReason(inf, endDistance, minSpacing, len);
+  return rowsText && band ? `${rowsText} ${band}` : (rowsText ?? band);
+}
+
+function rowsReason(inf: NonNullable<ReturnType<typeof designSchedule>["infeasible"]>, endDistance: number, minSpacing: number, len: (mm: number) => string): string | undefined {
   if (inf.cause === "flow" || !inf.worstRow) return undefined;
   const r = inf.worstRow;
   const tributary = r.to - r.from;
   if (r.endRow) {
-    return `The shear flow alone needs ${len(inf.smallestRequired)}, which the minimum spacing of ${len(minSpacing)} meets, but the end row at ${len(r.x)} carries from the member end to halfway to the next row, ${len(tributary)} (the end distance ${len(endDistance)} plus half a spacing): utilisation ${r.utilisation.toFixed(2)}.`;
+    return `The shear flow alone needs ${len(inf.flowRequired)}, which the minimum spacing of ${len(minSpacing)} meets, but the end row at ${len(r.x)} carries from the member end to halfway to the next row, ${len(tributary)} (the end distance ${len(endDistance)} plus half a spacing): utilisation ${r.utilisation.toFixed(2)}.`;
   }
-  return `The shear flow alone needs ${len(inf.smallestRequired)}, which the minimum spacing of ${len(minSpacing)} meets, but the row at ${len(r.x)} carries ${len(tributary)} of the member: utilisation ${r.utilisation.toFixed(2)}.`;
+  return `The shear flow alone needs ${len(inf.flowRequired)}, which the minimum spacing of ${len(minSpacing)} meets, but the row at ${len(r.x)} carries ${len(tributary)} of the member: utilisation ${r.utilisation.toFixed(2)}.`;
 }
 
 function requiredAt(stations: Station[], demand: ReturnType<typeof demandCurve>): (number | null)[] {

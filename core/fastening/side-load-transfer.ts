@@ -130,6 +130,27 @@ function interfaceIn(plies: MultiPly, a: string, b: string): number | null {
  * the largest fraction of each load, with no load relieving another.
  */
 export function interfaceDemand(job: JobDocument, beam: BeamAnalysis, stretches: PlyStretch[], lines: readonly { a: string; b: string }[], extent: { from: number; to: number } | null): MemberActions[] {
+  return interfaceDemandAndBands(job, beam, stretches, lines, extent).actions;
+}
+
+/**
+ * A force handed across within d/2 of a load, a support or a ply's end (the concentrated-load rule, [CP]):
+ * the connectors within the band must carry it, whatever the rows outside it could take by their tributary length.
+ */
+export interface ConcentratedBand {
+  /** In the joint's coordinate, mm (kept to the joint's extent). */
+  from: number;
+  to: number;
+  /** Where the joint's coordinate starts along the member, mm. */
+  origin: number;
+  /** The force each contact line passes within the band, N, per combination where it is not zero. */
+  forces: { combination: string; force: number }[];
+  /** What hands the force there, at x along the member (mm from its left end), for the notes. */
+  source: { kind: "load" | "support" | "ply-end"; at: number; ply?: string } | { kind: "overlapping"; at: number[] };
+}
+
+/** interfaceDemand, and the bands where a concentrated force is handed across (see ConcentratedBand). */
+export function interfaceDemandAndBands(job: JobDocument, beam: BeamAnalysis, stretches: PlyStretch[], lines: readonly { a: string; b: string }[], extent: { from: number; to: number } | null): { actions: MemberActions[]; bands: ConcentratedBand[] } {
   const pairs = [...new Map(lines.map((l) => [[l.a, l.b].sort().join("|"), [l.a, l.b] as const])).values()];
   const single = pairs.length === 1;
   const L = beam.length;
@@ -140,20 +161,40 @@ export function interfaceDemand(job: JobDocument, beam: BeamAnalysis, stretches:
   const fraction = (s: PlyStretch, face: LoadFace) => pick(ksOf(s).map((k) => interfaceTransfer(s.plies.plies, [{ face, magnitude: 1 }]).interfaces[k]!.force));
   const stretchAt = (x: number) => stretches.find((s) => x >= s.x0 - tol && x <= s.x1 + tol) ?? stretches[stretches.length - 1]!;
   const [lo, hi] = extent ? [extent.from, extent.to] : [0, L];
-  return beam.results.map(({ combination, reactions, actions }) => {
+  const bands = new Map<string, ConcentratedBand>();
+  // The signed force of each band per combination (∫|t| for several interfaces), for bands that overlap.
+  const signed = new Map<ConcentratedBand, Map<string, number>>();
+  const perCombination = beam.results.map(({ combination, reactions, actions }) => {
     const intensity: { x0: number; x1: number; t0: number; t1: number }[] = [];
+    // The force of what is pushed since the last band began: ∫t dx (∫|t| dx for several interfaces).
+    let gathered = 0;
+    const band = (key: string, source: ConcentratedBand["source"], x0: number, x1: number, add: () => void) => {
+      gathered = 0;
+      add();
+      const [a, b] = [Math.max(x0, lo), Math.min(x1, hi)];
+      if (!(b > a + tol) || !(Math.abs(gathered) > 0)) return;
+      let entry = bands.get(key);
+      if (!entry) bands.set(key, (entry = { from: a - lo, to: b - lo, origin: lo, forces: [], source }));
+      entry.forces.push({ combination: combination.id, force: Math.abs(gathered) });
+      if (!signed.has(entry)) signed.set(entry, new Map());
+      signed.get(entry)!.set(combination.id, gathered);
+    };
     const push = (x0: number, x1: number, t0: number, t1: number) => {
       // Kept to the joint's extent, where the intensity is linear: t at the clipped ends by interpolation.
       const [a, b] = [Math.max(x0, lo), Math.min(x1, hi)];
       if (!(b > a + tol)) return;
       const at = (x: number) => (x1 > x0 ? t0 + ((t1 - t0) * (x - x0)) / (x1 - x0) : t0);
       [x0, x1, t0, t1] = [a, b, at(a), at(b)];
-      if (single || (t0 >= 0 && t1 >= 0)) intensity.push({ x0, x1, t0, t1 });
-      else if (t0 <= 0 && t1 <= 0) intensity.push({ x0, x1, t0: -t0, t1: -t1 });
-      else {
-        // |t| of a linear intensity that changes sign: split where it crosses zero.
-        const xz = x0 + ((x1 - x0) * t0) / (t0 - t1);
-        intensity.push({ x0, x1: xz, t0: Math.abs(t0), t1: 0 }, { x0: xz, x1, t0: 0, t1: Math.abs(t1) });
+      const pieces =
+        single || (t0 >= 0 && t1 >= 0)
+          ? [{ x0, x1, t0, t1 }]
+          : t0 <= 0 && t1 <= 0
+            ? [{ x0, x1, t0: -t0, t1: -t1 }]
+            : // |t| of a linear intensity that changes sign: split where it crosses zero.
+              ((xz) => [{ x0, x1: xz, t0: Math.abs(t0), t1: 0 }, { x0: xz, x1, t0: 0, t1: Math.abs(t1) }])(x0 + ((x1 - x0) * t0) / (t0 - t1));
+      for (const piece of pieces) {
+        intensity.push(piece);
+        gathered += ((piece.t0 + piece.t1) / 2) * (piece.x1 - piece.x0);
       }
     };
     /** A linear intensity over [x0, x1] at f(stretch) times w(x), each stretch by its own fraction. */
@@ -171,7 +212,7 @@ export function interfaceDemand(job: JobDocument, beam: BeamAnalysis, stretches:
       if (r.R === 0) continue;
       const d = stretchAt(r.x).plies.depth;
       const [a, b] = [Math.max(0, r.x - d / 2), Math.min(L, r.x + d / 2)];
-      if (b > a) spread(a, b, (s) => fraction(s, "bottom"), () => -r.R / (b - a));
+      if (b > a) band(`support ${r.x}`, { kind: "support", at: r.x }, a, b, () => spread(a, b, (s) => fraction(s, "bottom"), () => -r.R / (b - a)));
     }
     if (job.beam.selfWeight) {
       // A ply heavier than its share (a steel plate) passes the rest of its weight to the others: T_k = Σ_{j≤k} (w_j − s_j·Σw).
@@ -182,21 +223,22 @@ export function interfaceDemand(job: JobDocument, beam: BeamAnalysis, stretches:
         return dead * pick(ksOf(s).map((k) => s.plies.selfWeights.slice(0, k + 1).reduce((sum, w, j) => sum + w - shares[j]! * total, 0)));
       }, () => 1);
     }
-    for (const load of job.beam.loads) {
+    for (const [index, load] of job.beam.loads.entries()) {
       if (load.type === "moment") continue;
       const f = factorOf(combination, load.category);
       if (f === 0) continue;
       const face = load.face ?? "top";
       const depth = load.type === "point" ? stretchAt(load.at).plies.depth : 0;
       const span = extentOf(load, L, depth);
-      for (const [x0, x1] of loadedExtents(beam, combination, load.category, span)) {
-        if (load.type === "point") spread(x0, x1, (s) => f * fraction(s, face), () => load.P / (span[1] - span[0]));
-        else {
-          const [from, to] = [load.from ?? 0, load.to ?? L];
-          const w = (x: number) => (load.type === "uniform" ? load.w : load.wStart + ((load.wEnd - load.wStart) * (x - from)) / (to - from));
-          spread(x0, x1, (s) => f * fraction(s, face), w);
-        }
+      if (load.type === "point") {
+        band(`load ${index}`, { kind: "load", at: load.at }, span[0], span[1], () => {
+          for (const [x0, x1] of loadedExtents(beam, combination, load.category, span)) spread(x0, x1, (s) => f * fraction(s, face), () => load.P / (span[1] - span[0]));
+        });
+        continue;
       }
+      const [from, to] = [load.from ?? 0, load.to ?? L];
+      const w = (x: number) => (load.type === "uniform" ? load.w : load.wStart + ((load.wEnd - load.wStart) * (x - from)) / (to - from));
+      for (const [x0, x1] of loadedExtents(beam, combination, load.category, span)) spread(x0, x1, (s) => f * fraction(s, face), w);
     }
     // Where plies start or stop, each ply's shares of the shear and moment change. Taken in two steps, each
     // self-equilibrated: the plies that stop hand their shares to the plies that run on (from the left stretch's shares
@@ -211,11 +253,11 @@ export function interfaceDemand(job: JobDocument, beam: BeamAnalysis, stretches:
       const d = Math.max(left.plies.depth, right.plies.depth);
       const common = left.plies.parts.filter((id) => right.plies.parts.includes(id));
       const between = common.length > 0 ? new Map(sharesAmong(left.plies, common).map((sh, j) => [common[j]!, sh])) : sharesById(right.plies);
-      for (const [side, v, band] of [
+      for (const [side, v, reach] of [
         [left, shearAt(actions, x, "left"), [Math.max(x - d / 2, left.x0), x]],
         [right, shearAt(actions, x, "right"), [x, Math.min(x + d / 2, right.x1)]],
       ] as const) {
-        const [a, b] = band;
+        const [a, b] = reach;
         const h = b - a;
         if (!(h > 0)) continue;
         const centre = (a + b) / 2;
@@ -224,17 +266,20 @@ export function interfaceDemand(job: JobDocument, beam: BeamAnalysis, stretches:
         const change = (id: string) => (side === left ? (own.get(id) ?? 0) - (between.get(id) ?? 0) : (between.get(id) ?? 0) - (own.get(id) ?? 0));
         const sums = ksOf(side).map((k) => side.plies.parts.slice(0, k + 1).reduce((sum, id) => sum + change(id), 0));
         if (sums.every((c) => Math.abs(c) <= 1e-12)) continue;
-        // e(X) = P/h − 12·C·(X − centre)/h³: ∫e = P, ∫e·(X − centre) = −C.
-        if (single) {
-          const [P, C] = [sums[0]! * v, sums[0]! * m];
-          push(a, b, P / h + (6 * C) / h ** 2, P / h - (6 * C) / h ** 2);
-        } else {
-          // Several interfaces: the largest force and couple of any, with no relief between them.
-          const P = Math.max(...sums.map((c) => Math.abs(c * v)));
-          const C = Math.max(...sums.map((c) => Math.abs(c * m)));
-          push(a, centre, P / h + (6 * C) / h ** 2, P / h);
-          push(centre, b, P / h, P / h + (6 * C) / h ** 2);
-        }
+        const ends = [...left.plies.parts.filter((id) => !right.plies.parts.includes(id)), ...right.plies.parts.filter((id) => !left.plies.parts.includes(id))];
+        band(`ply end ${i} ${side === left ? "left" : "right"}`, { kind: "ply-end", at: x, ply: ends.join(", ") }, a, b, () => {
+          // e(X) = P/h − 12·C·(X − centre)/h³: ∫e = P, ∫e·(X − centre) = −C.
+          if (single) {
+            const [P, C] = [sums[0]! * v, sums[0]! * m];
+            push(a, b, P / h + (6 * C) / h ** 2, P / h - (6 * C) / h ** 2);
+          } else {
+            // Several interfaces: the largest force and couple of any, with no relief between them.
+            const P = Math.max(...sums.map((c) => Math.abs(c * v)));
+            const C = Math.max(...sums.map((c) => Math.abs(c * m)));
+            push(a, centre, P / h + (6 * C) / h ** 2, P / h);
+            push(centre, b, P / h, P / h + (6 * C) / h ** 2);
+          }
+        });
       }
     }
     // V(x) = t(x): a step up of t0 at x0, a slope along the extent, a step down of t1 at x1; in the joint's coordinate.
@@ -245,6 +290,32 @@ export function interfaceDemand(job: JobDocument, beam: BeamAnalysis, stretches:
     }
     return memberActions(hi - lo, set, []);
   });
+  return { actions: perCombination, bands: [...bands.values(), ...overlapping([...bands.values()], signed, tol)] };
+}
+
+/**
+ * Bands that overlap share the rows in their overlap: each run of them is a band too, from the first's start to the
+ * last's end, carrying the sum of their forces (signed for one interface; each already a magnitude for several).
+ */
+function overlapping(bands: ConcentratedBand[], signed: Map<ConcentratedBand, Map<string, number>>, tol: number): ConcentratedBand[] {
+  const sorted = [...bands].sort((a, b) => a.from - b.from);
+  const runs: ConcentratedBand[][] = [];
+  for (const b of sorted) {
+    const run = runs[runs.length - 1];
+    if (run && b.from < Math.max(...run.map((r) => r.to)) - tol) run.push(b);
+    else runs.push([b]);
+  }
+  return runs
+    .filter((run) => run.length > 1)
+    .flatMap((run) => {
+      const combinations = [...new Set(run.flatMap((b) => b.forces.map((f) => f.combination)))];
+      const forces = combinations
+        .map((combination) => ({ combination, force: Math.abs(run.reduce((sum, b) => sum + (signed.get(b)?.get(combination) ?? 0), 0)) }))
+        .filter((f) => f.force > 0);
+      if (forces.length === 0) return [];
+      const at = run.flatMap((b) => (b.source.kind === "overlapping" ? b.source.at : [b.source.at]));
+      return [{ from: run[0]!.from, to: Math.max(...run.map((b) => b.to)), origin: run[0]!.origin, forces, source: { kind: "overlapping" as const, at } }];
+    });
 }
 
 function factorOf(combination: Combination, category: string): number {

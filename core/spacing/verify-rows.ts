@@ -22,3 +22,44 @@ export function verifyRows(positions: number[], demand: DemandCurve): RowUtilisa
     return { x, from, to, utilisation: (to - from) * peak.value, combination: peak.combination };
   });
 }
+
+/** A force that the connectors within [from, to] must carry, per combination (per contact line, N). */
+export interface RowBand {
+  from: number;
+  to: number;
+  forces: { combination: string; force: number }[];
+}
+
+export interface BandUtilisation {
+  /** Index of the band in the list given. */
+  band: number;
+  from: number;
+  to: number;
+  /** Rows within the band, its edges included. */
+  rows: number;
+  /** The governing combination's force over what the rows within carry (Infinity when none stands within). */
+  utilisation: number;
+  combination: string;
+  force: number;
+  carried: number;
+}
+
+/**
+ * Each band's utilisation: its force over what only the rows within it carry, Σ (connectors per row × R);
+ * a row just outside is not credited by its tributary length (the concentrated-load rule, [CP]).
+ */
+export function verifyBands(positions: number[], bands: readonly RowBand[], resistances: readonly { id: string; resistance: number }[], perRow: number): BandUtilisation[] {
+  return bands.map((b, band) => {
+    const slack = 1e-9 * Math.max(1, Math.abs(b.to));
+    const rows = positions.filter((x) => x >= b.from - slack && x <= b.to + slack).length;
+    let worst = { utilisation: 0, combination: b.forces[0]?.combination ?? "", force: 0, carried: 0 };
+    for (const { combination, force } of b.forces) {
+      const r = resistances.find((c) => c.id === combination)?.resistance;
+      if (r === undefined || !(force > 0)) continue;
+      const carried = rows * perRow * r;
+      const utilisation = carried > 0 ? force / carried : Infinity;
+      if (utilisation > worst.utilisation) worst = { utilisation, combination, force, carried };
+    }
+    return { band, from: b.from, to: b.to, rows, ...worst };
+  });
+}

@@ -1,4 +1,5 @@
-import { describe, expect, test } from "vitest";
+import fc from "fast-check";
+import { afterAll, describe, expect, test } from "vitest";
 import { prepareJob } from "../../../core/check-job.js";
 import { designMember } from "../../../core/design-member.js";
 import type { JobInput } from "../../../core/schema/job.js";
@@ -104,20 +105,81 @@ describe("a concentrated load hung on a face of the plies (moved from the stand-
       expect(reach * 2 * 600).toBeGreaterThanOrEqual(T - 1e-6);
     }
   });
-  // Open finding for the plies' owner: the stand-alone module asked for ⌈6667/600⌉ = 12 nails strictly within d/2
-  // each side of the load (the [CP] rule the result's assumptions state); the product spreads the load uniformly
-  // over that band and credits rows just outside it by their tributary length, so at s = 50 mm only 5 rows
-  // (10 nails, 6000 N) stand inside the band. Recorded as failing until the band is counted that way.
-  test.fails("[open finding] the rows strictly within d/2 each side of the load carry T₁ = 6667 N: 12 nails of 600 N [D, rule CP]", () => {
+  // The stand-alone module asked for ⌈6667/600⌉ = 12 nails strictly within d/2 each side of the load (the [CP] rule
+  // the result's assumptions state). The product once spread the load over that band and credited rows just outside it
+  // by their tributary length, so at s = 50 mm only 5 rows (10 nails, 6000 N) stood inside; the rows within each band
+  // are now counted on their own (a zone over the band steps down or restarts at its edge, or the joint fails).
+  test("the rows strictly within d/2 each side of the load carry T₁ = 6667 N: 12 nails of 600 N, and T₂ = 3333 N: 6 nails [D, rule CP]", () => {
+    const result = hung();
+    for (const [k, T] of [[0, 20_000 / 3], [1, 10_000 / 3]] as const) {
+      const s = interfaces(result)[k]!.s;
+      const within = s.positions.filter((x) => Math.abs(x - 2000) <= 143 + 1e-9).length;
+      expect(within * 2 * 600).toBeGreaterThanOrEqual(T - 1e-6);
+    }
+    expect(result.status.passes).toBe(true);
+  });
+  test("at s = 50 mm the zone over the band restarts at its edge, 2000 − 143 = 1857 mm, and says why [D]", () => {
     const s = interfaces(hung())[0]!.s;
-    const within = s.positions.filter((x) => Math.abs(x - 2000) <= 143 + 1e-9).length;
-    expect(within * 2 * 600).toBeGreaterThanOrEqual(20_000 / 3 - 1e-6);
+    const zone = s.zones.find((z) => Math.abs(z.from - 1857) < 1e-6)!;
+    expect(zone.spacing).toBe(50);
+    expect(zone.note).toMatch(/within half the member depth/);
+  });
+  test("a symmetric plan keeps the rule too: the rows within 2000 ± 143 mm carry 6667 N (12 nails) and 3333 N (6 nails) [D, rule CP]", () => {
+    const job = plies(3, [{ type: "point", P: 10, at: 2, face: "left" }], { minSpacing: 40 });
+    job.spacing!.symmetric = true;
+    const result = run(job);
+    for (const [k, T] of [[0, 20_000 / 3], [1, 10_000 / 3]] as const) {
+      const s = interfaces(result)[k]!.s;
+      expect(s.passes).toBe(true);
+      expect(s.positions.filter((x) => Math.abs(x - 2000) <= 143 + 1e-9).length * 2 * 600).toBeGreaterThanOrEqual(T - 1e-6);
+    }
+  });
+  test("where every row passes by its tributary length but too few stand within the band, the joint fails for the band: least spacing 50 mm on a 50 mm module, rows on the 50 mm grid from the end distance, 5 within (1900…2100), 6000 N < 6667 N [D, rule CP]", () => {
+    // Each row: 50 × 6667/286 = 1166 N ≤ 2 × 600 N [D], so only the band fails; restarting the rows at 1857 mm would
+    // leave 1850 → 1857 mm, closer than the least spacing, and the next row comes at 1900 mm.
+    const job = plies(3, [{ type: "point", P: 10, at: 2, face: "left" }], { minSpacing: 50 });
+    job.spacing = { ...job.spacing!, module: 50 };
+    const result = run(job);
+    const s = interfaces(result)[0]!.s;
+    expect(s.verification.passes).toBe(true);
+    expect(s.passes).toBe(false);
+    expect(s.infeasible!.reason).toMatch(/5 rows of 2 stand within it and carry 6,000 N against the 6,667 N passed there/);
+    expect(s.infeasible!.remedies!.some((r) => r.change === "rows" && r.rows === 3)).toBe(true);
+    expect(result.status.failures.join(" ")).toMatch(/too few rows stand within half the member depth of a concentrated force/);
+  });
+  test("check mode counts the rows within the band the same way: 50 mm from the end distance leaves 5 rows (6000 N < 6667 N) and fails; the same spacing with its rows shifted by 10 mm has 6 within and passes [D, rule CP]", () => {
+    const checked = (provided: NonNullable<JobInput["fastening"]["default"]["provided"]>) => {
+      const job = plies(3, [{ type: "point", P: 10, at: 2, face: "left" }], { minSpacing: 40 });
+      job.mode = "check";
+      job.fastening.default.provided = provided;
+      return interfaces(run(job))[0]!.s;
+    };
+    // Every row passes by its tributary length: 50 × 6667/286 = 1166 N ≤ 2 × 600 N [D].
+    const even = checked({ type: "zones", zones: [{ from: 0, to: 4, spacing: 50 }] });
+    expect(even.positions.filter((x) => Math.abs(x - 2000) <= 143).length).toBe(5);
+    expect(even.verification.passes).toBe(true);
+    expect(even.passes).toBe(false);
+    const over = even.zones.filter((z) => !z.passes);
+    expect(over.length).toBeGreaterThan(0);
+    expect(over[0]!.note).toMatch(/5 rows of 2 stand within it and carry 6,000 N against the 6,667 N/);
+    const job = plies(3, [{ type: "point", P: 10, at: 2, face: "left" }], { minSpacing: 40 });
+    job.mode = "check";
+    job.fastening.default.provided = { type: "zones", zones: [{ from: 0, to: 4, spacing: 50 }] };
+    expect(run(job).status.failures.join(" ")).toMatch(/too few rows of the given schedule stand within half the member depth/);
+    const shifted = checked({ type: "positions", positions: [0.05, ...Array.from({ length: 77 }, (_, k) => (110 + 50 * k) / 1000), 3.95] });
+    expect(shifted.positions.filter((x) => Math.abs(x - 2000) <= 143).length).toBe(6);
+    expect(shifted.passes).toBe(true);
   });
   test("6 stations of 2 nails fit in 286 mm only at a spacing ≤ 57.2 mm: at a least spacing of 60 mm interface 1 cannot be scheduled [D]", () => {
     const result = run(plies(3, [{ type: "point", P: 10, at: 2, face: "left" }], { minSpacing: 60 }));
     const [i1] = interfaces(result);
     expect(i1!.s.passes).toBe(false);
     expect(i1!.s.infeasible).not.toBeNull();
+    // At 60 mm, 5 rows at most stand within 286 mm (4 × 60 = 240 ≤ 286 < 300): 5 × 2 × 600 = 6000 N < 6667 N [D].
+    expect(i1!.s.infeasible!.reason).toMatch(/within half the member depth/);
+    expect(i1!.s.infeasible!.reason).toMatch(/against the 6,667 N passed there/);
+    // The remedies are designed again under the same rule: 3 nails per row, 5 rows within, 9000 N ≥ 6667 N [D].
+    expect(i1!.s.infeasible!.remedies!.some((r) => r.change === "rows" && r.rows === 3)).toBe(true);
   });
 });
 
@@ -159,5 +221,53 @@ describe("rows of bolts across the depth of the plies (moved from the stand-alon
         expect(s.passes).toBe(false);
       }
     }
+  });
+});
+
+describe("property through designMember (fast-check, fixed seed): the rows within d/2 of a face-hung load carry what it passes", () => {
+  // Plies of one depth d = 286 mm, each bending about its own centroid: the E·I shares are s_j = E_j·t_j / Σ E·t
+  // (d³/12 cancels) [D]. A load P on the left face crosses interface k (between plies k and k + 1, from 0) with
+  // P·Σ_{j>k} s_j, on the right face with P·Σ_{j≤k} s_j [D]; the connectors within d/2 each side of it pass that
+  // force (the concentrated-load rule, [CP]): rows within × connectors per row × R ≥ it, whatever rows outside carry.
+  const passing: boolean[] = [];
+  afterAll(() => expect(passing.filter(Boolean).length).toBeGreaterThanOrEqual(passing.length / 4));
+  test("in every passing schedule, for every load, Σ over the rows within d/2 of (n·R) ≥ the share it passes", () => {
+    fc.assert(
+      fc.property(
+        fc.array(fc.record({ t: fc.constantFrom(38, 45, 63), E: fc.constantFrom(9_000, 11_000, 13_000) }), { minLength: 2, maxLength: 4 }),
+        fc.array(fc.record({ P: fc.double({ min: 0.5, max: 12, noNaN: true }), at: fc.oneof(fc.double({ min: 0.2, max: 3.8, noNaN: true }), fc.double({ min: 1.8, max: 2.2, noNaN: true })), face: fc.constantFrom("left" as const, "right" as const) }), { minLength: 1, maxLength: 3 }),
+        fc.record({ R: fc.constantFrom(400, 600, 900, 1_500), rows: fc.integer({ min: 1, max: 3 }), minSpacing: fc.constantFrom(40, 50, 60) }),
+        (plyList, loads, nail) => {
+          const job = plies(plyList.length, loads.map((l) => ({ type: "point" as const, ...l })), { resistance: nail.R, minSpacing: nail.minSpacing }, nail.rows);
+          job.materials = plyList.map((p, j) => ({ id: `T${j}`, name: "timber", E: p.E, density: 0 }));
+          job.parts = job.parts.map((part, j) => ({ ...part, material: `T${j}`, shape: { type: "rectangle" as const, b: plyList[j]!.t, h: 286 } }));
+          const result = run(job);
+          const stiffness = plyList.map((p) => p.E * p.t);
+          const total = stiffness.reduce((a, b) => a + b, 0);
+          const share = (from: number, to: number) => stiffness.slice(from, to).reduce((a, b) => a + b, 0) / total;
+          result.multiPly!.interfaces.forEach((face, k) => {
+            const s = result.schedules.find((x) => x.joint === face.joint);
+            if (!s) return;
+            passing.push(s.passes);
+            if (!s.passes) return;
+            for (const load of loads) {
+              const force = load.P * 1000 * (load.face === "left" ? share(k + 1, plyList.length) : share(0, k + 1));
+              const within = s.positions.filter((x) => Math.abs(x - load.at * 1000) <= 143 * (1 + 1e-9)).length;
+              expect(within * nail.rows * nail.R, `interface ${k + 1}, load ${load.P} kN at ${load.at} m on the ${load.face} face`).toBeGreaterThanOrEqual(force * (1 - 1e-9));
+            }
+            // Loads on one face whose bands overlap share the rows there: those within the union carry their sum [D].
+            for (const a of loads) {
+              for (const b of loads) {
+                if (a === b || a.face !== b.face || a.at > b.at || b.at - a.at >= 0.286) continue;
+                const f = (l: typeof a) => l.P * 1000 * (l.face === "left" ? share(k + 1, plyList.length) : share(0, k + 1));
+                const within = s.positions.filter((x) => x >= a.at * 1000 - 143 * (1 + 1e-9) && x <= b.at * 1000 + 143 * (1 + 1e-9)).length;
+                expect(within * nail.rows * nail.R, `interface ${k + 1}, loads at ${a.at} and ${b.at} m`).toBeGreaterThanOrEqual((f(a) + f(b)) * (1 - 1e-9));
+              }
+            }
+          });
+        },
+      ),
+      { numRuns: 40 },
+    );
   });
 });
