@@ -99,6 +99,16 @@ const names: Record<string, FieldName> = {
   flange: { label: "flange", values: { top: "top", bottom: "bottom" } },
   heel: { label: "heel", values: { "bottom-left": "bottom left", "bottom-right": "bottom right", "top-left": "top left", "top-right": "top right" } },
   designation: { label: "designation" },
+  // Column (job.compression)
+  eccentricity: { label: "Eccentricity e" },
+  ends: { label: "End conditions" },
+  K: { label: "K_e" },
+  bracedAt: { label: "Brace point" },
+  rule: { label: "Built-up column rule" },
+  packing: { label: "Packing part" },
+  packSpacing: { label: "Pack spacing l_1" },
+  packLength: { label: "Pack length l_2" },
+  gammaM: { label: "Timber γ_M" },
 };
 
 export function fieldName(key: string, scope?: string): FieldName {
