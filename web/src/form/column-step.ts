@@ -110,6 +110,7 @@ function columnBody(ctx: FormContext): HTMLElement[] {
   return [
     el("h3", { text: "Axial loads" }),
     ...axialLoads(ctx),
+    el("p", { className: "hint", text: "A timber column needs each material's compression strength parallel to the grain (Materials, More properties)." }),
     el("h3", { text: "Buckling" }),
     el("p", { className: "hint", text: "About each axis: the end conditions give K_e, or give K_e itself. Brace points are measured from the base; each stretch between them is taken at K_e of at least 1." }),
     axisBlock(ctx, "x", "About x (the axis the lateral loads bend about)"),

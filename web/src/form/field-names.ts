@@ -82,6 +82,7 @@ const names: Record<string, FieldName> = {
   "material.tensileStrength": { label: "Tensile strength F_u" },
   rollingShear: { label: "Rolling shear strength" },
   compressionPerp: { label: "Compression ⊥ grain", hint: "F_c⊥ / f_c,90: bearing of plies at the supports." },
+  "material.compression": { label: "Compression ∥ grain", hint: "F_c / f_c,0: what a column carries." },
   bearingLength: { label: "Bearing length at supports", hint: "3 in (76.2 mm) when empty." },
   // Shapes
   b: { label: "b" },
