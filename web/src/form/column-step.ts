@@ -23,12 +23,12 @@ export const endsK: Record<ColumnEnds, number> = {
 };
 
 const endWords: Record<string, string> = {
-  "pinned-pinned": "pinned at both ends",
-  "fixed-fixed": "fixed at both ends",
-  "fixed-pinned": "fixed at one end, pinned at the other",
-  "fixed-guided": "fixed, the other end guided (sways, no rotation)",
-  "fixed-free": "fixed at the base, free at the top",
-  "pinned-guided": "pinned, the other end guided (sways, no rotation)",
+  "pinned-pinned": "pinned, pinned",
+  "fixed-fixed": "fixed, fixed",
+  "fixed-pinned": "fixed, pinned",
+  "fixed-guided": "fixed, guided",
+  "fixed-free": "fixed, free",
+  "pinned-guided": "pinned, guided",
 };
 
 export const ruleWords: Record<string, string> = {
@@ -155,7 +155,7 @@ function axialLoads(ctx: FormContext): HTMLElement[] {
       { header: "Category", className: "col-choice", cell: (i) => ({ path: at(i, "category"), name: "category", control: selectControl(ctx, at(i, "category"), "category", categoryChoices, { whenAbsent: "dead" }) }) },
       { header: "Label", className: "col-name", cell: (i) => ({ path: at(i, "label"), name: "label", control: textControl(ctx, at(i, "label"), "label", { maxLength: 60 }) }) },
       { header: "P", unit: unitLabel("force", u), className: "col-num", cell: (i) => ({ path: at(i, "P"), name: "P", control: numberControl(ctx, at(i, "P"), "P") }) },
-      { header: "Eccentricity e", unit: unitLabel("length", u), className: "col-num", cell: (i) => ({ path: at(i, "eccentricity"), name: "eccentricity", control: numberControl(ctx, at(i, "eccentricity"), "eccentricity", { placeholder: "none" }) }) },
+      { header: "e", unit: unitLabel("length", u), className: "col-num", cell: (i) => ({ path: at(i, "eccentricity"), name: "eccentricity", control: numberControl(ctx, at(i, "eccentricity"), "eccentricity", { placeholder: "none" }) }) },
     ],
     actions: (i) => [
       rowButton("×", `Remove ${name(i)}`, () => {
@@ -166,7 +166,7 @@ function axialLoads(ctx: FormContext): HTMLElement[] {
   });
   ctx.registry.register({ path: "compression.loads", label: "Axial loads", marker: table, host: issues });
   return [
-    table,
+    el("div", { className: "axial-loads" }, [table]),
     el("p", { className: "hint", text: "P is compression, at the top of the column. e is measured from the section's centroid in the plane of the lateral loads (up positive) and adds P·e at the top, falling to nothing at the base." }),
     issues,
     el("div", { className: "button-row" }, [
@@ -188,7 +188,7 @@ function axisBlock(ctx: FormContext, axis: "x" | "y", title: string): HTMLElemen
     ctx,
     `${base}.ends`,
     "ends",
-    [{ value: "", label: "not given: pinned at both ends" }, ...offered.map((e) => ({ value: e, label: `${endWords[e] ?? e.replace(/-/g, " ")}${e in endsK ? ` (K_e ${endsK[e as ColumnEnds]})` : ""}` }))],
+    [{ value: "", label: "not given (pinned, pinned)" }, ...offered.map((e) => ({ value: e, label: `${endWords[e] ?? e.replace(/-/g, " ")}${e in endsK ? ` (K_e ${endsK[e as ColumnEnds]})` : ""}` }))],
     { whenAbsent: "", onChosen: (v) => state.set(`${base}.ends`, v || undefined) },
   );
   const chosen = state.read(`${base}.ends`);
@@ -197,7 +197,7 @@ function axisBlock(ctx: FormContext, axis: "x" | "y", title: string): HTMLElemen
     el("span", { className: "label", text: title }),
     fieldGrid(
       [
-        field(ctx, `${base}.ends`, "End conditions", ends, { owner }),
+        field(ctx, `${base}.ends`, "End conditions", ends, { owner, hint: "Guided: the end moves sideways but does not turn." }),
         field(ctx, `${base}.K`, "K_e", numberControl(ctx, `${base}.K`, "K_e", { placeholder: `from the ends (${fromEnds})` }), { owner, hint: "Replaces the ends' value when given." }),
         bracePoints(ctx, `${base}.bracedAt`, owner, span),
       ],
