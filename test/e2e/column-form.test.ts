@@ -74,6 +74,39 @@ describe("a beam turned into a column in the form", () => {
   }, 4 * SLOW);
 });
 
+describe("fields shown where the column's rule can use them", () => {
+  const serviceClass = () => page.getByLabel("Column Service class (EN 1995)", { exact: true });
+  const spacedSwitch = () => page.getByLabel("The shafts are held apart by packs or gussets (a spaced column)");
+
+  test("a spaced timber column (EN 1995-1-1 Annex C.3) shows its packing, packs and service class", async () => {
+    await page.goto(`${h.base}/?example=gallery-spaced-post.si`);
+    await upToDate(page);
+    await expect(page.getByLabel("Packing: pack").isChecked()).resolves.toBe(true);
+    await expect(page.getByLabel("Packing: shaft-1").isChecked()).resolves.toBe(false);
+    await expect(spacedSwitch().isChecked()).resolves.toBe(true);
+    await expect(page.getByLabel("Spaced column Pack spacing l_1 (m)").inputValue()).resolves.toBe("0.6");
+    await expect(page.getByLabel("Spaced column Pack length l_2 (mm)").inputValue()).resolves.toBe("360");
+    await expect(serviceClass().inputValue()).resolves.toBe("1");
+    await expect(page.getByLabel("Built-up column rule").inputValue()).resolves.toBe("en1995-c3-spaced");
+    await screenshots("spaced-post");
+  }, 4 * SLOW);
+
+  test("double angles with a packing plate (AISC §E6) show the packing only; a nailed post shows neither", async () => {
+    await page.goto(`${h.base}/?example=double-angle-strut.us`);
+    await upToDate(page);
+    await expect(page.getByLabel("Packing: packing").isChecked()).resolves.toBe(true);
+    await expect(serviceClass().count()).resolves.toBe(0);
+    await expect(spacedSwitch().count()).resolves.toBe(0);
+    await page.goto(`${h.base}/?example=girder-truss-post.us`);
+    await upToDate(page);
+    await expect(columnSwitch().isChecked()).resolves.toBe(true);
+    await expect(page.getByLabel(/^Packing: /).count()).resolves.toBe(0);
+    await expect(serviceClass().count()).resolves.toBe(0);
+    await expect(spacedSwitch().count()).resolves.toBe(0);
+    expect(h.errors).toEqual([]);
+  }, 4 * SLOW);
+});
+
 describe("the girder-truss post", () => {
   test("a larger P changes the column's results", async () => {
     await page.goto(`${h.base}/?example=girder-truss-post.us`);

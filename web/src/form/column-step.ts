@@ -128,9 +128,10 @@ function columnBody(ctx: FormContext): HTMLElement[] {
               whenAbsent: "1",
               onChosen: (v) => state.set("compression.serviceClass", Number(v)),
             }),
-            { hint: "EN 1995-1-1 §2.3.1.3, for k_mod of the column." },
+            { owner: "Column", hint: "EN 1995-1-1 §2.3.1.3, for k_mod of the column." },
           ),
           field(ctx, "compression.gammaM", "Timber γ_M", numberControl(ctx, "compression.gammaM", "γ_M", { placeholder: "by material" }), {
+            owner: "Column",
             hint: "EN 1995-1-1 Table 2.3; that of the material when empty.",
           }),
         ])
@@ -188,7 +189,7 @@ function axisBlock(ctx: FormContext, axis: "x" | "y", title: string): HTMLElemen
     ctx,
     `${base}.ends`,
     "ends",
-    [{ value: "", label: "not given (pinned, pinned)" }, ...offered.map((e) => ({ value: e, label: `${endWords[e] ?? e.replace(/-/g, " ")}${e in endsK ? ` (K_e ${endsK[e as ColumnEnds]})` : ""}` }))],
+    [{ value: "", label: "not given (pinned, pinned)" }, ...offered.map((e) => ({ value: e, label: `${endWords[e] ?? e.replace(/-/g, " ")}${e in endsK ? ` (${endsK[e as ColumnEnds]})` : ""}` }))],
     { whenAbsent: "", onChosen: (v) => state.set(`${base}.ends`, v || undefined) },
   );
   const chosen = state.read(`${base}.ends`);
@@ -197,7 +198,7 @@ function axisBlock(ctx: FormContext, axis: "x" | "y", title: string): HTMLElemen
     el("span", { className: "label", text: title }),
     fieldGrid(
       [
-        field(ctx, `${base}.ends`, "End conditions", ends, { owner, hint: "Guided: the end moves sideways but does not turn." }),
+        field(ctx, `${base}.ends`, "End conditions", ends, { owner, hint: "K_e in brackets. Guided: the end moves sideways but does not turn." }),
         field(ctx, `${base}.K`, "K_e", numberControl(ctx, `${base}.K`, "K_e", { placeholder: `from the ends (${fromEnds})` }), { owner, hint: "Replaces the ends' value when given." }),
         bracePoints(ctx, `${base}.bracedAt`, owner, span),
       ],
