@@ -275,7 +275,7 @@ function spacedBlock(ctx: FormContext, u: "si" | "us"): HTMLElement {
             ctx,
             `${path}.kind`,
             "Held apart by",
-            selectControl(ctx, `${path}.kind`, "held apart by", [{ value: "packs", label: "packs between the shafts" }, { value: "gussets", label: "gussets on their faces" }], { whenAbsent: "packs" }),
+            selectControl(ctx, `${path}.kind`, "held apart by", [{ value: "packs", label: "packs" }, { value: "gussets", label: "gussets" }], { whenAbsent: "packs" }),
             { owner },
           ),
           field(ctx, `${path}.packSpacing`, "Pack spacing l_1", numberControl(ctx, `${path}.packSpacing`, "l_1"), { owner, unit: unitLabel("span", u), hint: "Centre to centre along the column; end packs at the ends." }),
