@@ -40,5 +40,7 @@ describe("a job file that cannot be opened says why in the form's words", () => 
       "Joints (“fastening” in the file) must be a group of fields in braces {…}, not a single value",
     ]);
     expect(opened.problems.join(" ")).not.toMatch(/an object|expected/);
+    const column = openableJob({ format: "stitchplan-job", compression: { loads: 5 } });
+    expect(column.ok ? [] : column.problems).toEqual(["Axial loads (“compression.loads” in the file) must be a list of entries in brackets […]"]);
   });
 });

@@ -34,6 +34,7 @@ const places: Record<string, string> = {
   "compression.x": "Buckling about x",
   "compression.y": "Buckling about y",
   "compression.spaced": "Spaced column",
+  "compression.loads": "Axial loads",
   "compression.loads.category": "category",
   shape: "shape",
   strength: "strength",
