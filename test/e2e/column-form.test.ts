@@ -58,6 +58,8 @@ describe("a beam turned into a column in the form", () => {
     await upToDate(page);
     await untilText(page, axes(), (t) => t.includes("x axis") && t.includes("y axis"), "no buckling table", SLOW);
     await expect(byCombination().textContent()).resolves.toContain("D");
+    await axes().screenshot({ path: join(shots, "column-form-three-ply-axes-1280.png") });
+    await byCombination().screenshot({ path: join(shots, "column-form-three-ply-combinations-1280.png") });
     await screenshots("three-ply");
     expect(h.errors).toEqual([]);
   }, 4 * SLOW);
