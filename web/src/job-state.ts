@@ -74,8 +74,8 @@ export class JobState {
   }
 }
 
-const lists = ["materials", "parts", "connectors", "beam.loads", "beam.spans", "fastening.joints"];
-const records = ["project", "member", "beam", "fastening", "fastening.default", "spacing", "combinations"];
+const lists = ["materials", "parts", "connectors", "beam.loads", "beam.spans", "fastening.joints", "compression.loads"];
+const records = ["project", "member", "beam", "fastening", "fastening.default", "spacing", "combinations", "compression"];
 
 /**
  * Whether a parsed file can be opened in the form: a stitchplan job whose lists are lists and whose

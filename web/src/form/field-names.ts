@@ -82,6 +82,7 @@ const names: Record<string, FieldName> = {
   "material.tensileStrength": { label: "Tensile strength F_u" },
   rollingShear: { label: "Rolling shear strength" },
   compressionPerp: { label: "Compression ⊥ grain", hint: "F_c⊥ / f_c,90: bearing of plies at the supports." },
+  "material.compression": { label: "Compression ∥ grain", hint: "F_c / f_c,0: what a column carries." },
   bearingLength: { label: "Bearing length at supports", hint: "3 in (76.2 mm) when empty." },
   // Shapes
   b: { label: "b" },
@@ -99,6 +100,16 @@ const names: Record<string, FieldName> = {
   flange: { label: "flange", values: { top: "top", bottom: "bottom" } },
   heel: { label: "heel", values: { "bottom-left": "bottom left", "bottom-right": "bottom right", "top-left": "top left", "top-right": "top right" } },
   designation: { label: "designation" },
+  // Column (job.compression)
+  eccentricity: { label: "Eccentricity e" },
+  ends: { label: "End conditions" },
+  K: { label: "K_e" },
+  bracedAt: { label: "Brace point" },
+  rule: { label: "Built-up column rule" },
+  packing: { label: "Packing part" },
+  packSpacing: { label: "Pack spacing l_1" },
+  packLength: { label: "Pack length l_2" },
+  gammaM: { label: "Timber γ_M" },
 };
 
 export function fieldName(key: string, scope?: string): FieldName {

@@ -12,6 +12,7 @@ const items: Record<string, string> = {
   "fastening.joints": "Joint fastening",
   "fastening.default.provided.zones": "Zone",
   "fastening.default.provided.positions": "Row position",
+  "compression.loads": "Axial load",
 };
 
 /** Fields and groups named by the form, not by their key. */
@@ -29,6 +30,12 @@ const places: Record<string, string> = {
   spacing: "Spacing limits and module",
   combinations: "Load combinations",
   compositeAction: "Composite action",
+  compression: "Column (axial compression)",
+  "compression.x": "Buckling about x",
+  "compression.y": "Buckling about y",
+  "compression.spaced": "Spaced column",
+  "compression.loads": "Axial loads",
+  "compression.loads.category": "category",
   shape: "shape",
   strength: "strength",
   place: "placed against",
@@ -37,6 +44,9 @@ const places: Record<string, string> = {
   P: "P",
   at: "at",
 };
+
+/** Groups said even on the way to a field, since the field's name alone does not tell them apart. */
+const saidGroups = new Set(["compression.x", "compression.y", "compression.spaced"]);
 
 /**
  * A field path of the job ("parts[2].shape.b") in the form's own words ("Part 3 shape b"), for an issue
@@ -57,7 +67,7 @@ export function pathInWords(path: string): string {
       continue;
     }
     // A group on the way to the field ("beam", "fastening") is said by the field's own name.
-    if (places[prefix] && n < pieces.length - 1 && !indices.length && !words.length) continue;
+    if (places[prefix] && n < pieces.length - 1 && !indices.length && !words.length && !saidGroups.has(prefix)) continue;
     words.push(places[prefix] ?? places[key] ?? fieldName(key).label);
     if (indices.length) words.push(indices.join("."));
   }
@@ -73,5 +83,6 @@ export function plainMessage(message: string): string {
   const wrong = /^must be an? (\w+), not (.*)$/.exec(message);
   if (wrong) return wrong[1] === "object" ? "is not filled in the way this field needs; choose or enter it again" : `must be ${thing(wrong[1]!)}, not ${wrong[2]}`;
   if (message === "does not match any of the accepted forms") return "is not one of the choices this field accepts; choose it again";
-  return message;
+  // The service names some places by their key in the file; the form names them as it shows them.
+  return message.replace("or define it in beam.categories", "or add it under Load categories of your own").replace("a spaced column (compression.spaced) needs", "a spaced column needs");
 }

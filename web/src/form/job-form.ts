@@ -2,6 +2,7 @@ import type { DesignResult } from "../../../core/schema/result.js";
 import type { JobSchema } from "../job-schema.js";
 import type { JobState } from "../job-state.js";
 import { checkStep } from "./check-step.js";
+import { columnStep } from "./column-step.js";
 import { combinationsStep } from "./combinations-step.js";
 import { compositeStep } from "./composite-step.js";
 import { connectorsStep } from "./connectors-step.js";
@@ -15,7 +16,7 @@ import { projectStep } from "./project-step.js";
 import { spacingStep } from "./spacing-step.js";
 
 /** In the order a person thinks a member through. */
-const steps = [projectStep, materialsStep, partsStep, connectorsStep, jointsStep, loadsStep, combinationsStep, checkStep, spacingStep, compositeStep];
+const steps = [projectStep, materialsStep, partsStep, connectorsStep, jointsStep, loadsStep, columnStep, combinationsStep, checkStep, spacingStep, compositeStep];
 /** Steps drawn from the last result (the joints it found; whether the section is side-by-side plies), drawn again when those change. */
 const fromResult = new Set<(typeof steps)[number]>([jointsStep, loadsStep, checkStep]);
 
