@@ -107,6 +107,11 @@ export interface ColumnRule {
   design: (c: ColumnJob) => ColumnDesign;
 }
 
+/** A rule's design with nothing worked out yet: what every rule fills, or returns as it is with the reason it does not apply. */
+export function designStart(rule: Pick<ColumnRule, "id" | "title" | "standard">, c: ColumnJob, conditions: ColumnDesign["conditions"], notes: string[] = []): Omit<ColumnDesign, "applies" | "reason"> {
+  return { rule: rule.id, title: rule.title, standard: rule.standard, conditions, height: c.height, axes: [], combinations: [], governing: "", checks: [], joints: [], steps: [], notes };
+}
+
 /** K_e and the longest unbraced length about one axis: with brace points every segment is taken at K ≥ 1 [CP]. */
 export function columnAxis(axis: Axis, spec: BucklingAxis, height: number): ColumnAxis {
   const ends = spec.ends ?? "pinned-pinned";

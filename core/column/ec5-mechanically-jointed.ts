@@ -1,9 +1,9 @@
 import { gammaFactor, jointedResponse } from "../composite/gamma-method.js";
 import { rectangularLayer, type FlangeName, type JointedSection } from "../composite/jointed-section.js";
 import { ec5DurationOf, ec5Kmod } from "../connector/timber/ec5-factors.js";
-import type { ColumnResult, MemberCheck } from "../schema/result.js";
+import type { MemberCheck } from "../schema/result.js";
 import { inJobUnits } from "../units/format.js";
-import { columnCheck, finiteInteraction, step, type Axis, type ColumnDesign, type ColumnJob, type ColumnJointDemand, type ColumnRule } from "./column-rules.js";
+import { columnCheck, finiteInteraction, step, type Axis, type ColumnDesign, type ColumnJob, type ColumnJointDemand, type ColumnRule, designStart } from "./column-rules.js";
 import { solidSecondMoment, timberLaminations } from "./timber-laminations.js";
 
 const REF = "EN 1995-1-1 Annex C [M]";
@@ -39,20 +39,7 @@ function design(c: ColumnJob): ColumnDesign {
     { condition: "every joint's connectors give a slip modulus K_u", met: c.joints.length > 0 && c.joints.every((j) => j.slip !== null && j.spacing !== null), clause: "EN 1995-1-1 §7.1, Annex B [M]" },
     { condition: "the basis is factored (design values)", met: c.job.basis === "factored", clause: "EN 1990 §6.4 [M]" },
   );
-  const base = {
-    rule: "en1995-annex-c",
-    title: ec5MechanicallyJointed.title,
-    standard: ec5MechanicallyJointed.standard,
-    conditions,
-    height: c.height,
-    axes: [] as ColumnResult["axes"],
-    combinations: [] as ColumnResult["combinations"],
-    governing: "",
-    checks: [] as MemberCheck[],
-    joints: [] as ColumnJointDemand[],
-    steps: [] as ColumnResult["steps"],
-    notes: ["The laminations here must touch; spaced columns with packs or gussets (Annex C.3) take compression.spaced (ec5-spaced.ts)."],
-  };
+  const base = designStart(ec5MechanicallyJointed, c, conditions, ["The laminations here must touch; spaced columns with packs or gussets (Annex C.3) take compression.spaced (ec5-spaced.ts)."]);
   const unmet = conditions.filter((x) => !x.met);
   if (unmet.length > 0 || l === null) return { ...base, applies: false, reason: `outside EN 1995-1-1 Annex C as built here: ${unmet.map((x) => x.condition).join("; ")}.` };
   const units = c.job.units;

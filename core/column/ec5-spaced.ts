@@ -1,9 +1,9 @@
 import { ec5DurationOf, ec5Kmod, type Ec5Duration } from "../connector/timber/ec5-factors.js";
 import type { Connector } from "../connector/registry.js";
-import type { ColumnResult, MemberCheck } from "../schema/result.js";
+import type { MemberCheck } from "../schema/result.js";
 import { inJobUnits } from "../units/format.js";
 import { exceeds, fallsShort } from "../units/limits.js";
-import { columnCheck, finiteInteraction, step, type Axis, type ColumnDesign, type ColumnJob, type ColumnJointDemand, type ColumnRule } from "./column-rules.js";
+import { columnCheck, finiteInteraction, step, type Axis, type ColumnDesign, type ColumnJob, type ColumnJointDemand, type ColumnRule, designStart } from "./column-rules.js";
 import { ec5BucklingFactor, ec5ImperfectionShear } from "./ec5-mechanically-jointed.js";
 import { rectGeometry } from "./steel-rules.js";
 import type { Condition } from "./timber-laminations.js";
@@ -70,23 +70,10 @@ function design(c: ColumnJob): ColumnDesign {
   const packs = c.section.parts.filter((p) => packing.has(p.id));
   const units = c.job.units;
   const len = (mm: number) => inJobUnits(mm, "length", units);
-  const base = {
-    rule: "en1995-c3-spaced",
-    title: ec5Spaced.title,
-    standard: ec5Spaced.standard,
-    conditions: [] as Condition[],
-    height: c.height,
-    axes: [] as ColumnResult["axes"],
-    combinations: [] as ColumnResult["combinations"],
-    governing: "",
-    checks: [] as MemberCheck[],
-    joints: [] as ColumnJointDemand[],
-    steps: [] as ColumnResult["steps"],
-    notes: [
-      "The packs (or gussets) are modelled over the whole length; their connectors are needed only over each pack's length l_2, at the spacing the schedule gives there. The end packs are taken at the column's ends (C.3.1 [M]): confirm on the drawings, and that the end packs, whose connectors start at the end distance, still hold at least 4 nails (2 bolts) per shear plane.",
-      "Not checked here: the packs or gussets themselves under T_d (shear along a pack, a gusset's bending), and glued packs.",
-    ],
-  };
+  const base = designStart(ec5Spaced, c, [] as Condition[], [
+    "The packs (or gussets) are modelled over the whole length; their connectors are needed only over each pack's length l_2, at the spacing the schedule gives there. The end packs are taken at the column's ends (C.3.1 [M]): confirm on the drawings, and that the end packs, whose connectors start at the end distance, still hold at least 4 nails (2 bolts) per shear plane.",
+    "Not checked here: the packs or gussets themselves under T_d (shear along a pack, a gusset's bending), and glued packs.",
+  ]);
   const conditions = base.conditions;
   const clause = "EN 1995-1-1 C.3.1 [M]";
   conditions.push(

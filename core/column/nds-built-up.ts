@@ -2,10 +2,10 @@ import { dimensions as nailDimensions } from "../connector/nail.js";
 import { MM_PER_IN } from "../connector/quantity-text.js";
 import { diameterOf as boltDiameter } from "../connector/timber-bolt.js";
 import { ndsLoadDurationFactor } from "../connector/timber/nds-adjustment.js";
-import type { ColumnResult, MemberCheck } from "../schema/result.js";
+import type { MemberCheck } from "../schema/result.js";
 import { inJobUnits } from "../units/format.js";
 import { exceeds, fallsShort } from "../units/limits.js";
-import { columnCheck, finiteInteraction, step, type Axis, type ColumnDesign, type ColumnJob, type ColumnJointDemand, type ColumnRule } from "./column-rules.js";
+import { columnCheck, finiteInteraction, step, type Axis, type ColumnDesign, type ColumnJob, type ColumnJointDemand, type ColumnRule, designStart } from "./column-rules.js";
 import { solidSecondMoment, timberLaminations } from "./timber-laminations.js";
 
 
@@ -75,20 +75,7 @@ function design(c: ColumnJob): ColumnDesign {
     { condition: "the laminations are nailed or bolted (NDS-2018 nails or bolts), all joints alike", met: c.joints.length > 0 && fasteners.every((f) => f !== null) && kinds.size === 1, clause: "NDS-2018 §15.3.3, §15.3.4 [M]" },
     { condition: `the basis is allowable (C_D) or factored (K_F·φ·λ)`, met: true, clause: "NDS-2018 §2.3 [M]" },
   );
-  const base = {
-    rule: "nds-15.3",
-    title: ndsBuiltUp.title,
-    standard: ndsBuiltUp.standard,
-    conditions,
-    height: c.height,
-    axes: [] as ColumnResult["axes"],
-    combinations: [] as ColumnResult["combinations"],
-    governing: "",
-    checks: [] as MemberCheck[],
-    joints: [] as ColumnJointDemand[],
-    steps: [] as ColumnResult["steps"],
-    notes: [] as string[],
-  };
+  const base = designStart(ndsBuiltUp, c, conditions);
   const unmet = conditions.filter((x) => !x.met);
   if (unmet.length > 0 || l === null) {
     return {

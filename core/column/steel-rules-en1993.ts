@@ -5,7 +5,7 @@ import type { MemberCheck, WorkingLine } from "../schema/result.js";
 import type { PlacedPart } from "../section/section-model.js";
 import { inJobUnits } from "../units/format.js";
 import { exceeds } from "../units/limits.js";
-import { columnCheck, step, type Axis, type ColumnDesign, type ColumnJob, type ColumnJointDemand, type ColumnRule } from "./column-rules.js";
+import { columnCheck, step, type Axis, type ColumnDesign, type ColumnJob, type ColumnJointDemand, type ColumnRule, designStart } from "./column-rules.js";
 import { en1993CloselySpacedLimit, en1993CloselySpacedMember } from "./steel-built-up-en1993.js";
 import { EN1993_GAMMA_M1, en1993FlexuralBuckling, type BucklingCurve } from "./steel-compression.js";
 import { allowedSpacings } from "../spacing/allowed-spacings.js";
@@ -78,20 +78,7 @@ function designClosely(c: ColumnJob): ColumnDesign {
     "torsional and flexural-torsional buckling (EN 1993-1-1 §6.3.1.4) of the angles or channels",
     "buckling of one component between interconnections (within 15 i_min the integral member's check stands for it, Table 6.9 [M])",
   ];
-  const base = {
-    rule: "en1993-6.4",
-    title: en1993Closely.title,
-    standard: en1993Closely.standard,
-    conditions,
-    height: c.height,
-    axes: [] as ColumnDesign["axes"],
-    combinations: [] as ColumnDesign["combinations"],
-    governing: "",
-    checks: [] as MemberCheck[],
-    joints: [] as ColumnJointDemand[],
-    steps: [] as WorkingLine[],
-    notes: [] as string[],
-  };
+  const base = designStart(en1993Closely, c, conditions);
   const unmet = conditions.filter((x) => !x.met);
   if (unmet.length > 0) {
     const basisNote = factored ? "" : `basis: set "basis" to "factored" (design values, γ_M1); EN 1993-1-1 §6.4 is not applied on an allowable basis. `;

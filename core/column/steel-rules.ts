@@ -7,7 +7,7 @@ import { allowedSpacings } from "../spacing/allowed-spacings.js";
 import { spacingPractice } from "../spacing/spacing-defaults.js";
 import { inJobUnits } from "../units/format.js";
 import { exceeds } from "../units/limits.js";
-import { columnCheck, step, type Axis, type ColumnDesign, type ColumnJob, type ColumnJointDemand, type ColumnRule } from "./column-rules.js";
+import { columnCheck, step, type Axis, type ColumnDesign, type ColumnJob, type ColumnJointDemand, type ColumnRule, designStart } from "./column-rules.js";
 import { aiscFlexuralTorsional, doubleAngleSection } from "./double-angle.js";
 import { aiscBuiltUpColumn, type AiscBuiltUpColumn, type BuiltUpComponents, type IntermediateConnection } from "./steel-built-up.js";
 import { aiscH1Interaction } from "./steel-interaction.js";
@@ -130,20 +130,7 @@ function designE6(c: ColumnJob): ColumnDesign {
     "the strength of the intermediate and end connectors themselves: AISC 360-16 §E6 gives no connector force for flexural buckling",
     "the gusset plates and the end connections' own design",
   ];
-  const base = {
-    rule: "aisc-e6",
-    title: aiscE6.title,
-    standard: aiscE6.standard,
-    conditions,
-    height: c.height,
-    axes: [] as ColumnDesign["axes"],
-    combinations: [] as ColumnDesign["combinations"],
-    governing: "",
-    checks: [] as MemberCheck[],
-    joints: [] as ColumnJointDemand[],
-    steps: [] as WorkingLine[],
-    notes: [] as string[],
-  };
+  const base = designStart(aiscE6, c, conditions);
   const unmet = conditions.filter((x) => !x.met);
   if (unmet.length > 0) return { ...base, applies: false, reason: `outside AISC 360-16 §E6 as this program applies it: ${unmet.map((x) => x.condition).join("; ")}.` };
 
