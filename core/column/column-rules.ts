@@ -7,6 +7,8 @@ import type { JobDocument } from "../schema/job.js";
 import type { ColumnResult, Combination, MemberCheck, WorkingLine } from "../schema/result.js";
 import type { JointPlane } from "../section/joints.js";
 import type { SectionModel } from "../section/section-model.js";
+import { allowedSpacings } from "../spacing/allowed-spacings.js";
+import { spacingPractice } from "../spacing/spacing-defaults.js";
 
 export type Axis = "x" | "y";
 
@@ -110,6 +112,17 @@ export interface ColumnRule {
 /** A rule's design with nothing worked out yet: what every rule fills, or returns as it is with the reason it does not apply. */
 export function designStart(rule: Pick<ColumnRule, "id" | "title" | "standard">, c: ColumnJob, conditions: ColumnDesign["conditions"], notes: string[] = []): Omit<ColumnDesign, "applies" | "reason"> {
   return { rule: rule.id, title: rule.title, standard: rule.standard, conditions, height: c.height, axes: [], combinations: [], governing: "", checks: [], joints: [], steps: [], notes };
+}
+
+/**
+ * The closest spacing a joint's schedule can build, mm: the connectors' least pitch (`leastPitch`, by the rule's
+ * standard) and the job's least spacing, rounded up to an allowed spacing of the job's module or preferred list.
+ */
+export function closestBuildable(c: ColumnJob, aMax: number, leastPitch: (connector: Connector) => number): number {
+  const least = Math.max(c.job.spacing.minimum ?? 0, ...c.joints.map((j) => leastPitch(j.connector)));
+  const module = c.job.spacing.preferred ? null : (c.job.spacing.module ?? spacingPractice(c.job).module);
+  const allowed = allowedSpacings({ module, preferred: c.job.spacing.preferred ?? null, min: least, max: 2 * Math.max(least, aMax) + (module ?? 0) });
+  return allowed[0] ?? Math.max(least, aMax);
 }
 
 /** K_e and the longest unbraced length about one axis: with brace points every segment is taken at K ≥ 1 [CP]. */

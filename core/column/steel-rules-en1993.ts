@@ -5,11 +5,9 @@ import type { MemberCheck, WorkingLine } from "../schema/result.js";
 import type { PlacedPart } from "../section/section-model.js";
 import { inJobUnits } from "../units/format.js";
 import { exceeds } from "../units/limits.js";
-import { columnCheck, step, type Axis, type ColumnDesign, type ColumnJob, type ColumnJointDemand, type ColumnRule, designStart } from "./column-rules.js";
+import { columnCheck, step, type Axis, type ColumnDesign, type ColumnJob, type ColumnJointDemand, type ColumnRule, closestBuildable, designStart } from "./column-rules.js";
 import { en1993CloselySpacedLimit, en1993CloselySpacedMember } from "./steel-built-up-en1993.js";
 import { EN1993_GAMMA_M1, en1993FlexuralBuckling, type BucklingCurve } from "./steel-compression.js";
-import { allowedSpacings } from "../spacing/allowed-spacings.js";
-import { spacingPractice } from "../spacing/spacing-defaults.js";
 import { rectGeometry } from "./steel-rules.js";
 
 /**
@@ -29,14 +27,6 @@ function leastPitch(c: Connector): number {
   if (c.kind !== "steel-bolt") return 0;
   const d = steelBoltDiameter(c) ?? 12;
   return c.minSpacing ?? 2.2 * (metricBoltSize(c.size ?? "")?.d0 ?? d + 2);
-}
-
-/** The closest spacing the schedule can build: the bolts' least pitch and the job's least spacing, up to an allowed spacing, mm. */
-function closestBuildable(c: ColumnJob, aMax: number): number {
-  const least = Math.max(c.job.spacing.minimum ?? 0, ...c.joints.map((j) => leastPitch(j.connector)));
-  const module = c.job.spacing.preferred ? null : (c.job.spacing.module ?? spacingPractice(c.job).module);
-  const allowed = allowedSpacings({ module, preferred: c.job.spacing.preferred ?? null, min: least, max: 2 * Math.max(least, aMax) + (module ?? 0) });
-  return allowed[0] ?? Math.max(least, aMax);
 }
 
 export const en1993Closely: ColumnRule = {
@@ -128,7 +118,7 @@ function designClosely(c: ColumnJob): ColumnDesign {
   // Table 6.9: the largest spacing; the schedule cannot build one closer than its least buildable spacing.
   const limit = en1993CloselySpacedLimit({ chordMinRadius: iMin, kind: "in contact or through packing plates", spacing: 1 });
   const aMax = limit.largest;
-  const aLow = closestBuildable(c, aMax);
+  const aLow = closestBuildable(c, aMax, leastPitch);
   const aLimit = aLow > aMax ? aLow : aMax;
   const largestScheduled = c.joints.map((j) => j.spacing).filter((s): s is number => s !== null);
   const a = Math.min(aLimit, ...largestScheduled);

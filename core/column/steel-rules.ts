@@ -3,11 +3,9 @@ import type { Connector } from "../connector/registry.js";
 import type { MemberCheck, WorkingLine } from "../schema/result.js";
 import { rectArea, type Rect } from "../section/rectangles.js";
 import type { PlacedPart } from "../section/section-model.js";
-import { allowedSpacings } from "../spacing/allowed-spacings.js";
-import { spacingPractice } from "../spacing/spacing-defaults.js";
 import { inJobUnits } from "../units/format.js";
 import { exceeds } from "../units/limits.js";
-import { columnCheck, step, type Axis, type ColumnDesign, type ColumnJob, type ColumnJointDemand, type ColumnRule, designStart } from "./column-rules.js";
+import { columnCheck, step, type Axis, type ColumnDesign, type ColumnJob, type ColumnJointDemand, type ColumnRule, closestBuildable, designStart } from "./column-rules.js";
 import { aiscFlexuralTorsional, doubleAngleSection } from "./double-angle.js";
 import { aiscBuiltUpColumn, type AiscBuiltUpColumn, type BuiltUpComponents, type IntermediateConnection } from "./steel-built-up.js";
 import { aiscH1Interaction } from "./steel-interaction.js";
@@ -95,13 +93,8 @@ function doubleAngleOf(parts: PlacedPart[], c: ColumnJob) {
   return { angle: { backLeg: a.d, outstandingLeg: a.b, thickness: a.t }, gap };
 }
 
-/** The smallest spacing a joint's schedule can build: the bolts' least spacing and the job's, up to an allowed spacing, mm. */
-function closestBuildable(c: ColumnJob, aMax: number): number {
-  const least = Math.max(c.job.spacing.minimum ?? 0, ...c.joints.map((j) => (j.connector.kind === "steel-bolt" ? (j.connector.minSpacing ?? 3 * (steelBoltDiameter(j.connector) ?? 0)) : 0)));
-  const module = c.job.spacing.preferred ? null : (c.job.spacing.module ?? spacingPractice(c.job).module);
-  const allowed = allowedSpacings({ module, preferred: c.job.spacing.preferred ?? null, min: least, max: 2 * Math.max(least, aMax) + (module ?? 0) });
-  return allowed[0] ?? Math.max(least, aMax);
-}
+/** The least pitch of a bolt where the job gives none: 3d, the preferred pitch of AISC 360-16 §J3.3 (2⅔d its least) [M]. */
+const leastPitch = (connector: ColumnJob["joints"][number]["connector"]) => (connector.kind === "steel-bolt" ? (connector.minSpacing ?? 3 * (steelBoltDiameter(connector) ?? 0)) : 0);
 
 export const aiscE6: ColumnRule = {
   id: "aisc-e6",
@@ -218,7 +211,7 @@ function designE6(c: ColumnJob): ColumnDesign {
   // Closer than a_max only where it raises the strength, and no closer than the closest spacing the schedule can build
   // (the bolts' least spacing, c.minSpacing or 3d, AISC 360-16 §J3.3, rounded up to the spacing module): a strut that
   // fails there gets its connectors there and fails, so more load never means fewer connectors.
-  const aLow = closestBuildable(c, aMax);
+  const aLow = closestBuildable(c, aMax, leastPitch);
   const uMax = utilisation(strength(aMax));
   if (!(aLow < aMax)) {
     aLimit = aLow;
