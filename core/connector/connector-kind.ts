@@ -42,6 +42,10 @@ export interface ConnectorContext {
   categories: string[];
   /** NDS LRFD time effect factor λ of the combination's form (NDS-2018 Table N3), where the combination gives it. */
   timeEffect?: { value: number; reason: string } | undefined;
+  /**
+   * For messages only: a resistance is worked out once per contact line and loading (duration, categories,
+   * time effect; `memoisedByLoading`) and reused for every combination of that loading, so it must not depend on this.
+   */
   combinationName: string;
   basis: "allowable" | "factored";
   /** The two parts at the contact line: head (side) member first, then the main member. In double shear read `double` instead. */
