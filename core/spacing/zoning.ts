@@ -49,15 +49,28 @@ export function planZones(p: ZoningProblem): ZonePlan {
   const rowsOf = new Float64Array(size);
   const spacingOf = new Float64Array(size);
   const feasibleOf = new Uint8Array(size);
+  // Index of the spacing found for each zone that ends before the last boundary (−1: none carries, −2: not evaluated).
+  // For one start, a longer zone's demand over its reach is no smaller, so its spacing is no larger: its search starts
+  // at the spacing of the nearest shorter zone evaluated (the largest spacing that carries is the same).
+  const indexOf = new Int32Array(size).fill(-2);
   const zoneCost = (i: number, j: number): number => {
     const key = i * (n + 1) + j;
     if (Number.isNaN(cost[key]!)) {
-      const z = evaluateZone(p, g[i]!, g[j]!, i === 0, j === n);
+      let ceiling = p.spacings.length - 1;
+      if (j < n) {
+        for (let k = key - 1; k > i * (n + 1) + i; k--) {
+          if (indexOf[k]! === -2) continue;
+          ceiling = indexOf[k]!;
+          break;
+        }
+      }
+      const z = zoneAt(p, g[i]!, g[j]!, i === 0, j === n, ceiling);
       cost[key] = z ? z.cost : Infinity;
       if (z) {
         rowsOf[key] = z.rows;
         spacingOf[key] = z.spacing;
         feasibleOf[key] = z.feasible ? 1 : 0;
+        if (j < n) indexOf[key] = z.index;
       }
     }
     return cost[key]!;
@@ -122,6 +135,12 @@ function mergeEqual(zones: PlannedZone[]): PlannedZone[] {
 
 /** Spacing, feasibility and row count of one candidate zone [a, b]; null when the zone is not allowed. Exported for the optimality test. */
 export function evaluateZone(p: ZoningProblem, a: number, b: number, first: boolean, last: boolean) {
+  const z = zoneAt(p, a, b, first, last, p.spacings.length - 1);
+  return z && { cost: z.cost, rows: z.rows, spacing: z.spacing, feasible: z.feasible };
+}
+
+/** evaluateZone, knowing that no spacing above index `ceiling` carries the zone. */
+function zoneAt(p: ZoningProblem, a: number, b: number, first: boolean, last: boolean, ceiling: number) {
   const L = p.length;
   const e = p.endDistance;
   const fullLength = p.mirrored && last ? L - 2 * a : b - a;
@@ -132,14 +151,15 @@ export function evaluateZone(p: ZoningProblem, a: number, b: number, first: bool
   if (!wholeMember && fullLength < p.minZoneLength - tol) return null;
   const start = first ? e : a;
   if (!last && b <= start + tol) return null;
-  const spacing = zoneSpacing(p, a, b, first, last);
+  const index = ceiling < 0 ? -1 : zoneSpacing(p, a, b, first, last, true, ceiling);
+  const spacing = index < 0 ? undefined : p.spacings[index]!;
   const s = spacing ?? p.spacings[0]!;
   let rows: number;
   if (p.mirrored && last) rows = (Math.ceil((L - 2 * start - tol) / s - 1e-9) + 1) / 2;
   else if (last) rows = Math.ceil((L - e - start - tol) / s - 1e-9) + 1;
   else rows = Math.ceil((b - start - tol) / s - 1e-9);
   const cost = spacing === undefined ? rows + INFEASIBLE_PENALTY * (b - a) : rows;
-  return { cost, rows, spacing: s, feasible: spacing !== undefined };
+  return { cost, rows, spacing: s, feasible: spacing !== undefined, index };
 }
 
 /**
@@ -147,19 +167,21 @@ export function evaluateZone(p: ZoningProblem, a: number, b: number, first: bool
  * larger than the zone's spacing, the end row governs the zone. Undefined when no spacing carries it.
  */
 export function spacingWithoutEndRow(p: ZoningProblem, a: number, b: number, first: boolean, last: boolean): number | undefined {
-  return zoneSpacing(p, a, b, first, last, false);
+  const i = zoneSpacing(p, a, b, first, last, false, p.spacings.length - 1);
+  return i < 0 ? undefined : p.spacings[i];
 }
 
-function zoneSpacing(p: ZoningProblem, a: number, b: number, first: boolean, last: boolean, endRow = true): number | undefined {
+/** Index of the largest spacing, at most spacings[ceiling], that carries the zone; −1 when none does. */
+function zoneSpacing(p: ZoningProblem, a: number, b: number, first: boolean, last: boolean, endRow: boolean, ceiling: number): number {
   // Start from the largest spacing the zone's own demand allows; the rows' reach into the neighbours only
   // tightens as s grows, so the largest spacing that carries its demand is found by bisection.
   const peak = p.demand(a, b);
-  const topIndex = peak > 0 ? indexAtMost(p.spacings, 1 / peak) : p.spacings.length - 1;
-  if (topIndex < 0) return undefined;
+  const topIndex = Math.min(ceiling, peak > 0 ? indexAtMost(p.spacings, 1 / peak) : p.spacings.length - 1);
+  if (topIndex < 0) return -1;
   // Usually the zone's own demand governs and the first candidate carries it; otherwise the answer is
   // mostly a step or two below: step down 1, 2, 4, … until a spacing carries, then bisect the bracket.
   const carries = (i: number) => zoneCarries(p, a, b, first, last, p.spacings[i]!, endRow);
-  if (carries(topIndex)) return p.spacings[topIndex];
+  if (carries(topIndex)) return topIndex;
   let failing = topIndex;
   let carrying = -1;
   for (let step = 1; ; step *= 2) {
@@ -169,14 +191,14 @@ function zoneSpacing(p: ZoningProblem, a: number, b: number, first: boolean, las
       break;
     }
     failing = i;
-    if (i === 0) return undefined;
+    if (i === 0) return -1;
   }
   while (failing - carrying > 1) {
     const mid = (failing + carrying) >> 1;
     if (carries(mid)) carrying = mid;
     else failing = mid;
   }
-  return p.spacings[carrying];
+  return carrying;
 }
 
 /** Whether rows at spacing s over [a, b] carry the demand over their reach, the end rows' included. */
@@ -210,17 +232,23 @@ export function roundStep(end: number, system: "si" | "us", cells = 48): number 
 
 /** Range maximum over grid cells by a sparse table; queries widen to whole cells (conservative). */
 export class CellMaxima {
-  private readonly table: number[][];
+  private readonly table: Float64Array[];
+  /** Cells per mm at the grid's first pitch: a first guess of where a point falls, corrected against the grid. */
+  private readonly perMm: number;
 
   constructor(
     private readonly grid: number[],
     cellMax: number[],
   ) {
-    this.table = [cellMax];
+    let prev = Float64Array.from(cellMax);
+    this.table = [prev];
     for (let w = 1; 2 * w <= cellMax.length; w *= 2) {
-      const prev = this.table[this.table.length - 1]!;
-      this.table.push(prev.slice(0, prev.length - w).map((v, i) => Math.max(v, prev[i + w]!)));
+      const next = new Float64Array(prev.length - w);
+      for (let i = 0; i < next.length; i++) next[i] = Math.max(prev[i]!, prev[i + w]!);
+      this.table.push((prev = next));
     }
+    const pitch = grid.length > 1 ? grid[1]! - grid[0]! : 0;
+    this.perMm = pitch > 0 ? 1 / pitch : 0;
   }
 
   /** Max over the cells that meet [a, b], clipped to the grid. */
@@ -229,32 +257,26 @@ export class CellMaxima {
     const lo = Math.max(a, g[0]!);
     const hi = Math.min(b, g[g.length - 1]!);
     if (hi < lo) return 0;
-    const i = Math.max(0, upperBound(g, lo) - 1);
-    const j = Math.min(g.length - 2, Math.max(i, lowerBound(g, hi) - 1));
+    const i = Math.max(0, this.countAtMost(lo, false) - 1);
+    const j = Math.min(g.length - 2, Math.max(i, this.countAtMost(hi, true) - 1));
     const level = 31 - Math.clz32(j - i + 1);
     const row = this.table[level]!;
     return Math.max(row[i]!, row[j - (1 << level) + 1]!);
   }
-}
 
-function upperBound(xs: number[], x: number): number {
-  let lo = 0;
-  let hi = xs.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >> 1;
-    if (xs[mid]! <= x) lo = mid + 1;
-    else hi = mid;
+  /** How many grid points lie at or below x (below x when `strictly`): a binary search's answer, from a guess. */
+  private countAtMost(x: number, strictly: boolean): number {
+    const g = this.grid;
+    let k = Math.floor((x - g[0]!) * this.perMm) + 1;
+    if (!(k >= 0)) k = 0;
+    else if (k > g.length) k = g.length;
+    if (strictly) {
+      while (k > 0 && g[k - 1]! >= x) k--;
+      while (k < g.length && g[k]! < x) k++;
+    } else {
+      while (k > 0 && g[k - 1]! > x) k--;
+      while (k < g.length && g[k]! <= x) k++;
+    }
+    return k;
   }
-  return lo;
-}
-
-function lowerBound(xs: number[], x: number): number {
-  let lo = 0;
-  let hi = xs.length;
-  while (lo < hi) {
-    const mid = (lo + hi) >> 1;
-    if (xs[mid]! < x) lo = mid + 1;
-    else hi = mid;
-  }
-  return lo;
 }
