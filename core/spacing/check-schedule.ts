@@ -40,7 +40,14 @@ export function checkSchedule(p: {
   const positions = given ?? placeRows(zones, L, p.endDistance, false, p.minGap ?? 0);
   const rowChecks = verifyRows(positions, p.demand);
   // Each combination on its own, row by row (the rows' utilisations under it alone).
-  const single = p.demand.terms.map((t) => ({ id: t.combination, utilisation: utilisationsUnder(rowChecks, t, L) }));
+  // Terms analysed on the same breaks share their pieces: each row's range of pieces is found once for them.
+  const spans = new Map<number[], RowSpans>();
+  const spansFor = (t: DemandTerm) => {
+    let found = spans.get(t.actions.breaks);
+    if (!found || found.length !== t.actions.length || found.pieces !== t.actions.pieces.length) spans.set(t.actions.breaks, (found = rowSpans(rowChecks, t, L)));
+    return found;
+  };
+  const single = p.demand.terms.map((t) => ({ id: t.combination, utilisation: utilisationsUnder(rowChecks, t, spansFor(t)) }));
   const perCombination = single.map(({ id, utilisation }) => {
     let worst = 0;
     for (let r = 1; r < utilisation.length; r++) if (utilisation[r]! > utilisation[worst]!) worst = r;
@@ -52,17 +59,22 @@ export function checkSchedule(p: {
     rowChecks,
     perCombination,
     zones: zones.map((z, i) => {
-      const rows = rowChecks.filter(inZone(z, i));
-      const worst = rows.reduce<RowUtilisation | undefined>((a, b) => (!a || b.utilisation > a.utilisation ? b : a), undefined);
-      const peak = p.demand.maxOver(z.from, z.to);
       const here = inZone(z, i);
-      const failing = single.filter(({ utilisation }) => rowChecks.some((row, r) => here(row) && utilisation[r]! > 1 + 1e-9)).map((s) => s.id);
+      const inside: number[] = [];
+      let worst: RowUtilisation | undefined;
+      rowChecks.forEach((row, r) => {
+        if (!here(row)) return;
+        inside.push(r);
+        if (!worst || row.utilisation > worst.utilisation) worst = row;
+      });
+      const peak = p.demand.sharedMaxOver(z.from, z.to);
+      const failing = single.filter(({ utilisation }) => inside.some((r) => utilisation[r]! > 1 + 1e-9)).map((s) => s.id);
       return {
         from: z.from,
         to: z.to,
         spacing: z.spacing,
         rows: p.rows,
-        count: rows.length * p.rows * p.lines,
+        count: inside.length * p.rows * p.lines,
         // A demand so small that its spacing overflows asks for no connectors at all (null, as for none).
         requiredSpacing: peak.value > 0 && Number.isFinite(1 / peak.value) ? 1 / peak.value : null,
         utilisation: worst?.utilisation ?? 0,
@@ -74,34 +86,62 @@ export function checkSchedule(p: {
   };
 }
 
+/** Each row's tributary clipped to the member, and the first and last piece of the actions it meets (first −1: none). */
+interface RowSpans {
+  length: number;
+  pieces: number;
+  lo: Float64Array;
+  hi: Float64Array;
+  first: Int32Array;
+  last: Int32Array;
+}
+
+function rowSpans(rows: RowUtilisation[], term: DemandTerm, length: number): RowSpans {
+  const n = rows.length;
+  const out: RowSpans = { length: term.actions.length, pieces: term.actions.pieces.length, lo: new Float64Array(n), hi: new Float64Array(n), first: new Int32Array(n), last: new Int32Array(n) };
+  for (let r = 0; r < n; r++) {
+    const lo = Math.max(0, rows[r]!.from);
+    const hi = Math.min(length, rows[r]!.to);
+    out.lo[r] = lo;
+    out.hi[r] = hi;
+    if (hi < lo) {
+      out.first[r] = -1;
+      out.last[r] = -2;
+      continue;
+    }
+    const [first, last] = piecesMet(term.actions, lo, hi);
+    out.first[r] = first;
+    out.last[r] = last;
+  }
+  return out;
+}
+
 /**
  * Each row's utilisation under one combination alone, as verifyRows with that term only, where it can
  * matter: the worst row and any row above 1. A row whose bound (its tributary × k × the bound on |V| over
  * the pieces it meets) is below both the worst found and 1 is not worked out and reads −1.
  */
-function utilisationsUnder(rows: RowUtilisation[], term: DemandTerm, length: number): Float64Array {
-  const out = new Float64Array(rows.length);
-  const ranges = rows.map((row) => {
-    const lo = Math.max(0, row.from);
-    const hi = Math.min(length, row.to);
-    return { lo, hi, pieces: hi < lo ? null : piecesMet(term.actions, lo, hi) };
-  });
+function utilisationsUnder(rows: RowUtilisation[], term: DemandTerm, spans: RowSpans): Float64Array {
+  const n = rows.length;
+  const out = new Float64Array(n);
   const pieceBounds = shearBounds(term.actions);
-  const bounds = ranges.map(({ pieces }, r) => {
-    if (!pieces) return 0;
+  const bounds = new Float64Array(n);
+  for (let r = 0; r < n; r++) {
+    if (spans.first[r]! < 0) continue;
     let m = 0;
-    for (let p = pieces[0]; p <= pieces[1]; p++) if (pieceBounds[p]! > m) m = pieceBounds[p]!;
-    return (rows[r]!.to - rows[r]!.from) * (term.k * m);
-  });
+    for (let p = spans.first[r]!; p <= spans.last[r]!; p++) if (pieceBounds[p]! > m) m = pieceBounds[p]!;
+    bounds[r] = (rows[r]!.to - rows[r]!.from) * (term.k * m);
+  }
   const exact = (r: number) => {
-    const { lo, hi } = ranges[r]!;
+    const lo = spans.lo[r]!;
+    const hi = spans.hi[r]!;
     const value = hi < lo ? 0 : term.k * maxAbsShear(term.actions, lo, hi).value;
     return (rows[r]!.to - rows[r]!.from) * (value > 0 ? value : 0);
   };
   let lead = 0;
-  for (let r = 1; r < rows.length; r++) if (bounds[r]! > bounds[lead]!) lead = r;
-  let known = rows.length > 0 ? (out[lead] = exact(lead)) : 0;
-  for (let r = 0; r < rows.length; r++) {
+  for (let r = 1; r < n; r++) if (bounds[r]! > bounds[lead]!) lead = r;
+  let known = n > 0 ? (out[lead] = exact(lead)) : 0;
+  for (let r = 0; r < n; r++) {
     if (r === lead) continue;
     if (bounds[r]! < known && bounds[r]! <= 1 + 1e-9) {
       out[r] = -1;

@@ -142,12 +142,17 @@ export class DemandCurve {
 
   /** Exact maximum over [a, b] ∩ [0, L], both sides of every jump counted. */
   maxOver(a: number, b: number): DemandPeak {
+    return { ...this.sharedMaxOver(a, b) };
+  }
+
+  /** maxOver(a, b) as kept for the next asker: read it, never change it. */
+  sharedMaxOver(a: number, b: number): Readonly<DemandPeak> {
     // Rows that stay put while a schedule is tightened ask again for the same tributary: answered once.
     let byEnd = this.peaks.get(a);
     if (!byEnd) this.peaks.set(a, (byEnd = new Map()));
     let peak = byEnd.get(b);
     if (!peak) byEnd.set(b, (peak = this.peakOver(a, b)));
-    return { ...peak };
+    return peak;
   }
 
   private readonly peaks = new Map<number, Map<number, DemandPeak>>();

@@ -89,7 +89,7 @@ export function designSchedule(p: ScheduleProblem): ScheduleDesign {
   const mirrored = p.symmetric && demand.isSymmetric();
   const end = mirrored ? L / 2 : L;
   const grid = boundaryGrid(end, roundStep(end, p.system));
-  const cellMax = grid.slice(0, -1).map((a, i) => demand.maxOver(a, grid[i + 1]!).value);
+  const cellMax = grid.slice(0, -1).map((a, i) => demand.sharedMaxOver(a, grid[i + 1]!).value);
   const cells = new CellMaxima(grid, cellMax);
   const query = mirrored
     ? (a: number, b: number) => (b > end ? cells.over(Math.min(a, L - b), end) : cells.over(a, b))

@@ -18,7 +18,7 @@ export function verifyRows(positions: number[], demand: DemandCurve): RowUtilisa
   return positions.map((x, k) => {
     const from = k === 0 ? 0 : (positions[k - 1]! + x) / 2;
     const to = k === positions.length - 1 ? L : (x + positions[k + 1]!) / 2;
-    const peak = demand.maxOver(from, to);
+    const peak = demand.sharedMaxOver(from, to);
     return { x, from, to, utilisation: (to - from) * peak.value, combination: peak.combination };
   });
 }

@@ -83,7 +83,8 @@ export function planZones(p: ZoningProblem): ZonePlan {
   for (let k = 1; k <= half; k++) {
     const current = new Float64Array(n + 1).fill(Infinity);
     const from = new Int32Array(n + 1).fill(-1);
-    for (let j = 1; j <= n; j++) {
+    // The last layer is only read at the member's end (or midspan).
+    for (let j = k === half ? n : 1; j <= n; j++) {
       for (let i = 0; i < j; i++) {
         const before = previous[i]!;
         if (before === Infinity) continue;
