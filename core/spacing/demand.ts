@@ -122,6 +122,16 @@ export class DemandCurve {
     return best;
   }
 
+  /** at(x, side).value, without the peak's record. */
+  private valueAt(x: number, side: Side): number {
+    let best = 0;
+    for (const t of this.terms) {
+      const value = t.k * Math.abs(shearAt(t.actions, x, side));
+      if (value > best) best = value;
+    }
+    return best;
+  }
+
   /** at(x, side).value at every station. */
   valuesAtStations(stations: Station[]): Float64Array {
     const out = new Float64Array(stations.length);
@@ -194,10 +204,18 @@ export class DemandCurve {
 
   private scratch = new Float64Array(0);
 
+  private boundsByTerm: Float64Array[] | undefined;
+
+  /** shearBounds of each term's actions, looked up once for the curve. */
+  private pieceBounds(): Float64Array[] {
+    return (this.boundsByTerm ??= this.terms.map((t) => shearBounds(t.actions)));
+  }
+
   /** Per term, k × a bound on |V| over every piece that meets [lo − tol, hi + tol] (the pieces maxAbsShear looks at). */
   private boundsOver(lo: number, hi: number): Float64Array {
     if (this.scratch.length !== this.terms.length) this.scratch = new Float64Array(this.terms.length);
     const out = this.scratch;
+    const termBounds = this.pieceBounds();
     let breaks: number[] | null = null;
     let first = 0;
     let last = -1;
@@ -208,7 +226,7 @@ export class DemandCurve {
         breaks = actions.breaks;
         [first, last] = piecesMet(actions, lo, hi);
       }
-      const pieceBounds = shearBounds(actions);
+      const pieceBounds = termBounds[i]!;
       let m = 0;
       for (let p = first; p <= last; p++) if (pieceBounds[p]! > m) m = pieceBounds[p]!;
       out[i] = k * m;
@@ -261,7 +279,8 @@ export class DemandCurve {
       // Where every term has the member's breaks, the terms that cannot raise any panel point are skipped
       // (a term's bound over the piece at or below the least value found so far); the maximum is the same.
       if (shared) {
-        this.terms.forEach((t, j) => (bounds[j] = t.k * shearBounds(t.actions)[i]!));
+        const termBounds = this.pieceBounds();
+        this.terms.forEach((t, j) => (bounds[j] = t.k * termBounds[j]![i]!));
         order.sort((p, q) => bounds[q]! - bounds[p]! || p - q);
       }
       let least = 0;
@@ -293,8 +312,8 @@ export class DemandCurve {
     let diff = 0;
     for (let i = 0; i <= samples; i++) {
       const x = (this.length * i) / samples;
-      const left = this.at(x, "right").value;
-      const right = this.at(this.length - x, "left").value;
+      const left = this.valueAt(x, "right");
+      const right = this.valueAt(this.length - x, "left");
       peak = Math.max(peak, left, right);
       diff = Math.max(diff, Math.abs(left - right));
     }
