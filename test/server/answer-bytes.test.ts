@@ -11,7 +11,10 @@ import { rescale, roundSignificant, toCoreUnits, toDisplayUnits } from "../../co
 import { inUnits } from "../../server/design-in-units.js";
 import { performTask } from "../../server/design-tasks.js";
 import { ApiError } from "../../server/errors.js";
+import { physicalRangeIssues } from "../../core/physical-ranges.js";
+import { mutatedJob } from "./fuzz/payloads.js";
 import { answerBefore, answerBeforeFrom } from "./reference/answer-before.js";
+import { physicalRangeIssues as rangeIssuesBefore } from "./reference/ranges-before.js";
 import * as before from "./reference/convert-before.js";
 
 const examples = new URL("../../fixtures/examples/", import.meta.url);
@@ -145,3 +148,24 @@ function nextDown(x: number): number {
   view.setBigUint64(0, view.getBigUint64(0) - 1n);
   return view.getFloat64(0);
 }
+
+describe("the physical-range walk finds what the old walk found", () => {
+  test("the examples with values broken or bent (fuzz bodies that pass the schema)", () => {
+    let compared = 0;
+    let withIssues = 0;
+    fc.assert(
+      fc.property(mutatedJob, ({ job }) => {
+        const parsed = JobDocument.safeParse(job);
+        if (!parsed.success) return;
+        const core = toCoreUnits(JobDocument, parsed.data, parsed.data.units);
+        compared++;
+        const found = physicalRangeIssues(parsed.data, core);
+        if (found.length > 0) withIssues++;
+        expect(found).toEqual(rangeIssuesBefore(parsed.data, core));
+      }),
+      { numRuns: 3000 },
+    );
+    expect(compared).toBeGreaterThan(300);
+    expect(withIssues).toBeGreaterThan(20);
+  });
+});
