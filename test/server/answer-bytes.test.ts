@@ -11,6 +11,7 @@ import { rescale, roundSignificant, toCoreUnits, toDisplayUnits } from "../../co
 import { inUnits } from "../../server/design-in-units.js";
 import { performTask } from "../../server/design-tasks.js";
 import { ApiError } from "../../server/errors.js";
+import { canonicalJson } from "../../core/canonical-json.js";
 import { physicalRangeIssues } from "../../core/physical-ranges.js";
 import { mutatedJob } from "./fuzz/payloads.js";
 import { answerBefore, answerBeforeFrom } from "./reference/answer-before.js";
@@ -167,5 +168,19 @@ describe("the physical-range walk finds what the old walk found", () => {
     );
     expect(compared).toBeGreaterThan(300);
     expect(withIssues).toBeGreaterThan(20);
+  });
+});
+
+describe("the fingerprint's canonical JSON is the old text", () => {
+  test("every example as parsed, and any JSON value with undefined fields and array holes", () => {
+    for (const [name, input] of jobs) {
+      const prepared = prepareJob(input);
+      if (!prepared.ok) throw new Error(name);
+      expect(canonicalJson({ job: prepared.job, schemaVersion: 1 })).toBe(before.canonicalJson({ job: prepared.job, schemaVersion: 1 }));
+    }
+    // eslint-disable-next-line no-sparse-arrays
+    const odd = { b: [1, , undefined, null, -0, NaN, 1e21, "é\u2028"], a: { "\u0000": 1, z: undefined, "": [{}] }, "10": 2, "9": 3 };
+    expect(canonicalJson(odd)).toBe(before.canonicalJson(odd));
+    fc.assert(fc.property(fc.anything({ withSparseArray: true, withNullPrototype: true, withDate: true, withMap: true, withSet: true, withBoxedValues: true, withUnicodeString: true }), (v) => canonicalJson(v) === before.canonicalJson(v)), { numRuns: 5000 });
   });
 });
