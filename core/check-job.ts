@@ -6,11 +6,11 @@ import { plyStretchesOf } from "./fastening/side-load-transfer.js";
 import { physicalRangeIssues } from "./physical-ranges.js";
 import { JobDocument } from "./schema/job.js";
 import { issuesFromZod, type JobIssue } from "./schema/job-issues.js";
-import { connectedGroups, findContacts, findOverlaps } from "./section/contacts.js";
+import { connectedGroups, findContacts, findOverlaps, type ContactLine } from "./section/contacts.js";
 import { memberJoints, type MemberJoint } from "./fastening/member-joints.js";
 import { resolvePlacement } from "./section/place-parts.js";
 import { partExtent, partStretches, sectionStretches } from "./section/stretches.js";
-import { buildSection, positioned } from "./section/section-model.js";
+import { buildSection, positioned, type SectionModel } from "./section/section-model.js";
 import { toCoreUnits } from "./units/convert.js";
 import { inJobUnits } from "./units/format.js";
 
@@ -33,9 +33,9 @@ export function prepareJob(input: unknown): PreparedJob {
   const placement = resolvePlacement(converted.parts);
   if (placement.issues.length > 0) return { ok: false, issues: placement.issues };
   const core = { ...converted, parts: placement.parts };
-  const geometric = checkGeometry(core);
-  if (geometric.length > 0) return { ok: false, issues: geometric };
-  const placed = checkConnectorPlacement(core);
+  const geometric = geometryOf(core);
+  if (geometric.issues.length > 0) return { ok: false, issues: geometric.issues };
+  const placed = checkConnectorPlacement(core, geometric.whole);
   if (placed.length > 0) return { ok: false, issues: placed };
   return { ok: true, job: parsed.data, core };
 }
@@ -109,6 +109,11 @@ export function checkJob(job: JobDocument): JobIssue[] {
 
 /** Checks of the section and what depends on it, on a job in core units with its placements resolved. */
 export function checkGeometry(job: JobDocument): JobIssue[] {
+  return geometryOf(job).issues;
+}
+
+/** checkGeometry's issues, and the whole section with its contacts once it got that far (the placement check reads the same). */
+function geometryOf(job: JobDocument): { issues: JobIssue[]; whole?: { section: SectionModel; contacts: ContactLine[] } } {
   const issues: JobIssue[] = [];
   const add = (path: string, message: string) => issues.push({ path, message });
   const text = (value: number, quantity: Parameters<typeof inJobUnits>[1]) => inJobUnits(value, quantity, job.units);
@@ -119,7 +124,7 @@ export function checkGeometry(job: JobDocument): JobIssue[] {
     if (to > L * (1 + 1e-9)) add(`parts[${i}].extent.to`, `${text(to, "span")} is beyond the end of the member (length ${text(L, "span")})`);
     else if (from >= to) add(`parts[${i}].extent.from`, `the part must start before it ends (from ${text(from, "span")} to ${text(to, "span")})`);
   });
-  if (issues.length > 0) return issues;
+  if (issues.length > 0) return { issues };
   const all = positioned(job.parts);
   const stretches = partStretches(job, L);
   const several = stretches.length > 1;
@@ -135,7 +140,7 @@ export function checkGeometry(job: JobDocument): JobIssue[] {
       const j = job.parts.findIndex((p) => p.id === o.a);
       add(`parts[${i}]`, `part "${o.b}" overlaps part "${o.a}" (parts[${j}]) over an area of ${text(o.area, "area")}${where}; parts may touch but not overlap`);
     }
-    if (issues.length > 0) return issues;
+    if (issues.length > 0) return { issues };
     const groups = connectedGroups(here, findContacts(here));
     if (groups.length > 1) {
       const main = groups.reduce((a, b) => (b.length > a.length ? b : a));
@@ -148,7 +153,7 @@ export function checkGeometry(job: JobDocument): JobIssue[] {
       }
     }
   }
-  if (issues.length > 0) return issues;
+  if (issues.length > 0) return { issues };
   const section = buildSection(all, job.materials);
   const contacts = findContacts(section);
   job.fastening.joints.forEach((j, k) => {
@@ -167,9 +172,9 @@ export function checkGeometry(job: JobDocument): JobIssue[] {
     if (several) add("compositeAction.model", "slip-aware composite action (the γ-method of EN 1995-1-1 Annex B) is for members of one section; parts here start or stop along the member");
     else if (!layered.covered) add("compositeAction.model", `slip-aware composite action (the γ-method of EN 1995-1-1 Annex B) does not apply to this section: ${layered.reason}`);
   }
-  if (issues.length > 0) return issues;
+  if (issues.length > 0) return { issues };
   if (job.mode === "check") issues.push(...checkProvidedSchedules(memberJoints(job, sectionStretches(job, L), L), L, (x) => text(x, "span")));
-  return issues;
+  return { issues, whole: { section, contacts } };
 }
 
 /** Check mode: every connector joint needs the schedule to check, with zones from end to end and rows on the member. */

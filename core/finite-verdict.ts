@@ -32,13 +32,24 @@ function walk(x: unknown): (string | number)[] | null {
   return null;
 }
 
+const seenFinite = new WeakSet<object>();
+
+/**
+ * True when `withFiniteVerdict` walked this very object and found every number finite, so that the edge
+ * need not walk it again (a result is not changed after the design); false when unknown.
+ */
+export const knownFinite = (result: object): boolean => seenFinite.has(result);
+
 /**
  * The invariant at the end of the design: a result with a number that is not finite (an overflow, a
  * division by zero) cannot pass, whatever its checks say; it fails with the place of that number.
  */
 export function withFiniteVerdict<R extends Pick<DesignResult, "status">>(result: R): R {
   const where = firstNonFinite(result);
-  if (where === null) return result;
+  if (where === null) {
+    seenFinite.add(result);
+    return result;
+  }
   const failure = `The result holds a number that is not finite (${where}): the job lies outside what this program can compute, and no part of the result can be relied on.`;
   return { ...result, status: { passes: false, summary: `${result.status.failures.length + 1} item(s) fail: see below.`, failures: [...result.status.failures, failure] } };
 }

@@ -1,6 +1,6 @@
 export { prepareJob, checkJob, type PreparedJob } from "./check-job.js";
 export { designMember } from "./design-member.js";
-export { firstNonFinite, withFiniteVerdict } from "./finite-verdict.js";
+export { firstNonFinite, knownFinite, withFiniteVerdict } from "./finite-verdict.js";
 export { JobDocument, JOB_FORMAT, JOB_VERSION, type JobInput } from "./schema/job.js";
 export { DesignResult, RESULT_FORMAT, RESULT_VERSION } from "./schema/result.js";
 export { issuesFromZod, formatPath, type JobIssue } from "./schema/job-issues.js";

@@ -141,6 +141,48 @@ export const rangesInSchema = [
 /** Most rows a provided zone schedule may ask for on one joint, as for a list of positions. */
 export const MAX_PROVIDED_ROWS = 5000;
 
+/** Where a number lies in the job: its key and its parent's place (null for the document). */
+type Where = { parent: Where; key: string | number } | null;
+
+/** "beam.loads[2].w" as the walk spells it: a key after a dot (none at the start), an index in brackets. */
+function pathOf(where: Where): string {
+  if (where === null) return "";
+  const parent = pathOf(where.parent);
+  return typeof where.key === "number" ? `${parent}[${where.key}]` : parent ? `${parent}.${where.key}` : where.key;
+}
+
+const patternChildren = new Map<string, Map<string, string>>();
+const patternItems = new Map<string, string>();
+// Keys can come from the job (a record's own names): past this many kept patterns, they are spelt out each time.
+const KEPT_PATTERNS = 4096;
+let keptPatterns = 0;
+
+/** The pattern of a field ("beam.loads[].w") from its parent's and its key, made once. */
+function patternChild(pattern: string, key: string): string {
+  let children = patternChildren.get(pattern);
+  let child = children?.get(key);
+  if (child !== undefined) return child;
+  child = pattern ? `${pattern}.${key}` : key;
+  if (keptPatterns < KEPT_PATTERNS) {
+    keptPatterns++;
+    if (!children) patternChildren.set(pattern, (children = new Map()));
+    children.set(key, child);
+  }
+  return child;
+}
+
+/** The pattern of an array's items ("beam.loads[]"), made once. */
+function patternItem(pattern: string): string {
+  let item = patternItems.get(pattern);
+  if (item !== undefined) return item;
+  item = `${pattern}[]`;
+  if (keptPatterns < KEPT_PATTERNS) {
+    keptPatterns++;
+    patternItems.set(pattern, item);
+  }
+  return item;
+}
+
 /**
  * The job's numbers against their physical ranges: `job` as written (compared in its own units, so a
  * number too small to survive conversion is still seen) and `core`, the same job in core units. Each
@@ -151,18 +193,25 @@ export function physicalRangeIssues(job: JobDocument, core: JobDocument): JobIss
   const issues: JobIssue[] = [];
   const text = (value: number, quantity: Quantity | null) => (quantity ? inJobUnits(value, quantity, core.units) : String(value));
   const inJob = (value: number, quantity: Quantity | null) => (quantity ? fromCore(value, quantity, job.units) : value);
-  const visit = (x: unknown, path: string, pattern: string) => {
+  // The path of a number is spelt out only for an issue; patterns are shared strings (see patternChild).
+  const visit = (x: unknown, parent: Where, key: string | number | null, pattern: string) => {
     if (typeof x === "number") {
       const r = physicalRanges[pattern];
       const size = Math.abs(x);
       if (!r || size === 0) return;
       if (fallsShort(size, inJob(r.lo, r.quantity)) || exceeds(size, inJob(r.hi, r.quantity))) {
-        issues.push({ path, message: `${r.quantity ? `${formatNumber(x)} ${unitLabel(r.quantity, job.units)}` : formatNumber(x)} is outside the range of ${r.what} (${r.lo === 0 ? "up to" : `${text(r.lo, r.quantity)} to`} ${text(r.hi, r.quantity)}${r.lo === 0 && r.quantity !== "span" && r.quantity !== "length" ? " either way" : ""})` });
+        issues.push({ path: pathOf(key === null ? parent : { parent, key }), message: `${r.quantity ? `${formatNumber(x)} ${unitLabel(r.quantity, job.units)}` : formatNumber(x)} is outside the range of ${r.what} (${r.lo === 0 ? "up to" : `${text(r.lo, r.quantity)} to`} ${text(r.hi, r.quantity)}${r.lo === 0 && r.quantity !== "span" && r.quantity !== "length" ? " either way" : ""})` });
       }
-    } else if (Array.isArray(x)) x.forEach((v, i) => visit(v, `${path}[${i}]`, `${pattern}[]`));
-    else if (x && typeof x === "object") for (const [k, v] of Object.entries(x)) visit(v, path ? `${path}.${k}` : k, pattern ? `${pattern}.${k}` : k);
+    } else if (Array.isArray(x)) {
+      const here = key === null ? parent : { parent, key };
+      const item = patternItem(pattern);
+      for (let i = 0; i < x.length; i++) if (i in x) visit(x[i], here, i, item);
+    } else if (x && typeof x === "object") {
+      const here = key === null ? parent : { parent, key };
+      for (const k of Object.keys(x)) visit((x as Record<string, unknown>)[k], here, k, patternChild(pattern, k));
+    }
   };
-  visit(job, "", "");
+  visit(job, null, null, "");
   const L = core.beam.spans.reduce((s, l) => s + l, 0);
   if (fallsShort(L, 1) || exceeds(L, 500_000)) issues.push({ path: "beam.spans", message: `${text(L, "span")} is outside the range of member lengths (${text(1, "span")} to ${text(500_000, "span")})` });
   if (issues.length > 0) return issues;

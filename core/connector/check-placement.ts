@@ -3,8 +3,8 @@ import { fastenedJoints } from "../section/fastened-joints.js";
 import type { JobDocument } from "../schema/job.js";
 import type { JobIssue } from "../schema/job-issues.js";
 import type { Combination } from "../schema/result.js";
-import { findContacts } from "../section/contacts.js";
-import { buildSection, positioned } from "../section/section-model.js";
+import { findContacts, type ContactLine } from "../section/contacts.js";
+import { buildSection, positioned, type SectionModel } from "../section/section-model.js";
 import { allowedSpacings } from "../spacing/allowed-spacings.js";
 import { spacingPractice } from "../spacing/spacing-defaults.js";
 import { toCore } from "../units/quantity.js";
@@ -25,9 +25,10 @@ const PLACEMENT: Combination = { id: "placement", name: "placement check", facto
  * spacing limits that leave no spacing to choose. Each issue names the field it belongs to; numbers
  * are written in the job's units.
  */
-export function checkConnectorPlacement(job: JobDocument): JobIssue[] {
-  const section = buildSection(positioned(job.parts), job.materials);
-  const contacts = findContacts(section);
+export function checkConnectorPlacement(job: JobDocument, whole?: { section: SectionModel; contacts: ContactLine[] }): JobIssue[] {
+  // `whole`: the section of every part and its contacts, when the caller has them already (the geometry check).
+  const section = whole?.section ?? buildSection(positioned(job.parts), job.materials);
+  const contacts = whole?.contacts ?? findContacts(section);
   const joints = fastenedJoints(job, section, contacts);
   const issues: JobIssue[] = [];
   const seen = new Set<string>();

@@ -1,8 +1,9 @@
 import type { z } from "zod";
 import { quantityOf } from "../schema/quantity.js";
-import { fromCore, toCore, type Quantity, type UnitSystem } from "./quantity.js";
+import { quantities, quantityUnits, toCore, unitSystems, type Quantity, type UnitSystem } from "./quantity.js";
 
-type Scale = (value: number, quantity: Quantity) => number;
+/** `index` is the quantity's place in `quantities`, for a scale that looks its factor up in a table. */
+type Scale = (value: number, quantity: Quantity, index: number) => number;
 type Converter = (value: unknown, scale: Scale) => unknown;
 
 interface Def {
@@ -51,7 +52,8 @@ function compile(schema: z.ZodType): Converter {
   const meta = quantityOf.get(schema);
   if (meta) {
     const q = meta.quantity;
-    return (v, s) => (typeof v === "number" ? s(v, q) : v);
+    const qi = quantities.indexOf(q);
+    return (v, s) => (typeof v === "number" ? s(v, q, qi) : v);
   }
   const def = defOf(schema);
   switch (def.type) {
@@ -70,13 +72,30 @@ function compile(schema: z.ZodType): Converter {
     case "array": {
       const element = def.element!;
       const elementMeta = quantityOf.get(element);
+      // Loops that push rather than map: the copy stays a packed array, which JSON.stringify writes fastest.
       if (elementMeta) {
         const q = elementMeta.quantity;
-        return (v, s) => (absent(v) ? v : (v as unknown[]).map((x) => (typeof x === "number" ? s(x, q) : x)));
+        const qi = quantities.indexOf(q);
+        return (v, s) => {
+          if (absent(v)) return v;
+          const list = v as unknown[];
+          const out: unknown[] = [];
+          for (let i = 0; i < list.length; i++) {
+            const x = list[i];
+            out.push(typeof x === "number" ? s(x, q, qi) : x);
+          }
+          return out;
+        };
       }
       const c = converterOf(element);
       if (c === same) return same;
-      return (v, s) => (absent(v) ? v : (v as unknown[]).map((x) => c(x, s)));
+      return (v, s) => {
+        if (absent(v)) return v;
+        const list = v as unknown[];
+        const out: unknown[] = [];
+        for (let i = 0; i < list.length; i++) out.push(c(list[i], s));
+        return out;
+      };
     }
     case "tuple": {
       const items = (def.items ?? []).map(converterOf);
@@ -147,16 +166,45 @@ export function toCoreUnits<T>(schema: z.ZodType, value: T, system: UnitSystem):
 }
 
 /** A document in core units → the same document in `system`, rounded to 12 significant figures to drop conversion noise. */
-export function toDisplayUnits<T>(schema: z.ZodType, value: T, system: UnitSystem): T {
-  return rescale(schema, value, (v, q) => roundSignificant(fromCore(v, q, system), 12));
+export function toDisplayUnits<T>(schema: z.ZodType, value: T, system: UnitSystem, seen?: { nonFinite: boolean }): T {
+  const factors = displayFactors[system];
+  // Dividing by exactly 1 changes nothing, so it is skipped; the rounding is not (it is part of the answer).
+  const scale: Scale = seen
+    ? (v, _q, qi) => {
+        const f = factors[qi]!;
+        const x = roundSignificant(f === 1 ? v : v / f, 12);
+        if (!Number.isFinite(x)) seen.nonFinite = true;
+        return x;
+      }
+    : (v, _q, qi) => {
+        const f = factors[qi]!;
+        return roundSignificant(f === 1 ? v : v / f, 12);
+      };
+  return rescale(schema, value, scale);
 }
 
+/** Each quantity's factor per system, by its index in `quantities`: an array read is cheaper per number than the unit table. */
+const displayFactors = Object.fromEntries(unitSystems.map((system) => [system, Float64Array.from(quantities, (q) => quantityUnits[q][system].factor)])) as Record<UnitSystem, Float64Array>;
+
 const POWERS = Array.from({ length: 45 }, (_, i) => 10 ** (i - 22));
+// |x| at or above LOW[i] and below HIGH[i] lies safely inside [10^(i-22), 10^(i-21)): floor(log10|x|) is i - 22
+// there whatever the last bit of Math.log10, so it is found by comparisons; nearer a power of ten, Math.log10 decides.
+const LOW = POWERS.map((p) => p * (1 + 1e-9));
+const HIGH = POWERS.map((p) => p * 10 * (1 - 1e-9));
 
 /** x rounded to `digits` significant figures, without going through a string. */
 export function roundSignificant(x: number, digits: number): number {
   if (x === 0 || !Number.isFinite(x)) return x;
-  const e = Math.floor(Math.log10(Math.abs(x)));
+  const a = x < 0 ? -x : x;
+  let e: number;
+  if (a >= 1e-22 && a < 1e22) {
+    let i = 22;
+    if (a >= 1) while (POWERS[i + 1]! <= a) i++;
+    else while (POWERS[i]! > a) i--;
+    e = a >= LOW[i]! && a < HIGH[i]! ? i - 22 : Math.floor(Math.log10(a));
+  } else {
+    e = Math.floor(Math.log10(a));
+  }
   const k = digits - 1 - e;
   // Beyond 10^22 powers of ten are not exact doubles: take the (slower) string route there.
   if (k < -22 || k > 22) return Number(x.toPrecision(digits));
