@@ -1,5 +1,7 @@
 import { poly, type DeflectionCurve, type MemberActions } from "./member-actions.js";
-import { rootsIn } from "./polynomial-roots.js";
+import { rootsInto } from "./polynomial-roots.js";
+
+const rootScratch = new Float64Array(8);
 
 /**
  * Which sets of regions to load with a patterned load so that, at every point of the member, some
@@ -57,7 +59,12 @@ export function governingPatterns(perRegion: (MemberActions | DeflectionCurve | 
     }
     critical.length = 0;
     critical.push(a, b);
-    for (const p of here) for (const c of p.polys) for (const u of rootsIn(c, a - p.x0, b - p.x0)) critical.push(p.x0 + u);
+    for (const p of here) {
+      for (const c of p.polys) {
+        const count = rootsInto(c, c.length, a - p.x0, b - p.x0, rootScratch);
+        for (let r = 0; r < count; r++) critical.push(p.x0 + rootScratch[r]!);
+      }
+    }
     critical.sort((x, y) => x - y);
     for (let s = 0; s < 2 * critical.length - 1; s++) {
       const x = s % 2 === 0 ? critical[s / 2]! : 0.5 * (critical[(s - 1) / 2]! + critical[(s + 1) / 2]!);
