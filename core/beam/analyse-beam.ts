@@ -138,7 +138,12 @@ export function analyseMember(input: MemberInput): BeamAnalysis {
   const whole = new Map<string, LoadCase>();
   const perRegion = new Map<string, (LoadCase | null)[]>();
   for (const [category, loads] of byCategory) {
-    if (patterned.includes(category)) perRegion.set(category, regions.map((r) => (hasLoads(clip(loads, r, length)) ? solved(clip(loads, r, length)) : null)));
+    if (patterned.includes(category)) {
+      perRegion.set(category, regions.map((r) => {
+        const inside = clip(loads, r, length);
+        return hasLoads(inside) ? solved(inside) : null;
+      }));
+    }
     else whole.set(category, solved(loads));
   }
 
@@ -173,6 +178,10 @@ export function analyseMember(input: MemberInput): BeamAnalysis {
           : governingPatterns(parts.map((t) => (t ? combinedCurve(t, on) : null)), "deflection");
       patternCache.set(key, masks);
     }
+    const custom = customDuration(base);
+    const loadsText = inPattern.map((c) => c.replace("-", " ")).join(" and ");
+    // Per patterned category, the regions it has loads on.
+    const loadedOn = new Map(inPattern.map((c) => [c, (perRegion.get(c) ?? []).reduce((m, k, r) => (k ? m | (1 << r) : m), 0)]));
     return masks.map((mask) => {
       const loadedRegions = regionsIn(mask, regions.length);
       const terms = [...fixedTerms];
@@ -180,14 +189,14 @@ export function analyseMember(input: MemberInput): BeamAnalysis {
         const k = perRegion.get(c)?.[r];
         if (k) terms.push({ c: k, f: base.factors[c]! });
       }
-      const categories = base.categories.filter((c) => inCombination.has(c) && (!inPattern.includes(c) || loadedRegions.some((r) => perRegion.get(c)?.[r])));
+      const categories = base.categories.filter((c) => inCombination.has(c) && (!loadedOn.has(c) || (loadedOn.get(c)! & mask) !== 0));
       const spansText = loadedRegions.length === 0 ? "on no span" : `on ${placesText(loadedRegions.map((r) => regions[r]!.label))}`;
       const combination: Combination = {
         ...base,
         id: `${base.id}/P${loadedRegions.length === 0 ? "0" : loadedRegions.map((r) => regions[r]!.spans[0]).join("-")}`,
-        name: `${base.name}, ${inPattern.map((c) => c.replace("-", " ")).join(" and ")} ${spansText}`,
+        name: `${base.name}, ${loadsText} ${spansText}`,
         categories,
-        duration: customDuration(base) ?? durationOf(categories),
+        duration: custom ?? durationOf(categories),
         ...(base.timeEffect ? { timeEffect: patternTimeEffect(base, categories, info)! } : {}),
         base: base.id,
         pattern: loadedRegions.map((r) => regions[r]!.spans[0]!),

@@ -58,6 +58,17 @@ export function rootsInto(c: ArrayLike<number>, count: number, lo: number, hi: n
     return roots.length;
   }
   if (!(hi > lo)) return 0;
+  // Where |c0| exceeds Σ|c_i|·|u|^i (i ≥ 1) over the interval by far more than rounding, every value rootsIn
+  // computes has c0's sign and none is zero: it finds no root (most pieces, asked for their sign changes).
+  const reach = Math.max(Math.abs(lo), Math.abs(hi));
+  let rest = 0;
+  let power = 1;
+  for (let i = 1; i < count; i++) {
+    power *= reach;
+    rest += Math.abs(c[i]!) * power;
+  }
+  const constant = Math.abs(c[0]!);
+  if (constant > rest + 1e-9 * (constant + rest)) return 0;
   const span = Math.max(Math.abs(lo), Math.abs(hi), hi - lo);
   // Math.max(0, ...size) of rootsIn: NaN if any size is.
   let scale = 0;
