@@ -197,12 +197,28 @@ export interface Extreme {
 
 /** Largest |V| over the closed interval [a, b], counting both sides of every jump inside it. */
 export function maxAbsShear(actions: MemberActions, a: number, b: number): Extreme {
+  if (a === 0 && b === actions.length) {
+    const known = overWhole(actions);
+    return { ...(known.shear ??= extremeOver(actions, a, b, SHEAR, 1)) };
+  }
   return extremeOver(actions, a, b, SHEAR, 1);
 }
 
 /** Largest sagging and hogging moments over [a, b]. */
 export function momentExtremes(actions: MemberActions, a = 0, b = actions.length): { max: Extreme; min: Extreme } {
+  if (a === 0 && b === actions.length) {
+    const known = overWhole(actions);
+    return { max: { ...(known.max ??= extremeOver(actions, a, b, MOMENT, 1)) }, min: { ...(known.min ??= extremeOver(actions, a, b, MOMENT, -1)) } };
+  }
   return { max: extremeOver(actions, a, b, MOMENT, 1), min: extremeOver(actions, a, b, MOMENT, -1) };
+}
+
+/** The whole member's extremes, asked for by the member checks and again by the beam's result. */
+const wholeMember = new WeakMap<MemberActions, { shear?: Extreme; max?: Extreme; min?: Extreme }>();
+function overWhole(actions: MemberActions): { shear?: Extreme; max?: Extreme; min?: Extreme } {
+  let known = wholeMember.get(actions);
+  if (!known) wholeMember.set(actions, (known = {}));
+  return known;
 }
 
 const SHEAR = 0;
