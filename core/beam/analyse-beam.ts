@@ -8,8 +8,6 @@ import { governingPatterns, regionsIn } from "./live-load-patterns.js";
 import { patternTimeEffect } from "./combinations.js";
 import { categoriesOf, presentCategories, shortestDuration } from "./load-categories.js";
 import {
-  combineActions,
-  combineCurves,
   deflectionCurve,
   emptyLoads,
   memberActions,
@@ -29,6 +27,11 @@ export interface CombinationActions {
   reactions: Reaction[];
   actions: MemberActions;
   curve: DeflectionCurve;
+  /**
+   * Piece k of `curve` (θ in out[0..4], v in out[5..10]) as combining the load cases gives it, without
+   * building the whole curve: for a reader that wants the curve at a few points of every combination.
+   */
+  curvePiece?(k: number, out: Float64Array): void;
 }
 
 export interface BeamAnalysis {
@@ -126,12 +129,6 @@ export function analyseMember(input: MemberInput): BeamAnalysis {
   }
   const grid = memberActions(length, everything, model.supports.map((s) => ({ x: s.x, R: 0, M: 0 })), (rigidity ?? []).map((r) => r.x0)).breaks;
 
-  interface LoadCase {
-    loads: LoadSet;
-    reactions: Reaction[];
-    actions: MemberActions;
-    curve: DeflectionCurve;
-  }
   const solved = (loads: LoadSet): LoadCase => {
     const reactions = supportReactions(model, loads, rigidity);
     const actions = memberActions(length, loads, reactions, grid);
@@ -141,23 +138,17 @@ export function analyseMember(input: MemberInput): BeamAnalysis {
   const whole = new Map<string, LoadCase>();
   const perRegion = new Map<string, (LoadCase | null)[]>();
   for (const [category, loads] of byCategory) {
-    if (patterned.includes(category)) perRegion.set(category, regions.map((r) => (hasLoads(clip(loads, r, length)) ? solved(clip(loads, r, length)) : null)));
+    if (patterned.includes(category)) {
+      perRegion.set(category, regions.map((r) => {
+        const inside = clip(loads, r, length);
+        return hasLoads(inside) ? solved(inside) : null;
+      }));
+    }
     else whole.set(category, solved(loads));
   }
 
-  type Term = { c: LoadCase; f: number };
-  const sum = (terms: Term[]) => ({
-    actions: combineActions(terms.map((t) => ({ actions: t.c.actions, f: t.f })), length, grid),
-    curve: combineCurves(terms.map((t) => ({ curve: t.c.curve, f: t.f })), grid),
-  });
-  const entry = (combination: Combination, terms: Term[]): CombinationActions => {
-    const { reactions } = superpose(terms, model.supports, false);
-    // The combined loads are for a reader who asks: built on first read, not for every combination.
-    let loads: LoadSet | undefined;
-    const made = { combination, reactions, ...sum(terms) } as CombinationActions;
-    Object.defineProperty(made, "loads", { enumerable: true, configurable: true, get: () => (loads ??= superpose(terms, model.supports).loads) });
-    return made;
-  };
+  const on: Superposition = { length, grid, supports: model.supports };
+  const entry = (combination: Combination, terms: Term[]): CombinationActions => new Superposed(combination, terms, on);
   const regionTerms = (factors: Record<string, number>) =>
     regions.map((_, r) => {
       const terms = patterned.flatMap((c) => {
@@ -180,13 +171,17 @@ export function analyseMember(input: MemberInput): BeamAnalysis {
     const key = `${what}|${inPattern.map((c) => `${c}:${base.factors[c]! / lead}`).join("|")}`;
     let masks = patternCache.get(key);
     if (!masks) {
-      const parts = regionTerms(base.factors).map((terms) => (terms ? { ...sum(terms), reactions: superpose(terms, model.supports, false).reactions } : null));
+      const parts = regionTerms(base.factors);
       masks =
         what === "actions"
-          ? governingPatterns(parts.map((p) => p?.actions ?? null), "actions", parts.map((p) => (p ? p.reactions.map((r) => r.R) : null)))
-          : governingPatterns(parts.map((p) => p?.curve ?? null), "deflection");
+          ? governingPatterns(parts.map((t) => (t ? combinedActions(t, on) : null)), "actions", parts.map((t) => (t ? superpose(t, model.supports, false).reactions.map((r) => r.R) : null)))
+          : governingPatterns(parts.map((t) => (t ? combinedCurve(t, on) : null)), "deflection");
       patternCache.set(key, masks);
     }
+    const custom = customDuration(base);
+    const loadsText = inPattern.map((c) => c.replace("-", " ")).join(" and ");
+    // Per patterned category, the regions it has loads on.
+    const loadedOn = new Map(inPattern.map((c) => [c, (perRegion.get(c) ?? []).reduce((m, k, r) => (k ? m | (1 << r) : m), 0)]));
     return masks.map((mask) => {
       const loadedRegions = regionsIn(mask, regions.length);
       const terms = [...fixedTerms];
@@ -194,14 +189,14 @@ export function analyseMember(input: MemberInput): BeamAnalysis {
         const k = perRegion.get(c)?.[r];
         if (k) terms.push({ c: k, f: base.factors[c]! });
       }
-      const categories = base.categories.filter((c) => inCombination.has(c) && (!inPattern.includes(c) || loadedRegions.some((r) => perRegion.get(c)?.[r])));
+      const categories = base.categories.filter((c) => inCombination.has(c) && (!loadedOn.has(c) || (loadedOn.get(c)! & mask) !== 0));
       const spansText = loadedRegions.length === 0 ? "on no span" : `on ${placesText(loadedRegions.map((r) => regions[r]!.label))}`;
       const combination: Combination = {
         ...base,
         id: `${base.id}/P${loadedRegions.length === 0 ? "0" : loadedRegions.map((r) => regions[r]!.spans[0]).join("-")}`,
-        name: `${base.name}, ${inPattern.map((c) => c.replace("-", " ")).join(" and ")} ${spansText}`,
+        name: `${base.name}, ${loadsText} ${spansText}`,
         categories,
-        duration: customDuration(base) ?? durationOf(categories),
+        duration: custom ?? durationOf(categories),
         ...(base.timeEffect ? { timeEffect: patternTimeEffect(base, categories, info)! } : {}),
         base: base.id,
         pattern: loadedRegions.map((r) => regions[r]!.spans[0]!),
@@ -249,6 +244,92 @@ export function analyseMember(input: MemberInput): BeamAnalysis {
     service,
     patterned,
   };
+}
+
+interface LoadCase {
+  loads: LoadSet;
+  reactions: Reaction[];
+  actions: MemberActions;
+  curve: DeflectionCurve;
+}
+type Term = { c: LoadCase; f: number };
+/** What every combination of one member is superposed on: its breaks and supports. */
+interface Superposition {
+  length: number;
+  grid: number[];
+  supports: Support[];
+}
+
+/** Σ f·actions of the load cases, piece by piece (as `combineActions`, without its list of terms). */
+function combinedActions(terms: Term[], on: Superposition): MemberActions {
+  const { grid } = on;
+  const pieces: MemberActions["pieces"] = [];
+  for (let k = 0; k < grid.length - 1; k++) {
+    let v0 = 0, v1 = 0, v2 = 0, m0 = 0, m1 = 0, m2 = 0, m3 = 0;
+    for (let t = 0; t < terms.length; t++) {
+      const { c, f } = terms[t]!;
+      const p = c.actions.pieces[k]!;
+      v0 += f * p.v[0];
+      v1 += f * p.v[1];
+      v2 += f * p.v[2];
+      m0 += f * p.m[0];
+      m1 += f * p.m[1];
+      m2 += f * p.m[2];
+      m3 += f * p.m[3];
+    }
+    pieces.push({ x0: grid[k]!, x1: grid[k + 1]!, v: [v0, v1, v2], m: [m0, m1, m2, m3] });
+  }
+  return { length: on.length, pieces, breaks: grid };
+}
+
+/** Piece k of Σ f·curve into out (θ in 0..4, v in 5..10), as `combineCurves` sums it. */
+function combinedCurvePiece(terms: Term[], k: number, out: Float64Array): void {
+  out.fill(0);
+  for (let t = 0; t < terms.length; t++) {
+    const { c, f } = terms[t]!;
+    const p = c.curve.pieces[k]!;
+    for (let i = 0; i < 5; i++) out[i]! += f * p.theta[i]!;
+    for (let i = 0; i < 6; i++) out[5 + i]! += f * p.v[i]!;
+  }
+}
+
+function combinedCurve(terms: Term[], on: Superposition): DeflectionCurve {
+  const { grid } = on;
+  const pieces: DeflectionCurve["pieces"] = [];
+  const c = new Float64Array(11);
+  for (let k = 0; k < grid.length - 1; k++) {
+    combinedCurvePiece(terms, k, c);
+    pieces.push({ x0: grid[k]!, x1: grid[k + 1]!, theta: [c[0]!, c[1]!, c[2]!, c[3]!, c[4]!], v: [c[5]!, c[6]!, c[7]!, c[8]!, c[9]!, c[10]!] });
+  }
+  return { pieces };
+}
+
+/**
+ * One combination (or pattern) as the sum of its load cases: the reactions at once, the actions, curve
+ * and loads when first read (a service case is read for its curve only, a strength case for its actions).
+ */
+class Superposed implements CombinationActions {
+  readonly reactions: Reaction[];
+  private made: { actions?: MemberActions; curve?: DeflectionCurve; loads?: LoadSet } = {};
+  constructor(
+    readonly combination: Combination,
+    private readonly terms: Term[],
+    private readonly on: Superposition,
+  ) {
+    this.reactions = superpose(terms, on.supports, false).reactions;
+  }
+  get actions(): MemberActions {
+    return (this.made.actions ??= combinedActions(this.terms, this.on));
+  }
+  get curve(): DeflectionCurve {
+    return (this.made.curve ??= combinedCurve(this.terms, this.on));
+  }
+  get loads(): LoadSet {
+    return (this.made.loads ??= superpose(this.terms, this.on.supports).loads);
+  }
+  curvePiece(k: number, out: Float64Array): void {
+    combinedCurvePiece(this.terms, k, out);
+  }
 }
 
 /** "spans 1 and 3", "span 2 and span 3 (right overhang)". */

@@ -41,8 +41,14 @@ export function locateStations(actions: MemberActions, stations: Station[]): Sta
   return out;
 }
 
+/** A deflection curve read piece by piece (θ in 0..4, v in 5..10), where it is not built as a whole. */
+export interface CurvePieces {
+  piece(k: number, out: Float64Array): void;
+}
+const curveScratch = new Float64Array(11);
+
 /** V, M, deflection and rotation at the stations; `at` may be shared by members on the same breaks. */
-export function valuesAtStations(actions: MemberActions, curve: DeflectionCurve, stations: Station[], at: StationLocator = locateStations(actions, stations)): StationValues {
+export function valuesAtStations(actions: MemberActions, curve: DeflectionCurve | CurvePieces, stations: Station[], at: StationLocator = locateStations(actions, stations)): StationValues {
   const n = stations.length;
   const out: StationValues = { shear: new Array<number>(n), moment: new Array<number>(n), deflection: new Array<number>(n), rotation: new Array<number>(n) };
   const { pieces } = actions;
@@ -53,9 +59,7 @@ export function valuesAtStations(actions: MemberActions, curve: DeflectionCurve,
     if (at.piece[j] !== k) {
       k = at.piece[j]!;
       const p = pieces[k]!;
-      const c = curve.pieces[k]!;
       const { v, m } = p;
-      const { theta: t, v: w } = c;
       v0 = v[0];
       v1 = v[1];
       v2 = v[2];
@@ -63,17 +67,34 @@ export function valuesAtStations(actions: MemberActions, curve: DeflectionCurve,
       m1 = m[1];
       m2 = m[2];
       m3 = m[3];
-      t0 = t[0]!;
-      t1 = t[1]!;
-      t2 = t[2]!;
-      t3 = t[3]!;
-      t4 = t[4]!;
-      w0 = w[0]!;
-      w1 = w[1]!;
-      w2 = w[2]!;
-      w3 = w[3]!;
-      w4 = w[4]!;
-      w5 = w[5]!;
+      if ("pieces" in curve) {
+        const { theta: t, v: w } = curve.pieces[k]!;
+        t0 = t[0]!;
+        t1 = t[1]!;
+        t2 = t[2]!;
+        t3 = t[3]!;
+        t4 = t[4]!;
+        w0 = w[0]!;
+        w1 = w[1]!;
+        w2 = w[2]!;
+        w3 = w[3]!;
+        w4 = w[4]!;
+        w5 = w[5]!;
+      } else {
+        const c = curveScratch;
+        curve.piece(k, c);
+        t0 = c[0]!;
+        t1 = c[1]!;
+        t2 = c[2]!;
+        t3 = c[3]!;
+        t4 = c[4]!;
+        w0 = c[5]!;
+        w1 = c[6]!;
+        w2 = c[7]!;
+        w3 = c[8]!;
+        w4 = c[9]!;
+        w5 = c[10]!;
+      }
     }
     const u = at.u[j]!;
     const zero = at.outside[j] === 1;
@@ -100,7 +121,7 @@ function deflectionAtStations(curve: DeflectionCurve, stations: Station[], at: S
 export function beamResult(beam: BeamAnalysis, stations: Station[]): BeamResult {
   let at: StationLocator | undefined;
   const locate = (r: CombinationActions) => (at && at.breaks === r.actions.breaks ? at : (at = locateStations(r.actions, stations)));
-  const values = beam.results.map((r) => valuesAtStations(r.actions, r.curve, stations, locate(r)));
+  const values = beam.results.map((r) => valuesAtStations(r.actions, r.curvePiece ? { piece: (k, out) => r.curvePiece!(k, out) } : r.curve, stations, locate(r)));
   const perCombination = beam.results.map((r, i) => {
     const extremes = momentExtremes(r.actions);
     // A hogging moment of 10⁻¹² of the sagging one is rounding, not a moment: report it as none.

@@ -1,5 +1,7 @@
 import { poly, type DeflectionCurve, type MemberActions } from "./member-actions.js";
-import { rootsIn } from "./polynomial-roots.js";
+import { rootsInto } from "./polynomial-roots.js";
+
+const rootScratch = new Float64Array(8);
 
 /**
  * Which sets of regions to load with a patterned load so that, at every point of the member, some
@@ -36,7 +38,9 @@ export function governingPatterns(perRegion: (MemberActions | DeflectionCurve | 
     masks.add(above);
     masks.add(below);
   }
-  const breaks = [...new Set(loaded.flatMap((r) => r.pieces.flatMap((p) => [p.x0, p.x1])))].sort((a, b) => a - b);
+  const ends = new Set<number>();
+  for (const r of loaded) for (const p of r.pieces) ends.add(p.x0).add(p.x1);
+  const breaks = [...ends].sort((a, b) => a - b);
   const actionCount = loaded[0]!.pieces[0]!.polys.length;
   const tolerance = loaded.map((r) => {
     let scale = 0;
@@ -45,7 +49,17 @@ export function governingPatterns(perRegion: (MemberActions | DeflectionCurve | 
   });
   const cursor = new Array<number>(loaded.length).fill(0);
   const here = new Array<Piece>(loaded.length);
-  const critical: number[] = [];
+  // Breaks, roots and the points between them, in order (insertion: a few per piece).
+  let critical = new Float64Array(2 + 8 * loaded.length * actionCount);
+  let count = 0;
+  const insert = (x: number) => {
+    let i = count++;
+    while (i > 0 && critical[i - 1]! > x) {
+      critical[i] = critical[i - 1]!;
+      i--;
+    }
+    critical[i] = x;
+  };
   for (let k = 0; k < breaks.length - 1; k++) {
     const a = breaks[k]!;
     const b = breaks[k + 1]!;
@@ -55,11 +69,21 @@ export function governingPatterns(perRegion: (MemberActions | DeflectionCurve | 
       while (cursor[j]! < pieces.length - 1 && pieces[cursor[j]!]!.x1 <= a) cursor[j]!++;
       here[j] = pieces[cursor[j]!]!;
     }
-    critical.length = 0;
-    critical.push(a, b);
-    for (const p of here) for (const c of p.polys) for (const u of rootsIn(c, a - p.x0, b - p.x0)) critical.push(p.x0 + u);
-    critical.sort((x, y) => x - y);
-    for (let s = 0; s < 2 * critical.length - 1; s++) {
+    count = 0;
+    insert(a);
+    insert(b);
+    for (const p of here) {
+      for (const c of p.polys) {
+        const roots = rootsInto(c, c.length, a - p.x0, b - p.x0, rootScratch);
+        if (count + roots > critical.length) {
+          const wider = new Float64Array(2 * (count + roots));
+          wider.set(critical.subarray(0, count));
+          critical = wider;
+        }
+        for (let r = 0; r < roots; r++) insert(p.x0 + rootScratch[r]!);
+      }
+    }
+    for (let s = 0; s < 2 * count - 1; s++) {
       const x = s % 2 === 0 ? critical[s / 2]! : 0.5 * (critical[(s - 1) / 2]! + critical[(s + 1) / 2]!);
       for (let q = 0; q < actionCount; q++) {
         let above = 0;

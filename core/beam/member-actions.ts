@@ -7,7 +7,7 @@
  */
 
 import { rigidityAt, type RigidityStep } from "./rigidity.js";
-import { rootsIn } from "./polynomial-roots.js";
+import { rootsInto } from "./polynomial-roots.js";
 
 export interface PointForce {
   x: number;
@@ -197,12 +197,28 @@ export interface Extreme {
 
 /** Largest |V| over the closed interval [a, b], counting both sides of every jump inside it. */
 export function maxAbsShear(actions: MemberActions, a: number, b: number): Extreme {
+  if (a === 0 && b === actions.length) {
+    const known = overWhole(actions);
+    return { ...(known.shear ??= extremeOver(actions, a, b, SHEAR, 1)) };
+  }
   return extremeOver(actions, a, b, SHEAR, 1);
 }
 
 /** Largest sagging and hogging moments over [a, b]. */
 export function momentExtremes(actions: MemberActions, a = 0, b = actions.length): { max: Extreme; min: Extreme } {
+  if (a === 0 && b === actions.length) {
+    const known = overWhole(actions);
+    return { max: { ...(known.max ??= extremeOver(actions, a, b, MOMENT, 1)) }, min: { ...(known.min ??= extremeOver(actions, a, b, MOMENT, -1)) } };
+  }
   return { max: extremeOver(actions, a, b, MOMENT, 1), min: extremeOver(actions, a, b, MOMENT, -1) };
+}
+
+/** The whole member's extremes, asked for by the member checks and again by the beam's result. */
+const wholeMember = new WeakMap<MemberActions, { shear?: Extreme; max?: Extreme; min?: Extreme }>();
+function overWhole(actions: MemberActions): { shear?: Extreme; max?: Extreme; min?: Extreme } {
+  let known = wholeMember.get(actions);
+  if (!known) wholeMember.set(actions, (known = {}));
+  return known;
 }
 
 const SHEAR = 0;
@@ -339,6 +355,8 @@ export function evaluate(curve: DeflectionCurve, x: number, what: "v" | "theta")
   return poly(what === "v" ? p.v : p.theta, x - p.x0);
 }
 
+const thetaRoots = new Float64Array(8);
+
 /** Largest downward and upward deflection over [a, b], exact: piece ends and the roots of the rotation. */
 export function deflectionExtremes(curve: DeflectionCurve, a = -Infinity, b = Infinity): { down: Extreme; up: Extreme } {
   let down: Extreme = { value: -Infinity, x: 0 };
@@ -347,7 +365,9 @@ export function deflectionExtremes(curve: DeflectionCurve, a = -Infinity, b = In
     const lo = Math.max(a, p.x0);
     const hi = Math.min(b, p.x1);
     if (hi < lo) continue;
-    for (const u of [lo - p.x0, hi - p.x0, ...rootsIn(p.theta, lo - p.x0, hi - p.x0)]) {
+    const count = rootsInto(p.theta, p.theta.length, lo - p.x0, hi - p.x0, thetaRoots);
+    for (let i = 0; i < count + 2; i++) {
+      const u = i === 0 ? lo - p.x0 : i === 1 ? hi - p.x0 : thetaRoots[i - 2]!;
       const v = poly(p.v, u);
       if (-v > down.value) down = { value: -v, x: p.x0 + u };
       if (v > up.value) up = { value: v, x: p.x0 + u };

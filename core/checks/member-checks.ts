@@ -1,6 +1,6 @@
 import type { BeamAnalysis } from "../beam/analyse-beam.js";
 import { deflectionChecks } from "../beam/deflection-checks.js";
-import { maxAbsShear, momentExtremes } from "../beam/member-actions.js";
+import { maxAbsShear, momentExtremes, type Extreme } from "../beam/member-actions.js";
 import type { JobDocument } from "../schema/job.js";
 import type { MemberCheck } from "../schema/result.js";
 import type { SectionModel } from "../section/section-model.js";
@@ -43,6 +43,11 @@ export function memberChecks(
   const notChecked: string[] = [];
   const materials = [...new Map(section.parts.map((p) => [p.material.id, p.material])).values()];
   const I = section.secondMoment;
+  // Each combination's extremes over [a, b], the same for every material: worked out once.
+  const moments = beam.results.map(() => null as { max: Extreme; min: Extreme } | null);
+  const shears = beam.results.map(() => null as Extreme | null);
+  const momentsOf = (i: number) => (moments[i] ??= momentExtremes(beam.results[i]!.actions, a, b));
+  const shearOf = (i: number) => (shears[i] ??= maxAbsShear(beam.results[i]!.actions, a, b));
 
   // Side-by-side plies: each ply on its own share (the transformed section's shear, averaged over the
   // whole width at a level, would understate a stiff plate's shear and overstate the timber's).
@@ -54,16 +59,17 @@ export function memberChecks(
     if (fb === undefined) notChecked.push(`Bending stress in ${material.name} (${names}): no bending strength given.`);
     else {
       let worst = { demand: 0, combination: "", at: 0 as number | null };
-      for (const r of beam.results) {
-        const { max, min } = momentExtremes(r.actions, a, b);
-        for (const p of parts) {
-          const fibre = Math.max(...p.rects.flatMap((rect) => [Math.abs(rect.y1 - section.centroidY), Math.abs(rect.y0 - section.centroidY)]));
+      const fibres = parts.map((p) => Math.max(...p.rects.flatMap((rect) => [Math.abs(rect.y1 - section.centroidY), Math.abs(rect.y0 - section.centroidY)])));
+      beam.results.forEach((r, i) => {
+        const { max, min } = momentsOf(i);
+        parts.forEach((p, q) => {
+          const fibre = fibres[q]!;
           for (const m of [max, min]) {
             const sigma = (p.n * Math.abs(m.value) * fibre) / I;
             if (sigma > worst.demand) worst = { demand: sigma, combination: r.combination.id, at: m.x };
           }
-        }
-      }
+        });
+      });
       checks.push(stressCheck(`bending-${material.id}`, `Bending stress, ${material.name} (${names})${where}`, worst, fb, BENDING));
     }
     const fv = material.strength.shear;
@@ -72,10 +78,10 @@ export function memberChecks(
       const tol = 1e-9 * (section.bounds.y1 - section.bounds.y0);
       const factor = Math.max(0, ...profile.filter((pt) => parts.some((p) => p.rects.some((r) => occupies(r, pt, tol)))).map((pt) => pt.factor));
       let worst = { demand: 0, combination: "", at: 0 as number | null };
-      for (const r of beam.results) {
-        const v = maxAbsShear(r.actions, a, b);
+      beam.results.forEach((r, i) => {
+        const v = shearOf(i);
         if (v.value * factor > worst.demand) worst = { demand: v.value * factor, combination: r.combination.id, at: v.x };
-      }
+      });
       checks.push(stressCheck(`shear-${material.id}`, `Shear stress, ${material.name} (${names})${where}`, worst, fv, SHEAR));
     }
   }

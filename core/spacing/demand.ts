@@ -262,13 +262,19 @@ export class DemandCurve {
   /** d(x) at the Simpson panel points of every piece, computed once for every floor. */
   private samples(): { breaks: number[]; values: Float64Array } {
     if (this.sampled) return this.sampled;
-    const breaks = [...new Set(this.terms.flatMap((t) => t.actions.breaks))].sort((a, b) => a - b);
+    const terms = this.terms;
+    const ends = new Set<number>();
+    for (const t of terms) for (const b of t.actions.breaks) ends.add(b);
+    const breaks = [...ends].sort((a, b) => a - b);
     const n = SIMPSON_PANELS;
-    const pieceCount = breaks.filter((b, i) => i > 0 && b - breaks[i - 1]! > 0).length;
+    let pieceCount = 0;
+    for (let i = 1; i < breaks.length; i++) if (breaks[i]! - breaks[i - 1]! > 0) pieceCount++;
     const values = new Float64Array(pieceCount * (n + 1));
-    const shared = this.terms.every((t) => t.actions.breaks === breaks || sameNumbers(t.actions.breaks, breaks));
-    const bounds = new Float64Array(this.terms.length);
-    const order: number[] = this.terms.map((_, j) => j);
+    const shared = terms.every((t) => t.actions.breaks === breaks || sameNumbers(t.actions.breaks, breaks));
+    const termBounds = shared ? terms.map((t) => shearBounds(t.actions)) : [];
+    const bounds = new Float64Array(terms.length);
+    // Terms taken in order of their bound, largest first (the first of equal bounds first).
+    const taken = new Uint8Array(terms.length);
     for (let i = 0, row = 0; i < breaks.length - 1; i++) {
       const a = breaks[i]!;
       const b = breaks[i + 1]!;
@@ -279,24 +285,38 @@ export class DemandCurve {
       // Where every term has the member's breaks, the terms that cannot raise any panel point are skipped
       // (a term's bound over the piece at or below the least value found so far); the maximum is the same.
       if (shared) {
-        const termBounds = this.pieceBounds();
-        this.terms.forEach((t, j) => (bounds[j] = t.k * termBounds[j]![i]!));
-        order.sort((p, q) => bounds[q]! - bounds[p]! || p - q);
+        for (let j = 0; j < terms.length; j++) bounds[j] = terms[j]!.k * termBounds[j]![i]!;
+        taken.fill(0);
       }
       let least = 0;
-      for (const j of order) {
-        const t = this.terms[j]!;
-        if (shared && bounds[j]! <= least) break;
-        if (mid < 0 || mid > t.actions.length) continue;
-        const piece = pieceAt(t.actions, mid, "right");
-        for (let k = 0; k <= n; k++) {
-          const v = t.k * Math.abs(poly(piece.v, a + k * h - piece.x0));
-          if (v > values[row + k]!) values[row + k] = v;
-        }
+      for (let step = 0; step < terms.length; step++) {
+        let j = step;
         if (shared) {
-          least = values[row]!;
-          for (let k = 1; k <= n; k++) if (values[row + k]! < least) least = values[row + k]!;
+          j = -1;
+          for (let q = 0; q < terms.length; q++) if (taken[q] === 0 && (j < 0 || bounds[q]! > bounds[j]!)) j = q;
+          taken[j] = 1;
+          if (bounds[j]! <= least) break;
         }
+        const t = terms[j]!;
+        if (mid < 0 || mid > t.actions.length) continue;
+        const pieces = t.actions.pieces;
+        // pieceAt(actions, mid, "right"): the last piece that starts at or before mid (here usually piece i).
+        const guess = pieces[i];
+        const piece = guess && guess.x0 <= mid && (i + 1 >= pieces.length || pieces[i + 1]!.x0 > mid) ? guess : pieceAt(t.actions, mid, "right");
+        const v0 = piece.v[0];
+        const v1 = piece.v[1];
+        const v2 = piece.v[2];
+        const k = t.k;
+        const x0 = piece.x0;
+        let low = Infinity;
+        for (let p = 0; p <= n; p++) {
+          const u = a + p * h - x0;
+          // |poly(piece.v, u)|, Horner as poly computes it.
+          const v = k * Math.abs(((0 * u + v2) * u + v1) * u + v0);
+          if (v > values[row + p]!) values[row + p] = v;
+          if (values[row + p]! < low) low = values[row + p]!;
+        }
+        if (shared) least = low;
       }
       row += n + 1;
     }
