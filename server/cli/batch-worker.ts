@@ -34,7 +34,7 @@ const failed = (task: MemberTask, error: unknown): MemberOutcome => ({
 async function lane(): Promise<void> {
   lanes++;
   for (let task = queue.shift(); task; task = queue.shift()) {
-    const outcome = await runMemberTask(task, inputs, true).catch((error: unknown) => failed(task!, error));
+    const outcome = await runMemberTask(task, inputs).catch((error: unknown) => failed(task!, error));
     if (finished.push(outcome) === 1) setImmediate(flush);
   }
   lanes--;
