@@ -61,7 +61,7 @@ export function autoThreads(members: number, pdf: boolean, cores = availablePara
 /** Tasks kept in flight on one thread, so that one member's file read (and worksheet stream) overlaps another's design. */
 export const IN_FLIGHT = 3;
 
-async function runInThisThread(tasks: MemberTask[], onOutcome: (outcome: MemberOutcome) => void): Promise<MemberOutcome[]> {
+async function runInThisThread(tasks: MemberTask[], inputs: ReadonlySet<string>, onOutcome: (outcome: MemberOutcome) => void): Promise<MemberOutcome[]> {
   const outcomes: MemberOutcome[] = [];
   // From source, a large batch runs the members' code from one bundle (see bundleThread: a fifth faster than through tsx, for about half a second of bundling).
   const bundled = tasks.length * ESTIMATED_MS.design >= 4 * BUNDLE_MS ? await importBundled<typeof import("./member-files.js")>(MEMBER_FILES) : undefined;
@@ -69,7 +69,7 @@ async function runInThisThread(tasks: MemberTask[], onOutcome: (outcome: MemberO
   let next = 0;
   const lane = async () => {
     while (next < tasks.length) {
-      const outcome = await runMemberTask(tasks[next++]!);
+      const outcome = await runMemberTask(tasks[next++]!, inputs);
       outcomes.push(outcome);
       onOutcome(outcome);
     }
@@ -126,15 +126,15 @@ export async function runBatch(options: BatchOptions): Promise<BatchReport> {
       outcomes.push({ index, file, mark: "", status: "error", summary: null, problems: [{ path: "(output)", message: `writing its outputs would overwrite the input file ${clash}; choose another --out folder` }], written: [], milliseconds: { design: 0, pdf: 0 } });
       return;
     }
-    tasks.push({ index, file, outBase, mode: options.mode, units: options.units, pdf: options.pdf, printDate: options.printDate ?? new Date().toISOString().slice(0, 10), inputs: identities });
+    tasks.push({ index, file, outBase, mode: options.mode, units: options.units, pdf: options.pdf, printDate: options.printDate ?? new Date().toISOString().slice(0, 10) });
   });
 
   const total = tasks.length;
   let done = 0;
   const onOutcome = (outcome: MemberOutcome) => options.onOutcome?.(++done, total, outcome);
   const threads = Math.max(1, Math.min(options.threads ?? autoThreads(total, options.pdf), Math.max(total, 1)));
-  if (threads > 1) outcomes.push(...(await runInWorkers(tasks, threads, onOutcome)));
-  else outcomes.push(...(await runInThisThread(tasks, onOutcome)));
+  if (threads > 1) outcomes.push(...(await runInWorkers(tasks, threads, inputs, onOutcome)));
+  else outcomes.push(...(await runInThisThread(tasks, inputs, onOutcome)));
   // Command-line paths that gave no file first, then the job files in order.
   outcomes.sort((a, b) => a.index - b.index);
   if (options.summaryFile !== false) {

@@ -1,8 +1,14 @@
 import { bundleThread, startThread } from "../thread-entry.js";
+import type { FromBatchWorker, ToBatchWorker } from "./batch-worker.js";
 import { runMemberTask, type MemberOutcome, type MemberTask } from "./member-files.js";
 
-/** Tasks sent to a worker before it answers, so that its file writes overlap its next design. */
-const PER_WORKER = 2;
+/**
+ * Tasks go to a worker a few to a message, and it holds up to twice that, so that it never waits for
+ * the next while its files are written; members differ a lot in cost, so no more than that is handed
+ * out ahead (the last members then spread over the workers).
+ */
+const CHUNK = 4;
+const AHEAD = 2 * CHUNK;
 
 const BATCH_WORKER = new URL("./batch-worker.ts", import.meta.url);
 
@@ -23,9 +29,9 @@ const failedOutcome = (task: MemberTask, message: string): MemberOutcome => ({
 /**
  * Runs the tasks on `threads` worker threads, each taking more as it finishes (members differ a lot in
  * cost). A worker that dies marks its tasks as failed and the rest carry on; if every worker dies, the
- * remaining tasks run on this thread.
+ * remaining tasks run on this thread. `inputs`: the identities of the batch's input files, sent once.
  */
-export async function runInWorkers(tasks: MemberTask[], threads: number, onOutcome: (outcome: MemberOutcome) => void): Promise<MemberOutcome[]> {
+export async function runInWorkers(tasks: MemberTask[], threads: number, inputs: ReadonlySet<string>, onOutcome: (outcome: MemberOutcome) => void): Promise<MemberOutcome[]> {
   await bundleThread(BATCH_WORKER);
   const outcomes: MemberOutcome[] = [];
   let next = 0;
@@ -37,20 +43,27 @@ export async function runInWorkers(tasks: MemberTask[], threads: number, onOutco
     Array.from({ length: Math.min(threads, tasks.length) }, () =>
       new Promise<void>((resolve) => {
         const worker = startWorker();
+        const send = (message: ToBatchWorker) => worker.postMessage(message);
         const inFlight = new Map<number, MemberTask>();
+        send({ inputs: [...inputs] });
         const feed = () => {
-          while (inFlight.size < PER_WORKER && next < tasks.length) {
-            const task = tasks[next++]!;
-            inFlight.set(task.index, task);
-            worker.postMessage(task);
+          while (inFlight.size <= AHEAD - CHUNK && next < tasks.length) {
+            const chunk = tasks.slice(next, next + CHUNK);
+            next += chunk.length;
+            for (const task of chunk) inFlight.set(task.index, task);
+            send({ tasks: chunk });
           }
           if (inFlight.size === 0) void worker.terminate();
         };
+        // Tasks wait in the port while the worker starts.
+        feed();
         let failure = "the worker thread stopped";
-        worker.on("message", (message: MemberOutcome | "ready") => {
+        worker.on("message", (message: FromBatchWorker) => {
           if (message !== "ready") {
-            inFlight.delete(message.index);
-            finish(message);
+            for (const outcome of message.outcomes) {
+              inFlight.delete(outcome.index);
+              finish(outcome);
+            }
           }
           feed();
         });
@@ -64,6 +77,6 @@ export async function runInWorkers(tasks: MemberTask[], threads: number, onOutco
     ),
   );
   // Only when workers died: whatever is left runs here.
-  while (next < tasks.length) finish(await runMemberTask(tasks[next++]!));
+  while (next < tasks.length) finish(await runMemberTask(tasks[next++]!, inputs));
   return outcomes;
 }
