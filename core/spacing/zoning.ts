@@ -39,20 +39,23 @@ export interface ZonePlan {
 
 const INFEASIBLE_PENALTY = 1e6; // per mm of zone that cannot meet its demand
 
+/** Per candidate zone, kept from call to call (a design plans its joints one after another): only ever grows. */
+let table: ZoneTable = { cost: new Float64Array(0), rows: new Float64Array(0), spacing: new Float64Array(0), feasible: new Uint8Array(0), index: new Int32Array(0) };
+
 export function planZones(p: ZoningProblem): ZonePlan {
   const g = p.grid;
   const n = g.length - 1;
   const half = p.mirrored ? Math.ceil((p.maxZones + 1) / 2) : p.maxZones;
   const size = (n + 1) * (n + 1);
-  // Zone (i, j) from g[i] to g[j]: cost NaN until evaluated, Infinity when not allowed.
-  const cost = new Float64Array(size).fill(NaN);
-  const rowsOf = new Float64Array(size);
-  const spacingOf = new Float64Array(size);
-  const feasibleOf = new Uint8Array(size);
+  if (table.cost.length < size) table = { cost: new Float64Array(size), rows: new Float64Array(size), spacing: new Float64Array(size), feasible: new Uint8Array(size), index: new Int32Array(size) };
+  // Zone (i, j) from g[i] to g[j]: cost NaN until evaluated, Infinity when not allowed; its rows, spacing and
+  // feasibility are read only once it is evaluated.
+  const { cost, rows: rowsOf, spacing: spacingOf, feasible: feasibleOf, index: indexOf } = table;
+  cost.fill(NaN, 0, size);
   // Index of the spacing found for each zone that ends before the last boundary (−1: none carries, −2: not evaluated).
   // For one start, a longer zone's demand over its reach is no smaller, so its spacing is no larger: its search starts
   // at the spacing of the nearest shorter zone evaluated (the largest spacing that carries is the same).
-  const indexOf = new Int32Array(size).fill(-2);
+  indexOf.fill(-2, 0, size);
   const zoneCost = (i: number, j: number): number => {
     const key = i * (n + 1) + j;
     if (Number.isNaN(cost[key]!)) {
@@ -64,14 +67,7 @@ export function planZones(p: ZoningProblem): ZonePlan {
           break;
         }
       }
-      const z = zoneAt(p, g[i]!, g[j]!, i === 0, j === n, ceiling);
-      cost[key] = z ? z.cost : Infinity;
-      if (z) {
-        rowsOf[key] = z.rows;
-        spacingOf[key] = z.spacing;
-        feasibleOf[key] = z.feasible ? 1 : 0;
-        if (j < n) indexOf[key] = z.index;
-      }
+      zoneInto(table, key, p, g[i]!, g[j]!, i === 0, j === n, ceiling);
     }
     return cost[key]!;
   };
@@ -136,12 +132,22 @@ function mergeEqual(zones: PlannedZone[]): PlannedZone[] {
 
 /** Spacing, feasibility and row count of one candidate zone [a, b]; null when the zone is not allowed. Exported for the optimality test. */
 export function evaluateZone(p: ZoningProblem, a: number, b: number, first: boolean, last: boolean) {
-  const z = zoneAt(p, a, b, first, last, p.spacings.length - 1);
-  return z && { cost: z.cost, rows: z.rows, spacing: z.spacing, feasible: z.feasible };
+  const t: ZoneTable = { cost: new Float64Array(1), rows: new Float64Array(1), spacing: new Float64Array(1), feasible: new Uint8Array(1), index: new Int32Array(1) };
+  zoneInto(t, 0, p, a, b, first, last, p.spacings.length - 1);
+  return t.cost[0] === Infinity ? null : { cost: t.cost[0]!, rows: t.rows[0]!, spacing: t.spacing[0]!, feasible: t.feasible[0] === 1 };
 }
 
-/** evaluateZone, knowing that no spacing above index `ceiling` carries the zone. */
-function zoneAt(p: ZoningProblem, a: number, b: number, first: boolean, last: boolean, ceiling: number) {
+/** Candidate zones' cost (Infinity when not allowed), rows, spacing, feasibility and spacing index (−1: none carries). */
+interface ZoneTable {
+  cost: Float64Array;
+  rows: Float64Array;
+  spacing: Float64Array;
+  feasible: Uint8Array;
+  index: Int32Array;
+}
+
+/** evaluateZone into entry `key` of the table, knowing that no spacing above index `ceiling` carries the zone. */
+function zoneInto(t: ZoneTable, key: number, p: ZoningProblem, a: number, b: number, first: boolean, last: boolean, ceiling: number): void {
   const L = p.length;
   const e = p.endDistance;
   const fullLength = p.mirrored && last ? L - 2 * a : b - a;
@@ -149,18 +155,22 @@ function zoneAt(p: ZoningProblem, a: number, b: number, first: boolean, last: bo
   // Lengths compare to a tolerance relative to the member (as the rows are placed): a member length, end
   // distance or shortest zone converted from the other unit system sits a rounding error off a grid length.
   const tol = 1e-9 * Math.max(L, p.minZoneLength);
-  if (!wholeMember && fullLength < p.minZoneLength - tol) return null;
   const start = first ? e : a;
-  if (!last && b <= start + tol) return null;
+  if ((!wholeMember && fullLength < p.minZoneLength - tol) || (!last && b <= start + tol)) {
+    t.cost[key] = Infinity;
+    return;
+  }
   const index = ceiling < 0 ? -1 : zoneSpacing(p, a, b, first, last, true, ceiling);
-  const spacing = index < 0 ? undefined : p.spacings[index]!;
-  const s = spacing ?? p.spacings[0]!;
+  const s = index < 0 ? p.spacings[0]! : p.spacings[index]!;
   let rows: number;
   if (p.mirrored && last) rows = (Math.ceil((L - 2 * start - tol) / s - 1e-9) + 1) / 2;
   else if (last) rows = Math.ceil((L - e - start - tol) / s - 1e-9) + 1;
   else rows = Math.ceil((b - start - tol) / s - 1e-9);
-  const cost = spacing === undefined ? rows + INFEASIBLE_PENALTY * (b - a) : rows;
-  return { cost, rows, spacing: s, feasible: spacing !== undefined, index };
+  t.cost[key] = index < 0 ? rows + INFEASIBLE_PENALTY * (b - a) : rows;
+  t.rows[key] = rows;
+  t.spacing[key] = s;
+  t.feasible[key] = index < 0 ? 0 : 1;
+  t.index[key] = index;
 }
 
 /**
@@ -181,13 +191,12 @@ function zoneSpacing(p: ZoningProblem, a: number, b: number, first: boolean, las
   if (topIndex < 0) return -1;
   // Usually the zone's own demand governs and the first candidate carries it; otherwise the answer is
   // mostly a step or two below: step down 1, 2, 4, … until a spacing carries, then bisect the bracket.
-  const carries = (i: number) => zoneCarries(p, a, b, first, last, p.spacings[i]!, endRow);
-  if (carries(topIndex)) return topIndex;
+  if (zoneCarries(p, a, b, first, last, p.spacings[topIndex]!, endRow)) return topIndex;
   let failing = topIndex;
   let carrying = -1;
   for (let step = 1; ; step *= 2) {
     const i = Math.max(0, topIndex - step);
-    if (carries(i)) {
+    if (zoneCarries(p, a, b, first, last, p.spacings[i]!, endRow)) {
       carrying = i;
       break;
     }
@@ -196,7 +205,7 @@ function zoneSpacing(p: ZoningProblem, a: number, b: number, first: boolean, las
   }
   while (failing - carrying > 1) {
     const mid = (failing + carrying) >> 1;
-    if (carries(mid)) carrying = mid;
+    if (zoneCarries(p, a, b, first, last, p.spacings[mid]!, endRow)) carrying = mid;
     else failing = mid;
   }
   return carrying;
