@@ -251,6 +251,32 @@ interface LoadCase {
   reactions: Reaction[];
   actions: MemberActions;
   curve: DeflectionCurve;
+  /** The curve's pieces in one array, 11 numbers a piece (θ then v), for summing combinations piece by piece. */
+  flatCurve?: Float64Array;
+  /** The actions' pieces in one array, 7 numbers a piece (V then M). */
+  flatActions?: Float64Array;
+}
+
+function flatActionsOf(c: LoadCase): Float64Array {
+  if (c.flatActions) return c.flatActions;
+  const pieces = c.actions.pieces;
+  const flat = new Float64Array(7 * pieces.length);
+  pieces.forEach((p, k) => {
+    flat.set(p.v, 7 * k);
+    flat.set(p.m, 7 * k + 3);
+  });
+  return (c.flatActions = flat);
+}
+
+function flatCurveOf(c: LoadCase): Float64Array {
+  if (c.flatCurve) return c.flatCurve;
+  const pieces = c.curve.pieces;
+  const flat = new Float64Array(11 * pieces.length);
+  pieces.forEach((p, k) => {
+    for (let i = 0; i < 5; i++) flat[11 * k + i] = p.theta[i]!;
+    for (let i = 0; i < 6; i++) flat[11 * k + 5 + i] = p.v[i]!;
+  });
+  return (c.flatCurve = flat);
 }
 type Term = { c: LoadCase; f: number };
 /** What every combination of one member is superposed on: its breaks and supports. */
@@ -268,14 +294,15 @@ function combinedActions(terms: Term[], on: Superposition): MemberActions {
     let v0 = 0, v1 = 0, v2 = 0, m0 = 0, m1 = 0, m2 = 0, m3 = 0;
     for (let t = 0; t < terms.length; t++) {
       const { c, f } = terms[t]!;
-      const p = c.actions.pieces[k]!;
-      v0 += f * p.v[0];
-      v1 += f * p.v[1];
-      v2 += f * p.v[2];
-      m0 += f * p.m[0];
-      m1 += f * p.m[1];
-      m2 += f * p.m[2];
-      m3 += f * p.m[3];
+      const p = flatActionsOf(c);
+      const at = 7 * k;
+      v0 += f * p[at]!;
+      v1 += f * p[at + 1]!;
+      v2 += f * p[at + 2]!;
+      m0 += f * p[at + 3]!;
+      m1 += f * p[at + 4]!;
+      m2 += f * p[at + 5]!;
+      m3 += f * p[at + 6]!;
     }
     pieces.push({ x0: grid[k]!, x1: grid[k + 1]!, v: [v0, v1, v2], m: [m0, m1, m2, m3] });
   }
@@ -287,9 +314,9 @@ function combinedCurvePiece(terms: Term[], k: number, out: Float64Array): void {
   out.fill(0);
   for (let t = 0; t < terms.length; t++) {
     const { c, f } = terms[t]!;
-    const p = c.curve.pieces[k]!;
-    for (let i = 0; i < 5; i++) out[i]! += f * p.theta[i]!;
-    for (let i = 0; i < 6; i++) out[5 + i]! += f * p.v[i]!;
+    const flat = flatCurveOf(c);
+    const at = 11 * k;
+    for (let i = 0; i < 11; i++) out[i]! += f * flat[at + i]!;
   }
 }
 

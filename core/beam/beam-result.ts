@@ -151,15 +151,16 @@ export function beamResult(beam: BeamAnalysis, stations: Station[]): BeamResult 
   // Running extremes, combination by combination (the first one reaching a value keeps it).
   const best = { shearMax: new Int32Array(n), shearMin: new Int32Array(n), momentMax: new Int32Array(n), momentMin: new Int32Array(n), shearAbs: new Int32Array(n) };
   const top = { shearMax: new Float64Array(n).fill(-Infinity), shearMin: new Float64Array(n).fill(Infinity), momentMax: new Float64Array(n).fill(-Infinity), momentMin: new Float64Array(n).fill(Infinity), shearAbs: new Float64Array(n).fill(-Infinity) };
+  const { shearMax, shearMin, momentMax, momentMin, shearAbs } = top;
   values.forEach(({ shear, moment }, i) => {
     for (let j = 0; j < n; j++) {
       const v = shear[j]!;
       const m = moment[j]!;
-      if (v > top.shearMax[j]!) (top.shearMax[j] = v), (best.shearMax[j] = i);
-      if (v < top.shearMin[j]!) (top.shearMin[j] = v), (best.shearMin[j] = i);
-      if (m > top.momentMax[j]!) (top.momentMax[j] = m), (best.momentMax[j] = i);
-      if (m < top.momentMin[j]!) (top.momentMin[j] = m), (best.momentMin[j] = i);
-      if (Math.abs(v) > top.shearAbs[j]!) (top.shearAbs[j] = Math.abs(v)), (best.shearAbs[j] = i);
+      if (v > shearMax[j]!) (shearMax[j] = v), (best.shearMax[j] = i);
+      if (v < shearMin[j]!) (shearMin[j] = v), (best.shearMin[j] = i);
+      if (m > momentMax[j]!) (momentMax[j] = m), (best.momentMax[j] = i);
+      if (m < momentMin[j]!) (momentMin[j] = m), (best.momentMin[j] = i);
+      if (Math.abs(v) > shearAbs[j]!) (shearAbs[j] = Math.abs(v)), (best.shearAbs[j] = i);
     }
   });
   const valuesOf = (a: Float64Array) => (values.length === 0 ? new Array<number>(n).fill(0) : Array.from(a));

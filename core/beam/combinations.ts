@@ -212,8 +212,16 @@ export function patternTimeEffect(base: Combination, loaded: string[], info: Map
  */
 function withSelections(list: Raw[], present: CategoryInfo[], patterned: Set<string>, info: Map<string, CategoryInfo>): Raw[] {
   const out: Raw[] = [];
-  const factorsOf = (categories: string[], principal: string[]) =>
-    `${shortestDuration(categories.map((c) => info.get(c)!.duration))}|${ndsLoadDurationFactor(categories, shortestDuration(categories.map((c) => info.get(c)!.duration))).value}|${formTimeEffect(principal, categories, info).value}`;
+  const known = new Map<string, string>();
+  const factorsOf = (categories: string[], principal: string[]) => {
+    const key = JSON.stringify([categories, principal]);
+    let made = known.get(key);
+    if (made === undefined) {
+      made = `${shortestDuration(categories.map((c) => info.get(c)!.duration))}|${ndsLoadDurationFactor(categories, shortestDuration(categories.map((c) => info.get(c)!.duration))).value}|${formTimeEffect(principal, categories, info).value}`;
+      known.set(key, made);
+    }
+    return made;
+  };
   for (const r of list) {
     const variable = present.filter((c) => !permanentLoad(c) && (r.factors[c.id] ?? 0) !== 0);
     const all = present.filter((c) => (r.factors[c.id] ?? 0) !== 0).map((c) => c.id);
@@ -228,8 +236,9 @@ function withSelections(list: Raw[], present: CategoryInfo[], patterned: Set<str
         return withX.every((c) => c === x.id || !patterned.has(c)) && factorsOf(withX, principal) === factorsOf(left, principal);
       });
       if (inPatterns) continue;
-      const factors = { ...r.factors };
-      for (const d of dropped) delete factors[d.id];
+      // Built without the dropped keys rather than deleting them (an object with deleted keys turns slow to read).
+      const factors: Record<string, number> = {};
+      for (const [c, f] of Object.entries(r.factors)) if (!dropped.some((d) => d.id === c)) factors[c] = f;
       out.push({ ...r, id: dropped.length === 0 ? r.id : `${r.id} without ${dropped.map((d) => d.symbol).join(", ")}`, factors });
     }
   }

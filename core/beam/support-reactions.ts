@@ -13,15 +13,7 @@ import { rigidityAt, type RigidityStep } from "./rigidity.js";
  * Reactions are in member-actions' convention: R upward, M clockwise on the member.
  */
 export function supportReactions(model: BeamModel, loads: LoadSet, rigidity: RigidityStep[] | null = null): Reaction[] {
-  // A member whose section changes along it is split at each change into prismatic elements with free nodes between.
-  const inner = (rigidity ?? []).map((r) => r.x0).filter((x) => x > 0 && !model.nodes.some((n) => Math.abs(n - x) <= 1e-9 * model.length));
-  const nodes = [...model.nodes, ...inner].sort((a, b) => a - b);
-  const ends = nodes.map((x) => {
-    const i = model.nodes.findIndex((n) => Math.abs(n - x) <= 1e-9 * model.length);
-    return i >= 0 ? model.ends[i]! : ("free" as const);
-  });
-  const n = nodes.length - 1;
-  const relative = (e: number) => (rigidity ? rigidityAt(rigidity, (nodes[e]! + nodes[e + 1]!) / 2) / rigidity[0]!.value : 1);
+  const { nodes, ends, n, stiffnesses, free, dof, solve } = stiffnessOf(model, rigidity);
   const fixedEnd: EndForces[] = Array.from({ length: n }, noEndForces);
   const add = (e: number, f: EndForces) => {
     const t = fixedEnd[e]!;
@@ -53,44 +45,21 @@ export function supportReactions(model: BeamModel, loads: LoadSet, rigidity: Rig
     }
   }
 
-  const dof = 2 * (n + 1);
-  const K = Array.from({ length: dof }, () => new Float64Array(dof));
   const F = new Float64Array(dof);
-  const stiffness = (L: number, ei: number) =>
-    [
-      [12 / L ** 3, 6 / L ** 2, -12 / L ** 3, 6 / L ** 2],
-      [6 / L ** 2, 4 / L, -6 / L ** 2, 2 / L],
-      [-12 / L ** 3, -6 / L ** 2, 12 / L ** 3, -6 / L ** 2],
-      [6 / L ** 2, 2 / L, -6 / L ** 2, 4 / L],
-    ].map((row) => row.map((v) => v * ei));
-  const elementDofs = (e: number) => [2 * e, 2 * e + 1, 2 * e + 2, 2 * e + 3];
   for (let e = 0; e < n; e++) {
-    const k = stiffness(nodes[e + 1]! - nodes[e]!, relative(e));
     const d = elementDofs(e);
     const f = fixedEnd[e]!;
     const fe = [f.F1, f.M1, f.F2, f.M2];
-    for (let i = 0; i < 4; i++) {
-      F[d[i]!]! -= fe[i]!;
-      for (let j = 0; j < 4; j++) K[d[i]!]![d[j]!]! += k[i]![j]!;
-    }
+    for (let i = 0; i < 4; i++) F[d[i]!]! -= fe[i]!;
   }
-  const restrained = new Set<number>();
-  ends.forEach((c, i) => {
-    if (c !== "free") restrained.add(2 * i);
-    if (c === "fixed") restrained.add(2 * i + 1);
-  });
-  const free = Array.from({ length: dof }, (_, i) => i).filter((i) => !restrained.has(i));
-  const solved = solveSymmetric(
-    free.map((i) => free.map((j) => K[i]![j]!)),
-    free.map((i) => F[i]!),
-  );
+  const solved = solve(free.map((i) => F[i]!));
   const d = new Float64Array(dof);
   free.forEach((i, k) => (d[i] = solved[k]!));
 
   // End forces on each element, summed at each node: what the node (its support) gives the member.
   const atNode = new Float64Array(dof);
   for (let e = 0; e < n; e++) {
-    const k = stiffness(nodes[e + 1]! - nodes[e]!, relative(e));
+    const k = stiffnesses[e]!;
     const dofs = elementDofs(e);
     const f = fixedEnd[e]!;
     const fe = [f.F1, f.M1, f.F2, f.M2];
@@ -103,30 +72,102 @@ export function supportReactions(model: BeamModel, loads: LoadSet, rigidity: Rig
   return ends.flatMap((c, i) => (c === "free" ? [] : [{ x: nodes[i]!, R: atNode[2 * i]!, M: c === "fixed" ? -atNode[2 * i + 1]! : 0 }]));
 }
 
-/** Gaussian elimination with partial pivoting after symmetric diagonal scaling (rotations and deflections differ in scale by a length). */
-function solveSymmetric(A: number[][], b: number[]): number[] {
-  const m = b.length;
+const elementDofs = (e: number) => [2 * e, 2 * e + 1, 2 * e + 2, 2 * e + 3];
+
+interface Stiffness {
+  nodes: number[];
+  ends: BeamModel["ends"][number][];
+  /** Elements. */
+  n: number;
+  /** Each element's stiffness matrix. */
+  stiffnesses: number[][][];
+  /** The degrees of freedom not restrained, in order. */
+  free: number[];
+  dof: number;
+  /** K_free·d = b, by the elimination worked out once for every load on the member. */
+  solve: (b: number[]) => number[];
+}
+
+/** The member's stiffness, the same for every load case: assembled and eliminated once per model (and E·I steps). */
+const stiffnessByModel = new WeakMap<BeamModel, { rigidity: RigidityStep[] | null; stiffness: Stiffness }>();
+
+function stiffnessOf(model: BeamModel, rigidity: RigidityStep[] | null): Stiffness {
+  const known = stiffnessByModel.get(model);
+  if (known && known.rigidity === rigidity) return known.stiffness;
+  // A member whose section changes along it is split at each change into prismatic elements with free nodes between.
+  const inner = (rigidity ?? []).map((r) => r.x0).filter((x) => x > 0 && !model.nodes.some((n) => Math.abs(n - x) <= 1e-9 * model.length));
+  const nodes = [...model.nodes, ...inner].sort((a, b) => a - b);
+  const ends = nodes.map((x) => {
+    const i = model.nodes.findIndex((n) => Math.abs(n - x) <= 1e-9 * model.length);
+    return i >= 0 ? model.ends[i]! : ("free" as const);
+  });
+  const n = nodes.length - 1;
+  const relative = (e: number) => (rigidity ? rigidityAt(rigidity, (nodes[e]! + nodes[e + 1]!) / 2) / rigidity[0]!.value : 1);
+  const dof = 2 * (n + 1);
+  const K = Array.from({ length: dof }, () => new Float64Array(dof));
+  const stiffness = (L: number, ei: number) =>
+    [
+      [12 / L ** 3, 6 / L ** 2, -12 / L ** 3, 6 / L ** 2],
+      [6 / L ** 2, 4 / L, -6 / L ** 2, 2 / L],
+      [-12 / L ** 3, -6 / L ** 2, 12 / L ** 3, -6 / L ** 2],
+      [6 / L ** 2, 2 / L, -6 / L ** 2, 4 / L],
+    ].map((row) => row.map((v) => v * ei));
+  const stiffnesses: number[][][] = [];
+  for (let e = 0; e < n; e++) {
+    const k = stiffness(nodes[e + 1]! - nodes[e]!, relative(e));
+    stiffnesses.push(k);
+    const d = elementDofs(e);
+    for (let i = 0; i < 4; i++) for (let j = 0; j < 4; j++) K[d[i]!]![d[j]!]! += k[i]![j]!;
+  }
+  const restrained = new Set<number>();
+  ends.forEach((c, i) => {
+    if (c !== "free") restrained.add(2 * i);
+    if (c === "fixed") restrained.add(2 * i + 1);
+  });
+  const free = Array.from({ length: dof }, (_, i) => i).filter((i) => !restrained.has(i));
+  const made: Stiffness = { nodes, ends, n, stiffnesses, free, dof, solve: eliminated(free.map((i) => free.map((j) => K[i]![j]!))) };
+  stiffnessByModel.set(model, { rigidity, stiffness: made });
+  return made;
+}
+
+/**
+ * Gaussian elimination with partial pivoting after symmetric diagonal scaling (rotations and deflections
+ * differ in scale by a length), done on A once: the row swaps and multipliers are kept and applied to each
+ * right-hand side in the order the elimination made them.
+ */
+function eliminated(A: number[][]): (b: number[]) => number[] {
+  const m = A.length;
   const s = A.map((row, i) => 1 / Math.sqrt(Math.abs(row[i]!) || 1));
   const M = A.map((row, i) => row.map((v, j) => v * s[i]! * s[j]!));
-  const y = b.map((v, i) => v * s[i]!);
+  const steps: { pivot: number; rows: number[]; factors: number[] }[] = [];
   for (let c = 0; c < m; c++) {
     let p = c;
     for (let r = c + 1; r < m; r++) if (Math.abs(M[r]![c]!) > Math.abs(M[p]![c]!)) p = r;
     if (!(Math.abs(M[p]![c]!) > 1e-10)) throw new Error("the supports do not hold the member (singular stiffness matrix)");
     [M[c], M[p]] = [M[p]!, M[c]!];
-    [y[c], y[p]] = [y[p]!, y[c]!];
+    const step = { pivot: p, rows: [] as number[], factors: [] as number[] };
     for (let r = c + 1; r < m; r++) {
       const f = M[r]![c]! / M[c]![c]!;
       if (f === 0) continue;
       for (let k = c; k < m; k++) M[r]![k]! -= f * M[c]![k]!;
-      y[r]! -= f * y[c]!;
+      step.rows.push(r);
+      step.factors.push(f);
     }
+    steps.push(step);
   }
-  const x = new Array<number>(m).fill(0);
-  for (let r = m - 1; r >= 0; r--) {
-    let t = y[r]!;
-    for (let k = r + 1; k < m; k++) t -= M[r]![k]! * x[k]!;
-    x[r] = t / M[r]![r]!;
-  }
-  return x.map((v, i) => v * s[i]!);
+  return (b) => {
+    const y = b.map((v, i) => v * s[i]!);
+    for (let c = 0; c < m; c++) {
+      const { pivot: p, rows, factors } = steps[c]!;
+      [y[c], y[p]] = [y[p]!, y[c]!];
+      for (let q = 0; q < rows.length; q++) y[rows[q]!]! -= factors[q]! * y[c]!;
+    }
+    const x = new Array<number>(m).fill(0);
+    for (let r = m - 1; r >= 0; r--) {
+      let t = y[r]!;
+      for (let k = r + 1; k < m; k++) t -= M[r]![k]! * x[k]!;
+      x[r] = t / M[r]![r]!;
+    }
+    return x.map((v, i) => v * s[i]!);
+  };
 }
