@@ -7,7 +7,7 @@ export type ToBatchWorker = { inputs: string[] } | { tasks: MemberTask[] };
 export type FromBatchWorker = "ready" | { outcomes: MemberOutcome[] };
 
 /** Members in progress on the thread at once, so that one member's file read and writes overlap another's design. */
-const LANES = 3;
+const LANES = 2;
 
 let inputs: ReadonlySet<string> = new Set();
 const queue: MemberTask[] = [];
