@@ -32,13 +32,6 @@ interface Slot {
   worker: Worker;
   ready: boolean;
   current: (Pending & { id: number; timer: NodeJS.Timeout }) | null;
-  /**
-   * The task sent behind the current one, so that the thread starts it as soon as it has posted the
-   * current answer instead of waiting for the HTTP thread to hear of it and send another (a hop of
-   * 0.1 ms to a few ms when the HTTP thread is busy). Its time limit starts when the current task is
-   * answered; if the thread is stopped or dies first, it goes back to the front of the queue, not run.
-   */
-  next: (Pending & { id: number }) | null;
 }
 
 const WORKER_ENTRY = new URL("./design-worker.ts", import.meta.url);
@@ -63,12 +56,10 @@ export class DesignThreads implements TaskRunner {
 
   run<T extends DesignTask>(task: T, options: { unbounded?: boolean } = {}): Promise<TaskAnswer<T>> {
     if (this.closed) return Promise.reject(new ApiError("ERR_INTERNAL", "The server is stopping; send the request again once it has restarted."));
-    // A task sent behind a running one still waits: it counts against the queue's limit as before.
-    const waiting = this.queue.length + this.slots.filter((slot) => slot.next).length;
-    if (!options.unbounded && waiting >= this.options.queueLength) {
+    if (!options.unbounded && this.queue.length >= this.options.queueLength) {
       const retryAfter = Math.max(1, Math.ceil(this.options.timeLimitMs(task) / 1000 / 10));
       return Promise.reject(
-        new ApiError("ERR_BUSY", `${waiting} ${this.options.name}s are already waiting for a thread (the limit); send the request again in ${retryAfter} s. Nothing was stored or changed.`, [], { retryAfterSeconds: retryAfter }),
+        new ApiError("ERR_BUSY", `${this.queue.length} ${this.options.name}s are already waiting for a thread (the limit); send the request again in ${retryAfter} s. Nothing was stored or changed.`, [], { retryAfterSeconds: retryAfter }),
       );
     }
     return new Promise<TaskAnswer<T>>((resolve, reject) => {
@@ -84,60 +75,41 @@ export class DesignThreads implements TaskRunner {
 
   async close(): Promise<void> {
     this.closed = true;
-    const sentBehind = this.slots.flatMap((slot) => (slot.next ? [slot.next] : []));
-    for (const pending of [...sentBehind, ...this.queue.splice(0)]) pending.reject(new ApiError("ERR_INTERNAL", "The server stopped before this design was done."));
+    for (const pending of this.queue.splice(0)) pending.reject(new ApiError("ERR_INTERNAL", "The server stopped before this design was done."));
     await Promise.all(this.slots.splice(0).map((slot) => slot.worker.terminate()));
   }
 
   private dispatch(): void {
     if (this.closed) return;
     this.warm();
-    // Every idle thread gets a task first, then each busy one a task to start next.
-    for (const behind of [false, true]) {
-      for (const slot of this.slots) {
-        if (this.queue.length === 0) return;
-        if (!slot.ready || (behind ? !slot.current || slot.next : slot.current)) continue;
-        const pending = this.queue.shift()!;
-        const id = this.nextId++;
-        if (behind) slot.next = { ...pending, id };
-        else slot.current = { ...pending, id, timer: this.timeLimit(slot, pending.task) };
-        try {
-          slot.worker.postMessage({ id, task: pending.task });
-        } catch (error) {
-          // Input that cannot be copied to the thread (nested too deeply for the copier).
-          if (behind) slot.next = null;
-          else {
-            clearTimeout(slot.current!.timer);
-            slot.current = null;
-          }
-          pending.reject(new ApiError("ERR_INPUT_INVALID", undefined, [{ path: "(document)", message: `cannot be read (${(error as Error).message}); is it nested too deeply?` }]));
-        }
+    for (const slot of this.slots) {
+      if (this.queue.length === 0) return;
+      if (!slot.ready || slot.current) continue;
+      const pending = this.queue.shift()!;
+      const id = this.nextId++;
+      const limit = this.options.timeLimitMs(pending.task);
+      const timer = setTimeout(() => this.stop(slot, tooLong(limit)), limit);
+      slot.current = { ...pending, id, timer };
+      try {
+        slot.worker.postMessage({ id, task: pending.task });
+      } catch (error) {
+        // Input that cannot be copied to the thread (nested too deeply for the copier).
+        clearTimeout(timer);
+        slot.current = null;
+        pending.reject(new ApiError("ERR_INPUT_INVALID", undefined, [{ path: "(document)", message: `cannot be read (${(error as Error).message}); is it nested too deeply?` }]));
       }
     }
   }
 
-  private timeLimit(slot: Slot, task: DesignTask): NodeJS.Timeout {
-    const limit = this.options.timeLimitMs(task);
-    return setTimeout(() => this.stop(slot, tooLong(limit)), limit);
-  }
-
-  /** The task sent behind a stopped or dead thread's current one never ran: it waits again, first. */
-  private requeueNext(slot: Slot): void {
-    if (slot.next) this.queue.unshift({ task: slot.next.task, resolve: slot.next.resolve, reject: slot.next.reject });
-    slot.next = null;
-  }
-
   private start(): Slot {
-    const slot: Slot = { worker: startThread(WORKER_ENTRY, { maxOldGenerationSizeMb: this.options.memoryMb }), ready: false, current: null, next: null };
+    const slot: Slot = { worker: startThread(WORKER_ENTRY, { maxOldGenerationSizeMb: this.options.memoryMb }), ready: false, current: null };
     slot.worker.on("message", (message: "ready" | { id: number; answer?: unknown; error?: WireError }) => {
       if (message === "ready") {
         slot.ready = true;
       } else if (slot.current?.id === message.id) {
         const { resolve, reject, timer } = slot.current;
         clearTimeout(timer);
-        // The thread has already begun the task sent behind this one.
-        slot.current = slot.next ? { ...slot.next, timer: this.timeLimit(slot, slot.next.task) } : null;
-        slot.next = null;
+        slot.current = null;
         if (message.error) reject(fromWire(message.error));
         else resolve(message.answer);
       }
@@ -153,7 +125,6 @@ export class DesignThreads implements TaskRunner {
       const index = this.slots.indexOf(slot);
       if (index < 0) return;
       this.slots.splice(index, 1);
-      this.requeueNext(slot);
       if (slot.current) {
         clearTimeout(slot.current.timer);
         if (outOfMemory) slot.current.reject(tooLarge(this.options.memoryMb, this.options.name));
@@ -174,7 +145,6 @@ export class DesignThreads implements TaskRunner {
     if (index >= 0) this.slots.splice(index, 1);
     slot.current?.reject(error);
     slot.current = null;
-    this.requeueNext(slot);
     void slot.worker.terminate();
     this.dispatch();
   }

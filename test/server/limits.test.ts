@@ -151,34 +151,6 @@ describe("the time limit", () => {
       await limited.close();
     }
   });
-
-  test("a design sent to the thread behind one that is stopped at the limit is designed on the next thread, within its own limit", { timeout: 120_000 }, async () => {
-    const limited = await buildApp({ designThreads: 1, timeLimits: { designMs: 400 } });
-    try {
-      const job = example("workshop-box-beam.si");
-      const categories = ["dead", "live", "snow", "wind"];
-      const heavy = {
-        ...job,
-        beam: {
-          spans: Array(12).fill(3.2),
-          loads: Array.from({ length: 200 }, (_, i) => ({ type: "point", category: categories[i % 4], P: 1, at: (i * 0.31) % 38 })),
-          patternedCategories: ["live", "snow", "wind"],
-        },
-        combinations: { set: "asce7-22-allowable" },
-      };
-      expect((await limited.inject({ method: "POST", url: "/api/designs", payload: job })).statusCode).toBe(200);
-      // Sent at once: the second waits behind the heavy one on the only thread, which is stopped with it.
-      const [stopped, behind] = await Promise.all([
-        limited.inject({ method: "POST", url: "/api/designs", payload: heavy }),
-        limited.inject({ method: "POST", url: "/api/designs", payload: { ...job, member: { ...job.member, mark: "behind" } } }),
-      ]);
-      expect(stopped.json()).toMatchObject({ code: "ERR_DESIGN_TIME_LIMIT" });
-      expect(behind.statusCode, behind.body.slice(0, 300)).toBe(200);
-      expect(behind.json().status.passes).toBe(true);
-    } finally {
-      await limited.close();
-    }
-  });
 });
 
 describe("designs, summaries and worksheets stay on their threads, within their limits", () => {
