@@ -62,26 +62,33 @@ function compile(schema: z.ZodType): Converter {
         .map(([key, field]) => [key, converterOf(field)] as const)
         .filter(([, c]) => c !== same);
       if (fields.length === 0) return same;
+      const keys = fields.map(([key]) => key);
+      const converters = fields.map(([, c]) => c);
       return (v, s) => {
         if (absent(v)) return v;
         const out: Record<string, unknown> = { ...(v as Record<string, unknown>) };
-        for (const [key, c] of fields) if (key in out) out[key] = c(out[key], s);
+        for (let i = 0; i < keys.length; i++) {
+          const key = keys[i]!;
+          if (key in out) out[key] = converters[i]!(out[key], s);
+        }
         return out;
       };
     }
     case "array": {
       const element = def.element!;
       const elementMeta = quantityOf.get(element);
-      // Loops that push rather than map: the copy stays a packed array, which JSON.stringify writes fastest.
+      // Copies by push rather than map: they come out packed (core's arrays are often holey), which
+      // JSON.stringify writes on its fast path. Anything but a plain array keeps map's own result.
       if (elementMeta) {
         const q = elementMeta.quantity;
         const qi = quantities.indexOf(q);
+        const scaled = (x: unknown, s: Scale) => (typeof x === "number" ? s(x, q, qi) : x);
         return (v, s) => {
           if (absent(v)) return v;
-          const list = v as unknown[];
+          if (!Array.isArray(v)) return (v as unknown[]).map((x) => scaled(x, s));
           const out: unknown[] = [];
-          for (let i = 0; i < list.length; i++) {
-            const x = list[i];
+          for (let i = 0; i < v.length; i++) {
+            const x: unknown = v[i];
             out.push(typeof x === "number" ? s(x, q, qi) : x);
           }
           return out;
@@ -91,9 +98,9 @@ function compile(schema: z.ZodType): Converter {
       if (c === same) return same;
       return (v, s) => {
         if (absent(v)) return v;
-        const list = v as unknown[];
+        if (!Array.isArray(v)) return (v as unknown[]).map((x) => c(x, s));
         const out: unknown[] = [];
-        for (let i = 0; i < list.length; i++) out.push(c(list[i], s));
+        for (let i = 0; i < v.length; i++) out.push(c(v[i], s));
         return out;
       };
     }
