@@ -1,6 +1,6 @@
 import type { z } from "zod";
 import { quantityOf } from "../schema/quantity.js";
-import { quantities, quantityUnits, toCore, unitSystems, type Quantity, type UnitSystem } from "./quantity.js";
+import { quantities, quantityUnits, unitSystems, type Quantity, type UnitSystem } from "./quantity.js";
 
 /** `index` is the quantity's place in `quantities`, for a scale that looks its factor up in a table. */
 type Scale = (value: number, quantity: Quantity, index: number) => number;
@@ -29,6 +29,9 @@ const defOf = (schema: z.ZodType): Def => (schema as unknown as { _zod: { def: D
 export function rescale<T>(schema: z.ZodType, value: T, scale: Scale): T {
   return converterOf(schema)(value, scale) as T;
 }
+
+/** Each quantity's factor per system (to core units: ×, back: ÷), by its index in `quantities`: an array read is cheaper per number than the unit table. */
+const unitFactors = Object.fromEntries(unitSystems.map((system) => [system, Float64Array.from(quantities, (q) => quantityUnits[q][system].factor)])) as Record<UnitSystem, Float64Array>;
 
 const compiled = new WeakMap<z.ZodType, Converter>();
 const same: Converter = (v) => v;
@@ -169,12 +172,14 @@ function compile(schema: z.ZodType): Converter {
 
 /** A document written in `system` → the same document in core units. */
 export function toCoreUnits<T>(schema: z.ZodType, value: T, system: UnitSystem): T {
-  return rescale(schema, value, (v, q) => toCore(v, q, system));
+  // value × factor, as toCore multiplies, with the factor read from the table by index.
+  const factors = unitFactors[system];
+  return rescale(schema, value, (v, _q, qi) => v * factors[qi]!);
 }
 
 /** A document in core units → the same document in `system`, rounded to 12 significant figures to drop conversion noise. */
 export function toDisplayUnits<T>(schema: z.ZodType, value: T, system: UnitSystem, seen?: { nonFinite: boolean }): T {
-  const factors = displayFactors[system];
+  const factors = unitFactors[system];
   // Dividing by exactly 1 changes nothing, so it is skipped; the rounding is not (it is part of the answer).
   const scale: Scale = seen
     ? (v, _q, qi) => {
@@ -190,8 +195,6 @@ export function toDisplayUnits<T>(schema: z.ZodType, value: T, system: UnitSyste
   return rescale(schema, value, scale);
 }
 
-/** Each quantity's factor per system, by its index in `quantities`: an array read is cheaper per number than the unit table. */
-const displayFactors = Object.fromEntries(unitSystems.map((system) => [system, Float64Array.from(quantities, (q) => quantityUnits[q][system].factor)])) as Record<UnitSystem, Float64Array>;
 
 const POWERS = Array.from({ length: 45 }, (_, i) => 10 ** (i - 22));
 // |x| at or above LOW[i] and below HIGH[i] lies safely inside [10^(i-22), 10^(i-21)): floor(log10|x|) is i - 22
