@@ -1,6 +1,6 @@
 import type { z } from "zod";
 import { quantityOf } from "../schema/quantity.js";
-import { quantities, quantityUnits, toCore, unitSystems, type Quantity, type UnitSystem } from "./quantity.js";
+import { quantities, quantityUnits, unitSystems, type Quantity, type UnitSystem } from "./quantity.js";
 
 /** `index` is the quantity's place in `quantities`, for a scale that looks its factor up in a table. */
 type Scale = (value: number, quantity: Quantity, index: number) => number;
@@ -29,6 +29,9 @@ const defOf = (schema: z.ZodType): Def => (schema as unknown as { _zod: { def: D
 export function rescale<T>(schema: z.ZodType, value: T, scale: Scale): T {
   return converterOf(schema)(value, scale) as T;
 }
+
+/** Each quantity's factor per system (to core units: ×, back: ÷), by its index in `quantities`: an array read is cheaper per number than the unit table. */
+const unitFactors = Object.fromEntries(unitSystems.map((system) => [system, Float64Array.from(quantities, (q) => quantityUnits[q][system].factor)])) as Record<UnitSystem, Float64Array>;
 
 const compiled = new WeakMap<z.ZodType, Converter>();
 const same: Converter = (v) => v;
@@ -62,26 +65,33 @@ function compile(schema: z.ZodType): Converter {
         .map(([key, field]) => [key, converterOf(field)] as const)
         .filter(([, c]) => c !== same);
       if (fields.length === 0) return same;
+      const keys = fields.map(([key]) => key);
+      const converters = fields.map(([, c]) => c);
       return (v, s) => {
         if (absent(v)) return v;
         const out: Record<string, unknown> = { ...(v as Record<string, unknown>) };
-        for (const [key, c] of fields) if (key in out) out[key] = c(out[key], s);
+        for (let i = 0; i < keys.length; i++) {
+          const key = keys[i]!;
+          if (key in out) out[key] = converters[i]!(out[key], s);
+        }
         return out;
       };
     }
     case "array": {
       const element = def.element!;
       const elementMeta = quantityOf.get(element);
-      // Loops that push rather than map: the copy stays a packed array, which JSON.stringify writes fastest.
+      // Copies by push rather than map: they come out packed (core's arrays are often holey), which
+      // JSON.stringify writes on its fast path. Anything but a plain array keeps map's own result.
       if (elementMeta) {
         const q = elementMeta.quantity;
         const qi = quantities.indexOf(q);
+        const scaled = (x: unknown, s: Scale) => (typeof x === "number" ? s(x, q, qi) : x);
         return (v, s) => {
           if (absent(v)) return v;
-          const list = v as unknown[];
+          if (!Array.isArray(v)) return (v as unknown[]).map((x) => scaled(x, s));
           const out: unknown[] = [];
-          for (let i = 0; i < list.length; i++) {
-            const x = list[i];
+          for (let i = 0; i < v.length; i++) {
+            const x: unknown = v[i];
             out.push(typeof x === "number" ? s(x, q, qi) : x);
           }
           return out;
@@ -91,9 +101,9 @@ function compile(schema: z.ZodType): Converter {
       if (c === same) return same;
       return (v, s) => {
         if (absent(v)) return v;
-        const list = v as unknown[];
+        if (!Array.isArray(v)) return (v as unknown[]).map((x) => c(x, s));
         const out: unknown[] = [];
-        for (let i = 0; i < list.length; i++) out.push(c(list[i], s));
+        for (let i = 0; i < v.length; i++) out.push(c(v[i], s));
         return out;
       };
     }
@@ -162,12 +172,14 @@ function compile(schema: z.ZodType): Converter {
 
 /** A document written in `system` → the same document in core units. */
 export function toCoreUnits<T>(schema: z.ZodType, value: T, system: UnitSystem): T {
-  return rescale(schema, value, (v, q) => toCore(v, q, system));
+  // value × factor, as toCore multiplies, with the factor read from the table by index.
+  const factors = unitFactors[system];
+  return rescale(schema, value, (v, _q, qi) => v * factors[qi]!);
 }
 
 /** A document in core units → the same document in `system`, rounded to 12 significant figures to drop conversion noise. */
 export function toDisplayUnits<T>(schema: z.ZodType, value: T, system: UnitSystem, seen?: { nonFinite: boolean }): T {
-  const factors = displayFactors[system];
+  const factors = unitFactors[system];
   // Dividing by exactly 1 changes nothing, so it is skipped; the rounding is not (it is part of the answer).
   const scale: Scale = seen
     ? (v, _q, qi) => {
@@ -183,8 +195,6 @@ export function toDisplayUnits<T>(schema: z.ZodType, value: T, system: UnitSyste
   return rescale(schema, value, scale);
 }
 
-/** Each quantity's factor per system, by its index in `quantities`: an array read is cheaper per number than the unit table. */
-const displayFactors = Object.fromEntries(unitSystems.map((system) => [system, Float64Array.from(quantities, (q) => quantityUnits[q][system].factor)])) as Record<UnitSystem, Float64Array>;
 
 const POWERS = Array.from({ length: 45 }, (_, i) => 10 ** (i - 22));
 // |x| at or above LOW[i] and below HIGH[i] lies safely inside [10^(i-22), 10^(i-21)): floor(log10|x|) is i - 22
