@@ -3,8 +3,9 @@
 import { readFileSync } from "node:fs";
 import { designMember, DesignResult, prepareJob, toDisplayUnits } from "../core/index.js";
 import { fingerprintOf } from "../server/fingerprint.js";
-import type { designInUnits as DesignInUnits } from "../server/design-in-units.js";
-import { importBundled } from "../server/thread-entry.js";
+import { once } from "node:events";
+import { bundleThread, startThread } from "../server/thread-entry.js";
+import type { ThreadTiming } from "./member-thread.js";
 import { SIMPLE_MEMBER } from "./http.js";
 import { threeSpanJob } from "./three-span-job.js";
 import { timeIt } from "./time-it.js";
@@ -16,28 +17,27 @@ export interface MemberFigures {
   threeSpanMedianMs: number;
 }
 
-/** Median and p95 of `a` and of `b`, called in turn `runs` times each after a warm-up, ms. */
-function timePair(a: () => void, b: () => void, runs: number): [{ median: number; p95: number }, { median: number; p95: number }] {
-  const times: [number[], number[]] = [[], []];
-  for (let i = 0; i < runs + 20; i++) {
-    for (const [k, fn] of (i % 2 ? [[0, a], [1, b]] : [[1, b], [0, a]]) as [0 | 1, () => void][]) {
-      const t0 = performance.now();
-      fn();
-      if (i >= 20) times[k].push(performance.now() - t0);
-    }
+const THREAD_ENTRY = new URL("./member-thread.ts", import.meta.url);
+
+/** The whole request timed `runs` times in a fresh worker thread (bench/member-thread.ts). */
+async function inThread(input: unknown, runs: number): Promise<ThreadTiming> {
+  await bundleThread(THREAD_ENTRY);
+  const worker = startThread(THREAD_ENTRY);
+  try {
+    worker.postMessage({ input, runs });
+    const [timing] = (await once(worker, "message")) as [ThreadTiming];
+    return timing;
+  } finally {
+    await worker.terminate();
   }
-  const figures = (t: number[]) => (t.sort((x, y) => x - y), { median: t[Math.floor(runs / 2)]!, p95: t[Math.floor(runs * 0.95)]! });
-  return [figures(times[0]), figures(times[1])];
 }
 
 export async function memberBench(say: (line: string) => void): Promise<MemberFigures> {
-  const bundled = await importBundled<{ designInUnits: typeof DesignInUnits }>(new URL("../server/design-in-units.ts", import.meta.url));
-  const utf8 = new TextEncoder();
   say("");
   say("## One member, in process, step by step (median and p95 of 200 runs, ms)");
   say("");
-  say("| member | result combinations | stations | prepareJob | designMember | toDisplayUnits | fingerprint | JSON text | whole (median) | whole (p95) | whole as the design thread runs it (median) | result (kB) |");
-  say("|---|---|---|---|---|---|---|---|---|---|---|---|");
+  say("| member | result combinations | stations | prepareJob | designMember | toDisplayUnits | fingerprint | JSON text | whole (median) | whole (p95) | in a design thread: median | p95 | CPU | result (kB) |");
+  say("|---|---|---|---|---|---|---|---|---|---|---|---|---|---|");
   const figures: number[] = [];
   const threadFigures: number[] = [];
   for (const [name, input] of [
@@ -58,13 +58,12 @@ export async function memberBench(say: (line: string) => void): Promise<MemberFi
       const p = prepareJob(input);
       if (p.ok) JSON.stringify({ ...toDisplayUnits(DesignResult, designMember(p.core), p.job.units), fingerprint: fingerprintOf(p.job) });
     };
-    const threadRequest = bundled ? () => void utf8.encode(JSON.stringify(bundled.designInUnits(input).shown)) : wholeRequest;
-    // Alternated call by call, so that other work on the machine weighs on both alike.
-    const [whole, thread] = timePair(wholeRequest, threadRequest, 200);
+    const whole = timeIt(wholeRequest, 200);
+    const thread = await inThread(input, 400);
     figures.push(whole.median);
     threadFigures.push(thread.median);
     say(
-      `| ${name} | ${core.beam.combinations.length} | ${core.beam.stations.length} | ${prepare.median.toFixed(2)} | ${design.median.toFixed(2)} | ${display.median.toFixed(2)} | ${fingerprint.median.toFixed(2)} | ${json.median.toFixed(2)} | ${whole.median.toFixed(2)} | ${whole.p95.toFixed(2)} | ${thread.median.toFixed(2)} | ${(text.length / 1024).toFixed(0)} |`,
+      `| ${name} | ${core.beam.combinations.length} | ${core.beam.stations.length} | ${prepare.median.toFixed(2)} | ${design.median.toFixed(2)} | ${display.median.toFixed(2)} | ${fingerprint.median.toFixed(2)} | ${json.median.toFixed(2)} | ${whole.median.toFixed(2)} | ${whole.p95.toFixed(2)} | ${thread.median.toFixed(2)} | ${thread.p95.toFixed(2)} | ${thread.cpu.toFixed(2)} | ${(text.length / 1024).toFixed(0)} |`,
     );
   }
   say("");
