@@ -74,13 +74,17 @@ export function searchJoints(
   // The share each line is fastened for (as Q, mm³): from the user's joints, then from the search.
   const fixedShare = new Map<string, number>();
   for (const f of fixed) for (const l of f.joint.lines) fixedShare.set(key(l), Math.max(fixedShare.get(key(l)) ?? 0, lineShare(l, f.joint, f.sharing)));
-  const open = contacts.map((_, k) => k).filter((k) => !fixedShare.has(key(contacts[k]!)));
+  // Each line's share from the user's joints, by index (looked up again and again below).
+  const fixedOf = contacts.map((c) => fixedShare.get(key(c)));
+  const open = contacts.map((_, k) => k).filter((k) => fixedOf[k] === undefined);
   if (n < 2) return { joints: [], uncovered: [] };
   if (n > MAX_PARTS_FOR_JOINT_SEARCH) {
     return { joints: [], uncovered: open.map((k) => ({ line: contacts[k]!, cause: "too-many-parts" as const, parts: n })) };
   }
   const index = new Map(section.parts.map((p, i) => [p.id, i]));
   const adjacency = new Array<number>(n).fill(0);
+  const ends = new Int32Array(2 * contacts.length);
+  contacts.forEach((c, k) => ((ends[2 * k] = index.get(c.a)!), (ends[2 * k + 1] = index.get(c.b)!)));
   for (const c of contacts) {
     const i = index.get(c.a)!;
     const j = index.get(c.b)!;
@@ -100,9 +104,7 @@ export function searchJoints(
   for (let mask = 2; mask < full; mask += 2) {
     if (!isConnected(mask, adjacency) || !isConnected(full & ~mask, adjacency)) continue;
     const crossed: number[] = [];
-    contacts.forEach((c, k) => {
-      if (((mask >> index.get(c.a)!) & 1) !== ((mask >> index.get(c.b)!) & 1)) crossed.push(k);
-    });
+    for (let k = 0; k < contacts.length; k++) if (((mask >> ends[2 * k]!) & 1) !== ((mask >> ends[2 * k + 1]!) & 1)) crossed.push(k);
     let q = 0;
     for (let i = 0; i < n; i++) if ((mask >> i) & 1) q += partMoment[i]!;
     cuts.push({
@@ -123,12 +125,17 @@ export function searchJoints(
   for (const cut of cuts) {
     if (!cut.oneLevel) continue;
     for (const k of cut.crossed) {
-      if (fixedShare.has(key(contacts[k]!))) continue;
+      if (fixedOf[k] !== undefined) continue;
       const current = assigned.get(k);
       if (!current || fewerThenSmaller(cut, current)) assigned.set(k, cut);
     }
   }
-  const carried = (k: number) => fixedShare.get(key(contacts[k]!)) ?? (assigned.has(k) ? shareOf(k, assigned.get(k)!) : 0);
+  const carried = (k: number) => {
+    const fixedHere = fixedOf[k];
+    if (fixedHere !== undefined) return fixedHere;
+    const cut = assigned.get(k);
+    return cut ? shareOf(k, cut) : 0;
+  };
   const short = new Set<Cut>();
   for (let round = 0; round < 64 * contacts.length + 16; round++) {
     let worst: Cut | null = null;
@@ -139,7 +146,7 @@ export function searchJoints(
       if (!worst || intensity(cut) > intensity(worst)) worst = cut;
     }
     if (!worst) break;
-    const raised = worst.crossed.filter((k) => !fixedShare.has(key(contacts[k]!)) && carried(k) < shareOf(k, worst!) - qTol);
+    const raised = worst.crossed.filter((k) => fixedOf[k] === undefined && carried(k) < shareOf(k, worst!) - qTol);
     if (raised.length === 0) short.add(worst);
     for (const k of raised) assigned.set(k, worst);
   }
@@ -165,7 +172,7 @@ export function searchJoints(
   for (const cut of short) {
     const held = heldSide(section, cut.mask, full & ~cut.mask).map((i) => section.parts[i]!.id);
     const sum = cut.crossed.reduce((s, k) => s + carried(k), 0);
-    const line = cut.crossed.map((k) => contacts[k]!).find((l) => fixedShare.has(key(l))) ?? contacts[cut.crossed[0]!]!;
+    const line = contacts[cut.crossed.find((k) => fixedOf[k] !== undefined) ?? cut.crossed[0]!]!;
     uncovered.push({ line, cause: "short-cut", held, firstMoment: cut.firstMoment, carried: sum, lines: cut.crossed.length });
   }
   const order = (j: JointPlane) => -Math.max(...j.lines.map((l) => l.level));
