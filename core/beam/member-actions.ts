@@ -333,7 +333,8 @@ function extremeOver(actions: MemberActions, a: number, b: number, what: typeof 
 export function realRoots(c: readonly number[]): number[] {
   const [c0 = 0, c1 = 0, c2 = 0] = c;
   const out = new Float64Array(2);
-  return Array.from(out.subarray(0, rootsOf(c0, c1, c2, out)));
+  const count = rootsOf(c0, c1, c2, out);
+  return count === 0 ? [] : count === 1 ? [out[0]!] : [out[0]!, out[1]!];
 }
 
 /** realRoots into `out`, without allocating: the number of roots. */
