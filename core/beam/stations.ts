@@ -14,10 +14,23 @@ export interface Station {
 export function stationsFor(length: number, breaks: number[], divisions = 100, roundToStep = true): Station[] {
   const tol = 1e-9 * length;
   const step = roundToStep ? roundStep(length / divisions) : length / divisions;
-  const grid = Array.from({ length: Math.floor(length / step + 1e-9) + 1 }, (_, i) => i * step);
-  const xs = [...breaks, ...grid, length].sort((a, b) => a - b);
+  const count = Math.floor(length / step + 1e-9) + 1;
+  // The grid and the end, then the breaks merged in, in the order a stable sort of [breaks, grid, end] gives (breaks first on a tie).
+  const rest = new Array<number>(count + 1);
+  for (let i = 0; i < count; i++) rest[i] = i * step;
+  rest[count] = length;
+  if (rest[count - 1]! > length) rest.sort((a, b) => a - b);
+  const sortedBreaks = breaks.length > 1 ? [...breaks].sort((a, b) => a - b) : breaks;
   const unique: number[] = [];
-  for (const x of xs) if (unique.length === 0 || x - unique[unique.length - 1]! > tol) unique.push(x);
+  const keep = (x: number) => {
+    if (unique.length === 0 || x - unique[unique.length - 1]! > tol) unique.push(x);
+  };
+  let k = 0;
+  for (const x of rest) {
+    while (k < sortedBreaks.length && sortedBreaks[k]! <= x) keep(sortedBreaks[k++]!);
+    keep(x);
+  }
+  while (k < sortedBreaks.length) keep(sortedBreaks[k++]!);
   const isBreak = (x: number) => breaks.some((b) => Math.abs(b - x) <= tol);
   const out: Station[] = [];
   for (const x of unique) {
