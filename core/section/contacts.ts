@@ -64,8 +64,9 @@ export function findContacts(section: SectionModel): ContactLine[] {
     near: (r: Rect) => number,
     extent: (r: Rect) => [number, number],
   ) {
-    const byLevel = new Map<number, ContactLine>();
-    const pieces = new Map<ContactLine, [number, number][]>();
+    // Most pairs of parts do not touch: the lines and their pieces are made only once a contact is found.
+    let lines: ContactLine[] | null = null;
+    let pieces: [number, number][][] | null = null;
     for (const r of lo.rects) for (const s of hi.rects) {
       if (Math.abs(far(r) - near(s)) > tol) continue;
       const [r0, r1] = extent(r);
@@ -74,21 +75,24 @@ export function findContacts(section: SectionModel): ContactLine[] {
       const to = Math.min(r1, s1);
       if (to - from <= tol) continue;
       const level = far(r);
-      const key = [...byLevel.keys()].find((k) => Math.abs(k - level) <= tol) ?? level;
-      const line = byLevel.get(key);
+      lines ??= [];
+      pieces ??= [];
+      // The first line, in the order they were made, at this level (within the tolerance).
+      const k = lines.findIndex((l) => Math.abs(l.level - level) <= tol);
+      const line = k >= 0 ? lines[k]! : undefined;
       if (line) {
         line.from = Math.min(line.from, from);
         line.to = Math.max(line.to, to);
         line.length += to - from;
-        pieces.get(line)!.push([from, to]);
+        pieces[k]!.push([from, to]);
       } else {
-        const made: ContactLine = { a: lo.id, b: hi.id, orientation, level, from, to, length: to - from, widest: to - from };
-        byLevel.set(key, made);
-        pieces.set(made, [[from, to]]);
+        lines.push({ a: lo.id, b: hi.id, orientation, level, from, to, length: to - from, widest: to - from });
+        pieces.push([[from, to]]);
       }
     }
-    for (const [line, spans] of pieces) line.widest = widestRun(spans, tol);
-    out.push(...byLevel.values());
+    if (!lines) return;
+    lines.forEach((line, k) => (line.widest = widestRun(pieces![k]!, tol)));
+    out.push(...lines);
   }
 }
 
