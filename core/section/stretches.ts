@@ -18,7 +18,12 @@ export function partExtent(part: JobDocument["parts"][number], length: number): 
 /** The stretches of the member between the points where a part starts or stops, with the parts present on each. */
 export function partStretches(job: JobDocument, length: number): PartStretch[] {
   const tol = 1e-9 * length;
-  const cuts = [0, length, ...job.parts.flatMap((p) => Object.values(partExtent(p, length)))].filter((x) => x >= -tol && x <= length + tol).sort((a, b) => a - b);
+  const ends = [0, length];
+  for (const p of job.parts) {
+    const e = partExtent(p, length);
+    ends.push(e.from, e.to);
+  }
+  const cuts = ends.filter((x) => x >= -tol && x <= length + tol).sort((a, b) => a - b);
   const stations = cuts.filter((x, i) => i === 0 || x - cuts[i - 1]! > tol);
   const out: PartStretch[] = [];
   for (let i = 0; i < stations.length - 1; i++) {
