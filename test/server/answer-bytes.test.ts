@@ -16,6 +16,7 @@ import { physicalRangeIssues } from "../../core/physical-ranges.js";
 import { mutatedJob } from "./fuzz/payloads.js";
 import { answerBefore, answerBeforeFrom } from "./reference/answer-before.js";
 import { physicalRangeIssues as rangeIssuesBefore } from "./reference/ranges-before.js";
+import { prepareJob as prepareJobBefore } from "./reference/prepare-before.js";
 import * as before from "./reference/convert-before.js";
 
 const examples = new URL("../../fixtures/examples/", import.meta.url);
@@ -168,6 +169,22 @@ describe("the physical-range walk finds what the old walk found", () => {
     );
     expect(compared).toBeGreaterThan(300);
     expect(withIssues).toBeGreaterThan(20);
+  });
+});
+
+describe("prepareJob answers what it answered before", () => {
+  test("every example, and the examples with values broken or bent (fuzz bodies)", () => {
+    for (const [, input] of jobs) same(prepareJob(input), prepareJobBefore(input));
+    let prepared = 0;
+    fc.assert(
+      fc.property(mutatedJob, ({ job }) => {
+        const now = prepareJob(job);
+        if (now.ok) prepared++;
+        same(now, prepareJobBefore(job));
+      }),
+      { numRuns: 1000 },
+    );
+    expect(prepared).toBeGreaterThan(50);
   });
 });
 
