@@ -128,20 +128,25 @@ function geometryOf(job: JobDocument): { issues: JobIssue[]; whole?: { section: 
   const all = positioned(job.parts);
   const stretches = partStretches(job, L);
   const several = stretches.length > 1;
+  // A stretch of every part has the whole section: built and searched for contacts once, for both checks.
+  let whole: { section: SectionModel; contacts: ContactLine[] } | undefined;
   for (const stretch of stretches) {
     const where = several ? ` between ${text(stretch.x0, "span")} and ${text(stretch.x1, "span")} along the member` : "";
     if (stretch.parts.length === 0) {
       add("parts", `no part runs${where}: every point of the member needs a section`);
       continue;
     }
-    const here = buildSection(all.filter((p) => stretch.parts.includes(p.id)), job.materials);
+    const present = all.filter((p) => stretch.parts.includes(p.id));
+    const here = buildSection(present, job.materials);
     for (const o of findOverlaps(here)) {
       const i = job.parts.findIndex((p) => p.id === o.b);
       const j = job.parts.findIndex((p) => p.id === o.a);
       add(`parts[${i}]`, `part "${o.b}" overlaps part "${o.a}" (parts[${j}]) over an area of ${text(o.area, "area")}${where}; parts may touch but not overlap`);
     }
     if (issues.length > 0) return { issues };
-    const groups = connectedGroups(here, findContacts(here));
+    const touching = findContacts(here);
+    if (!whole && present.length === all.length) whole = { section: here, contacts: touching };
+    const groups = connectedGroups(here, touching);
     if (groups.length > 1) {
       const main = groups.reduce((a, b) => (b.length > a.length ? b : a));
       for (const g of groups) {
@@ -154,8 +159,11 @@ function geometryOf(job: JobDocument): { issues: JobIssue[]; whole?: { section: 
     }
   }
   if (issues.length > 0) return { issues };
-  const section = buildSection(all, job.materials);
-  const contacts = findContacts(section);
+  if (!whole) {
+    const section = buildSection(all, job.materials);
+    whole = { section, contacts: findContacts(section) };
+  }
+  const { section, contacts } = whole;
   job.fastening.joints.forEach((j, k) => {
     const held = new Set(j.held);
     if (!contacts.some((c) => held.has(c.a) !== held.has(c.b))) add(`fastening.joints[${k}].held`, "these parts touch no other part, so no connectors can hold them");
@@ -174,7 +182,7 @@ function geometryOf(job: JobDocument): { issues: JobIssue[]; whole?: { section: 
   }
   if (issues.length > 0) return { issues };
   if (job.mode === "check") issues.push(...checkProvidedSchedules(memberJoints(job, sectionStretches(job, L), L), L, (x) => text(x, "span")));
-  return { issues, whole: { section, contacts } };
+  return { issues, whole };
 }
 
 /** Check mode: every connector joint needs the schedule to check, with zones from end to end and rows on the member. */

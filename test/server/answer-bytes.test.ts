@@ -9,13 +9,14 @@ import { designMember, DesignResult, JobDocument, prepareJob, type UnitSystem } 
 import { unitSystems } from "../../core/units/quantity.js";
 import { rescale, roundSignificant, toCoreUnits, toDisplayUnits } from "../../core/units/convert.js";
 import { inUnits } from "../../server/design-in-units.js";
-import { performTask } from "../../server/design-tasks.js";
+import { performTask, utf8Bytes } from "../../server/design-tasks.js";
 import { ApiError } from "../../server/errors.js";
 import { canonicalJson } from "../../core/canonical-json.js";
 import { physicalRangeIssues } from "../../core/physical-ranges.js";
 import { mutatedJob } from "./fuzz/payloads.js";
 import { answerBefore, answerBeforeFrom } from "./reference/answer-before.js";
 import { physicalRangeIssues as rangeIssuesBefore } from "./reference/ranges-before.js";
+import { prepareJob as prepareJobBefore } from "./reference/prepare-before.js";
 import * as before from "./reference/convert-before.js";
 
 const examples = new URL("../../fixtures/examples/", import.meta.url);
@@ -171,6 +172,22 @@ describe("the physical-range walk finds what the old walk found", () => {
   });
 });
 
+describe("prepareJob answers what it answered before", () => {
+  test("every example, and the examples with values broken or bent (fuzz bodies)", () => {
+    for (const [, input] of jobs) same(prepareJob(input), prepareJobBefore(input));
+    let prepared = 0;
+    fc.assert(
+      fc.property(mutatedJob, ({ job }) => {
+        const now = prepareJob(job);
+        if (now.ok) prepared++;
+        same(now, prepareJobBefore(job));
+      }),
+      { numRuns: 1000 },
+    );
+    expect(prepared).toBeGreaterThan(50);
+  });
+});
+
 describe("the fingerprint's canonical JSON is the old text", () => {
   test("every example as parsed, and any JSON value with undefined fields and array holes", () => {
     for (const [name, input] of jobs) {
@@ -182,5 +199,16 @@ describe("the fingerprint's canonical JSON is the old text", () => {
     const odd = { b: [1, , undefined, null, -0, NaN, 1e21, "é\u2028"], a: { "\u0000": 1, z: undefined, "": [{}] }, "10": 2, "9": 3 };
     expect(canonicalJson(odd)).toBe(before.canonicalJson(odd));
     fc.assert(fc.property(fc.anything({ withSparseArray: true, withNullPrototype: true, withDate: true, withMap: true, withSet: true, withBoxedValues: true, withUnicodeString: true }), (v) => canonicalJson(v) === before.canonicalJson(v)), { numRuns: 5000 });
+  });
+});
+
+describe("an answer's UTF-8 bytes are TextEncoder's", () => {
+  const encoder = new TextEncoder();
+  const same = (text: string) => Buffer.from(utf8Bytes(text)).equals(Buffer.from(encoder.encode(text)));
+  test("short and long texts, beyond ASCII (more than the room kept for it), surrogate pairs and lone surrogates", () => {
+    for (const text of ["", "a", "≤", "mm⁴ kN·m", "\u{1F600}", "\ud800", "x\udc00y", "é".repeat(300), "≤".repeat(5000), "a".repeat(100000) + "⁴".repeat(3000)]) {
+      expect(same(text), JSON.stringify(text.slice(0, 20))).toBe(true);
+    }
+    fc.assert(fc.property(fc.string({ unit: "binary", maxLength: 2000 }), same), { numRuns: 3000 });
   });
 });
