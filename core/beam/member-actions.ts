@@ -223,6 +223,18 @@ function overWhole(actions: MemberActions): { shear?: Extreme; max?: Extreme; mi
 
 const SHEAR = 0;
 const MOMENT = 1;
+/** Index of the first piece (pieces in order along the member) that ends at or after x; the count when none does. */
+export function firstPieceReaching(pieces: readonly { x1: number }[], x: number): number {
+  let lo = 0;
+  let hi = pieces.length;
+  while (lo < hi) {
+    const mid = (lo + hi) >> 1;
+    if (pieces[mid]!.x1 < x) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
+}
+
 /** Roots of a piece's derivative, reused from call to call (this runs for every zone, row and combination). */
 const scratchRoots = new Float64Array(2);
 
@@ -235,13 +247,7 @@ function shearExtremeOver(actions: MemberActions, a: number, b: number): Extreme
   let bestX = a;
   const pieces = actions.pieces;
   const tol = 1e-9 * actions.length;
-  let lo0 = 0;
-  let hi0 = pieces.length;
-  while (lo0 < hi0) {
-    const mid = (lo0 + hi0) >> 1;
-    if (pieces[mid]!.x1 < a - tol) lo0 = mid + 1;
-    else hi0 = mid;
-  }
+  const lo0 = firstPieceReaching(pieces, a - tol);
   for (let k = lo0; k < pieces.length; k++) {
     const p = pieces[k]!;
     if (p.x0 > b + tol) break;
@@ -289,13 +295,7 @@ function extremeOver(actions: MemberActions, a: number, b: number, what: typeof 
   // that a unit conversion moves by a rounding error stays on the same side of a zone boundary.
   const tol = 1e-9 * actions.length;
   // The first piece that reaches a − tol (pieces are in order along the member); then on until one starts past b + tol.
-  let lo0 = 0;
-  let hi0 = pieces.length;
-  while (lo0 < hi0) {
-    const mid = (lo0 + hi0) >> 1;
-    if (pieces[mid]!.x1 < a - tol) lo0 = mid + 1;
-    else hi0 = mid;
-  }
+  const lo0 = firstPieceReaching(pieces, a - tol);
   for (let k = lo0; k < pieces.length; k++) {
     const p = pieces[k]!;
     if (p.x0 > b + tol) break;

@@ -1,5 +1,5 @@
 import { locateStations } from "../beam/beam-result.js";
-import { maxAbsShear, pieceAt, poly, shearAt, type Extreme, type MemberActions, type Side } from "../beam/member-actions.js";
+import { firstPieceReaching, maxAbsShear, pieceAt, poly, shearAt, type Extreme, type MemberActions, type Side } from "../beam/member-actions.js";
 import type { Station } from "../beam/stations.js";
 
 const SIMPSON_PANELS = 64;
@@ -49,13 +49,7 @@ const sameNumbers = (a: number[], b: number[]) => a.length === b.length && a.eve
 export function piecesMet(actions: MemberActions, lo: number, hi: number): [number, number] {
   const tol = 1e-9 * actions.length;
   const pieces = actions.pieces;
-  let first = 0;
-  let top = pieces.length;
-  while (first < top) {
-    const mid = (first + top) >> 1;
-    if (pieces[mid]!.x1 < lo - tol) first = mid + 1;
-    else top = mid;
-  }
+  const first = firstPieceReaching(pieces, lo - tol);
   let last = first - 1;
   while (last + 1 < pieces.length && pieces[last + 1]!.x0 <= hi + tol) last++;
   return [first, last];
