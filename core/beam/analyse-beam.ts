@@ -309,7 +309,7 @@ function combinedActions(terms: Term[], on: Superposition): MemberActions {
   return { length: on.length, pieces, breaks: grid };
 }
 
-/** Piece k of Σ f·curve into out (θ in 0..4, v in 5..10), as `combineCurves` sums it. */
+/** Piece k of Σ f·curve into out (θ in 0..4, v in 5..10): the curves' constants are linear in the loads too. */
 function combinedCurvePiece(terms: Term[], k: number, out: Float64Array): void {
   out.fill(0);
   for (let t = 0; t < terms.length; t++) {

@@ -126,22 +126,6 @@ export function combineActions(terms: { actions: MemberActions; f: number }[], l
   return { length, pieces, breaks };
 }
 
-/** Σ f·curve of deflection curves on the same pieces (their constants are linear in the loads too). */
-export function combineCurves(terms: { curve: DeflectionCurve; f: number }[], breaks: number[]): DeflectionCurve {
-  const pieces: DeflectionCurve["pieces"] = [];
-  for (let k = 0; k < breaks.length - 1; k++) {
-    const theta = [0, 0, 0, 0, 0];
-    const v = [0, 0, 0, 0, 0, 0];
-    for (const { curve, f } of terms) {
-      const p = curve.pieces[k]!;
-      for (let i = 0; i < 5; i++) theta[i]! += f * p.theta[i]!;
-      for (let i = 0; i < 6; i++) v[i]! += f * p.v[i]!;
-    }
-    pieces.push({ x0: breaks[k]!, x1: breaks[k + 1]!, theta, v });
-  }
-  return { pieces };
-}
-
 function uniqueSorted(xs: number[], length: number): number[] {
   const tol = 1e-9 * Math.max(length, 1);
   const sorted = xs.filter((x) => x >= -tol && x <= length + tol).map((x) => Math.min(Math.max(x, 0), length)).sort((a, b) => a - b);

@@ -4,36 +4,8 @@
  * change there is bracketed and closed in on to machine precision.
  */
 export function rootsIn(c: readonly number[], lo: number, hi: number): number[] {
-  if (!(hi > lo)) return [];
-  const span = Math.max(Math.abs(lo), Math.abs(hi), hi - lo);
-  const size = c.map((k, i) => Math.abs(k) * span ** i);
-  const scale = Math.max(0, ...size);
-  if (scale === 0) return [];
-  let degree = c.length - 1;
-  while (degree > 0 && size[degree]! <= 1e-13 * scale) degree--;
-  const p = c.slice(0, degree + 1);
-  if (degree === 0) return [];
-  if (degree === 1) {
-    const u = -p[0]! / p[1]!;
-    return u >= lo && u <= hi ? [u] : [];
-  }
-  const derivative = p.slice(1).map((k, i) => k * (i + 1));
-  const edges = [lo, ...rootsIn(derivative, lo, hi), hi];
-  const roots: number[] = [];
-  const push = (u: number) => {
-    if (roots.length === 0 || u - roots[roots.length - 1]! > 1e-12 * span) roots.push(u);
-  };
-  for (let k = 0; k < edges.length - 1; k++) {
-    const a = edges[k]!;
-    const b = edges[k + 1]!;
-    const fa = poly(p, a);
-    const fb = poly(p, b);
-    if (fa === 0) push(a);
-    if (fa === 0 || fb === 0 || Math.sign(fa) === Math.sign(fb)) continue;
-    push(bracketed(p, a, b, fa, fb, span));
-  }
-  if (poly(p, hi) === 0) push(hi);
-  return roots;
+  const out = new Float64Array(Math.max(c.length, 1));
+  return Array.from(out.subarray(0, rootsInto(c, c.length, lo, hi, out)));
 }
 
 /** Scratch for `rootsInto`, one set per level of its recursion on the derivative. */
@@ -42,21 +14,20 @@ interface Level {
   derivative: Float64Array;
   inner: Float64Array;
 }
-const MAX_COEFFICIENTS = 8;
 const levels: Level[] = [];
-const levelAt = (depth: number): Level =>
-  (levels[depth] ??= { p: new Float64Array(MAX_COEFFICIENTS), derivative: new Float64Array(MAX_COEFFICIENTS), inner: new Float64Array(MAX_COEFFICIENTS + 1) });
+/** The scratch of one level, with room for `count` coefficients (at least 8: a member's pieces have at most 6). */
+const levelAt = (depth: number, count: number): Level => {
+  const known = levels[depth];
+  if (known && known.p.length >= count) return known;
+  const room = Math.max(8, count);
+  return (levels[depth] = { p: new Float64Array(room), derivative: new Float64Array(room), inner: new Float64Array(room + 1) });
+};
 
 /**
- * rootsIn(c[0..count − 1], lo, hi) written into `out` (room for `count` roots), the same numbers by the same
- * arithmetic, without allocating: the number of roots. For callers that ask for many pieces' roots.
+ * rootsIn of c[0..count − 1] written into `out` (room for `count` roots), without allocating: the number
+ * of roots. For callers that ask for many pieces' roots.
  */
 export function rootsInto(c: ArrayLike<number>, count: number, lo: number, hi: number, out: Float64Array, depth = 0): number {
-  if (count > MAX_COEFFICIENTS) {
-    const roots = rootsIn(Array.from({ length: count }, (_, i) => c[i]!), lo, hi);
-    roots.forEach((u, i) => (out[i] = u));
-    return roots.length;
-  }
   if (!(hi > lo)) return 0;
   // Where |c0| exceeds Σ|c_i|·|u|^i (i ≥ 1) over the interval by far more than rounding, every value rootsIn
   // computes has c0's sign and none is zero: it finds no root (most pieces, asked for their sign changes).
@@ -81,7 +52,7 @@ export function rootsInto(c: ArrayLike<number>, count: number, lo: number, hi: n
   let degree = count - 1;
   while (degree > 0 && Math.abs(c[degree]!) * span ** degree <= 1e-13 * scale) degree--;
   if (degree === 0) return 0;
-  const level = levelAt(depth);
+  const level = levelAt(depth, count);
   const p = level.p;
   for (let i = 0; i <= degree; i++) p[i] = c[i]!;
   const n = degree + 1;
@@ -116,7 +87,7 @@ export function rootsInto(c: ArrayLike<number>, count: number, lo: number, hi: n
 }
 
 /** The root of a monotone part with a sign change, by the Illinois form of false position. */
-function bracketed(p: ArrayLike<number>, a: number, b: number, fa: number, fb: number, span: number, n = p.length): number {
+function bracketed(p: ArrayLike<number>, a: number, b: number, fa: number, fb: number, span: number, n: number): number {
   let side = 0;
   let c = a;
   for (let i = 0; i < 100; i++) {
@@ -138,12 +109,6 @@ function bracketed(p: ArrayLike<number>, a: number, b: number, fa: number, fb: n
     }
   }
   return c;
-}
-
-function poly(c: readonly number[], u: number): number {
-  let r = 0;
-  for (let i = c.length - 1; i >= 0; i--) r = r * u + c[i]!;
-  return r;
 }
 
 /** poly of the first n coefficients. */

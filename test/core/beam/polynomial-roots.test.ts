@@ -2,6 +2,7 @@ import fc from "fast-check";
 import { describe, expect, test } from "vitest";
 import { rootsIn, rootsInto } from "../../../core/beam/polynomial-roots.js";
 import { expectClose } from "../../expect-close.js";
+import { rootsInBefore } from "./roots-before.js";
 
 describe("rootsIn", () => {
   test("finds the three roots of (u − 1)(u − 2)(u − 4) inside [0, 5], and only those inside a narrower interval", () => {
@@ -27,7 +28,7 @@ describe("rootsIn", () => {
     expectClose(roots[0]!, 500, { rel: 1e-9 });
   });
 
-  test("rootsInto gives rootsIn's roots bit for bit, without allocating (polynomials of degree up to 5, with repeated and zero coefficients)", () => {
+  test("rootsInto (and rootsIn, which calls it) gives the recursive form's roots bit for bit, without allocating (polynomials of degree up to 5, with repeated and zero coefficients)", () => {
     const coefficient = fc.oneof(fc.constantFrom(0, 1, -1, 2, -0.5), fc.double({ min: -1e6, max: 1e6, noNaN: true }));
     // Polynomials built from their roots, so that roots inside the interval are common.
     const fromRoots = fc.tuple(fc.array(fc.double({ min: -10, max: 60, noNaN: true }), { minLength: 1, maxLength: 4 }), fc.double({ min: -5, max: 5, noNaN: true })).map(([roots, k]) =>
@@ -36,7 +37,8 @@ describe("rootsIn", () => {
     const same = (c: number[], lo: number, hi: number) => {
       const out = new Float64Array(8);
       const count = rootsInto(c, c.length, lo, hi, out);
-      expect(Array.from(out.subarray(0, count))).toEqual(rootsIn(c, lo, hi));
+      expect(Array.from(out.subarray(0, count))).toEqual(rootsInBefore(c, lo, hi));
+      expect(rootsIn(c, lo, hi)).toEqual(rootsInBefore(c, lo, hi));
     };
     fc.assert(
       fc.property(fc.oneof(fc.array(coefficient, { minLength: 1, maxLength: 6 }), fromRoots), fc.double({ min: -10, max: 10, noNaN: true }), fc.double({ min: 0, max: 100, noNaN: true }), (c, lo, width) => same(c, lo, lo + width)),
@@ -50,5 +52,10 @@ describe("rootsIn", () => {
       }),
       { numRuns: 2000 },
     );
+    // More coefficients than the scratch first holds (a member's pieces have at most 6): (u − 1)(u − 2)…(u − 9).
+    const nine = [1, 2, 3, 4, 5, 6, 7, 8, 9].reduce((c, r) => [...c.map((x, i) => x * -r + (c[i - 1] ?? 0)), c[c.length - 1]!], [1]);
+    expect(nine).toHaveLength(10);
+    expect(rootsIn(nine, 0, 10)).toEqual(rootsInBefore(nine, 0, 10));
+    expect(rootsIn(nine, 0, 10)).toHaveLength(9);
   });
 });
