@@ -265,7 +265,7 @@ export class DemandCurve {
     for (let i = 1; i < breaks.length; i++) if (breaks[i]! - breaks[i - 1]! > 0) pieceCount++;
     const values = new Float64Array(pieceCount * (n + 1));
     const shared = terms.every((t) => t.actions.breaks === breaks || sameNumbers(t.actions.breaks, breaks));
-    const termBounds = shared ? terms.map((t) => shearBounds(t.actions)) : [];
+    const termBounds = shared ? this.pieceBounds() : [];
     const bounds = new Float64Array(terms.length);
     // Terms taken in order of their bound, largest first (the first of equal bounds first).
     const taken = new Uint8Array(terms.length);
