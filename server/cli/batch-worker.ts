@@ -1,13 +1,10 @@
 import { parentPort } from "node:worker_threads";
-import { runMemberTask, type MemberOutcome, type MemberTask } from "./member-files.js";
+import { runMemberTask, WORKER_LANES, type MemberOutcome, type MemberTask } from "./member-files.js";
 
 /** To a batch's worker: first the identities of the batch's input files (once), then its tasks a few at a time. */
 export type ToBatchWorker = { inputs: string[] } | { tasks: MemberTask[] };
 /** From it: "ready", then outcomes as they finish, those finished in the same turn in one message. */
 export type FromBatchWorker = "ready" | { outcomes: MemberOutcome[] };
-
-/** Members in progress on the thread at once, so that one member's file read and writes overlap another's design. */
-const LANES = 2;
 
 let inputs: ReadonlySet<string> = new Set();
 const queue: MemberTask[] = [];
@@ -47,6 +44,6 @@ parentPort!.on("message", (message: ToBatchWorker) => {
     return;
   }
   queue.push(...message.tasks);
-  while (lanes < LANES && queue.length > 0) void lane();
+  while (lanes < WORKER_LANES && queue.length > 0) void lane();
 });
 parentPort!.postMessage("ready" satisfies FromBatchWorker);

@@ -19,6 +19,13 @@ export interface MemberTask {
   printDate: string;
 }
 
+/**
+ * Members in progress on a batch worker thread at once, so that one member's file read and writes overlap
+ * another's design. A worker takes its tasks in the order they were sent, so when it dies only the first
+ * this many of its unfinished ones can have begun (server/cli/worker-pool.ts).
+ */
+export const WORKER_LANES = 2;
+
 export interface MemberOutcome {
   index: number;
   file: string;

@@ -1,6 +1,6 @@
 import { bundleThread, startThread } from "../thread-entry.js";
 import type { FromBatchWorker, ToBatchWorker } from "./batch-worker.js";
-import { runMemberTask, type MemberOutcome, type MemberTask } from "./member-files.js";
+import { runMemberTask, WORKER_LANES, type MemberOutcome, type MemberTask } from "./member-files.js";
 
 /**
  * Tasks go to a worker a few to a message, and it holds up to twice that, so that it never waits for
@@ -28,13 +28,23 @@ const failedOutcome = (task: MemberTask, message: string): MemberOutcome => ({
 
 /**
  * Runs the tasks on `threads` worker threads, each taking more as it finishes (members differ a lot in
- * cost). A worker that dies marks its tasks as failed and the rest carry on; if every worker dies, the
- * remaining tasks run on this thread. `inputs`: the identities of the batch's input files, sent once.
+ * cost). A worker that dies marks as failed the tasks it may have begun (the first WORKER_LANES of its
+ * unfinished ones, in the order they were sent); the others it held go to the other workers, and the
+ * rest carry on; if every worker dies, the remaining tasks run on this thread. `inputs`: the identities of the batch's input files, sent once.
  */
 export async function runInWorkers(tasks: MemberTask[], threads: number, inputs: ReadonlySet<string>, onOutcome: (outcome: MemberOutcome) => void): Promise<MemberOutcome[]> {
   await bundleThread(BATCH_WORKER);
   const outcomes: MemberOutcome[] = [];
   let next = 0;
+  // Tasks a dead worker held but had not begun: handed out again first.
+  const again: MemberTask[] = [];
+  const left = () => again.length + tasks.length - next;
+  const take = (count: number): MemberTask[] => {
+    const chunk = again.splice(0, count);
+    const more = tasks.slice(next, next + count - chunk.length);
+    next += more.length;
+    return [...chunk, ...more];
+  };
   const finish = (outcome: MemberOutcome) => {
     outcomes.push(outcome);
     onOutcome(outcome);
@@ -47,9 +57,8 @@ export async function runInWorkers(tasks: MemberTask[], threads: number, inputs:
         const inFlight = new Map<number, MemberTask>();
         send({ inputs: [...inputs] });
         const feed = () => {
-          while (inFlight.size <= AHEAD - CHUNK && next < tasks.length) {
-            const chunk = tasks.slice(next, next + CHUNK);
-            next += chunk.length;
+          while (inFlight.size <= AHEAD - CHUNK && left() > 0) {
+            const chunk = take(CHUNK);
             for (const task of chunk) inFlight.set(task.index, task);
             send({ tasks: chunk });
           }
@@ -69,7 +78,11 @@ export async function runInWorkers(tasks: MemberTask[], threads: number, inputs:
         });
         worker.on("error", (error) => (failure = error.message));
         worker.on("exit", () => {
-          for (const task of inFlight.values()) finish(failedOutcome(task, `a worker thread failed on this job: ${failure}`));
+          let begun = 0;
+          for (const task of inFlight.values()) {
+            if (begun++ < WORKER_LANES) finish(failedOutcome(task, `a worker thread failed on this job: ${failure}`));
+            else again.push(task);
+          }
           inFlight.clear();
           resolve();
         });
@@ -77,6 +90,6 @@ export async function runInWorkers(tasks: MemberTask[], threads: number, inputs:
     ),
   );
   // Only when workers died: whatever is left runs here.
-  while (next < tasks.length) finish(await runMemberTask(tasks[next++]!, inputs));
+  while (left() > 0) finish(await runMemberTask(take(1)[0]!, inputs));
   return outcomes;
 }
