@@ -4,6 +4,7 @@ import { appendFileSync, existsSync, mkdirSync, readdirSync, readFileSync, write
 import { availableParallelism, cpus, loadavg } from "node:os";
 import { designMember, prepareJob } from "../core/index.js";
 import { runDesign } from "../server/design-service.js";
+import { tuneJit } from "../server/jit-tuning.js";
 import { renderWorksheet } from "../server/pdf/worksheet.js";
 import { beamBench } from "./beam.js";
 import { batchBench } from "./batch.js";
@@ -24,8 +25,10 @@ const say = (s: string) => {
 };
 
 const started = new Date().toISOString();
+// The in-process figures with the JIT as the service sets it (server/jit-tuning.ts); the batch part sets it as `stitchplan design` does, the HTTP parts run a server of their own.
+const budget = tuneJit("service");
 say(`# stitchplan benchmark — ${started}`);
-say(`machine: ${availableParallelism()} cores (${cpus()[0]?.model ?? "unknown"}), Node ${process.version}; load average at the start ${loadavg().map((l) => l.toFixed(1)).join(", ")} (1, 5, 15 min)`);
+say(`machine: ${availableParallelism()} cores (${cpus()[0]?.model ?? "unknown"}), Node ${process.version}; load average at the start ${loadavg().map((l) => l.toFixed(1)).join(", ")} (1, 5, 15 min); V8 interrupt budget ${budget ?? "V8's own"} in process`);
 
 /** Every example: design time, economy, worksheet time and size; returns the example with the largest worksheet. */
 async function examplesTable(): Promise<string> {

@@ -1,6 +1,7 @@
 import { join, resolve } from "node:path";
 import { buildApp, projectRoot } from "./app.js";
 import { loopbackHosts } from "./host-check.js";
+import { tuneJit } from "./jit-tuning.js";
 import { StoreOpenError } from "./store/open-database.js";
 
 export interface ServeOptions {
@@ -34,6 +35,8 @@ export async function serve(options: ServeOptions): Promise<number | undefined> 
     return 2;
   }
   const dataDir = dataFolder(options.data);
+  // Before any thread starts: the design threads run for hours and should settle on their optimised code soon.
+  tuneJit("service");
   let app;
   try {
     // Reached under other names than the loopback ones, the Host header cannot be checked against a list.

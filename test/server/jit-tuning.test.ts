@@ -1,0 +1,35 @@
+// The JIT profiles (server/jit-tuning.ts) change when V8 optimises, never what is computed: every
+// example's answer, in both unit systems, is the same byte for byte under each profile as under V8's own
+// settings, in a process of its own (V8 flags are per process).
+import { spawnSync } from "node:child_process";
+import { createRequire } from "node:module";
+import { pathToFileURL } from "node:url";
+import { describe, expect, test } from "vitest";
+import { INTERRUPT_BUDGET, tuneJit } from "../../server/jit-tuning.js";
+import { examplesDigest } from "./jit-tuning-digest.js";
+
+const tsx = pathToFileURL(createRequire(import.meta.url).resolve("tsx")).href;
+const child = new URL("./jit-tuning-child.ts", import.meta.url).pathname;
+
+describe("JIT profiles", () => {
+  test("left to V8 on another Node release, or when node was given a budget itself", () => {
+    expect(tuneJit("service", "22.11.0", [])).toBeUndefined();
+    expect(tuneJit("batch", "20.19.0", ["--interrupt-budget=1000"])).toBeUndefined();
+  });
+
+  test.runIf(process.versions.node.startsWith("20."))("each profile is taken by this V8 (no warning) and leaves every answer as it was", { timeout: 120_000 }, () => {
+    const expected = examplesDigest(1);
+    for (const profile of ["service", "batch"] as const) {
+      const run = spawnSync(process.execPath, ["--import", tsx, child, profile], { encoding: "utf8" });
+      expect(run.stderr).toBe("");
+      const { budget, digest } = JSON.parse(run.stdout) as { budget: number | null; digest: string };
+      expect(budget).toBe(INTERRUPT_BUDGET[profile]);
+      expect(digest).toBe(expected);
+    }
+  });
+
+  test.runIf(process.versions.node.startsWith("20."))("an unknown flag would have been reported on stderr, so the check above can fail", () => {
+    const run = spawnSync(process.execPath, ["-e", 'require("node:v8").setFlagsFromString("--no-such-stitchplan-flag")'], { encoding: "utf8" });
+    expect(run.stderr).toMatch(/unrecognized flag/);
+  });
+});
