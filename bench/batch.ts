@@ -5,7 +5,7 @@ import { availableParallelism, loadavg, tmpdir } from "node:os";
 import { join } from "node:path";
 import { Worker } from "node:worker_threads";
 import { runBatch, type BatchReport } from "../server/cli/run-batch.js";
-import { tuneJit } from "../server/jit-tuning.js";
+import { batchProfile, tuneJit } from "../server/jit-tuning.js";
 
 /** Mulberry32: a small seeded generator, so every run invents the same members. */
 function seeded(seed: number): () => number {
@@ -91,12 +91,12 @@ export async function batchBench(say: (line: string) => void): Promise<void> {
       );
     };
     const cores = availableParallelism();
-    // As `stitchplan design` sets it (server/cli/main.ts); for the rest of this process.
-    tuneJit("batch");
     for (const [n, pdf] of [
       [1000, false],
       [100, true],
     ] as const) {
+      // As `stitchplan design` sets it (server/cli/main.ts); for the rest of this process.
+      tuneJit(batchProfile(pdf));
       const folder = join(work, `jobs-${n}`);
       mkdirSync(folder);
       inventMembers(folder, n);

@@ -25,8 +25,8 @@ const say = (s: string) => {
 };
 
 const started = new Date().toISOString();
-// The in-process figures with the JIT as the service sets it (server/jit-tuning.ts); the batch part sets it as `stitchplan design` does, the HTTP parts run a server of their own.
-const budget = tuneJit("service");
+// The in-process figures with the JIT as the service sets it (server/jit-tuning.ts); the batch part sets it per row as `stitchplan design` does, the HTTP parts run a server of their own.
+const budget = tuneJit("repeating");
 say(`# stitchplan benchmark — ${started}`);
 say(`machine: ${availableParallelism()} cores (${cpus()[0]?.model ?? "unknown"}), Node ${process.version}; load average at the start ${loadavg().map((l) => l.toFixed(1)).join(", ")} (1, 5, 15 min); V8 interrupt budget ${budget ?? "V8's own"} in process`);
 

@@ -1,26 +1,30 @@
 import { setFlagsFromString } from "node:v8";
 
 /**
- * How much a function must run before V8 optimises it (its `--interrupt-budget`, in bytes of bytecode
- * executed; 67,584 by default in Node 20), for the two ways this program runs:
+ * How much a function must run before V8 optimises it (`--interrupt-budget`, bytes of bytecode run;
+ * 67,584 by default in Node 20), for the two kinds of work this program does. Measured on the 2-core
+ * build machine, runs in turns:
  *
- * - `service`: the design threads run for hours and see the same kinds of job again and again, so they
- *   should reach their optimised code soon. With 20,000 the simple member's whole request settled at
- *   1.2 ms median and 1.9 ms of process CPU after 1,000 designs, where the default took about 10,000
- *   designs to get there (1.45 ms and 2.6 ms after 1,000); over HTTP, distinct designs at 10 connections
- *   went from 470–539 to 542–557 a second, 2.3–2.8 to 2.2–2.3 ms of server CPU each (runs in turns, 2 cores).
- * - `batch`: a batch designs each member once, most of them unlike the last, so code optimised early is
- *   mostly thrown away again ("wrong map" deoptimisations) and the optimising compiler took half the
- *   process's CPU. With 300,000, 1,000 members' designs alone took 2.4–2.7 s instead of 2.9–3.6 s
- *   (CPU 3.5–3.8 s instead of 5.1–6.3 s); the batch on one thread 4.7 s instead of 5.8 s. Past about
- *   3,000 designs in one process the default would catch up, which no batch of a project reaches.
+ * - `repeating`: the service's design threads run for hours on the same kinds of job, and a batch with
+ *   worksheets spends nearly all its time in the same drawing code: optimise soon. With 20,000 the
+ *   simple member's whole request settled (1.2 ms median, 1.9 ms of process CPU) after 1,000 designs
+ *   instead of about 10,000; over HTTP, 10 connections of distinct designs ran at 361–425 a second
+ *   against 295–368 with the default, 3.0–3.6 ms of server CPU each against 3.6–4.6; the median
+ *   worksheet of a 100-member batch took 118–123 ms against 132–185.
+ * - `varied`: a batch without worksheets designs each member once, most unlike the last, so code
+ *   optimised early was mostly thrown away again ("wrong map" deoptimisations) and the optimising
+ *   compiler took half the process's CPU. With 300,000, 1,000 members' designs took 2.4–2.7 s instead
+ *   of 2.9–3.6 s (CPU 3.5–3.8 s instead of 5.1–6.3 s). The default would catch up only after about
+ *   3,000 designs in one process. With worksheets it was slower (median 160–173 ms), hence `repeating`.
  *
- * Measured on the build machine (bench/README figures). Only the optimiser's timing changes, never what
- * the code computes.
+ * Only when the optimiser starts changes, never what the code computes (test/server/jit-tuning.test.ts).
  */
-export const INTERRUPT_BUDGET = { service: 20_000, batch: 300_000 } as const;
+export const INTERRUPT_BUDGET = { repeating: 20_000, varied: 300_000 } as const;
 
 export type JitProfile = keyof typeof INTERRUPT_BUDGET;
+
+/** The profile of a batch: worksheets are the same drawing code over and over, designs alone are not. */
+export const batchProfile = (worksheets: boolean): JitProfile => (worksheets ? "repeating" : "varied");
 
 /**
  * Sets the budget for this process (V8 flags are per process: every worker thread started after this

@@ -36,7 +36,7 @@ export async function serve(options: ServeOptions): Promise<number | undefined> 
   }
   const dataDir = dataFolder(options.data);
   // Before any thread starts: the design threads run for hours and should settle on their optimised code soon.
-  tuneJit("service");
+  tuneJit("repeating");
   let app;
   try {
     // Reached under other names than the loopback ones, the Host header cannot be checked against a list.

@@ -120,9 +120,9 @@ export async function main(argv: string[], io: CliIo = { stdout: process.stdout,
   }
   if (values.date !== undefined && !/^\d{4}-\d{2}-\d{2}$/.test(values.date)) return usage(io, `--date must be written YYYY-MM-DD, not "${values.date}"`);
 
-  const [{ runBatch }, { progressReporter }, { summaryTable }, { tuneJit }] = await Promise.all([import("./run-batch.js"), import("./progress.js"), import("./summary-table.js"), import("../jit-tuning.js")]);
-  // Each member is designed once: optimise later, so that less of the optimiser's work is thrown away.
-  tuneJit("batch");
+  const [{ runBatch }, { progressReporter }, { summaryTable }, { batchProfile, tuneJit }] = await Promise.all([import("./run-batch.js"), import("./progress.js"), import("./summary-table.js"), import("../jit-tuning.js")]);
+  // Without worksheets each member is designed once: optimise later, so that less of the optimiser's work is thrown away.
+  tuneJit(batchProfile(!values["no-pdf"]));
   let progress: ReturnType<typeof ProgressReporter> | undefined;
   const report = await runBatch({
     mode: command,
