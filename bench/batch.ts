@@ -106,7 +106,7 @@ export async function batchBench(say: (line: string) => void): Promise<void> {
       }
     }
     say("");
-    say("Targets: 1,000 members without worksheets under 3 s (issue 20); a worksheet under 300 ms. Seconds include reading the job files and writing every output, and bundling the members' code once (about half a second: server/thread-entry.ts) for a large batch or for worker threads, and with threads > 1 starting them.");
+    say("Targets: 1,000 members without worksheets under 3 s (issue 20); a worksheet under 300 ms. Seconds include reading the job files and writing every output, and bundling the members' code once and loading it (about half a second; a quarter less when the bundle kept from an earlier run still matches every source: server/thread-entry.ts) for a large batch or for worker threads, and with threads > 1 starting them.");
   } finally {
     rmSync(work, { recursive: true, force: true });
   }

@@ -38,9 +38,11 @@ export interface BatchReport {
 }
 
 /**
- * Worker threads pay off once the work outweighs starting them: bundling their code once (about half a
- * second, from source) and about a tenth of a second each (measured on the shared 2-core machine; a
- * second each when they loaded the sources through tsx). See bench/batch.ts for the batch's figures.
+ * Worker threads pay off once the work outweighs starting them: bundling their code once and loading it
+ * (about half a second from source: a quarter to bundle, or a fiftieth when a bundle kept from an earlier
+ * run still matches every source, and a third to load it) and about a tenth of a second each (measured on
+ * the shared 2-core machine; a second each when they loaded the sources through tsx). See bench/batch.ts
+ * for the batch's figures.
  */
 export const WORKER_START_MS = 600;
 const BUNDLE_MS = 500;
@@ -63,7 +65,7 @@ export const IN_FLIGHT = 3;
 
 async function runInThisThread(tasks: MemberTask[], inputs: ReadonlySet<string>, onOutcome: (outcome: MemberOutcome) => void): Promise<MemberOutcome[]> {
   const outcomes: MemberOutcome[] = [];
-  // From source, a large batch runs the members' code from one bundle (see bundleThread: a fifth faster than through tsx, for about half a second of bundling).
+  // From source, a large batch runs the members' code from one bundle (see bundleThread: a fifth faster than through tsx, for up to half a second of bundling and loading).
   const bundled = tasks.length * ESTIMATED_MS.design >= 4 * BUNDLE_MS ? await importBundled<typeof import("./member-files.js")>(MEMBER_FILES) : undefined;
   const runMemberTask = bundled?.runMemberTask ?? runHere;
   let next = 0;
