@@ -11,10 +11,10 @@ export interface ThreadTiming {
   cpu: number;
 }
 
-parentPort?.once("message", ({ input, runs }: { input: unknown; runs: number }) => {
+parentPort?.once("message", ({ input, runs, warmup }: { input: unknown; runs: number; warmup: number }) => {
   const utf8 = new TextEncoder();
   const call = () => void utf8.encode(JSON.stringify(designInUnits(input).shown));
-  for (let i = 0; i < 30; i++) call();
+  for (let i = 0; i < warmup; i++) call();
   const times: number[] = [];
   const cpu0 = process.cpuUsage();
   for (let i = 0; i < runs; i++) {
