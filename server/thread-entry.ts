@@ -32,7 +32,7 @@ export async function bundleThread(entry: URL): Promise<void> {
 
 const projectRoot = fileURLToPath(new URL("../", import.meta.url));
 /** Bundles made before, kept between runs (a batch or a server start saves about a quarter of a second). */
-export const BUNDLE_CACHE = join(projectRoot, "node_modules/.cache/stitchplan");
+const BUNDLE_CACHE = join(projectRoot, "node_modules/.cache/stitchplan");
 
 interface StoredBundle {
   /** What else shapes the bundle: esbuild's version, this file (the options and plugin), tsconfig.json and package.json. */
