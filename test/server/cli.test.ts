@@ -1,11 +1,13 @@
 import { execFileSync, spawnSync } from "node:child_process";
 import { copyFileSync, existsSync, mkdirSync, readdirSync, readFileSync, symlinkSync, writeFileSync } from "node:fs";
+import { availableParallelism } from "node:os";
 import { join } from "node:path";
 import { PassThrough } from "node:stream";
+import { Worker } from "node:worker_threads";
 import { afterAll, describe, expect, test } from "vitest";
 import { collectJobFiles, outputNames } from "../../server/cli/collect-job-files.js";
 import { main } from "../../server/cli/main.js";
-import { autoThreads, runBatch } from "../../server/cli/run-batch.js";
+import { autoThreads, busyCores, runBatch } from "../../server/cli/run-batch.js";
 import { EXAMPLES, example, tempFolder } from "./store/store-fixtures.js";
 
 const ROOT = join(import.meta.dirname, "../..");
@@ -159,6 +161,18 @@ describe("runBatch", () => {
     expect(autoThreads(1000, true, 1, 0)).toBe(1);
     expect(autoThreads(1000, false, 2, 1.2)).toBe(1);
     expect(autoThreads(1000, false, 8, 3)).toBe(5);
+  });
+
+  test("busyCores() counts a core kept busy by a spinning thread, and never more cores than there are", async () => {
+    const spinner = new Worker("const t = Date.now(); while (Date.now() - t < 1500);", { eval: true });
+    try {
+      await new Promise((resolve) => setTimeout(resolve, 100));
+      const busy = await busyCores(300);
+      expect(busy).toBeGreaterThanOrEqual(0.5);
+      expect(busy).toBeLessThanOrEqual(availableParallelism());
+    } finally {
+      await spinner.terminate();
+    }
   });
 });
 
