@@ -183,9 +183,9 @@ export interface Extreme {
 export function maxAbsShear(actions: MemberActions, a: number, b: number): Extreme {
   if (a === 0 && b === actions.length) {
     const known = overWhole(actions);
-    return { ...(known.shear ??= shearExtremeOver(actions, a, b)) };
+    return { ...(known.shear ??= extremeOver(actions, a, b, SHEAR, 1)) };
   }
-  return shearExtremeOver(actions, a, b);
+  return extremeOver(actions, a, b, SHEAR, 1);
 }
 
 /** Largest sagging and hogging moments over [a, b]. */
@@ -221,53 +221,6 @@ export function firstPieceReaching(pieces: readonly { x1: number }[], x: number)
 
 /** Roots of a piece's derivative, reused from call to call (this runs for every zone, row and combination). */
 const scratchRoots = new Float64Array(2);
-
-/**
- * extremeOver(actions, a, b, SHEAR, 1) written out for |V| alone, by the same arithmetic (V is asked for
- * over every zone, row and combination): piece ends and the root of V' = v1 + 2·v2·u.
- */
-function shearExtremeOver(actions: MemberActions, a: number, b: number): Extreme {
-  let bestValue = -Infinity;
-  let bestX = a;
-  const pieces = actions.pieces;
-  const tol = 1e-9 * actions.length;
-  const lo0 = firstPieceReaching(pieces, a - tol);
-  for (let k = lo0; k < pieces.length; k++) {
-    const p = pieces[k]!;
-    if (p.x0 > b + tol) break;
-    const lo = Math.max(a - tol, p.x0);
-    const hi = Math.min(b + tol, p.x1);
-    if (hi < lo) continue;
-    const c0 = p.v[0];
-    const c1 = p.v[1];
-    const c2 = p.v[2];
-    // poly(p.v, u) as poly evaluates it.
-    const atLo = Math.abs(((0 * (lo - p.x0) + c2) * (lo - p.x0) + c1) * (lo - p.x0) + c0);
-    if (atLo > bestValue) {
-      bestValue = atLo;
-      bestX = lo;
-    }
-    const atHi = Math.abs(((0 * (hi - p.x0) + c2) * (hi - p.x0) + c1) * (hi - p.x0) + c0);
-    if (atHi > bestValue) {
-      bestValue = atHi;
-      bestX = hi;
-    }
-    // rootsOf(c1, 2·c2, 0): the one root of a linear derivative, unless it is flat.
-    const d1 = 2 * c2;
-    const scale = Math.max(Math.abs(c1), Math.abs(d1), 1e-300);
-    if (Math.abs(d1) <= 1e-14 * scale) continue;
-    const u = -c1 / d1;
-    const x = p.x0 + u;
-    if (!(x > lo && x < hi)) continue;
-    const value = Math.abs(((0 * u + c2) * u + c1) * u + c0);
-    if (value > bestValue) {
-      bestValue = value;
-      bestX = x;
-    }
-  }
-  if (bestValue === -Infinity) return { value: 0, x: a };
-  return { value: bestValue, x: bestX };
-}
 
 /** |V| (what = SHEAR) or sign·M (what = MOMENT) at its largest over [a, b]: piece ends and the derivative's roots. */
 function extremeOver(actions: MemberActions, a: number, b: number, what: typeof SHEAR | typeof MOMENT, sign: number): Extreme {
