@@ -1,7 +1,6 @@
 // The faster answer of POST /api/designs (issue 20: conversion, finite check, fingerprint and encoding) must be
 // the same bytes as before: every example and the bench's three-span member, in its own units and in both
 // systems, against the path as it was (test/server/reference/). Not a speed test.
-import { readdirSync, readFileSync } from "node:fs";
 import fc from "fast-check";
 import { describe, expect, test } from "vitest";
 import { threeSpanJob } from "../../bench/three-span-job.js";
@@ -13,18 +12,15 @@ import { performTask, utf8Bytes } from "../../server/design-tasks.js";
 import { ApiError } from "../../server/errors.js";
 import { canonicalJson } from "../../core/canonical-json.js";
 import { physicalRangeIssues } from "../../core/physical-ranges.js";
+import { exampleJobs } from "../example-jobs.js";
 import { mutatedJob } from "./fuzz/payloads.js";
 import { answerBefore, answerBeforeFrom } from "./reference/answer-before.js";
 import { physicalRangeIssues as rangeIssuesBefore } from "./reference/ranges-before.js";
 import { prepareJob as prepareJobBefore } from "./reference/prepare-before.js";
 import * as before from "./reference/convert-before.js";
 
-const examples = new URL("../../fixtures/examples/", import.meta.url);
 const jobs: [string, unknown][] = [
-  ...readdirSync(examples)
-    .filter((f) => f.endsWith(".json"))
-    .sort()
-    .map((f): [string, unknown] => [f, JSON.parse(readFileSync(new URL(f, examples), "utf8"))]),
+  ...exampleJobs().map(({ file, job }): [string, unknown] => [file, job]),
   ["three-span asce7-22-allowable", threeSpanJob("asce7-22-allowable")],
   ["three-span en1990-6.10 (factored)", threeSpanJob("en1990-6.10", "factored")],
 ];

@@ -1,14 +1,10 @@
 import { createHash } from "node:crypto";
-import { readdirSync, readFileSync } from "node:fs";
 import { designInUnits } from "../../server/design-in-units.js";
+import { exampleJobs } from "../example-jobs.js";
 
 /** sha256 over every example's answer in its own units and in the other system, the last of `rounds` runs. */
 export function examplesDigest(rounds: number): string {
-  const folder = new URL("../../fixtures/examples/", import.meta.url);
-  const jobs = readdirSync(folder)
-    .filter((f) => f.endsWith(".json"))
-    .sort()
-    .map((f) => JSON.parse(readFileSync(new URL(f, folder), "utf8")) as { units: "si" | "us" });
+  const jobs = exampleJobs().map(({ job }) => job as { units: "si" | "us" });
   const hash = createHash("sha256");
   for (const job of jobs) {
     for (const units of [job.units, job.units === "si" ? "us" : "si"] as const) {

@@ -5,19 +5,16 @@
 // GOLDEN_UPDATE=1 rewrites the digests (only for a change that is meant to change results: say why in
 // the commit); GOLDEN_DUMP=dir writes each result's JSON there for a diff.
 import { createHash } from "node:crypto";
-import { existsSync, mkdirSync, readdirSync, readFileSync, writeFileSync } from "node:fs";
+import { existsSync, mkdirSync, readFileSync, writeFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
 import { threeSpanJob } from "../../../bench/three-span-job.js";
 import { designMember, prepareJob } from "../../../core/index.js";
+import { exampleJobs } from "../../example-jobs.js";
 
-const examples = new URL("../../../fixtures/examples/", import.meta.url);
 const digestsFile = new URL("./designs.golden.json", import.meta.url);
 
 const jobs: [string, unknown][] = [
-  ...readdirSync(examples)
-    .filter((f) => f.endsWith(".json"))
-    .sort()
-    .map((f): [string, unknown] => [f, JSON.parse(readFileSync(new URL(f, examples), "utf8"))]),
+  ...exampleJobs().map(({ file, job }): [string, unknown] => [file, job]),
   ["three-span asce7-22-allowable", threeSpanJob("asce7-22-allowable")],
   ["three-span unfactored", threeSpanJob("unfactored")],
   ["three-span asce7-22-strength (factored)", threeSpanJob("asce7-22-strength", "factored")],

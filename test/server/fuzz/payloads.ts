@@ -1,16 +1,12 @@
 // Generated request bodies for the fuzz tests: mostly the example jobs with a few of their values
 // broken or bent (so that validation passes often enough to exercise the engine), also any JSON at
 // all, and text that is not JSON.
-import { readdirSync, readFileSync } from "node:fs";
 import fc from "fast-check";
+import { exampleJobs } from "../../example-jobs.js";
 
 type Json = null | boolean | number | string | Json[] | { [key: string]: Json };
 
-const EXAMPLES = new URL("../../../fixtures/examples/", import.meta.url);
-export const examples: { name: string; job: Json }[] = readdirSync(EXAMPLES)
-  .filter((f) => f.endsWith(".json"))
-  .sort()
-  .map((f) => ({ name: f.replace(/\.json$/, ""), job: JSON.parse(readFileSync(new URL(f, EXAMPLES), "utf8")) as Json }));
+export const examples: { name: string; job: Json }[] = exampleJobs().map(({ file, job }) => ({ name: file.replace(/\.json$/, ""), job: job as Json }));
 
 /** Every path in a document (objects and arrays too), as keys and indices. */
 function pathsOf(value: Json, at: (string | number)[] = [], out: (string | number)[][] = []): (string | number)[][] {
