@@ -266,15 +266,7 @@ function extremeOver(actions: MemberActions, a: number, b: number, what: typeof 
   return { value: absolute ? bestValue : sign * bestValue, x: bestX };
 }
 
-/** Real roots of a polynomial of degree ≤ 2 (ascending coefficients). */
-export function realRoots(c: readonly number[]): number[] {
-  const [c0 = 0, c1 = 0, c2 = 0] = c;
-  const out = new Float64Array(2);
-  const count = rootsOf(c0, c1, c2, out);
-  return count === 0 ? [] : count === 1 ? [out[0]!] : [out[0]!, out[1]!];
-}
-
-/** realRoots into `out`, without allocating: the number of roots. */
+/** Real roots of c0 + c1·u + c2·u² into `out`, without allocating: the number of roots. */
 function rootsOf(c0: number, c1: number, c2: number, out: Float64Array): number {
   const scale = Math.max(Math.abs(c0), Math.abs(c1), Math.abs(c2), 1e-300);
   if (Math.abs(c2) <= 1e-14 * scale) {
