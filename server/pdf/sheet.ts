@@ -47,8 +47,26 @@ function fonts(): Map<FontName, FontkitFont> {
 }
 
 export function registerFonts(doc: PDFKit.PDFDocument): void {
-  // pdfkit takes a parsed fontkit font where its types list only files and buffers.
-  for (const [name, font] of fonts()) doc.registerFont(name, font as unknown as Uint8Array);
+  for (const [name, font] of fonts()) {
+    forgetGlyphs(font);
+    // pdfkit takes a parsed fontkit font where its types list only files and buffers.
+    doc.registerFont(name, font as unknown as Uint8Array);
+  }
+}
+
+/**
+ * Each document starts with none of the font's glyphs decoded. fontkit keeps a glyph with the characters
+ * it was first decoded for, and pdfkit writes those into the document's text layer (the ToUnicode map
+ * that copying, searching and text extraction read). Embedding a document's fonts decodes the parts of
+ * composite glyphs with no characters, so a shared font gave the next worksheets drawn on the same
+ * thread a text layer with characters missing ("10¹⁸" read back as "10 ⁸", "π²EI" as "π EI"), though
+ * the glyphs on the page were right. Parsed tables stay shared; decoding the glyphs again costs a few
+ * milliseconds a worksheet, where parsing the fonts again cost about 50.
+ */
+function forgetGlyphs(font: FontkitFont): void {
+  const glyphs = font as unknown as { _glyphs?: Record<number, unknown> };
+  if (typeof glyphs._glyphs !== "object" || glyphs._glyphs === null) throw new Error("fontkit no longer keeps its glyphs in _glyphs: see forgetGlyphs in server/pdf/sheet.ts");
+  glyphs._glyphs = {};
 }
 
 /** Page size in points and the box the body flows in; the title block and footer sit outside it. */
