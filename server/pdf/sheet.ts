@@ -1,6 +1,7 @@
 import { readFileSync } from "node:fs";
 import { createRequire } from "node:module";
-import { create as parseFont, type FontkitFont } from "fontkit";
+import type { FontkitFont } from "fontkit";
+import { fontEngine } from "./pdf-engine.js";
 
 const require = createRequire(import.meta.url);
 const fontFile = (name: string) => require.resolve(`dejavu-fonts-ttf/ttf/${name}.ttf`);
@@ -42,7 +43,7 @@ const FONT_FILES: Record<FontName, string> = {
 let parsedFonts: Map<FontName, FontkitFont> | undefined;
 
 function fonts(): Map<FontName, FontkitFont> {
-  parsedFonts ??= new Map(Object.entries(FONT_FILES).map(([name, file]) => [name as FontName, parseFont(readFileSync(fontFile(file)))]));
+  parsedFonts ??= new Map(Object.entries(FONT_FILES).map(([name, file]) => [name as FontName, fontEngine().create(readFileSync(fontFile(file)))]));
   return parsedFonts;
 }
 

@@ -1,4 +1,3 @@
-import PDFDocument from "pdfkit";
 import type { DesignResult, JobDocument } from "../../core/index.js";
 import { actionsSection } from "./actions-section.js";
 import { bondLineSection } from "./bond-line-section.js";
@@ -12,6 +11,7 @@ import { quantityText } from "./quantity-text.js";
 import { reviewBox } from "./review-box.js";
 import { identicalSchedules, scheduleSection } from "./schedule-section.js";
 import { sectionPropertiesSection } from "./section-properties-section.js";
+import { PdfDocument } from "./pdf-engine.js";
 import { PAGE_SIZES, Sheet, pageFrame, registerFonts } from "./sheet.js";
 import { glanceSection, statusSection } from "./status-section.js";
 import { weldSection, weldsOf } from "./weld-section.js";
@@ -71,6 +71,7 @@ function renderPages(job: JobDocument, result: DesignResult, options: WorksheetO
   const printed = options.printDate ?? today();
   const size = PAGE_SIZES[job.units];
   const frame = pageFrame(size);
+  const PDFDocument = PdfDocument();
   const doc = new PDFDocument({
     size: size.name,
     margins: { top: frame.top, bottom: frame.height - frame.bottom, left: frame.left, right: frame.width - frame.right },
