@@ -1,5 +1,8 @@
 import fc from "fast-check";
 import { describe, expect, test } from "vitest";
+import { readFileSync } from "node:fs";
+import { prepareJob } from "../../../core/check-job.js";
+import { designMember } from "../../../core/design-member.js";
 import { interfaceTransfer, plyShares, type Ply } from "../../../core/multi-ply/ply-shares.js";
 import { expectClose } from "../../expect-close.js";
 
@@ -79,6 +82,38 @@ describe("interfaceTransfer invariants", () => {
         const shares = plyShares(plies);
         alone.interfaces.forEach((i, k) => expectClose(i.force, left * shares.slice(k + 1).reduce((a, b) => a + b, 0), { rel: 1e-9, abs: 1e-9 }));
       }),
+    );
+  });
+
+  test("equal plies under a load on top or at the bottom pass exactly nothing, not a rounding residue [D]", () => {
+    // Each ply's load arrives in proportion to its share, so T_k = Σ (arriving_j − share_j·ΣP) = 0 exactly;
+    // the sums in floating point left about 1e-17 of the load, designed as a demand.
+    const ply = fc.record({ modulus: fc.integer({ min: 5000, max: 210_000 }), thickness: fc.double({ min: 5, max: 90, noNaN: true }), depth: fc.double({ min: 89, max: 400, noNaN: true }) });
+    fc.assert(
+      fc.property(ply, fc.integer({ min: 2, max: 8 }), fc.double({ min: 1e-3, max: 1e5, noNaN: true }), fc.constantFrom("top" as const, "bottom" as const), (p, n, magnitude, face) => {
+        for (const i of interfaceTransfer(Array.from({ length: n }, () => ({ ...p })), [{ face, magnitude }]).interfaces) expect(i.force).toBe(0);
+      }),
+    );
+  });
+});
+
+describe("a stud pack of equal plies under wind on the member, designed (fixtures/examples/stud-pack-wind.us)", () => {
+  test("its nails carry no demand at any load: no required spacing, utilisation exactly 0 [D]", () => {
+    const example = JSON.parse(readFileSync(new URL("../../../fixtures/examples/stud-pack-wind.us.json", import.meta.url), "utf8"));
+    fc.assert(
+      fc.property(fc.double({ min: 1, max: 2000, noNaN: true }), (w) => {
+        const job = structuredClone(example);
+        job.beam.loads[0].w = w;
+        const prepared = prepareJob(job);
+        if (!prepared.ok) throw new Error(JSON.stringify(prepared.issues));
+        const result = designMember(prepared.core);
+        expect(result.schedules.length).toBeGreaterThan(0);
+        for (const s of result.schedules) {
+          expect(s.requiredSpacing.every((r) => r === null)).toBe(true);
+          expect(s.perCombination.every((c) => c.maxUtilisation === 0)).toBe(true);
+        }
+      }),
+      { numRuns: 20 },
     );
   });
 });
