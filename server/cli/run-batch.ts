@@ -63,25 +63,42 @@ export function autoThreads(members: number, pdf: boolean, cores = availablePara
 }
 
 /**
- * How many cores other work keeps busy now: the share of the next `ms` the cores spend not idle (the
- * system's own counters, os.cpus()). Not the load average, which also counts tasks waiting for the disk
- * and trails by a minute: on the build machine it read 1.3 with every core idle, which kept batches on
- * one thread where two took 3.3–3.8 s for 1,000 members instead of 4.4–4.7 s.
+ * How many cores other programs keep busy: the share of a window of `ms` the cores spend not idle (the
+ * system's own counters, os.cpus()), less what this process used in it (process.cpuUsage), so the window
+ * can run while the batch collects its files. Not the load average, which also counts tasks waiting for
+ * the disk and trails by a minute: on the build machine it read 1.3 with every core idle, which kept
+ * batches on one thread where two took 3.3–3.8 s for 1,000 members instead of 4.4–4.7 s. `read()` waits
+ * for the window's end; `stop()` ends a sample no one will read.
  */
-export async function busyCores(ms = 100): Promise<number> {
+export function busySampler(ms = 100): { read(): Promise<number>; stop(): void } {
   const times = () => cpus().map((c) => c.times);
   const before = times();
-  await new Promise((resolve) => setTimeout(resolve, ms));
-  let idle = 0;
-  let total = 0;
-  times().forEach((t, i) => {
-    const b = before[i];
-    if (!b) return;
-    idle += t.idle - b.idle;
-    total += t.user - b.user + (t.nice - b.nice) + (t.sys - b.sys) + (t.idle - b.idle) + (t.irq - b.irq);
-  });
-  return total > 0 ? Math.max(0, Math.min(before.length, before.length * (1 - idle / total))) : 0;
+  const own = process.cpuUsage();
+  const begun = performance.now();
+  let timer: NodeJS.Timeout | undefined;
+  const ended = new Promise<void>((resolve) => (timer = setTimeout(resolve, ms)));
+  return {
+    stop: () => clearTimeout(timer),
+    read: async () => {
+      await ended;
+      const used = process.cpuUsage(own);
+      const ownCores = (used.user + used.system) / 1000 / Math.max(1, performance.now() - begun);
+      let idle = 0;
+      let total = 0;
+      times().forEach((t, i) => {
+        const b = before[i];
+        if (!b) return;
+        idle += t.idle - b.idle;
+        total += t.user - b.user + (t.nice - b.nice) + (t.sys - b.sys) + (t.idle - b.idle) + (t.irq - b.irq);
+      });
+      const busy = total > 0 ? before.length * (1 - idle / total) - ownCores : 0;
+      return Math.max(0, Math.min(before.length, busy));
+    },
+  };
 }
+
+/** busySampler's reading over the next `ms`. */
+export const busyCores = (ms = 100): Promise<number> => busySampler(ms).read();
 
 /** Tasks kept in flight on one thread, so that one member's file read (and worksheet stream) overlaps another's design. */
 export const IN_FLIGHT = 3;
@@ -112,6 +129,8 @@ export function exitCodeOf(outcomes: MemberOutcome[]): number {
 /** Designs (or checks) every job file and writes each member's result JSON, schedule CSV, positions CSV and worksheet PDF. */
 export async function runBatch(options: BatchOptions): Promise<BatchReport> {
   const started = performance.now();
+  // The cores are looked at while the files are collected, and read only for a batch large enough to use workers.
+  const sample = options.threads === undefined ? busySampler() : undefined;
   const collected = await collectJobFiles(options.inputs);
   const outcomes: MemberOutcome[] = collected.problems.map((p, i) => ({
     index: i - collected.problems.length,
@@ -157,8 +176,7 @@ export async function runBatch(options: BatchOptions): Promise<BatchReport> {
   const total = tasks.length;
   let done = 0;
   const onOutcome = (outcome: MemberOutcome) => options.onOutcome?.(++done, total, outcome);
-  // The cores are looked at only for a batch large enough to use workers (a tenth of a second).
-  const busy = options.threads === undefined && serialMs(total, options.pdf) >= 2 * WORKER_START_MS ? await busyCores() : 0;
+  const busy = sample && serialMs(total, options.pdf) >= 2 * WORKER_START_MS ? await sample.read() : (sample?.stop(), 0);
   const threads = Math.max(1, Math.min(options.threads ?? autoThreads(total, options.pdf, availableParallelism(), busy), Math.max(total, 1)));
   if (threads > 1) outcomes.push(...(await runInWorkers(tasks, threads, inputs, onOutcome)));
   else outcomes.push(...(await runInThisThread(tasks, inputs, onOutcome)));
