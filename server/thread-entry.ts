@@ -35,7 +35,11 @@ const projectRoot = fileURLToPath(new URL("../", import.meta.url));
 const BUNDLE_CACHE = join(projectRoot, "node_modules/.cache/stitchplan");
 
 interface StoredBundle {
-  /** What else shapes the bundle: esbuild's version, this file (the options and plugin), tsconfig.json and package.json. */
+  /**
+   * What else shapes the bundle: esbuild's version, the project's folder (the bundle names its own files
+   * and the packages' by absolute path, so a store copied or left behind with node_modules is not used
+   * from another folder), this file (the options and plugin), tsconfig.json, package.json and package-lock.json.
+   */
   builder: string;
   /** Every file esbuild read for it, from the project's folder → sha256 of its bytes. */
   inputs: Record<string, string>;
@@ -43,7 +47,15 @@ interface StoredBundle {
 }
 
 const digest = (bytes: string | Buffer) => createHash("sha256").update(bytes).digest("base64");
-const builderKey = () => digest([esbuildVersion, ...[fileURLToPath(import.meta.url), join(projectRoot, "tsconfig.json"), join(projectRoot, "package.json")].map((f) => digest(readFileSync(f)))].join(" "));
+const fileDigest = (file: string) => {
+  try {
+    return digest(readFileSync(file));
+  } catch {
+    return "none";
+  }
+};
+export const builderKey = (root = projectRoot) =>
+  digest([esbuildVersion, root, ...[fileURLToPath(import.meta.url), join(root, "tsconfig.json"), join(root, "package.json"), join(root, "package-lock.json")].map(fileDigest)].join(" "));
 export const storedFile = (entry: URL) => join(BUNDLE_CACHE, `${relative(projectRoot, fileURLToPath(entry)).replaceAll(/[\\/]/g, "~")}.json`);
 
 /** The bundle stored by an earlier run, when every file it was made from is byte for byte the same today; else undefined. */

@@ -1,10 +1,10 @@
 // The threads' bundle kept between runs (server/thread-entry.ts) is used only while every file it was
 // made from is byte for byte the same: a changed source is never run from an old bundle.
-import { existsSync, mkdirSync, rmSync, utimesSync, writeFileSync } from "node:fs";
+import { existsSync, mkdirSync, readFileSync, rmSync, utimesSync, writeFileSync } from "node:fs";
 import { join } from "node:path";
 import { pathToFileURL } from "node:url";
 import { afterAll, describe, expect, test } from "vitest";
-import { freshBundle, storedBundle, storedFile } from "../../server/thread-entry.js";
+import { builderKey, freshBundle, storedBundle, storedFile } from "../../server/thread-entry.js";
 
 // Inside the project, as the threads' entries are (the store names its inputs from the project's folder).
 const folder = join(new URL("./", import.meta.url).pathname, `.bundle-cache-${process.pid}`);
@@ -48,6 +48,19 @@ describe("bundles kept between runs", () => {
     const code = await freshBundle(entry);
     expect(code).toContain("23");
     expect(existsSync(storedFile(entry))).toBe(false);
+    expect(storedBundle(entry)).toBeUndefined();
+  });
+
+  test("a bundle stored by a copy of the project in another folder is not used here", async () => {
+    // Found when a second checkout sharing node_modules stored a bundle with its own absolute paths, which this
+    // checkout then ran: its worksheets failed with "Cannot find module 'pdfkit'" once that checkout was removed.
+    mkdirSync(folder, { recursive: true });
+    write(entry.pathname, 'export const answer: number = 24;\n');
+    const code = await freshBundle(entry);
+    expect(storedBundle(entry)).toBe(code);
+    const stored = JSON.parse(readFileSync(storedFile(entry), "utf8")) as { builder: string };
+    expect(stored.builder).toBe(builderKey());
+    writeFileSync(storedFile(entry), JSON.stringify({ ...stored, builder: builderKey("/another/checkout/") }));
     expect(storedBundle(entry)).toBeUndefined();
   });
 
