@@ -39,3 +39,21 @@ export function tuneJit(profile: JitProfile, node = process.versions.node, execA
   setFlagsFromString(`--interrupt-budget=${budget}`);
   return budget;
 }
+
+/**
+ * For a batch on worker threads: each worker optimises its code on its own thread
+ * (`--no-concurrent-recompilation`), instead of handing the work to V8's background threads. Every core
+ * already runs a worker, so background compiling only took turns with the workers. Measured in turns
+ * on the 2-core build machine, 1,000 members on two workers: median 2.90 s against 3.09 (8 runs each),
+ * 2.87 against 3.13 and 4.00 against 4.40 (10 runs, a busier hour); 100 members with worksheets 8.8 s
+ * against 10.0. Not for the service: there a design would wait out an optimisation of designMember
+ * (up to a tenth of a second) that now runs beside it. V8 reads the flag when a thread starts, so it
+ * holds for threads started after the call. Node 20 only, and not when node was given the flag either
+ * way. Returns whether it was set.
+ */
+export function compileInThread(node = process.versions.node, execArgv: readonly string[] = process.execArgv): boolean {
+  if (node.split(".")[0] !== "20") return false;
+  if (execArgv.some((a) => /^--(no-)?concurrent[-_]recompilation/.test(a))) return false;
+  setFlagsFromString("--no-concurrent-recompilation");
+  return true;
+}

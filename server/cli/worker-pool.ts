@@ -1,3 +1,4 @@
+import { compileInThread } from "../jit-tuning.js";
 import { bundleThread, startThread } from "../thread-entry.js";
 import type { FromBatchWorker, ToBatchWorker } from "./batch-worker.js";
 import { runMemberTask, WORKER_LANES, type MemberOutcome, type MemberTask } from "./member-files.js";
@@ -34,6 +35,7 @@ const failedOutcome = (task: MemberTask, message: string): MemberOutcome => ({
  */
 export async function runInWorkers(tasks: MemberTask[], threads: number, inputs: ReadonlySet<string>, onOutcome: (outcome: MemberOutcome) => void): Promise<MemberOutcome[]> {
   await bundleThread(BATCH_WORKER);
+  compileInThread();
   const outcomes: MemberOutcome[] = [];
   let next = 0;
   // Tasks a dead worker held but had not begun: handed out again first.

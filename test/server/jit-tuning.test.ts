@@ -5,7 +5,7 @@ import { spawnSync } from "node:child_process";
 import { createRequire } from "node:module";
 import { pathToFileURL } from "node:url";
 import { describe, expect, test } from "vitest";
-import { batchProfile, INTERRUPT_BUDGET, tuneJit } from "../../server/jit-tuning.js";
+import { batchProfile, compileInThread, INTERRUPT_BUDGET, tuneJit } from "../../server/jit-tuning.js";
 import { examplesDigest } from "./jit-tuning-digest.js";
 
 const tsx = pathToFileURL(createRequire(import.meta.url).resolve("tsx")).href;
@@ -20,12 +20,15 @@ describe("JIT profiles", () => {
   test("left to V8 on another Node release, or when node was given a budget itself", () => {
     expect(tuneJit("repeating", "22.11.0", [])).toBeUndefined();
     expect(tuneJit("varied", "20.19.0", ["--interrupt-budget=1000"])).toBeUndefined();
+    expect(compileInThread("22.11.0", [])).toBe(false);
+    expect(compileInThread("20.19.0", ["--concurrent-recompilation"])).toBe(false);
+    expect(compileInThread("20.19.0", ["--no-concurrent_recompilation"])).toBe(false);
   });
 
-  test.runIf(process.versions.node.startsWith("20."))("each profile is taken by this V8 (no warning) and leaves every answer as it was", { timeout: 120_000 }, () => {
+  test.runIf(process.versions.node.startsWith("20."))("each profile is taken by this V8 (no warning) and leaves every answer as it was, a batch worker's in-thread optimising too", { timeout: 120_000 }, () => {
     const expected = examplesDigest(1);
-    for (const profile of ["repeating", "varied"] as const) {
-      const run = spawnSync(process.execPath, ["--import", tsx, child, profile], { encoding: "utf8" });
+    for (const [profile, where] of [["repeating", ""], ["varied", ""], ["varied", "in-thread"]] as const) {
+      const run = spawnSync(process.execPath, ["--import", tsx, child, profile, where], { encoding: "utf8" });
       expect(run.stderr).toBe("");
       const { budget, digest } = JSON.parse(run.stdout) as { budget: number | null; digest: string };
       expect(budget).toBe(INTERRUPT_BUDGET[profile]);
