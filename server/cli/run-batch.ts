@@ -49,8 +49,8 @@ const BUNDLE_MS = 500;
 const MEMBER_FILES = new URL("./member-files.ts", import.meta.url);
 export const ESTIMATED_MS = { design: 15, pdf: 150 };
 
-/** What a batch would take on one thread, by the estimates above, ms. */
-const serialMs = (members: number, pdf: boolean) => members * (ESTIMATED_MS.design + (pdf ? ESTIMATED_MS.pdf : 0));
+/** Whether a batch's work, by the estimates above, outweighs starting workers (twice their start). */
+const worthWorkers = (members: number, pdf: boolean) => members * (ESTIMATED_MS.design + (pdf ? ESTIMATED_MS.pdf : 0)) >= 2 * WORKER_START_MS;
 
 /**
  * Worker threads for a batch: none for small batches, and none when other programs already keep the
@@ -58,7 +58,7 @@ const serialMs = (members: number, pdf: boolean) => members * (ESTIMATED_MS.desi
  */
 export function autoThreads(members: number, pdf: boolean, cores = availableParallelism(), busy = 0): number {
   const spare = cores - Math.floor(busy);
-  if (spare < 2 || serialMs(members, pdf) < 2 * WORKER_START_MS) return 1;
+  if (spare < 2 || !worthWorkers(members, pdf)) return 1;
   return Math.min(spare, members);
 }
 
@@ -96,9 +96,6 @@ export function busySampler(ms = 100): { read(): Promise<number>; stop(): void }
     },
   };
 }
-
-/** busySampler's reading over the next `ms`. */
-export const busyCores = (ms = 100): Promise<number> => busySampler(ms).read();
 
 /** Tasks kept in flight on one thread, so that one member's file read (and worksheet stream) overlaps another's design. */
 export const IN_FLIGHT = 3;
@@ -176,7 +173,7 @@ export async function runBatch(options: BatchOptions): Promise<BatchReport> {
   const total = tasks.length;
   let done = 0;
   const onOutcome = (outcome: MemberOutcome) => options.onOutcome?.(++done, total, outcome);
-  const busy = sample && serialMs(total, options.pdf) >= 2 * WORKER_START_MS ? await sample.read() : (sample?.stop(), 0);
+  const busy = sample && worthWorkers(total, options.pdf) ? await sample.read() : (sample?.stop(), 0);
   const threads = Math.max(1, Math.min(options.threads ?? autoThreads(total, options.pdf, availableParallelism(), busy), Math.max(total, 1)));
   if (threads > 1) outcomes.push(...(await runInWorkers(tasks, threads, inputs, onOutcome)));
   else outcomes.push(...(await runInThisThread(tasks, inputs, onOutcome)));

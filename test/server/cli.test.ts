@@ -7,7 +7,7 @@ import { Worker } from "node:worker_threads";
 import { afterAll, describe, expect, test } from "vitest";
 import { collectJobFiles, outputNames } from "../../server/cli/collect-job-files.js";
 import { main } from "../../server/cli/main.js";
-import { autoThreads, busyCores, runBatch } from "../../server/cli/run-batch.js";
+import { autoThreads, busySampler, runBatch } from "../../server/cli/run-batch.js";
 import { EXAMPLES, example, tempFolder } from "./store/store-fixtures.js";
 
 const ROOT = join(import.meta.dirname, "../..");
@@ -163,11 +163,11 @@ describe("runBatch", () => {
     expect(autoThreads(1000, false, 8, 3)).toBe(5);
   });
 
-  test("busyCores() counts a core kept busy by another program, and never more cores than there are", async () => {
+  test("busySampler counts a core kept busy by another program, and never more cores than there are", async () => {
     const spinner = spawn(process.execPath, ["-e", "const t = Date.now(); while (Date.now() - t < 3000);"], { stdio: "ignore" });
     try {
       await new Promise((resolve) => setTimeout(resolve, 300));
-      const busy = await busyCores(300);
+      const busy = await busySampler(300).read();
       expect(busy).toBeGreaterThanOrEqual(0.5);
       expect(busy).toBeLessThanOrEqual(availableParallelism());
     } finally {
@@ -175,14 +175,14 @@ describe("runBatch", () => {
     }
   });
 
-  test("busyCores() leaves out this process's own work: a thread of its own spinning is not another program", async () => {
+  test("busySampler leaves out this process's own work: a thread of its own spinning is not another program", async () => {
     // With 2 cores: the spinner keeps one busy; read as another program's, it would keep a 1,000-member batch on one thread.
     // Other programs on a shared machine: compared with a reading just before the spinner starts.
-    const before = await busyCores(300);
+    const before = await busySampler(300).read();
     const spinner = new Worker("const t = Date.now(); while (Date.now() - t < 1500);", { eval: true });
     try {
       await new Promise((resolve) => setTimeout(resolve, 100));
-      const busy = await busyCores(300);
+      const busy = await busySampler(300).read();
       expect(busy - before).toBeLessThan(0.5);
     } finally {
       await spinner.terminate();
