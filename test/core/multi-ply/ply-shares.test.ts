@@ -3,6 +3,7 @@ import { describe, expect, test } from "vitest";
 import { readFileSync } from "node:fs";
 import { prepareJob } from "../../../core/check-job.js";
 import { designMember } from "../../../core/design-member.js";
+import { convertJob } from "../../../core/units/convert-job.js";
 import { interfaceTransfer, plyShares, type Ply } from "../../../core/multi-ply/ply-shares.js";
 import { expectClose } from "../../expect-close.js";
 
@@ -98,19 +99,25 @@ describe("interfaceTransfer invariants", () => {
 });
 
 describe("a stud pack of equal plies under wind on the member, designed (fixtures/examples/stud-pack-wind.us)", () => {
-  test("its nails carry no demand at any load: no required spacing, utilisation exactly 0 [D]", () => {
+  test("its nails carry no demand at any load, in either unit system: no required spacing, utilisation exactly 0 [D]", () => {
     const example = JSON.parse(readFileSync(new URL("../../../fixtures/examples/stud-pack-wind.us.json", import.meta.url), "utf8"));
+    const designed = (job: unknown) => {
+      const prepared = prepareJob(job);
+      if (!prepared.ok) throw new Error(JSON.stringify(prepared.issues));
+      return { job: prepared.job, result: designMember(prepared.core) };
+    };
     fc.assert(
       fc.property(fc.double({ min: 1, max: 2000, noNaN: true }), (w) => {
         const job = structuredClone(example);
         job.beam.loads[0].w = w;
-        const prepared = prepareJob(job);
-        if (!prepared.ok) throw new Error(JSON.stringify(prepared.issues));
-        const result = designMember(prepared.core);
-        expect(result.schedules.length).toBeGreaterThan(0);
-        for (const s of result.schedules) {
-          expect(s.requiredSpacing.every((r) => r === null)).toBe(true);
-          expect(s.perCombination.every((c) => c.maxUtilisation === 0)).toBe(true);
+        const us = designed(job);
+        // The same member converted to SI (the rounding test is relative, so no unit may bring the residue back).
+        for (const { result } of [us, designed(convertJob(us.job, "si"))]) {
+          expect(result.schedules.length).toBeGreaterThan(0);
+          for (const s of result.schedules) {
+            expect(s.requiredSpacing.every((r) => r === null)).toBe(true);
+            expect(s.perCombination.every((c) => c.maxUtilisation === 0)).toBe(true);
+          }
         }
       }),
       { numRuns: 20 },
